@@ -1,0 +1,53 @@
+import { TabList, Tabs, TabSlot, TabTrigger } from "expo-router/ui";
+import { ActivityIndicator, StyleSheet, View } from "react-native";
+import { CreateShopForm } from "@/components/create-shop-form";
+import { NavButton } from "@/components/nav-button";
+import { Notice } from "@/components/notice";
+import { ShopHeader } from "@/components/shop-header";
+import { colors } from "@/constants/theme";
+import { useIsWide } from "@/hooks/use-layout";
+import { useMe } from "@/hooks/use-me";
+
+const SECTIONS = [
+  { name: "casebook", href: "/", label: "Casebook" },
+  { name: "melts", href: "/melts", label: "Melts" },
+  { name: "rulebook", href: "/rulebook", label: "Rulebook" },
+  { name: "trends", href: "/trends", label: "Trends" },
+  { name: "more", href: "/more", label: "More" },
+] as const;
+
+/** The signed-in shell: shop header, then a bottom bar on phones or a side rail on wide screens. */
+export default function AppLayout() {
+  const wide = useIsWide();
+  const me = useMe();
+  if (me.isPending) return <ActivityIndicator style={styles.fill} color={colors.accent} />;
+  if (me.error) return <Notice tone="error">{me.error.message}</Notice>;
+  if (!me.data.activeShop) return <CreateShopForm />;
+
+  // TabList must be a direct child of Tabs, so it is built here rather than in a component.
+  const nav = (
+    <TabList style={wide ? styles.rail : styles.bar}>
+      {SECTIONS.map((s) => (
+        <TabTrigger key={s.name} name={s.name} href={s.href} asChild>
+          <NavButton label={s.label} wide={wide} />
+        </TabTrigger>
+      ))}
+    </TabList>
+  );
+  return (
+    <View style={styles.fill}>
+      <ShopHeader me={me.data} />
+      <Tabs style={[styles.fill, { flexDirection: wide ? "row" : "column" }]}>
+        {wide ? nav : null}
+        <TabSlot style={styles.fill} />
+        {wide ? null : nav}
+      </Tabs>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  fill: { flex: 1, backgroundColor: colors.background },
+  bar: { flexDirection: "row", backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.line },
+  rail: { flexDirection: "column", width: 200, paddingTop: 8, backgroundColor: colors.surface, borderRightWidth: 1, borderRightColor: colors.line },
+});

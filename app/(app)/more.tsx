@@ -1,0 +1,43 @@
+import { ActivityIndicator, StyleSheet, Text, View } from "react-native";
+import { Heading } from "@/components/heading";
+import { Notice } from "@/components/notice";
+import { SafetyCautions } from "@/components/safety-cautions";
+import { Screen } from "@/components/screen";
+import { ShopSettingsForm } from "@/components/shop-settings-form";
+import { colors, space } from "@/constants/theme";
+import { useShop, useShopMembers } from "@/hooks/use-shop";
+
+/** The shop itself: its people, its defaults, and the standing cautions. */
+export default function MoreScreen() {
+  const shop = useShop();
+  const members = useShopMembers();
+  if (shop.isPending) return <ActivityIndicator color={colors.accent} style={{ marginTop: space.xl }} />;
+  if (shop.error) return <Screen><Notice tone="error">{shop.error.message}</Notice></Screen>;
+
+  return (
+    <Screen>
+      <Heading>{shop.data.name}</Heading>
+      <Heading level={2}>People</Heading>
+      {members.error ? <Notice tone="error">{members.error.message}</Notice> : null}
+      <View style={styles.list}>
+        {members.data?.map((m) => (
+          <View key={m.userId} style={styles.person}>
+            <Text style={styles.name}>{m.name}</Text>
+            <Text style={styles.meta}>{m.email} · {m.role}</Text>
+          </View>
+        ))}
+      </View>
+      <Heading level={2}>Shop defaults</Heading>
+      <ShopSettingsForm shop={shop.data} />
+      <Heading level={2}>Safety</Heading>
+      <SafetyCautions />
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { gap: space.sm },
+  person: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: 8, padding: space.md },
+  name: { fontSize: 16, fontWeight: "600", color: colors.ink },
+  meta: { fontSize: 14, color: colors.muted },
+});

@@ -1,0 +1,69 @@
+import { useQueryClient } from "@tanstack/react-query";
+import { Link } from "expo-router";
+import { useState } from "react";
+import { StyleSheet, Text } from "react-native";
+import { AuthCard } from "@/components/auth-card";
+import { Button } from "@/components/button";
+import { Notice } from "@/components/notice";
+import { TextField } from "@/components/text-field";
+import { colors } from "@/constants/theme";
+import { useFormErrors } from "@/hooks/use-form-errors";
+import { meKey } from "@/hooks/use-me";
+import { authClient } from "@/lib/auth-client";
+import { signUpForm } from "@/lib/auth-forms";
+import { createShop } from "@/lib/create-shop";
+
+/** A new person and their shop, which they own. */
+export default function SignUp() {
+  const [form, setForm] = useState({ name: "", email: "", password: "", shopName: "" });
+  const [failure, setFailure] = useState<string>();
+  const [busy, setBusy] = useState(false);
+  const { errors, check } = useFormErrors(signUpForm);
+  const queryClient = useQueryClient();
+  const set = (key: keyof typeof form) => (value: string) => setForm((f) => ({ ...f, [key]: value }));
+
+  async function submit() {
+    setFailure(undefined);
+    const values = check(form);
+    if (!values) return;
+    setBusy(true);
+    const { error } = await authClient.signUp.email({ name: values.name, email: values.email, password: values.password });
+    if (error) {
+      setBusy(false);
+      setFailure(
+        error.status === 422
+          ? "An account with this e-mail already exists. Sign in instead."
+          : (error.message ?? "The account could not be created; try again."),
+      );
+      return;
+    }
+    const shopError = await createShop(values.shopName);
+    await queryClient.invalidateQueries({ queryKey: meKey });
+    setBusy(false);
+    if (shopError) setFailure(shopError);
+  }
+
+  return (
+    <AuthCard title="Create an account">
+      {failure ? <Notice tone="error">{failure}</Notice> : null}
+      <TextField label="Your name" value={form.name} onChangeText={set("name")} error={errors.name} autoComplete="name" />
+      <TextField label="E-mail" value={form.email} onChangeText={set("email")} error={errors.email}
+        autoCapitalize="none" autoComplete="email" keyboardType="email-address" inputMode="email" />
+      <TextField label="Password" value={form.password} onChangeText={set("password")} error={errors.password}
+        secureTextEntry autoComplete="new-password" placeholder="at least 8 characters" />
+      <TextField label="Shop name" value={form.shopName} onChangeText={set("shopName")} error={errors.shopName}
+        placeholder="the foundry, lab or club you cast with" onSubmitEditing={submit} />
+      <Text style={styles.note}>You will own this shop: its casebook, its rules and who may use them.</Text>
+      <Button label="Create account" onPress={submit} busy={busy} />
+      <Text style={styles.alt}>
+        Have an account? <Link href="/sign-in" style={styles.link}>Sign in</Link>
+      </Text>
+    </AuthCard>
+  );
+}
+
+const styles = StyleSheet.create({
+  note: { color: colors.muted, fontSize: 14 },
+  alt: { color: colors.muted, fontSize: 15 },
+  link: { color: colors.accent, fontWeight: "600" },
+});

@@ -1,0 +1,31 @@
+import { Pressable, StyleSheet, Text, View } from "react-native";
+import { colors, radius, space } from "@/constants/theme";
+
+type Props = { label: string; options: readonly string[]; value: string | null; onChange: (v: string) => void; disabled?: boolean };
+
+/** Pick one of a short list by tapping: quicker than a drop-down on a phone. */
+export function ChoiceChips({ label, options, value, onChange, disabled }: Props) {
+  return (
+    <View style={styles.wrap} role="radiogroup" aria-label={label}>
+      <Text style={styles.label}>{label}</Text>
+      <View style={styles.row}>
+        {options.map((o) => (
+          <Pressable key={o} role="radio" aria-checked={o === value} disabled={disabled} onPress={() => onChange(o)}
+            style={[styles.chip, o === value && styles.on]}>
+            <Text style={[styles.text, o === value && styles.textOn]}>{o}</Text>
+          </Pressable>
+        ))}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.xs },
+  label: { fontSize: 14, fontWeight: "600", color: colors.ink },
+  row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
+  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.surface },
+  on: { backgroundColor: colors.steel, borderColor: colors.steel },
+  text: { color: colors.ink, fontSize: 14 },
+  textOn: { color: "#FFFFFF", fontWeight: "600" },
+});

@@ -1,0 +1,36 @@
+import { useEffect, useState } from "react";
+import { ChoiceChips } from "@/components/choice-chips";
+import { Button } from "@/components/button";
+import { Notice } from "@/components/notice";
+import { useSaveShopSettings, type Shop } from "@/hooks/use-shop";
+import { roleCan } from "@/lib/permissions";
+import { BUILT_IN_ALLOYS } from "@/rules/alloys";
+import { PROCESSES, type Process } from "@/rules/case";
+
+const ALLOYS = BUILT_IN_ALLOYS.map((a) => a.designation);
+
+/** Defaults a new melt starts from. Owners change them; everyone else sees them. */
+export function ShopSettingsForm({ shop }: { shop: Shop }) {
+  const mayEdit = roleCan(shop.role, { shop: ["settings"] });
+  const [alloy, setAlloy] = useState(shop.defaultAlloy);
+  const [process, setProcess] = useState(shop.defaultProcess as Process | null);
+  const save = useSaveShopSettings();
+  useEffect(() => {
+    setAlloy(shop.defaultAlloy);
+    setProcess(shop.defaultProcess as Process | null);
+  }, [shop.defaultAlloy, shop.defaultProcess]);
+
+  return (
+    <>
+      {!mayEdit ? <Notice>Only the shop's owner changes these.</Notice> : null}
+      <ChoiceChips label="Default alloy" options={ALLOYS} value={alloy} onChange={setAlloy} disabled={!mayEdit} />
+      <ChoiceChips label="Default process" options={PROCESSES} value={process} onChange={(p) => setProcess(p as Process)} disabled={!mayEdit} />
+      {save.error ? <Notice tone="error">{save.error.message}</Notice> : null}
+      {save.isSuccess ? <Notice>Saved.</Notice> : null}
+      {mayEdit ? (
+        <Button label="Save defaults" busy={save.isPending}
+          onPress={() => save.mutate({ defaultAlloy: alloy, defaultProcess: process })} />
+      ) : null}
+    </>
+  );
+}

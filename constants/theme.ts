@@ -1,0 +1,23 @@
+/** Colours, spacing and sizes used across the app: one place to tune the look. */
+export const colors = {
+  background: "#F6F3EE",
+  surface: "#FFFFFF",
+  ink: "#1F2328",
+  muted: "#5C6166",
+  line: "#DDD6CC",
+  accent: "#A8481F",
+  accentInk: "#FFFFFF",
+  steel: "#2F5D62",
+  danger: "#B42318",
+  dangerBg: "#FDECEA",
+  cautionBg: "#FFF4D6",
+};
+
+export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
+export const radius = { sm: 6, md: 10 } as const;
+
+/** Screens this wide or wider get the side rail and a centred column. */
+export const WIDE_MIN_PX = 900;
+export const CONTENT_MAX_PX = 760;
+
+export const fonts = { heading: "Lora-SemiBold", serif: "Lora-Regular" } as const;

@@ -1,0 +1,13 @@
+import { useQuery } from "@tanstack/react-query";
+import { api } from "@/lib/api";
+import type { ShopRole } from "@/lib/permissions";
+
+export type MyShop = { id: string; name: string; role: ShopRole };
+export type Me = { user: { id: string; name: string; email: string }; shops: MyShop[]; activeShop: MyShop | null };
+
+export const meKey = ["me"] as const;
+
+/** The signed-in person, their shops and the active one (GET /api/me). */
+export function useMe(enabled = true) {
+  return useQuery({ queryKey: meKey, queryFn: () => api<Me>("/me"), enabled });
+}

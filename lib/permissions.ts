@@ -1,0 +1,50 @@
+import { createAccessControl } from "better-auth/plugins/access";
+import { defaultStatements, ownerAc } from "better-auth/plugins/organization/access";
+
+/**
+ * Who may do what in a shop, in one place. The server checks every request against these
+ * roles; the app uses the same roles to hide what a person may not do.
+ * Caster < mentor < owner (DESIGN.md, "People and roles").
+ */
+export const statements = {
+  ...defaultStatements,
+  casebook: ["read", "write", "comment", "request-review"],
+  review: ["confirm"],
+  rule: ["read", "write", "publish", "retire"],
+  shop: ["settings", "export", "invite"],
+} as const;
+
+export const ac = createAccessControl(statements);
+
+const casterCan = {
+  casebook: ["read", "write", "comment", "request-review"],
+  rule: ["read"],
+} as const;
+
+const mentorCan = {
+  ...casterCan,
+  review: ["confirm"],
+  rule: ["read", "write", "publish", "retire"],
+} as const;
+
+export const roles = {
+  caster: ac.newRole({ ...casterCan }),
+  mentor: ac.newRole({ ...mentorCan }),
+  owner: ac.newRole({
+    ...ownerAc.statements,
+    ...mentorCan,
+    shop: ["settings", "export", "invite"],
+  }),
+};
+
+export type ShopRole = keyof typeof roles;
+export const SHOP_ROLES = ["owner", "mentor", "caster"] as const satisfies readonly ShopRole[];
+
+/** A permission such as `{ rule: ["publish"] }`. */
+export type Permission = { [K in keyof typeof statements]?: (typeof statements)[K][number][] };
+
+export function roleCan(role: string, permission: Permission): boolean {
+  const r = roles[role as ShopRole];
+  if (!r) return false;
+  return r.authorize(permission as never).success;
+}

@@ -1,0 +1,97 @@
+import { CHARGES, DEGASSING_METHODS, PROCESSES } from "./case";
+
+/**
+ * Every fact a rule may read: the case's own inputs and the values derived from them
+ * (rules/facts.ts computes those). The rule loader refuses a rule that names a fact not listed
+ * here, and the rule form in the app builds its pickers from this list.
+ *
+ * `quantity` says how the value converts between a person's units (values are stored SI).
+ */
+export type FactQuantity =
+  | "temperature" // °C
+  | "temperature-difference" // K (°C difference)
+  | "length" // mm
+  | "velocity" // m/s
+  | "time" // s
+  | "minutes"
+  | "percent"
+  | "density" // kg/m³
+  | "hydrogen" // cm³ H2 (STP) per 100 g
+  | "pressure" // kPa
+  | "ratio"
+  | "count";
+
+export type FactSpec =
+  | { name: string; label: string; kind: "number"; quantity: FactQuantity; derived: boolean }
+  | { name: string; label: string; kind: "boolean"; derived: boolean }
+  | { name: string; label: string; kind: "enum"; values: readonly string[]; derived: boolean };
+
+export const ALLOY_FAMILIES = ["al-si", "al-si-cu", "al-cu", "al-mg", "al-zn", "al-wrought", "copper-base"] as const;
+export type AlloyFamily = (typeof ALLOY_FAMILIES)[number];
+
+export const MOISTURE_RISKS = ["low", "moderate", "high"] as const;
+export const POUR_WINDOW_POSITIONS = ["below", "inside", "above"] as const;
+
+const n = (name: string, label: string, quantity: FactQuantity, derived = false): FactSpec => ({
+  name, label, kind: "number", quantity, derived,
+});
+const b = (name: string, label: string, derived = false): FactSpec => ({ name, label, kind: "boolean", derived });
+const e = (name: string, label: string, values: readonly string[], derived = false): FactSpec => ({
+  name, label, kind: "enum", values, derived,
+});
+
+export const FACTS: readonly FactSpec[] = [
+  // Inputs, straight from the case (coating.* flattened).
+  e("process", "process", PROCESSES),
+  n("pourTempC", "pour temperature", "temperature"),
+  n("meltTempC", "highest melt temperature", "temperature"),
+  e("degassing", "degassing method", DEGASSING_METHODS),
+  n("degasMinutes", "degassing time", "minutes"),
+  b("fluxed", "flux used"),
+  b("skimmed", "skimmed before pouring"),
+  e("charge", "charge", CHARGES),
+  n("ambientTempC", "ambient temperature", "temperature"),
+  n("humidityPct", "relative humidity", "percent"),
+  n("sandMoisturePct", "sand moisture", "percent"),
+  b("coatingApplied", "coating applied"),
+  b("coatingDried", "coating dried"),
+  n("coatingCoats", "coats of coating", "count"),
+  n("foamDensityKgM3", "foam density", "density"),
+  n("minSectionMm", "thinnest section", "length"),
+  n("maxSectionMm", "thickest section", "length"),
+  n("sprueHeightMm", "sprue height", "length"),
+  n("pourTimeS", "pour time", "time"),
+  b("hasRiser", "has a riser"),
+  b("hasOverflow", "has an overflow"),
+  b("hasVents", "has vents"),
+  // Derived (rules/facts.ts).
+  e("alloyFamily", "alloy family", ALLOY_FAMILIES, true),
+  b("isAluminium", "aluminium alloy", true),
+  n("liquidusC", "liquidus", "temperature", true),
+  n("solidusC", "solidus", "temperature", true),
+  n("freezingRangeC", "freezing range", "temperature-difference", true),
+  n("superheatC", "superheat at pouring", "temperature-difference", true),
+  n("meltSuperheatC", "superheat of the melt at its hottest", "temperature-difference", true),
+  n("pourWindowLowC", "lowest usual pour temperature", "temperature", true),
+  n("pourWindowHighC", "highest usual pour temperature", "temperature", true),
+  e("pourWindowPosition", "pour temperature against the usual window", POUR_WINDOW_POSITIONS, true),
+  n("pourBelowWindowC", "degrees below the usual pour window", "temperature-difference", true),
+  n("pourAboveWindowC", "degrees above the usual pour window", "temperature-difference", true),
+  n("hydrogenSolubilityCm3Per100g", "hydrogen solubility at the melt temperature", "hydrogen", true),
+  n("vapourPressureKPa", "water vapour pressure of the air", "pressure", true),
+  e("moistureRisk", "moisture risk", MOISTURE_RISKS, true),
+  n("frontVelocityMS", "metal-front velocity at the sprue base", "velocity", true),
+  n("velocityGuideMS", "velocity guide for this section", "velocity", true),
+  n("frontVelocityRatio", "metal-front velocity over the guide", "ratio", true),
+  n("sectionRatio", "thickest over thinnest section", "ratio", true),
+  n("freezeTimeRatio", "freezing time of thickest over thinnest section", "ratio", true),
+  n("thickSectionModulusMm", "modulus of the thickest section", "length", true),
+  n("defectCount", "marked defects", "count", true),
+  n("worstSeverity", "worst severity marked", "count", true),
+];
+
+export const FACT_NAMES: ReadonlySet<string> = new Set(FACTS.map((f) => f.name));
+export const factSpec = (name: string) => FACTS.find((f) => f.name === name);
+
+/** The facts object the engine reads: every catalogued fact, undefined where unknown. */
+export type Facts = Record<string, number | boolean | string | undefined>;

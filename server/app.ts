@@ -1,0 +1,37 @@
+import { toNodeHandler } from "better-auth/node";
+import express from "express";
+import { existsSync } from "node:fs";
+import { join } from "node:path";
+import { auth } from "./auth/auth";
+import { healthRouter } from "./health/router";
+import { apiNotFound, errorHandler } from "./http/errors";
+import { shopsRouter } from "./shops/router";
+
+/**
+ * The whole HTTP surface: better-auth under /api/auth, the API under /api, and the exported
+ * web app (when `webDir` holds one) for every other path. Built here, started in server/index.ts,
+ * so tests call `request(createApp())` without a port.
+ */
+export function createApp(opts: { webDir?: string } = {}) {
+  const app = express();
+  app.disable("x-powered-by");
+  app.set("trust proxy", "loopback");
+
+  // better-auth reads the raw body itself: mount it before express.json().
+  app.all("/api/auth/{*any}", toNodeHandler(auth));
+
+  const api = express.Router();
+  api.use(express.json({ limit: "1mb" }));
+  api.use(healthRouter);
+  api.use(shopsRouter);
+  api.use(apiNotFound);
+  app.use("/api", api);
+
+  if (opts.webDir && existsSync(join(opts.webDir, "index.html"))) {
+    const webDir = opts.webDir;
+    app.use(express.static(webDir, { extensions: ["html"], index: "index.html" }));
+    app.get("/{*splat}", (_req, res) => res.sendFile(join(webDir, "index.html")));
+  }
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,59 @@
+import { fromNodeHeaders } from "better-auth/node";
+import { and, asc, eq } from "drizzle-orm";
+import type { RequestHandler } from "express";
+import { db } from "../../db/client";
+import { member } from "../../db/schema";
+import { roleCan, type Permission, type ShopRole } from "../../lib/permissions";
+import { HttpError } from "../http/errors";
+import { auth } from "./auth";
+
+/** Who is asking, in which shop, with which role: set on every shop-scoped request. */
+export type ShopMember = { userId: string; userName: string; shopId: string; role: ShopRole };
+
+declare module "express-serve-static-core" {
+  interface Request {
+    member?: ShopMember;
+  }
+}
+
+export async function sessionOf(headers: Parameters<typeof fromNodeHeaders>[0]) {
+  return auth.api.getSession({ headers: fromNodeHeaders(headers) });
+}
+
+/**
+ * The gate in front of every shop route: a signed-in person who belongs to the active shop.
+ * Without an active shop the person's oldest membership is used. Role checks come after, in `allow`.
+ */
+export const requireShopMember: RequestHandler = async (req, _res, next) => {
+  const session = await sessionOf(req.headers);
+  if (!session) throw new HttpError(401, "Please sign in.");
+  const userId = session.user.id;
+  const activeShopId = session.session.activeOrganizationId;
+  const rows = await db
+    .select({ shopId: member.organizationId, role: member.role })
+    .from(member)
+    .where(activeShopId ? and(eq(member.userId, userId), eq(member.organizationId, activeShopId)) : eq(member.userId, userId))
+    .orderBy(asc(member.createdAt))
+    .limit(1);
+  const row = rows[0];
+  if (!row) throw new HttpError(403, "You do not belong to a shop yet: create one or ask an owner to invite you.");
+  req.member = { userId, userName: session.user.name, shopId: row.shopId, role: row.role as ShopRole };
+  next();
+};
+
+/** Role check, declared beside the route: `router.patch("/settings", allow({ shop: ["settings"] }), ...)`. */
+export function allow(permission: Permission): RequestHandler {
+  return (req, _res, next) => {
+    const m = req.member;
+    if (!m) throw new HttpError(401, "Please sign in.");
+    if (!roleCan(m.role, permission)) {
+      throw new HttpError(403, `A ${m.role} may not do this; ask a shop owner or mentor.`);
+    }
+    next();
+  };
+}
+
+export function currentMember(req: { member?: ShopMember }): ShopMember {
+  if (!req.member) throw new HttpError(401, "Please sign in.");
+  return req.member;
+}

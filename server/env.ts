@@ -1,0 +1,41 @@
+import { randomBytes } from "node:crypto";
+import { z } from "zod";
+
+/**
+ * The one place that reads process.env. Everything else imports `env`.
+ * The session secret must be set in production; locally one is generated per process
+ * (sessions then end when the server restarts, which is fine on a workbench).
+ */
+const schema = z.object({
+  NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
+  PORT: z.coerce.number().int().min(1).max(65535).default(8080),
+  HOST: z.string().default("127.0.0.1"),
+  DATABASE_URL: z.string().url().optional(),
+  BETTER_AUTH_SECRET: z.string().min(32, "BETTER_AUTH_SECRET must be at least 32 characters").optional(),
+  PUBLIC_URL: z.string().url().optional(),
+  UPLOAD_DIR: z.string().default("uploads"),
+  SMTP_URL: z.string().optional(),
+  MAIL_FROM: z.string().default("Shakeout Casebook <casebook@localhost>"),
+});
+
+const parsed = schema.safeParse(process.env);
+if (!parsed.success) {
+  const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
+  throw new Error(`Invalid environment:\n${lines.join("\n")}`);
+}
+const raw = parsed.data;
+
+if (raw.NODE_ENV === "production" && !raw.BETTER_AUTH_SECRET) {
+  throw new Error("BETTER_AUTH_SECRET must be set in production (32+ random characters).");
+}
+
+export const env = {
+  ...raw,
+  BETTER_AUTH_SECRET: raw.BETTER_AUTH_SECRET ?? randomBytes(32).toString("hex"),
+  PUBLIC_URL: raw.PUBLIC_URL ?? `http://${raw.HOST}:${raw.PORT}`,
+};
+
+export function requireDatabaseUrl(): string {
+  if (!env.DATABASE_URL) throw new Error("DATABASE_URL is not set (npm start sets it for its local database).");
+  return env.DATABASE_URL;
+}

@@ -1,0 +1,47 @@
+import { and, asc, eq } from "drizzle-orm";
+import { db } from "../../db/client";
+import { member, organization, shopSettings, user } from "../../db/schema";
+import type { ShopSettingsInput } from "../../lib/shop-settings";
+
+export async function shopsOf(userId: string) {
+  return db
+    .select({ id: organization.id, name: organization.name, role: member.role })
+    .from(member)
+    .innerJoin(organization, eq(member.organizationId, organization.id))
+    .where(eq(member.userId, userId))
+    .orderBy(asc(organization.name));
+}
+
+/** The shop as its member sees it; undefined when the person is not a member (the route says 404). */
+export async function shopForMember(shopId: string, userId: string) {
+  const [row] = await db
+    .select({
+      id: organization.id,
+      name: organization.name,
+      role: member.role,
+      defaultAlloy: shopSettings.defaultAlloy,
+      defaultProcess: shopSettings.defaultProcess,
+    })
+    .from(organization)
+    .innerJoin(member, and(eq(member.organizationId, organization.id), eq(member.userId, userId)))
+    .leftJoin(shopSettings, eq(shopSettings.shopId, organization.id))
+    .where(eq(organization.id, shopId));
+  return row;
+}
+
+export async function membersOf(shopId: string) {
+  return db
+    .select({ userId: user.id, name: user.name, email: user.email, role: member.role })
+    .from(member)
+    .innerJoin(user, eq(user.id, member.userId))
+    .where(eq(member.organizationId, shopId))
+    .orderBy(asc(user.name));
+}
+
+export async function saveShopSettings(shopId: string, userId: string, input: ShopSettingsInput) {
+  const values = { ...input, updatedAt: new Date(), updatedBy: userId };
+  await db
+    .insert(shopSettings)
+    .values({ shopId, ...values })
+    .onConflictDoUpdate({ target: shopSettings.shopId, set: values });
+}
