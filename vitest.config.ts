@@ -3,8 +3,9 @@ import { fileURLToPath } from "node:url";
 
 const root = fileURLToPath(new URL(".", import.meta.url));
 
-// Two projects: pure foundry code (no database) and the HTTP API (its own throwaway PostgreSQL,
-// started once by tests/api/global-setup.ts and removed afterwards).
+// Three projects: pure foundry code (no database); the HTTP API (its own throwaway PostgreSQL,
+// started once by tests/api/global-setup.ts and removed afterwards); and the browser tests
+// (npm run test:e2e: the built web app served by the real server, driven in Debian's chromium).
 export default defineConfig({
   resolve: { alias: { "@": root } },
   test: {
@@ -24,6 +25,18 @@ export default defineConfig({
           fileParallelism: false,
           testTimeout: 20000,
           hookTimeout: 60000,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: "e2e",
+          include: ["tests/e2e/**/*.test.ts"],
+          environment: "node",
+          globalSetup: ["tests/e2e/global-setup.ts"],
+          fileParallelism: false,
+          testTimeout: 60000,
+          hookTimeout: 300000,
         },
       },
     ],

@@ -1,7 +1,8 @@
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { colors, radius, space } from "@/constants/theme";
 
-type Props = { label: string; options: readonly string[]; value: string | null; onChange: (v: string) => void; disabled?: boolean };
+export type Choice = { value: string; label: string };
+type Props = { label: string; options: readonly Choice[]; value: string | null; onChange: (v: string) => void; disabled?: boolean };
 
 /** Pick one of a short list by tapping: quicker than a drop-down on a phone. */
 export function ChoiceChips({ label, options, value, onChange, disabled }: Props) {
@@ -10,9 +11,9 @@ export function ChoiceChips({ label, options, value, onChange, disabled }: Props
       <Text style={styles.label}>{label}</Text>
       <View style={styles.row}>
         {options.map((o) => (
-          <Pressable key={o} role="radio" aria-checked={o === value} disabled={disabled} onPress={() => onChange(o)}
-            style={[styles.chip, o === value && styles.on]}>
-            <Text style={[styles.text, o === value && styles.textOn]}>{o}</Text>
+          <Pressable key={o.value} role="radio" aria-checked={o.value === value} disabled={disabled}
+            onPress={() => onChange(o.value)} style={[styles.chip, o.value === value && styles.on]}>
+            <Text style={[styles.text, o.value === value && styles.textOn]}>{o.label}</Text>
           </Pressable>
         ))}
       </View>

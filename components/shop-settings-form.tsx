@@ -3,11 +3,13 @@ import { ChoiceChips } from "@/components/choice-chips";
 import { Button } from "@/components/button";
 import { Notice } from "@/components/notice";
 import { useSaveShopSettings, type Shop } from "@/hooks/use-shop";
+import { PROCESS_LABELS } from "@/lib/labels";
 import { roleCan } from "@/lib/permissions";
 import { BUILT_IN_ALLOYS } from "@/rules/alloys";
 import { PROCESSES, type Process } from "@/rules/case";
 
-const ALLOYS = BUILT_IN_ALLOYS.map((a) => a.designation);
+const ALLOYS = BUILT_IN_ALLOYS.map((a) => ({ value: a.designation, label: a.designation }));
+const PROCESS_CHOICES = PROCESSES.map((p) => ({ value: p, label: PROCESS_LABELS[p] }));
 
 /** Defaults a new melt starts from. Owners change them; everyone else sees them. */
 export function ShopSettingsForm({ shop }: { shop: Shop }) {
@@ -24,7 +26,7 @@ export function ShopSettingsForm({ shop }: { shop: Shop }) {
     <>
       {!mayEdit ? <Notice>Only the shop's owner changes these.</Notice> : null}
       <ChoiceChips label="Default alloy" options={ALLOYS} value={alloy} onChange={setAlloy} disabled={!mayEdit} />
-      <ChoiceChips label="Default process" options={PROCESSES} value={process} onChange={(p) => setProcess(p as Process)} disabled={!mayEdit} />
+      <ChoiceChips label="Default process" options={PROCESS_CHOICES} value={process} onChange={(p) => setProcess(p as Process)} disabled={!mayEdit} />
       {save.error ? <Notice tone="error">{save.error.message}</Notice> : null}
       {save.isSuccess ? <Notice>Saved.</Notice> : null}
       {mayEdit ? (

@@ -43,7 +43,7 @@ function addOperators(engine: Engine) {
 }
 
 type Slot = { engine: Engine; rules: KbRule[]; factNames: string[]; queue: Promise<unknown> };
-export type CompiledRuleSet = { version: string; byType: Map<DefectType, Slot>; causes: Map<string, KbCause>; rules: Map<string, KbRule> };
+export type CompiledRuleSet = { version: string; byType: Map<DefectType, Slot>; causes: Map<string, KbCause> };
 
 const CACHE_LIMIT = 32;
 const cache = new Map<string, CompiledRuleSet>();
@@ -65,7 +65,7 @@ export function compiledRuleSet(rs: RuleSet): CompiledRuleSet {
     byType.set(type, { engine, rules, factNames, queue: Promise.resolve() });
     builds++;
   }
-  const compiled = { version: rs.version, byType, causes: new Map(rs.causes.map((c) => [c.id, c])), rules: new Map(rs.rules.map((r) => [r.id, r])) };
+  const compiled = { version: rs.version, byType, causes: new Map(rs.causes.map((c) => [c.id, c])) };
   if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value!);
   cache.set(rs.version, compiled);
   return compiled;

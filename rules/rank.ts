@@ -43,14 +43,14 @@ export function rankCauses(hits: Hit[], causes: Map<string, KbCause>, facts: Fac
     const pro = list.filter((h) => h.rule.effect !== "weakens").sort((a, b) => weight(b) - weight(a));
     const con = list.filter((h) => h.rule.effect === "weakens").sort((a, b) => weight(b) - weight(a));
     const support = 1 - pro.reduce((p, h) => p * (1 - clamp01(weight(h) * severityFactor(h.severity))), 1);
-    const score = support * con.reduce((p, h) => p * (1 - weight(h)), 1);
+    const score = Math.round(support * con.reduce((p, h) => p * (1 - weight(h)), 1) * 1000) / 1000;
     if (score <= 0) continue;
     const cause = causes.get(id)!;
     ranked.push({
       id,
       title: cause.title,
-      score: Math.round(score * 1000) / 1000,
-      fixes: cause.fixes,
+      score,
+      fixes: [...cause.fixes],
       because: [
         ...pro.map((h) => fillBecause(h.rule.because, facts)),
         ...con.map((h) => `Against: ${fillBecause(h.rule.because, facts)}`),

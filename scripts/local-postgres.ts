@@ -80,7 +80,7 @@ export function startLocalPostgres(opts: {
   const bin = findPgBin();
   let { dataDir } = opts;
   const parent = join(dataDir, "..");
-  mkdirSync(parent, { recursive: true });
+  makeOwnedDir(parent); // .data/ belongs to whoever runs the cluster (postgres, when we are root)
   if (isRoot && !reachableByPostgres(parent)) {
     dataDir = join(tmpdir(), `shakeout-casebook-pg-${opts.port}`);
     console.warn(`The postgres user cannot write ${parent}; keeping the database in ${dataDir} instead.`);
@@ -98,23 +98,26 @@ export function startLocalPostgres(opts: {
       "-o", `-k ${socketDir} -p ${opts.port} -c listen_addresses=127.0.0.1${opts.throwaway ? " -c fsync=off" : ""}`,
     ]);
   }
-  const exists = run(join(bin, "psql"), [
-    "-h", "127.0.0.1", "-p", String(opts.port), "-U", "postgres", "-tAc",
-    `SELECT 1 FROM pg_database WHERE datname = '${opts.database}'`,
-  ]).trim();
-  if (exists !== "1") {
-    run(join(bin, "createdb"), ["-h", "127.0.0.1", "-p", String(opts.port), "-U", "postgres", opts.database]);
-  }
-  return {
-    url: `postgres://postgres@127.0.0.1:${opts.port}/${opts.database}`,
-    dataDir,
-    port: opts.port,
-    stop: () => {
-      try {
-        run(join(bin, "pg_ctl"), ["stop", "-D", dataDir, "-m", "fast", "-w"]);
-      } catch {
-        /* already stopped */
-      }
-    },
+  const stop = () => {
+    try {
+      run(join(bin, "pg_ctl"), ["stop", "-D", dataDir, "-m", "fast", "-w"]);
+    } catch {
+      /* already stopped */
+    }
   };
+  try {
+    ensureDatabase(bin, opts.port, opts.database);
+  } catch (err) {
+    stop(); // never leave a server running behind a failed start
+    throw err;
+  }
+  return { url: `postgres://postgres@127.0.0.1:${opts.port}/${opts.database}`, dataDir, port: opts.port, stop };
+}
+
+function ensureDatabase(bin: string, port: number, database: string) {
+  const exists = run(join(bin, "psql"), [
+    "-h", "127.0.0.1", "-p", String(port), "-U", "postgres", "-tAc",
+    `SELECT 1 FROM pg_database WHERE datname = '${database}'`,
+  ]).trim();
+  if (exists !== "1") run(join(bin, "createdb"), ["-h", "127.0.0.1", "-p", String(port), "-U", "postgres", database]);
 }

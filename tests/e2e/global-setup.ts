@@ -1,0 +1,45 @@
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import type { TestProject } from "vitest/node";
+import { freePort, startLocalPostgres } from "../../scripts/local-postgres";
+import { ensureWebBuild } from "../../scripts/web-build";
+
+const root = fileURLToPath(new URL("../..", import.meta.url));
+
+/**
+ * What `npm start` does, on throwaway ground: a new cluster, migrations, the demo shop, the web
+ * export (built when stale), and the real server on a free port. The tests get its address.
+ */
+export default async function setup(project: TestProject) {
+  const parent = mkdtempSync(join(tmpdir(), "casebook-e2e-"));
+  const pg = startLocalPostgres({ dataDir: join(parent, "pg"), port: await freePort(), database: "casebook_e2e", throwaway: true });
+  const port = await freePort();
+  Object.assign(process.env, { DATABASE_URL: pg.url, PORT: String(port), NODE_ENV: "test", PUBLIC_URL: `http://127.0.0.1:${port}` });
+
+  const { db, pool } = await import("../../db/client");
+  const { applyMigrations } = await import("../../db/migrate");
+  const { seedDemoShop } = await import("../../db/seed");
+  const { listen } = await import("../../server/index");
+  await applyMigrations(db);
+  await seedDemoShop();
+  const webDir = ensureWebBuild(root);
+  const server = await listen({ port, host: "127.0.0.1", webDir });
+  project.provide("baseUrl", `http://127.0.0.1:${port}`);
+
+  return async () => {
+    server.closeAllConnections();
+    await new Promise((r) => server.close(r));
+    await pool.end();
+    pg.stop();
+    rmSync(parent, { recursive: true, force: true });
+    rmSync(pg.dataDir, { recursive: true, force: true });
+  };
+}
+
+declare module "vitest" {
+  export interface ProvidedContext {
+    baseUrl: string;
+  }
+}
