@@ -9,7 +9,6 @@ import { factSpec, type FactSpec } from "./fact-catalog";
  */
 export type Leaf = { fact: string; operator: string; value: unknown };
 export type Condition = Leaf | { all: Condition[] } | { any: Condition[] } | { not: Condition };
-export type TopCondition = { all: Condition[] } | { any: Condition[] } | { not: Condition };
 
 const leafSchema = z.strictObject({ fact: z.string().min(1), operator: z.string().min(1), value: z.unknown() });
 export const conditionSchema: z.ZodType<Condition> = z.lazy(() =>

@@ -1,5 +1,7 @@
 import { toNodeHandler } from "better-auth/node";
+import cors from "cors";
 import express from "express";
+import { env } from "./env";
 import { existsSync } from "node:fs";
 import { join } from "node:path";
 import { auth } from "./auth/auth";
@@ -16,6 +18,8 @@ export function createApp(opts: { webDir?: string } = {}) {
   const app = express();
   app.disable("x-powered-by");
   app.set("trust proxy", "loopback");
+
+  if (env.DEV_WEB_ORIGIN) app.use(cors({ origin: env.DEV_WEB_ORIGIN, credentials: true }));
 
   // better-auth reads the raw body itself: mount it before express.json().
   app.all("/api/auth/{*any}", toNodeHandler(auth));

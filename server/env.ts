@@ -16,6 +16,8 @@ const schema = z.object({
   UPLOAD_DIR: z.string().default("uploads"),
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().default("Shakeout Casebook <casebook@localhost>"),
+  /** Only for `npm run dev`: the Expo dev server's origin, allowed to call the API with cookies. */
+  DEV_WEB_ORIGIN: z.string().url().optional(),
 });
 
 const parsed = schema.safeParse(process.env);

@@ -13,7 +13,7 @@ import { env } from "../env";
 export const auth = betterAuth({
   baseURL: env.PUBLIC_URL,
   secret: env.BETTER_AUTH_SECRET,
-  trustedOrigins: [env.PUBLIC_URL, "http://localhost:8081", "http://127.0.0.1:8081"],
+  trustedOrigins: [env.PUBLIC_URL, ...(env.DEV_WEB_ORIGIN ? [env.DEV_WEB_ORIGIN] : [])],
   database: drizzleAdapter(db, { provider: "pg", schema }),
   emailAndPassword: { enabled: true, minPasswordLength: 8, maxPasswordLength: 128 },
   telemetry: { enabled: false },
