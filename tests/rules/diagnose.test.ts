@@ -102,7 +102,10 @@ describe("the result", () => {
     for (const weightFactor of [() => 1, () => 3, (id: string) => (id.startsWith("h2") ? 0.2 : 1)]) {
       const { causes } = await diagnose(c, { weightFactor });
       expect(causes.length).toBeGreaterThan(3);
-      for (const x of causes) expect(x.score).toBeGreaterThan(0), expect(x.score).toBeLessThanOrEqual(1);
+      for (const x of causes) {
+        expect(x.score).toBeGreaterThan(0);
+        expect(x.score).toBeLessThanOrEqual(1);
+      }
       expect(causes.map((x) => x.score)).toEqual([...causes.map((x) => x.score)].sort((a, b) => b - a));
     }
   });

@@ -1,0 +1,90 @@
+import convert from "convert-units";
+
+/**
+ * A person's units and the conversions between them and the SI values the API keeps.
+ * Temperatures go through convert-units (its °F anchor is the exact C × 9/5 + 32). Its inch
+ * (from a foot of 1/3.28084 m) and pound (453.592 g) are rounded, so length and mass use the
+ * exact 1959 international yard and pound definitions instead: 1 in = 25.4 mm, 1 lb = 0.45359237 kg.
+ */
+export type Units = { temperature: "C" | "F"; length: "mm" | "in"; mass: "kg" | "lb" };
+export const SI_UNITS: Units = { temperature: "C", length: "mm", mass: "kg" };
+
+export const MM_PER_IN = 25.4;
+export const KG_PER_LB = 0.45359237;
+const M_PER_FT = 0.3048;
+/** Foam density: kg/m³ for a kg person, lb/ft³ (the unit foam is sold in) for a lb person. */
+export const KG_M3_PER_LB_FT3 = KG_PER_LB / M_PER_FT ** 3;
+
+/** Quantities the notebook's forms show. A temperature difference (superheat) has no +32 offset. */
+export type Quantity = "temperature" | "temperature-difference" | "length" | "mass" | "density";
+
+export function fromSi(q: Quantity, si: number, u: Units): number {
+  switch (q) {
+    case "temperature":
+      return u.temperature === "F" ? convert(si).from("C").to("F") : si;
+    case "temperature-difference":
+      return u.temperature === "F" ? (si * 9) / 5 : si;
+    case "length":
+      return u.length === "in" ? si / MM_PER_IN : si;
+    case "mass":
+      return u.mass === "lb" ? si / KG_PER_LB : si;
+    case "density":
+      return u.mass === "lb" ? si / KG_M3_PER_LB_FT3 : si;
+  }
+}
+
+export function toSi(q: Quantity, value: number, u: Units): number {
+  switch (q) {
+    case "temperature":
+      return u.temperature === "F" ? convert(value).from("F").to("C") : value;
+    case "temperature-difference":
+      return u.temperature === "F" ? (value * 5) / 9 : value;
+    case "length":
+      return u.length === "in" ? value * MM_PER_IN : value;
+    case "mass":
+      return u.mass === "lb" ? value * KG_PER_LB : value;
+    case "density":
+      return u.mass === "lb" ? value * KG_M3_PER_LB_FT3 : value;
+  }
+}
+
+export function unitLabel(q: Quantity, u: Units): string {
+  switch (q) {
+    case "temperature":
+    case "temperature-difference":
+      return u.temperature === "F" ? "°F" : "°C";
+    case "length":
+      return u.length;
+    case "mass":
+      return u.mass;
+    case "density":
+      return u.mass === "lb" ? "lb/ft³" : "kg/m³";
+  }
+}
+
+/** Decimals worth showing: a degree, a tenth of a mm, a thousandth of an inch (0.025 mm). */
+function decimals(q: Quantity, u: Units): number {
+  if (q === "temperature" || q === "temperature-difference") return 0;
+  if (q === "length") return u.length === "in" ? 3 : 1;
+  return u.mass === "lb" ? 2 : 1;
+}
+
+/** The value in the person's units as typed text ("1337", "0.25"), trailing zeros dropped. */
+export function toField(q: Quantity, si: number | null | undefined, u: Units): string {
+  if (si === null || si === undefined) return "";
+  return String(Number(fromSi(q, si, u).toFixed(decimals(q, u))));
+}
+
+/** Typed text back to SI; "" is "not logged" (undefined), text that is not a number is NaN for the schema to refuse. */
+export function fromField(q: Quantity, text: string, u: Units): number | undefined {
+  const t = text.trim().replace(",", ".");
+  if (t === "") return undefined;
+  const n = Number(t);
+  return Number.isFinite(n) ? toSi(q, n, u) : Number.NaN;
+}
+
+/** "725 °C", "1337 °F", "0.197 in"; a dash where nothing was logged. */
+export function formatValue(q: Quantity, si: number | null | undefined, u: Units): string {
+  if (si === null || si === undefined) return "–";
+  return `${toField(q, si, u)} ${unitLabel(q, u)}`;
+}
