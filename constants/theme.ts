@@ -19,5 +19,7 @@ export const radius = { sm: 6, md: 10 } as const;
 /** Screens this wide or wider get the side rail and a centred column. */
 export const WIDE_MIN_PX = 900;
 export const CONTENT_MAX_PX = 760;
+/** Tables and two-pane pages (a photo beside its marks) on wide screens. */
+export const WIDE_CONTENT_MAX_PX = 1040;
 
 export const fonts = { heading: "Lora-SemiBold", serif: "Lora-Regular" } as const;

@@ -14,3 +14,6 @@ export const shopSettings = pgTable("shop_settings", {
   updatedAt: timestamp("updated_at", { withTimezone: true }).defaultNow().notNull(),
   updatedBy: text("updated_by").references(() => user.id, { onDelete: "set null" }),
 });
+export * from "./notebook-schema";
+export * from "./mentor-schema";
+export * from "./search-schema";

@@ -1,4 +1,5 @@
 import convert from "convert-units";
+import { DEFAULT_UNITS, type Units } from "./notebook-schemas";
 
 /**
  * A person's units and the conversions between them and the SI values the API keeps.
@@ -6,8 +7,8 @@ import convert from "convert-units";
  * (from a foot of 1/3.28084 m) and pound (453.592 g) are rounded, so length and mass use the
  * exact 1959 international yard and pound definitions instead: 1 in = 25.4 mm, 1 lb = 0.45359237 kg.
  */
-export type Units = { temperature: "C" | "F"; length: "mm" | "in"; mass: "kg" | "lb" };
-export const SI_UNITS: Units = { temperature: "C", length: "mm", mass: "kg" };
+export type { Units };
+export const SI_UNITS: Units = DEFAULT_UNITS;
 
 export const MM_PER_IN = 25.4;
 export const KG_PER_LB = 0.45359237;

@@ -8,6 +8,20 @@ import { auth } from "./auth/auth";
 import { healthRouter } from "./health/router";
 import { apiNotFound, errorHandler } from "./http/errors";
 import { shopsRouter } from "./shops/router";
+import { searchRouter } from "./search/router";
+import { alloysRouter } from "./alloys/router";
+import { castingsRouter } from "./castings/router";
+import { commentsRouter } from "./comments/router";
+import { diagnosisRouter } from "./diagnosis/router";
+import { exportRouter } from "./export/router";
+import { marksRouter } from "./marks/router";
+import { meltsRouter } from "./melts/router";
+import { peopleRouter } from "./people/router";
+import { photosRouter } from "./photos/router";
+// Mentors (issue 6): review, follow-ups and the shop's rulebook.
+import { followupsRouter } from "./followups/router";
+import { reviewRouter } from "./review/router";
+import { rulebookRouter } from "./rulebook/router";
 
 /**
  * The whole HTTP surface: better-auth under /api/auth, the API under /api, and the exported
@@ -28,6 +42,12 @@ export function createApp(opts: { webDir?: string } = {}) {
   api.use(express.json({ limit: "1mb" }));
   api.use(healthRouter);
   api.use(shopsRouter);
+  // The notebook (docs/notebook-api.md); photos take multipart bodies through multer, not express.json.
+  for (const r of [alloysRouter, meltsRouter, castingsRouter, photosRouter, marksRouter, commentsRouter, peopleRouter, exportRouter, diagnosisRouter]) {
+    api.use(r);
+  }
+  api.use(reviewRouter, followupsRouter, rulebookRouter); // issue 6
+  api.use(searchRouter); // the casebook search (issue 5)
   api.use(apiNotFound);
   app.use("/api", api);
 

@@ -4,10 +4,11 @@ import { Notice } from "@/components/notice";
 import { SafetyCautions } from "@/components/safety-cautions";
 import { Screen } from "@/components/screen";
 import { ShopSettingsForm } from "@/components/shop-settings-form";
+import { UnitsChooser } from "@/components/units-chooser";
 import { colors, space } from "@/constants/theme";
 import { useShop, useShopMembers } from "@/hooks/use-shop";
 
-/** The shop itself: its people, its defaults, and the standing cautions. */
+/** The shop itself: its people, your units, its defaults, and the standing cautions. */
 export default function MoreScreen() {
   const shop = useShop();
   const members = useShopMembers();
@@ -27,6 +28,9 @@ export default function MoreScreen() {
           </View>
         ))}
       </View>
+      <Heading level={2}>Your units</Heading>
+      <Text style={styles.meta}>How you see and type temperatures, sizes and weights. Only for you; the shop's records stay the same.</Text>
+      <UnitsChooser />
       <Heading level={2}>Shop defaults</Heading>
       <ShopSettingsForm shop={shop.data} />
       <Heading level={2}>Safety</Heading>

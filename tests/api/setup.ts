@@ -4,3 +4,4 @@ import { inject } from "vitest";
 process.env.DATABASE_URL = inject("databaseUrl");
 process.env.NODE_ENV = "test";
 process.env.PUBLIC_URL = "http://127.0.0.1:8080";
+process.env.UPLOAD_DIR = `${process.env.TMPDIR ?? "/tmp"}/casebook-test-uploads-${process.pid}`;

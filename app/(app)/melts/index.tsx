@@ -1,10 +1,57 @@
-import { NotBuiltYet } from "@/components/not-built-yet";
+import { useRouter } from "expo-router";
+import { useState } from "react";
+import { StyleSheet, View } from "react-native";
+import { Button } from "@/components/button";
+import { ChoiceChips } from "@/components/choice-chips";
+import { Heading } from "@/components/heading";
+import { MeltCard } from "@/components/melt-card";
+import { MeltTable } from "@/components/melt-table";
+import { Notice } from "@/components/notice";
+import { Pager } from "@/components/pager";
+import { Loading } from "@/components/query-state";
+import { Screen } from "@/components/screen";
+import { space } from "@/constants/theme";
+import { useIsWide } from "@/hooks/use-layout";
+import { useMelts, type MeltSort } from "@/hooks/use-melts";
+import { useUnits } from "@/hooks/use-units";
 
+const PAGE_SIZE = 20;
+const ORDER = [
+  { value: "date-desc", label: "newest" }, { value: "date-asc", label: "oldest" },
+  { value: "alloy", label: "alloy" }, { value: "castings", label: "most castings" },
+];
+
+/** The pour log: cards on a phone, a sortable table on a wide screen. */
 export default function MeltsScreen() {
+  const wide = useIsWide();
+  const units = useUnits();
+  const router = useRouter();
+  const [page, setPage] = useState(1);
+  const [sort, setSort] = useState<MeltSort>("date-desc");
+  const melts = useMelts({ page, pageSize: PAGE_SIZE, sort });
+  const resort = (s: MeltSort) => { setSort(s); setPage(1); };
+
   return (
-    <NotBuiltYet
-      title="Melts"
-      purpose="The pour log: each melt with its alloy, charge, temperatures, degassing and mould conditions, and the castings poured from it."
-    />
+    <Screen wide={wide}>
+      <View style={styles.head}>
+        <Heading>Melts</Heading>
+        <Button label="Log a melt" onPress={() => router.push("/melts/new")} testID="new-melt" />
+      </View>
+      {!wide ? <ChoiceChips label="Order" options={ORDER} value={sort} onChange={(s) => resort(s as MeltSort)} /> : null}
+      {melts.isPending ? <Loading /> : null}
+      {melts.error ? <Notice tone="error">{melts.error.message}</Notice> : null}
+      {melts.data && melts.data.total === 0 ? (
+        <Notice>No melts logged yet. Log the first one after your next pour.</Notice>
+      ) : null}
+      {melts.data && melts.data.items.length ? (
+        wide ? <MeltTable melts={melts.data.items} units={units} sort={sort} onSort={resort} />
+          : melts.data.items.map((m) => <MeltCard key={m.id} melt={m} units={units} />)
+      ) : null}
+      {melts.data ? <Pager page={page} pageSize={PAGE_SIZE} total={melts.data.total} onPage={setPage} /> : null}
+    </Screen>
   );
 }
+
+const styles = StyleSheet.create({
+  head: { flexDirection: "row", justifyContent: "space-between", alignItems: "center", gap: space.md },
+});

@@ -1,0 +1,37 @@
+import { useLocalSearchParams } from "expo-router";
+import { BackLink } from "@/components/back-link";
+import { CastingSummary } from "@/components/casting-summary";
+import { DiagnosisView } from "@/components/diagnosis-view";
+import { Heading } from "@/components/heading";
+import { Inspection } from "@/components/inspection";
+import { LoadFailed, Loading } from "@/components/query-state";
+import { Screen } from "@/components/screen";
+import { useCasting } from "@/hooks/use-castings";
+import { useIsWide } from "@/hooks/use-layout";
+import { useMe } from "@/hooks/use-me";
+import { useUnits } from "@/hooks/use-units";
+import { formatDay } from "@/lib/dates";
+import { roleCan } from "@/lib/permissions";
+
+/** One casting: how it came out, its photos with the defects marked on them, and the likely causes. */
+export default function CastingScreen() {
+  const params = useLocalSearchParams<{ id: string; castingId: string }>();
+  const casting = useCasting(Number(params.castingId));
+  const units = useUnits();
+  const wide = useIsWide();
+  const role = useMe().data?.activeShop?.role ?? "";
+  const mayWrite = roleCan(role, { casebook: ["write"] });
+  if (casting.isPending) return <Loading />;
+  if (casting.error) return <LoadFailed error={casting.error} />;
+  const c = casting.data;
+
+  return (
+    <Screen wide={wide}>
+      <BackLink href={`/melts/${c.meltId}`} label={`${c.melt.alloy} melt of ${formatDay(c.melt.pouredOn)}`} />
+      <CastingSummary casting={c} units={units} mayEdit={mayWrite} />
+      <Heading level={2}>Photos and marks</Heading>
+      <Inspection casting={c} wide={wide} />
+      <DiagnosisView casting={c} units={units} mayRun={mayWrite} />
+    </Screen>
+  );
+}

@@ -1,0 +1,55 @@
+import { useLocalSearchParams, useRouter } from "expo-router";
+import { StyleSheet, View } from "react-native";
+import { BackLink } from "@/components/back-link";
+import { Button } from "@/components/button";
+import { CastingForm } from "@/components/casting-form";
+import { CastingRow } from "@/components/casting-row";
+import { Heading } from "@/components/heading";
+import { MeltFacts } from "@/components/melt-facts";
+import { Notice } from "@/components/notice";
+import { LoadFailed, Loading } from "@/components/query-state";
+import { Screen } from "@/components/screen";
+import { colors, radius, space } from "@/constants/theme";
+import { useCreateCasting } from "@/hooks/use-castings";
+import { useMelt } from "@/hooks/use-melts";
+import { useUnitsQuery } from "@/hooks/use-units";
+import { formatDay } from "@/lib/dates";
+import { SI_UNITS } from "@/lib/units";
+
+/** One melt: its conditions, the castings poured from it, and a quick form to add the next casting. */
+export default function MeltScreen() {
+  const id = Number(useLocalSearchParams<{ id: string }>().id);
+  const melt = useMelt(id);
+  const units = useUnitsQuery();
+  const addCasting = useCreateCasting(id);
+  const router = useRouter();
+  if (melt.isPending || units.isPending) return <Loading />;
+  if (melt.error) return <LoadFailed error={melt.error} />;
+  const m = melt.data;
+  const u = units.data ?? SI_UNITS;
+
+  return (
+    <Screen>
+      <BackLink href="/melts" label="All melts" />
+      <View style={styles.head}>
+        <Heading style={styles.title}>{m.alloy} melt, {formatDay(m.pouredOn)}</Heading>
+        <Button kind="plain" label="Change" onPress={() => router.push(`/melts/${id}/edit`)} />
+      </View>
+      <MeltFacts melt={m} units={u} />
+      {m.notes ? <Notice>{m.notes}</Notice> : null}
+      <Heading level={2}>Castings from this melt</Heading>
+      {m.castings.length === 0 ? <Notice>No castings logged from this melt yet.</Notice> : null}
+      {m.castings.map((c) => <CastingRow key={c.id} casting={c} />)}
+      <View style={styles.add}>
+        <Heading level={3}>Add a casting</Heading>
+        <CastingForm units={u} submitLabel="Save casting" keepOpen onSubmit={(input) => addCasting.mutateAsync(input)} />
+      </View>
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  head: { flexDirection: "row", alignItems: "center", justifyContent: "space-between", gap: space.md },
+  title: { flex: 1 },
+  add: { gap: space.md, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+});

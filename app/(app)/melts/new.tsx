@@ -1,0 +1,32 @@
+import { useRouter } from "expo-router";
+import { BackLink } from "@/components/back-link";
+import { Heading } from "@/components/heading";
+import { MeltForm } from "@/components/melt-form";
+import { LoadFailed, Loading } from "@/components/query-state";
+import { Screen } from "@/components/screen";
+import { useCreateMelt, useMeltDefaults } from "@/hooks/use-melts";
+import { useUnitsQuery } from "@/hooks/use-units";
+import { SI_UNITS } from "@/lib/units";
+
+/** Log a melt: starts from the shop's defaults and the last melt's furnace and alloy. */
+export default function NewMeltScreen() {
+  const defaults = useMeltDefaults();
+  const units = useUnitsQuery();
+  const create = useCreateMelt();
+  const router = useRouter();
+  // The form's text is set once from SI values, so it waits for the person's units.
+  if (defaults.isPending || units.isPending) return <Loading />;
+  if (defaults.error) return <LoadFailed error={defaults.error} />;
+
+  return (
+    <Screen>
+      <BackLink href="/melts" label="All melts" />
+      <Heading>Log a melt</Heading>
+      <MeltForm initial={defaults.data} units={units.data ?? SI_UNITS} submitLabel="Save the melt"
+        onSubmit={async (input) => {
+          const melt = await create.mutateAsync(input);
+          router.replace(`/melts/${melt.id}`);
+        }} />
+    </Screen>
+  );
+}

@@ -1,0 +1,51 @@
+import { useState } from "react";
+import { StyleSheet, Text, View } from "react-native";
+import { Button } from "@/components/button";
+import { CastingFacts } from "@/components/casting-facts";
+import { CastingForm } from "@/components/casting-form";
+import { Heading } from "@/components/heading";
+import { Notice } from "@/components/notice";
+import { OutcomeChips } from "@/components/outcome-chips";
+import { colors, space } from "@/constants/theme";
+import { useUpdateCasting } from "@/hooks/use-castings";
+import { PROCESS_LABELS } from "@/lib/labels";
+import type { CastingDetail } from "@/lib/notebook-schemas";
+import { formatValue, type Units } from "@/lib/units";
+
+/** The casting's own record: how it came out (one tap to change), its melt in a line, its sizes. */
+export function CastingSummary({ casting, units, mayEdit }: { casting: CastingDetail; units: Units; mayEdit: boolean }) {
+  const update = useUpdateCasting(casting.id);
+  const [editing, setEditing] = useState(false);
+  const m = casting.melt;
+  return (
+    <View style={styles.wrap}>
+      <Heading>{casting.partName}</Heading>
+      <Text style={styles.melt}>
+        {m.alloy} · {PROCESS_LABELS[m.process]} · poured at {formatValue("temperature", m.pourTempC, units)}
+      </Text>
+      <OutcomeChips value={casting.outcome} onChange={(outcome) => mayEdit && update.mutate({ outcome })} />
+      {update.error ? <Notice tone="error">{update.error.message}</Notice> : null}
+      {editing ? (
+        <CastingForm initial={casting} units={units} startExpanded submitLabel="Save changes"
+          onSubmit={async (input) => {
+            const { marks: _ignored, ...change } = input;
+            await update.mutateAsync(change);
+            setEditing(false);
+          }} />
+      ) : (
+        <>
+          <CastingFacts casting={casting} units={units} />
+          {casting.notes ? <Notice>{casting.notes}</Notice> : null}
+          {mayEdit ? <View style={styles.start}><Button kind="plain" label="Change sizes and details" onPress={() => setEditing(true)} /></View> : null}
+        </>
+      )}
+      {editing ? <View style={styles.start}><Button kind="plain" label="Cancel" onPress={() => setEditing(false)} /></View> : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.md },
+  melt: { fontSize: 15, color: colors.muted },
+  start: { alignSelf: "flex-start" },
+});

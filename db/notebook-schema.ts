@@ -1,0 +1,190 @@
+import { sql } from "drizzle-orm";
+import {
+  boolean, check, date, doublePrecision, index, integer, jsonb, pgTable, serial, text, timestamp, unique,
+} from "drizzle-orm/pg-core";
+import { organization, user } from "./auth-schema";
+
+/**
+ * The shop's notebook: melts, castings, photos, defect marks, comments, diagnosis snapshots.
+ * Every shop row carries its shop, who made it and when. Values are SI (°C, mm, kg/m³, s, %);
+ * the app converts for each person's units (person_units).
+ */
+const shopId = () => text("shop_id").notNull().references(() => organization.id, { onDelete: "cascade" });
+const createdBy = () => text("created_by").notNull().references(() => user.id);
+const createdAt = () => timestamp("created_at", { withTimezone: true }).defaultNow().notNull();
+const updatedAt = () => timestamp("updated_at", { withTimezone: true }).defaultNow().notNull();
+
+/** Built-in alloys (from rules/alloys.ts) have no shop and no author; a shop adds its own. */
+export const alloys = pgTable(
+  "alloys",
+  {
+    id: serial("id").primaryKey(),
+    shopId: text("shop_id").references(() => organization.id, { onDelete: "cascade" }),
+    designation: text("designation").notNull(),
+    /** Upper case without spaces, so "a356.0" and "A356.0" are one alloy. */
+    designationKey: text("designation_key").notNull(),
+    family: text("family").notNull(),
+    solidusC: doublePrecision("solidus_c").notNull(),
+    liquidusC: doublePrecision("liquidus_c").notNull(),
+    densityKgM3: doublePrecision("density_kg_m3").notNull(),
+    shrinkAllowancePct: doublePrecision("shrink_allowance_pct").notNull(),
+    siliconPct: doublePrecision("silicon_pct"),
+    sources: text("sources").notNull(),
+    createdBy: text("created_by").references(() => user.id),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    unique("alloys_shop_designation_uq").on(t.shopId, t.designationKey).nullsNotDistinct(),
+    check("alloys_solidus_liquidus_ck", sql`${t.solidusC} <= ${t.liquidusC}`),
+  ],
+);
+
+export const melts = pgTable(
+  "melts",
+  {
+    id: serial("id").primaryKey(),
+    shopId: shopId(),
+    alloyId: integer("alloy_id").notNull().references(() => alloys.id),
+    pouredOn: date("poured_on", { mode: "string" }).notNull(),
+    process: text("process").notNull(),
+    charge: text("charge"),
+    furnace: text("furnace"),
+    meltTempC: doublePrecision("melt_temp_c"),
+    pourTempC: doublePrecision("pour_temp_c"),
+    degassing: text("degassing"),
+    degasMinutes: doublePrecision("degas_minutes"),
+    fluxed: boolean("fluxed"),
+    skimmed: boolean("skimmed"),
+    ambientTempC: doublePrecision("ambient_temp_c"),
+    humidityPct: doublePrecision("humidity_pct"),
+    sandMoisturePct: doublePrecision("sand_moisture_pct"),
+    coatingApplied: boolean("coating_applied"),
+    coatingDried: boolean("coating_dried"),
+    coatingCoats: integer("coating_coats"),
+    foamDensityKgM3: doublePrecision("foam_density_kg_m3"),
+    notes: text("notes"),
+    createdBy: createdBy(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    index("melts_shop_poured_idx").on(t.shopId, t.pouredOn, t.id),
+    index("melts_shop_created_idx").on(t.shopId, t.createdAt),
+    check("melts_pour_temp_ck", sql`${t.pourTempC} is null or ${t.pourTempC} <= 1400`),
+    check("melts_humidity_ck", sql`${t.humidityPct} is null or ${t.humidityPct} between 0 and 100`),
+  ],
+);
+
+export const castings = pgTable(
+  "castings",
+  {
+    id: serial("id").primaryKey(),
+    shopId: shopId(),
+    meltId: integer("melt_id").notNull().references(() => melts.id, { onDelete: "cascade" }),
+    partName: text("part_name").notNull(),
+    pattern: text("pattern"),
+    minSectionMm: doublePrecision("min_section_mm"),
+    maxSectionMm: doublePrecision("max_section_mm"),
+    sprueHeightMm: doublePrecision("sprue_height_mm"),
+    pourTimeS: doublePrecision("pour_time_s"),
+    hasRiser: boolean("has_riser"),
+    hasOverflow: boolean("has_overflow"),
+    hasVents: boolean("has_vents"),
+    orientation: text("orientation"),
+    outcome: text("outcome"),
+    notes: text("notes"),
+    createdBy: createdBy(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    index("castings_shop_created_idx").on(t.shopId, t.createdAt),
+    index("castings_melt_idx").on(t.meltId),
+    index("castings_shop_part_idx").on(t.shopId, t.partName),
+    check("castings_sections_ck", sql`${t.minSectionMm} is null or ${t.minSectionMm} > 0`),
+  ],
+);
+
+/** Files live under UPLOAD_DIR with random names; only GET /api/photos/:id/... serves them. */
+export const photos = pgTable(
+  "photos",
+  {
+    id: serial("id").primaryKey(),
+    shopId: shopId(),
+    castingId: integer("casting_id").notNull().references(() => castings.id, { onDelete: "cascade" }),
+    fileName: text("file_name").notNull().unique(),
+    thumbName: text("thumb_name").notNull().unique(),
+    width: integer("width").notNull(),
+    height: integer("height").notNull(),
+    bytes: integer("bytes").notNull(),
+    /** What was uploaded (image/png, image/heic...); the stored file is always a re-encoded JPEG. */
+    uploadedType: text("uploaded_type").notNull(),
+    createdBy: createdBy(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("photos_casting_idx").on(t.castingId), index("photos_shop_created_idx").on(t.shopId, t.createdAt)],
+);
+
+/** A defect seen on a casting, optionally pinned on one of its photos at (x, y) fractions. */
+export const defectMarks = pgTable(
+  "defect_marks",
+  {
+    id: serial("id").primaryKey(),
+    shopId: shopId(),
+    castingId: integer("casting_id").notNull().references(() => castings.id, { onDelete: "cascade" }),
+    photoId: integer("photo_id").references(() => photos.id, { onDelete: "set null" }),
+    x: doublePrecision("x"),
+    y: doublePrecision("y"),
+    type: text("type").notNull(),
+    location: text("location").notNull(),
+    severity: integer("severity").notNull(),
+    note: text("note"),
+    createdBy: createdBy(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [
+    index("marks_casting_idx").on(t.castingId),
+    index("marks_shop_type_idx").on(t.shopId, t.type),
+    check("marks_severity_ck", sql`${t.severity} between 1 and 3`),
+    check("marks_xy_ck", sql`(${t.x} is null or ${t.x} between 0 and 1) and (${t.y} is null or ${t.y} between 0 and 1)`),
+  ],
+);
+
+export const comments = pgTable(
+  "comments",
+  {
+    id: serial("id").primaryKey(),
+    shopId: shopId(),
+    castingId: integer("casting_id").notNull().references(() => castings.id, { onDelete: "cascade" }),
+    body: text("body").notNull(),
+    createdBy: createdBy(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("comments_casting_idx").on(t.castingId, t.createdAt)],
+);
+
+/** A diagnosis as it was, with the rule-set version that produced it, so it reads the same later. */
+export const diagnosisSnapshots = pgTable(
+  "diagnosis_snapshots",
+  {
+    id: serial("id").primaryKey(),
+    shopId: shopId(),
+    castingId: integer("casting_id").notNull().references(() => castings.id, { onDelete: "cascade" }),
+    ruleSetVersion: text("rule_set_version").notNull(),
+    input: jsonb("input").notNull(),
+    result: jsonb("result").notNull(),
+    createdBy: createdBy(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("diagnosis_casting_idx").on(t.castingId, t.createdAt)],
+);
+
+/** Each person's display units; the database keeps SI whatever they choose. */
+export const personUnits = pgTable("person_units", {
+  userId: text("user_id").primaryKey().references(() => user.id, { onDelete: "cascade" }),
+  temperature: text("temperature").notNull(),
+  length: text("length").notNull(),
+  mass: text("mass").notNull(),
+  updatedAt: updatedAt(),
+});

@@ -1,0 +1,23 @@
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { api } from "@/lib/api";
+import type { FixInput, FixPatch, FixTried, Followups } from "@/lib/review-schemas";
+
+/** A fix links two castings, so every casting's follow-ups may change with it: they are refetched together. */
+export const followupKeys = { all: ["followups"] as const, casting: (id: number) => ["followups", id] as const };
+
+export function useFollowups(castingId: number) {
+  return useQuery({ queryKey: followupKeys.casting(castingId), queryFn: () => api<Followups>(`/castings/${castingId}/followups`) });
+}
+
+function useFixChange<T>(fn: (arg: T) => Promise<FixTried>) {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn: fn, onSuccess: () => queryClient.invalidateQueries({ queryKey: followupKeys.all }) });
+}
+
+export function useAddFix(castingId: number) {
+  return useFixChange((input: FixInput) => api<FixTried>(`/castings/${castingId}/fixes`, { method: "POST", body: input }));
+}
+
+export function usePatchFix() {
+  return useFixChange(({ id, ...patch }: FixPatch & { id: number }) => api<FixTried>(`/fixes/${id}`, { method: "PATCH", body: patch }));
+}

@@ -1,0 +1,75 @@
+import { useState } from "react";
+import { numbersToText, textToNumbers, issuesToFields, type NumberSpec } from "@/lib/form-numbers";
+import { alloyConflicts, meltInput, type Alloy, type MeltInput } from "@/lib/notebook-schemas";
+import type { Units } from "@/lib/units";
+import type { Charge, DegassingMethod, Process } from "@/rules/case";
+
+/** The melt's number fields and how each converts to the person's units. */
+export const MELT_NUMBERS = {
+  meltTempC: "temperature", pourTempC: "temperature", degasMinutes: null, ambientTempC: "temperature",
+  humidityPct: null, sandMoisturePct: null, coatingCoats: null, foamDensityKgM3: "density",
+} as const satisfies NumberSpec<string>;
+type NumberKey = keyof typeof MELT_NUMBERS;
+
+export type MeltDraft = Record<NumberKey, string> & {
+  pouredOn: string; alloy: string; process: Process | null; charge: Charge | null; furnace: string;
+  degassing: DegassingMethod | null; fluxed?: boolean; skimmed?: boolean;
+  coatingApplied?: boolean; coatingDried?: boolean; notes: string;
+};
+
+type Initial = { [K in keyof MeltInput]?: MeltInput[K] | null };
+const today = () => new Date().toISOString().slice(0, 10);
+const orUndefined = <T,>(v: T | null | undefined) => v ?? undefined;
+
+/** Which fields a process has: foam density only for lost foam; no mould moisture in a metal mould. */
+export const showsFoam = (p: Process | null) => p === "lost-foam";
+export const showsMoisture = (p: Process | null) => p !== "permanent-mould";
+
+function draftFrom(m: Initial, units: Units): MeltDraft {
+  return {
+    ...numbersToText(MELT_NUMBERS, m, units),
+    pouredOn: m.pouredOn ?? today(), alloy: m.alloy ?? "", process: m.process ?? null, charge: m.charge ?? null,
+    furnace: m.furnace ?? "", degassing: m.degassing ?? null, fluxed: orUndefined(m.fluxed), skimmed: orUndefined(m.skimmed),
+    coatingApplied: orUndefined(m.coatingApplied), coatingDried: orUndefined(m.coatingDried), notes: m.notes ?? "",
+  };
+}
+
+/**
+ * A melt form's values as typed (numbers in the person's units), and their check: the shared zod
+ * schema, the alloy's solidus, and plain messages for what zod would word for programmers.
+ */
+export function useMeltDraft(initial: Initial, units: Units) {
+  const [draft, setDraft] = useState(() => draftFrom(initial, units));
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const set = <K extends keyof MeltDraft>(key: K, value: MeltDraft[K]) => setDraft((d) => ({ ...d, [key]: value }));
+
+  function check(alloys: Alloy[]): MeltInput | undefined {
+    const numbers = textToNumbers(MELT_NUMBERS, draft, units);
+    const v = numbers.values;
+    const input = {
+      ...v,
+      sandMoisturePct: showsMoisture(draft.process) ? v.sandMoisturePct : null,
+      foamDensityKgM3: showsFoam(draft.process) ? v.foamDensityKgM3 : null,
+      // Hidden fields send nothing: minutes without degassing, coats of a coating that was not applied.
+      degasMinutes: draft.degassing && draft.degassing !== "none" ? v.degasMinutes : null,
+      coatingCoats: draft.coatingApplied === false ? null : v.coatingCoats,
+      pouredOn: draft.pouredOn.trim(), alloy: draft.alloy, process: draft.process, charge: draft.charge,
+      furnace: draft.furnace.trim() || null, degassing: draft.degassing, fluxed: draft.fluxed ?? null,
+      skimmed: draft.skimmed ?? null, coatingApplied: draft.coatingApplied ?? null,
+      coatingDried: draft.coatingApplied === false ? null : draft.coatingDried ?? null, notes: draft.notes.trim() || null,
+    };
+    const parsed = meltInput.safeParse(input);
+    const alloy = alloys.find((a) => a.designation === draft.alloy);
+    const found = {
+      ...(parsed.success ? {} : issuesToFields(parsed.error.issues)),
+      ...(alloy ? alloyConflicts(input as Initial as MeltInput, alloy) : {}),
+      ...numbers.errors,
+      ...(draft.process ? {} : { process: "choose a process" }),
+      ...(draft.alloy ? {} : { alloy: "choose an alloy" }),
+    };
+    setErrors(found);
+    return parsed.success && Object.keys(found).length === 0 ? parsed.data : undefined;
+  }
+
+  return { draft, set, errors, setErrors, check };
+}

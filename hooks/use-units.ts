@@ -1,0 +1,23 @@
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { api } from "@/lib/api";
+import { SI_UNITS, type Units } from "@/lib/units";
+
+export const unitsKey = ["me", "units"] as const;
+
+/** The person's units (GET /api/me/units). */
+export function useUnitsQuery() {
+  return useQuery({ queryKey: unitsKey, queryFn: () => api<Units>("/me/units"), staleTime: 5 * 60_000 });
+}
+
+/** The units to show values in: SI until the person's choice has loaded (values are stored SI). */
+export function useUnits(): Units {
+  return useUnitsQuery().data ?? SI_UNITS;
+}
+
+export function useSaveUnits() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (units: Units) => api<Units>("/me/units", { method: "PUT", body: units }),
+    onSuccess: (units) => queryClient.setQueryData(unitsKey, units),
+  });
+}

@@ -1,0 +1,39 @@
+import { fromField, toField, type Quantity, type Units } from "./units";
+
+/** How each number field of a form converts: a quantity in the person's units, or a plain number (%, s, minutes). */
+export type NumberSpec<K extends string> = Record<K, Quantity | null>;
+
+/** Stored SI values to the text a form shows, in the person's units. */
+export function numbersToText<S extends NumberSpec<string>>(spec: S, values: { [K in keyof S]?: number | null }, units: Units) {
+  const out = {} as Record<keyof S & string, string>;
+  for (const key of Object.keys(spec) as (keyof S & string)[]) {
+    const q = spec[key];
+    const v = values[key];
+    out[key] = v === null || v === undefined ? "" : q ? toField(q, v, units) : String(v);
+  }
+  return out;
+}
+
+/**
+ * Typed text back to SI numbers for the API: empty text is null (not logged, and clears a stored
+ * value on a change), text that is not a number gets a message of its own rather than zod's.
+ */
+export function textToNumbers<S extends NumberSpec<string>>(spec: S, text: Record<keyof S & string, string>, units: Units) {
+  const values = {} as Record<keyof S & string, number | null>;
+  const errors: Record<string, string> = {};
+  for (const key of Object.keys(spec) as (keyof S & string)[]) {
+    const q = spec[key];
+    const t = text[key] ?? "";
+    const n = q ? fromField(q, t, units) : t.trim() === "" ? undefined : Number(t.trim().replace(",", "."));
+    if (n !== undefined && Number.isNaN(n)) errors[key] = "type a number, or leave it empty";
+    values[key] = n === undefined || Number.isNaN(n) ? null : n;
+  }
+  return { values, errors };
+}
+
+/** zod's issues as one message per top-level field, like hooks/use-form-errors.ts. */
+export function issuesToFields(issues: readonly { path: readonly PropertyKey[]; message: string }[]) {
+  const out: Record<string, string> = {};
+  for (const i of issues) out[String(i.path[0] ?? "_")] ??= i.message;
+  return out;
+}

@@ -1,0 +1,195 @@
+import { z } from "zod";
+import { CHARGES, DEFECT_LOCATIONS, DEFECT_TYPES, DEGASSING_METHODS, PROCESSES } from "../rules/case";
+import type { Charge, DefectLocation, DefectType, DegassingMethod, Process } from "../rules/case";
+import { ALLOY_FAMILIES, type AlloyFamily } from "../rules/fact-catalog";
+import type { DiagnosisResult } from "../rules/rank";
+
+/**
+ * The notebook's input schemas and answer shapes (docs/notebook-api.md), shared by the forms and the
+ * API. Values are SI: °C, mm, kg/m³, s, %. Bundled into the web app: keep server-only imports out.
+ * Optional fields accept null so a form can clear them on PATCH.
+ */
+const list = (values: readonly string[]) => values.join(", ");
+const opt = <T extends z.ZodType>(s: T) => s.nullable().optional();
+const isNum = (v: unknown): v is number => typeof v === "number" && Number.isFinite(v);
+/** Cross-field checks run even when a single field is already wrong, so a form shows every problem at once. */
+const always = { when: (p: { value: unknown }) => typeof p.value === "object" && p.value !== null };
+const text = (max: number) => z.string().trim().max(max, `at most ${max} characters`);
+/** The scale tops out at 1,400 °C: no alloy a small shop pours needs more (copper-base liquidus ~1,040 °C). */
+const tempC = z.number().gt(0, "must be above 0 °C").max(1400, "above 1,400 °C");
+const sectionMm = z.number().positive("must be above 0 mm").max(5000, "above 5 m");
+
+export const alloyInput = z
+  .object({
+    designation: z.string().trim().min(1, "give the alloy a name").max(40, "at most 40 characters"),
+    family: z.enum(ALLOY_FAMILIES, { error: `family must be one of: ${list(ALLOY_FAMILIES)}` }),
+    solidusC: tempC,
+    liquidusC: tempC,
+    densityKgM3: z.number().min(1000, "below 1,000 kg/m³").max(20000, "above 20,000 kg/m³"),
+    shrinkAllowancePct: z.number().min(0, "cannot be negative").max(5, "above 5 %"),
+    siliconPct: opt(z.number().min(0, "cannot be negative").max(30, "above 30 %")),
+    sources: z.string().trim().min(1, "say where the figures come from (or 'shop measurement')").max(1000),
+  })
+  .refine((a) => a.solidusC <= a.liquidusC, { path: ["solidusC"], message: "solidus is above the liquidus" });
+export type AlloyInput = z.infer<typeof alloyInput>;
+
+export const meltFields = z.object({
+  pouredOn: z.iso.date("a date as YYYY-MM-DD"),
+  alloy: z.string().trim().min(1, "choose an alloy").max(40),
+  process: z.enum(PROCESSES, { error: `process must be one of: ${list(PROCESSES)}` }),
+  charge: opt(z.enum(CHARGES, { error: `charge must be one of: ${list(CHARGES)}` })),
+  furnace: opt(text(120)),
+  meltTempC: opt(tempC),
+  pourTempC: opt(tempC),
+  degassing: opt(z.enum(DEGASSING_METHODS, { error: `degassing must be one of: ${list(DEGASSING_METHODS)}` })),
+  degasMinutes: opt(z.number().min(0, "cannot be negative").max(240, "above 4 hours")),
+  fluxed: opt(z.boolean()),
+  skimmed: opt(z.boolean()),
+  ambientTempC: opt(z.number().min(-40, "below -40 °C").max(60, "above 60 °C")),
+  humidityPct: opt(z.number().min(0, "0 to 100 %").max(100, "0 to 100 %")),
+  sandMoisturePct: opt(z.number().min(0, "0 to 100 %").max(100, "0 to 100 %")),
+  coatingApplied: opt(z.boolean()),
+  coatingDried: opt(z.boolean()),
+  coatingCoats: opt(z.number().int("whole coats").min(0, "cannot be negative").max(20)),
+  foamDensityKgM3: opt(z.number().positive("must be above 0 kg/m³").max(200, "above 200 kg/m³")),
+  notes: opt(text(4000)),
+});
+
+type MeltLike = Partial<z.infer<typeof meltFields>>;
+/** Combinations that cannot have happened, whichever field was typed last. */
+export function meltConflicts(m: MeltLike): Record<string, string> {
+  const out: Record<string, string> = {};
+  if (isNum(m.pourTempC) && isNum(m.meltTempC) && m.meltTempC < m.pourTempC)
+    out.meltTempC = "the highest melt temperature is below the pour temperature";
+  if (m.degassing === "none" && (m.degasMinutes ?? 0) > 0) out.degasMinutes = "no degassing was chosen";
+  if (m.coatingApplied === false && m.coatingDried) out.coatingDried = "no coating was applied";
+  if (m.coatingApplied === false && (m.coatingCoats ?? 0) > 0) out.coatingCoats = "no coating was applied";
+  if (typeof m.pouredOn === "string" && m.pouredOn > new Date(Date.now() + 36e5 * 36).toISOString().slice(0, 10))
+    out.pouredOn = "that date has not come yet";
+  return out;
+}
+
+/** The alloy-dependent check, run by the form (with the alloy list) and by the server (with the table). */
+export function alloyConflicts(m: MeltLike, alloy: { designation: string; solidusC: number }): Record<string, string> {
+  const out: Record<string, string> = {};
+  if (isNum(m.pourTempC) && m.pourTempC <= alloy.solidusC)
+    out.pourTempC = `at or below ${alloy.designation}'s solidus (${alloy.solidusC} °C): the metal would be solid`;
+  if (isNum(m.meltTempC) && m.meltTempC <= alloy.solidusC)
+    out.meltTempC = `at or below ${alloy.designation}'s solidus (${alloy.solidusC} °C): it never melted`;
+  return out;
+}
+
+const addConflicts = (found: Record<string, string>, ctx: z.RefinementCtx) => {
+  for (const [path, message] of Object.entries(found)) ctx.addIssue({ code: "custom", path: [path], message });
+};
+export const meltInput = meltFields.superRefine((m, ctx) => addConflicts(meltConflicts(m), ctx), always);
+export const meltPatch = meltFields.partial();
+export type MeltInput = z.infer<typeof meltInput>;
+
+export const markFields = z.object({
+  type: z.enum(DEFECT_TYPES, { error: `type must be one of: ${list(DEFECT_TYPES)}` }),
+  location: z.enum(DEFECT_LOCATIONS, { error: `location must be one of: ${list(DEFECT_LOCATIONS)}` }),
+  severity: z.number().int("1, 2 or 3").min(1, "1, 2 or 3").max(3, "1, 2 or 3"),
+  photoId: opt(z.number().int().positive()),
+  /** Fractions of the photo's width and height, 0 at the top left. */
+  x: opt(z.number().min(0, "0 to 1 of the photo's width").max(1, "0 to 1 of the photo's width")),
+  y: opt(z.number().min(0, "0 to 1 of the photo's height").max(1, "0 to 1 of the photo's height")),
+  note: opt(text(500)),
+});
+export function markConflicts(m: Partial<z.infer<typeof markFields>>): Record<string, string> {
+  const out: Record<string, string> = {};
+  if (m.photoId != null) {
+    if (m.x == null) out.x = "place the mark on the photo";
+    if (m.y == null) out.y = "place the mark on the photo";
+  } else {
+    if (m.x != null) out.x = "a position needs a photo";
+    if (m.y != null) out.y = "a position needs a photo";
+  }
+  return out;
+}
+export const markInput = markFields.superRefine((m, ctx) => addConflicts(markConflicts(m), ctx), always);
+export const markPatch = markFields.partial();
+export type MarkInput = z.infer<typeof markInput>;
+
+export const castingFields = z.object({
+  partName: z.string().trim().min(1, "name the part").max(120, "at most 120 characters"),
+  pattern: opt(text(120)),
+  minSectionMm: opt(sectionMm),
+  maxSectionMm: opt(sectionMm),
+  sprueHeightMm: opt(sectionMm),
+  pourTimeS: opt(z.number().positive("must be above 0 s").max(3600, "above an hour")),
+  hasRiser: opt(z.boolean()),
+  hasOverflow: opt(z.boolean()),
+  hasVents: opt(z.boolean()),
+  orientation: opt(text(120)),
+  outcome: opt(z.enum(["good", "rework", "scrap"], { error: "outcome is good, rework or scrap" })),
+  notes: opt(text(4000)),
+});
+export function castingConflicts(c: Partial<z.infer<typeof castingFields>>): Record<string, string> {
+  if (isNum(c.minSectionMm) && isNum(c.maxSectionMm) && c.minSectionMm > c.maxSectionMm)
+    return { minSectionMm: "the thinnest section is thicker than the thickest" };
+  return {};
+}
+/** A new casting may carry marks; a photo comes after the casting exists, so these have none. */
+export const castingInput = castingFields
+  .extend({ marks: z.array(markFields.omit({ photoId: true, x: true, y: true }).strict()).max(50).optional() })
+  .superRefine((c, ctx) => addConflicts(castingConflicts(c), ctx), always);
+export const castingPatch = castingFields.partial();
+export type CastingInput = z.infer<typeof castingInput>;
+export type Outcome = NonNullable<CastingInput["outcome"]>;
+
+export const commentInput = z.object({ body: z.string().trim().min(1, "write something").max(4000, "at most 4,000 characters") });
+
+export const unitsInput = z.object({
+  temperature: z.enum(["C", "F"], { error: "C or F" }),
+  length: z.enum(["mm", "in"], { error: "mm or in" }),
+  mass: z.enum(["kg", "lb"], { error: "kg or lb" }),
+});
+export type Units = z.infer<typeof unitsInput>;
+export const DEFAULT_UNITS: Units = { temperature: "C", length: "mm", mass: "kg" };
+
+const pageQuery = { page: z.coerce.number().int().min(1).default(1), pageSize: z.coerce.number().int().min(1).max(100).default(20) };
+export const MELT_SORTS = ["date-desc", "date-asc", "alloy", "castings"] as const;
+export const CASTING_SORTS = ["date-desc", "date-asc", "part", "outcome"] as const;
+export const meltListQuery = z.object({ ...pageQuery, sort: z.enum(MELT_SORTS).default("date-desc") });
+export const castingListQuery = z.object({ ...pageQuery, sort: z.enum(CASTING_SORTS).default("date-desc") });
+
+// ---- Answers (JSON: dates are ISO strings; shopId is never sent) ----
+export type PersonRef = { id: string; name: string };
+type Row = { id: number; createdBy: PersonRef; createdAt: string };
+type Nullable<T> = { [K in keyof T]-?: Exclude<T[K], undefined> | null };
+export type Page<T> = { items: T[]; total: number; page: number; pageSize: number };
+
+export type Alloy = {
+  id: number; designation: string; family: AlloyFamily; solidusC: number; liquidusC: number; densityKgM3: number;
+  shrinkAllowancePct: number; siliconPct: number | null; sources: string;
+  /** Built-in alloys come from rules/alloys.ts and belong to no shop (createdBy null). */
+  builtIn: boolean; createdBy: PersonRef | null; createdAt: string;
+};
+export type Melt = Row & Nullable<Omit<MeltInput, "pouredOn" | "alloy" | "process">> & {
+  pouredOn: string; alloy: string; process: Process;
+  charge: Charge | null; degassing: DegassingMethod | null; updatedAt: string;
+};
+export type MeltSummary = Row & {
+  pouredOn: string; alloy: string; process: Process; furnace: string | null; pourTempC: number | null;
+  castingCount: number; scrapCount: number;
+};
+export type Casting = Row & Nullable<Omit<CastingInput, "partName" | "marks">> & {
+  meltId: number; partName: string; outcome: Outcome | null; updatedAt: string;
+};
+export type CastingSummary = Row & {
+  meltId: number; partName: string; pattern: string | null; outcome: Outcome | null;
+  pouredOn: string; alloy: string; process: Process;
+  markCount: number; photoCount: number; defectTypes: DefectType[]; thumbUrl: string | null;
+};
+export type Photo = Row & { castingId: number; width: number; height: number; imageUrl: string; thumbUrl: string };
+export type Mark = Row & {
+  castingId: number; photoId: number | null; x: number | null; y: number | null;
+  type: DefectType; location: DefectLocation; severity: number; note: string | null;
+};
+export type Comment = Row & { castingId: number; body: string };
+export type DiagnosisSnapshot = { id: number; createdAt: string; createdBy: PersonRef; ruleSetVersion: string; result: DiagnosisResult };
+export type CastingDetail = Casting & {
+  melt: Melt; photos: Photo[]; marks: Mark[]; comments: Comment[]; diagnosis: DiagnosisSnapshot | null;
+};
+export type MeltDetail = Melt & { castings: CastingSummary[] };

@@ -1,0 +1,76 @@
+import { z } from "zod";
+import type { DefectType, Process } from "../rules/case";
+import type { CauseRecord } from "../rules/calibration";
+import type { RankedCause } from "../rules/rank";
+import type { Outcome, PersonRef } from "./notebook-schemas";
+
+/**
+ * Review, confirmed causes and follow-ups (core loop step 5): inputs for the casting-page panels
+ * and the review queue, shared by the forms and the API.
+ */
+const note = (max: number) => z.string().trim().max(max, `at most ${max} characters`).optional();
+
+export const reviewRequestInput = z.object({ note: note(1000) });
+
+/** A mentor confirms one of the listed causes (causeId) or names another (causeText), with a note. */
+export const confirmationInput = z
+  .object({
+    causeId: z.string().trim().min(1).optional(),
+    causeText: z.string().trim().max(300, "at most 300 characters").optional(),
+    note: note(2000),
+  })
+  .superRefine((c, ctx) => {
+    if (!c.causeId && !c.causeText)
+      ctx.addIssue({ code: "custom", path: ["causeId"], message: "choose a cause, or name another" });
+    if (c.causeId && c.causeText)
+      ctx.addIssue({ code: "custom", path: ["causeText"], message: "either a cause from the list or another, not both" });
+  });
+export type ConfirmationInput = z.infer<typeof confirmationInput>;
+
+export const WORKED = ["yes", "partly", "no"] as const;
+export type Worked = (typeof WORKED)[number];
+export const WORKED_LABELS: Record<Worked, string> = { yes: "it worked", partly: "partly", no: "it did not work" };
+
+const fixFields = z.object({
+  fix: z.string().trim().min(1, "say what was changed").max(500, "at most 500 characters"),
+  nextCastingId: z.number().int().positive().nullable().optional(),
+  worked: z.enum(WORKED, { error: "yes, partly or no" }).nullable().optional(),
+});
+/** Whether a fix worked is read off the next casting, so it needs one linked. */
+const workedNeedsNext = (f: { nextCastingId?: number | null; worked?: Worked | null }, ctx: z.RefinementCtx) => {
+  if (f.worked && !f.nextCastingId) ctx.addIssue({ code: "custom", path: ["worked"], message: "link the next casting first" });
+};
+export const fixInput = fixFields.superRefine(workedNeedsNext);
+export const fixPatch = fixFields.partial();
+export type FixInput = z.infer<typeof fixInput>;
+export type FixPatch = z.infer<typeof fixPatch>;
+
+// ---- Answers ----
+export type ReviewRequest = {
+  id: number; castingId: number; note: string | null;
+  createdBy: PersonRef | null; createdAt: string; answeredAt: string | null;
+};
+export type Confirmation = {
+  id: number; castingId: number; causeId: string | null; causeTitle: string; note: string | null;
+  createdBy: PersonRef | null; createdAt: string;
+};
+export type CaseReview = { waiting: ReviewRequest | null; requests: ReviewRequest[]; current: Confirmation | null; confirmations: Confirmation[] };
+export type QueueItem = {
+  requestId: number; castingId: number; meltId: number; partName: string; pouredOn: string; alloy: string;
+  process: Process; defectTypes: DefectType[]; note: string | null; askedBy: PersonRef | null; askedAt: string;
+  topCause: { id: string; title: string; score: number } | null;
+};
+export type CastingRef = { id: number; meltId: number; partName: string; pouredOn: string; outcome: Outcome | null };
+export type FixTried = {
+  id: number; castingId: number; fix: string; next: CastingRef | null; worked: Worked | null;
+  createdBy: PersonRef | null; createdAt: string; updatedAt: string;
+};
+/** One casting of the part in the chain of fixes, oldest first; `current` marks the casting on screen. */
+export type ChainLink = { casting: CastingRef; fixes: FixTried[]; current: boolean };
+export type Followups = { fixes: FixTried[]; chain: ChainLink[]; candidates: CastingRef[] };
+
+/** A ranked cause as the shop's diagnosis returns it: with its record among confirmed cases here. */
+export type CauseWithRecord = RankedCause & { record?: CauseRecord | null };
+/** "right in 7 of 9 confirmed cases here", or null with no confirmed case yet. */
+export const recordWords = (r: CauseRecord | null | undefined) =>
+  r && r.confirmed > 0 ? `right in ${r.right} of ${r.confirmed} confirmed case${r.confirmed === 1 ? "" : "s"} here` : null;

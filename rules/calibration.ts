@@ -1,0 +1,62 @@
+import { agrees, firedRules, type StoredCase } from "./backtest";
+import { compiledRuleSet } from "./engine";
+import type { KbRule, RuleSet } from "./kb-schema";
+
+/**
+ * Learning from the shop's confirmed cases. Each rule's record (confirmed cases it fired on, and
+ * how many of those it agreed with) moves its weight through a bounded factor. The agreement rate is
+ * smoothed with a Beta(2, 2) prior, (agreed + 2) / (fired + 4): a rule with no record sits at 1/2,
+ * which maps to a factor of 1 (the author's weight), and one or two cases move it only a little.
+ * The factor stays within 0.5..1.5, so the shop's record tunes a rule but never silences or
+ * doubles it; switching a rule off is a mentor's decision, not the arithmetic's.
+ */
+export type RuleRecord = { fired: number; agreed: number };
+/** "Right in `right` of `confirmed` confirmed cases here": cases where the cause was suggested. */
+export type CauseRecord = { confirmed: number; right: number };
+
+export const PRIOR = { agree: 2, disagree: 2 } as const;
+export const FACTOR_MIN = 0.5;
+export const FACTOR_MAX = 1.5;
+
+export const smoothedAgreement = ({ fired, agreed }: RuleRecord, prior = PRIOR) =>
+  (agreed + prior.agree) / (fired + prior.agree + prior.disagree);
+
+/** Neutral (1) with no record; FACTOR_MIN + (FACTOR_MAX − FACTOR_MIN) × smoothed agreement otherwise. */
+export const weightFactorOf = (r: RuleRecord | undefined) =>
+  r ? FACTOR_MIN + (FACTOR_MAX - FACTOR_MIN) * smoothedAgreement(r) : 1;
+
+/** For one confirmed case: the confirmed cause and the rules that fired on it. */
+export type Firing = { causeId: string | null; fired: Set<string> };
+
+/** Runs the rules (their conditions only: weights do not decide firing) on every confirmed case. */
+export async function confirmedFirings(cases: StoredCase[], rs: RuleSet): Promise<Firing[]> {
+  const compiled = compiledRuleSet(rs);
+  const out: Firing[] = [];
+  for (const s of cases)
+    if (s.confirmed) out.push({ causeId: s.confirmed.causeId, fired: await firedRules(s.case, s.alloy, compiled) });
+  return out;
+}
+
+export function ruleRecords(firings: Firing[], rules: KbRule[]): Map<string, RuleRecord> {
+  const out = new Map<string, RuleRecord>();
+  for (const rule of rules) {
+    const on = firings.filter((f) => f.fired.has(rule.id));
+    if (on.length) out.set(rule.id, { fired: on.length, agreed: on.filter((f) => agrees(rule, f.causeId)).length });
+  }
+  return out;
+}
+
+/** Per cause, from the rules in use that speak for it. */
+export function causeRecords(firings: Firing[], rules: KbRule[]): Map<string, CauseRecord> {
+  const out = new Map<string, CauseRecord>();
+  for (const f of firings) {
+    const suggested = new Set(rules.filter((r) => r.effect !== "weakens" && f.fired.has(r.id)).map((r) => r.cause));
+    for (const cause of suggested) {
+      const r = out.get(cause) ?? { confirmed: 0, right: 0 };
+      out.set(cause, { confirmed: r.confirmed + 1, right: r.right + (f.causeId === cause ? 1 : 0) });
+    }
+  }
+  return out;
+}
+
+export const weightFactors = (records: Map<string, RuleRecord>) => (ruleId: string) => weightFactorOf(records.get(ruleId));

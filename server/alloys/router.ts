@@ -1,0 +1,19 @@
+import { Router } from "express";
+import { alloyInput } from "../../lib/notebook-schemas";
+import { allow, currentMember, requireShopMember } from "../auth/shop-access";
+import { parseOr400 } from "../http/errors";
+import { addAlloy, alloyRowsFor, toAlloy } from "./service";
+
+export const alloysRouter = Router();
+
+alloysRouter.get("/alloys", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
+  const rows = await alloyRowsFor(currentMember(req).shopId);
+  res.json({ alloys: rows.map(toAlloy) });
+});
+
+/** Alloy figures feed every diagnosis, so adding one is a mentor's call, like writing a rule. */
+alloysRouter.post("/alloys", requireShopMember, allow({ rule: ["write"] }), async (req, res) => {
+  const m = currentMember(req);
+  const input = parseOr400(alloyInput, req.body);
+  res.status(201).json(await addAlloy(m.shopId, m.userId, input));
+});

@@ -1,0 +1,16 @@
+import { Router } from "express";
+import { allow, currentMember, requireShopMember } from "../auth/shop-access";
+import { idParam } from "../notebook/shared";
+import { diagnoseCase, diagnoseCasting } from "./service";
+
+export const diagnosisRouter = Router();
+
+/** A case typed or pasted in; nothing is stored. */
+diagnosisRouter.post("/diagnose", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
+  res.json(await diagnoseCase(currentMember(req).shopId, req.body));
+});
+
+diagnosisRouter.post("/castings/:id/diagnosis", requireShopMember, allow({ casebook: ["write"] }), async (req, res) => {
+  const castingId = idParam(req.params.id, "No such casting");
+  res.status(201).json(await diagnoseCasting(currentMember(req), castingId));
+});

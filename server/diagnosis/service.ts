@@ -1,0 +1,61 @@
+import { and, desc, eq } from "drizzle-orm";
+import { db } from "../../db/client";
+import { alloys, diagnosisSnapshots, melts, user } from "../../db/schema";
+import type { DiagnosisSnapshot } from "../../lib/notebook-schemas";
+import { caseSchema } from "../../rules/case";
+import { diagnose, type DiagnosisResult } from "../../rules/engine";
+import { requireAlloy, toAlloySpec } from "../alloys/service";
+import type { ShopMember } from "../auth/shop-access";
+import { castingInShop } from "../castings/lookup";
+import { parseOr400 } from "../http/errors";
+import { marksOf } from "../marks/service";
+import { getMelt } from "../melts/service";
+import { iso, personRef } from "../notebook/shared";
+import { caseFromCasting } from "./stored-case";
+// Issue 6 (mentors): the shop's own rule set and learned weights; see server/rulebook/context.ts.
+import { shopDiagnosis } from "../rulebook/context";
+
+/**
+ * Issue 6: every diagnosis uses the shop's rule set (built-ins + its published rules − built-ins it
+ * switched off, via ruleSetFor), weights tuned by its confirmed cases, and gives each cause its record
+ * here ("right in 7 of 9 confirmed cases"). All of that lives in server/rulebook/context.ts.
+ */
+
+/** A case as sent: the contract's checks, then the alloy against this shop's table (built-ins and its own). */
+export async function diagnoseCase(shopId: string, body: unknown): Promise<DiagnosisResult> {
+  const c = parseOr400(caseSchema, body);
+  const alloy = await requireAlloy(shopId, c.alloy);
+  const shop = await shopDiagnosis(shopId); // issue 6
+  return shop.withRecords(await diagnose(c, { alloy: toAlloySpec(alloy), ruleSet: shop.ruleSet, weightFactor: shop.weightFactor }));
+}
+
+type SnapshotRow = typeof diagnosisSnapshots.$inferSelect;
+const toSnapshot = (s: SnapshotRow, byName: string): DiagnosisSnapshot => ({
+  id: s.id, createdAt: iso(s.createdAt), createdBy: personRef(s.createdBy, byName),
+  ruleSetVersion: s.ruleSetVersion, result: s.result as DiagnosisResult,
+});
+
+/** Runs the stored casting and keeps what it said, so the answer can be read again after the rules change. */
+export async function diagnoseCasting(m: ShopMember, castingId: number): Promise<DiagnosisSnapshot> {
+  const casting = await castingInShop(m.shopId, castingId);
+  const melt = await getMelt(m.shopId, casting.meltId);
+  const c = caseFromCasting(casting, melt, await marksOf([castingId]));
+  // The melt points at its alloy row: use it, not the name, so a shop alloy is read exactly.
+  const [{ alloy }] = await db.select({ alloy: alloys }).from(melts)
+    .innerJoin(alloys, eq(alloys.id, melts.alloyId)).where(eq(melts.id, casting.meltId));
+  const shop = await shopDiagnosis(m.shopId); // issue 6
+  const rs = shop.ruleSet;
+  const result = shop.withRecords(await diagnose(c, { alloy: toAlloySpec(alloy), ruleSet: rs, weightFactor: shop.weightFactor }));
+  const [row] = await db.insert(diagnosisSnapshots).values({
+    shopId: m.shopId, castingId, ruleSetVersion: rs.version, input: c, result, createdBy: m.userId,
+  }).returning();
+  return toSnapshot(row, m.userName);
+}
+
+export async function latestSnapshot(shopId: string, castingId: number): Promise<DiagnosisSnapshot | null> {
+  const [row] = await db.select({ s: diagnosisSnapshots, byName: user.name }).from(diagnosisSnapshots)
+    .innerJoin(user, eq(user.id, diagnosisSnapshots.createdBy))
+    .where(and(eq(diagnosisSnapshots.shopId, shopId), eq(diagnosisSnapshots.castingId, castingId)))
+    .orderBy(desc(diagnosisSnapshots.createdAt), desc(diagnosisSnapshots.id)).limit(1);
+  return row ? toSnapshot(row.s, row.byName) : null;
+}

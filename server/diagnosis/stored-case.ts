@@ -1,0 +1,35 @@
+import type { Mark, Melt } from "../../lib/notebook-schemas";
+import { caseSchema, type DiagnosisCase } from "../../rules/case";
+import type { CastingRow } from "../castings/lookup";
+import { HttpError } from "../http/errors";
+import { withoutNulls } from "../notebook/shared";
+
+/**
+ * A stored casting as the diagnosis contract reads it (DESIGN.md "The diagnosis contract"): the melt's
+ * pour conditions, the casting's geometry and gating, its marks as defects. Nothing logged stays absent.
+ */
+export function caseFromCasting(casting: CastingRow, melt: Melt, marks: Mark[]): DiagnosisCase {
+  if (!marks.length) {
+    throw new HttpError(400, "Mark at least one defect first.", { marks: "mark at least one defect first" });
+  }
+  const m = withoutNulls(melt);
+  const c = withoutNulls(casting);
+  const coating = withoutNulls({ applied: melt.coatingApplied, dried: melt.coatingDried, coats: melt.coatingCoats });
+  const raw = {
+    defects: marks.map((mk) => ({ type: mk.type, location: mk.location, severity: mk.severity })),
+    alloy: melt.alloy, process: melt.process,
+    pourTempC: m.pourTempC, meltTempC: m.meltTempC, degassing: m.degassing, degasMinutes: m.degasMinutes,
+    fluxed: m.fluxed, skimmed: m.skimmed, charge: m.charge, ambientTempC: m.ambientTempC, humidityPct: m.humidityPct,
+    sandMoisturePct: m.sandMoisturePct, coating: Object.keys(coating).length ? coating : undefined,
+    foamDensityKgM3: m.foamDensityKgM3,
+    minSectionMm: c.minSectionMm, maxSectionMm: c.maxSectionMm, sprueHeightMm: c.sprueHeightMm, pourTimeS: c.pourTimeS,
+    hasRiser: c.hasRiser, hasOverflow: c.hasOverflow, hasVents: c.hasVents,
+  };
+  const parsed = caseSchema.safeParse(raw);
+  if (!parsed.success) {
+    // The notebook's own checks are at least as strict, so this means a stored value predates them.
+    const fields = Object.fromEntries(parsed.error.issues.map((i) => [i.path.join("."), i.message]));
+    throw new HttpError(400, "This casting holds values the diagnosis cannot read; correct them first.", fields);
+  }
+  return parsed.data;
+}

@@ -1,0 +1,25 @@
+import { Router } from "express";
+import { fixInput, fixPatch } from "../../lib/review-schemas";
+import { allow, currentMember, requireShopMember } from "../auth/shop-access";
+import { parseOr400 } from "../http/errors";
+import { idParam } from "../notebook/shared";
+import { addFix, followups, patchFix } from "./service";
+
+/** Fixes tried and the next casting of the part: recorded by anyone who logs castings. */
+export const followupsRouter = Router();
+const read = [requireShopMember, allow({ casebook: ["read"] })];
+const write = [requireShopMember, allow({ casebook: ["write"] })];
+
+followupsRouter.get("/castings/:id/followups", ...read, async (req, res) => {
+  res.json(await followups(currentMember(req).shopId, idParam(req.params.id, "No such casting")));
+});
+
+followupsRouter.post("/castings/:id/fixes", ...write, async (req, res) => {
+  const castingId = idParam(req.params.id, "No such casting");
+  res.status(201).json(await addFix(currentMember(req), castingId, parseOr400(fixInput, req.body)));
+});
+
+followupsRouter.patch("/fixes/:id", ...write, async (req, res) => {
+  const id = idParam(req.params.id, "No such fix");
+  res.json(await patchFix(currentMember(req), id, parseOr400(fixPatch, req.body)));
+});

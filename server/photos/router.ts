@@ -1,0 +1,60 @@
+import { Router, type RequestHandler } from "express";
+import multer from "multer";
+import { allow, currentMember, requireShopMember } from "../auth/shop-access";
+import { castingInShop } from "../castings/lookup";
+import { HttpError } from "../http/errors";
+import { idParam } from "../notebook/shared";
+import { deletePhoto, MAX_PHOTO_BYTES, photoInShop, storePhoto, uploadDir } from "./service";
+
+export const photosRouter = Router();
+
+/** In memory: an aborted or refused upload never touches the disk. One file, no stray fields. */
+const receive = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: MAX_PHOTO_BYTES, files: 1, fields: 5, parts: 6 },
+}).single("photo");
+
+/** multer's errors in the API's one error shape: too large is 413, the rest is bad input. */
+const receivePhoto: RequestHandler = (req, res, next) =>
+  receive(req, res, (err: unknown) => {
+    if (!err) return next();
+    if (err instanceof multer.MulterError && err.code === "LIMIT_FILE_SIZE") {
+      return next(new HttpError(413, "The photo is larger than 15 MB.", { photo: "at most 15 MB" }));
+    }
+    const message = err instanceof Error ? err.message : "The upload could not be read.";
+    next(new HttpError(400, `The upload could not be read: ${message}`, { photo: message }));
+  });
+
+photosRouter.post(
+  "/castings/:id/photos",
+  requireShopMember,
+  allow({ casebook: ["write"] }),
+  // Before reading up to 15 MB: is there such a casting in this shop?
+  async (req, _res, next) => {
+    await castingInShop(currentMember(req).shopId, idParam(req.params.id, "No such casting"));
+    next();
+  },
+  receivePhoto,
+  async (req, res) => {
+    if (!req.file) throw new HttpError(400, "No photo was sent.", { photo: "choose a photo" });
+    let gone = false;
+    res.on("close", () => (gone = !res.writableFinished));
+    const photo = await storePhoto(currentMember(req), Number(req.params.id), req.file.buffer, () => gone);
+    res.status(201).json(photo);
+  },
+);
+
+const serve = (which: "fileName" | "thumbName"): RequestHandler => async (req, res) => {
+  const row = await photoInShop(currentMember(req).shopId, idParam(req.params.id, "No such photo"));
+  res.sendFile(row[which], {
+    root: uploadDir(),
+    headers: { "Content-Type": "image/jpeg", "Cache-Control": "private, max-age=86400", "X-Content-Type-Options": "nosniff" },
+  });
+};
+photosRouter.get("/photos/:id/image", requireShopMember, allow({ casebook: ["read"] }), serve("fileName"));
+photosRouter.get("/photos/:id/thumb", requireShopMember, allow({ casebook: ["read"] }), serve("thumbName"));
+
+photosRouter.delete("/photos/:id", requireShopMember, allow({ casebook: ["write"] }), async (req, res) => {
+  await deletePhoto(currentMember(req), idParam(req.params.id, "No such photo"));
+  res.status(204).end();
+});

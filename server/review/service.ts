@@ -1,0 +1,108 @@
+import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
+import { db } from "../../db/client";
+import { alloys, castings, confirmations, defectMarks, diagnosisSnapshots, melts, reviewRequests, user } from "../../db/schema";
+import type { CaseReview, Confirmation, ConfirmationInput, QueueItem, ReviewRequest } from "../../lib/review-schemas";
+import type { DefectType, Process } from "../../rules/case";
+import type { DiagnosisResult } from "../../rules/engine";
+import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
+import type { ShopMember } from "../auth/shop-access";
+import { castingInShop } from "../castings/lookup";
+import { HttpError } from "../http/errors";
+import { iso, personRef } from "../notebook/shared";
+import { causesOf } from "../rulebook/context";
+
+/** Review: a caster asks, the case waits in the mentors' queue (oldest first), a mentor confirms its cause. */
+type RequestRow = typeof reviewRequests.$inferSelect;
+type ConfirmationRow = typeof confirmations.$inferSelect;
+
+async function nameOf(ids: (string | null)[]) {
+  const wanted = [...new Set(ids.filter((x): x is string => !!x))];
+  const rows = wanted.length ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, wanted)) : [];
+  return (id: string | null) => (id ? personRef(id, rows.find((r) => r.id === id)?.name ?? "") : null);
+}
+
+async function causeTitles(shopId: string) {
+  const all = [...BUILT_IN_RULE_SET.causes, ...(await causesOf(shopId))];
+  return new Map(all.map((c) => [c.id, c.title]));
+}
+
+export async function caseReview(shopId: string, castingId: number): Promise<CaseReview> {
+  await castingInShop(shopId, castingId);
+  const [reqs, confs, titles] = await Promise.all([
+    db.select().from(reviewRequests).where(and(eq(reviewRequests.shopId, shopId), eq(reviewRequests.castingId, castingId))).orderBy(desc(reviewRequests.id)),
+    db.select().from(confirmations).where(and(eq(confirmations.shopId, shopId), eq(confirmations.castingId, castingId))).orderBy(desc(confirmations.id)),
+    causeTitles(shopId),
+  ]);
+  const who = await nameOf([...reqs.map((r) => r.createdBy), ...confs.map((c) => c.createdBy)]);
+  const toRequest = (r: RequestRow): ReviewRequest => ({
+    id: r.id, castingId: r.castingId, note: r.note, createdBy: who(r.createdBy), createdAt: iso(r.createdAt),
+    answeredAt: r.answeredAt ? iso(r.answeredAt) : null,
+  });
+  const toConfirmation = (c: ConfirmationRow): Confirmation => ({
+    id: c.id, castingId: c.castingId, causeId: c.causeId, note: c.note, createdBy: who(c.createdBy), createdAt: iso(c.createdAt),
+    causeTitle: c.causeId ? titles.get(c.causeId) ?? c.causeId : c.causeText ?? "",
+  });
+  const requests = reqs.map(toRequest);
+  const list = confs.map(toConfirmation);
+  return { waiting: requests.find((r) => !r.answeredAt) ?? null, requests, current: list[0] ?? null, confirmations: list };
+}
+
+/** Asking twice while a request is open keeps the first: the queue holds each casting once. */
+export async function requestReview(m: ShopMember, castingId: number, note?: string): Promise<{ created: boolean; review: CaseReview }> {
+  await castingInShop(m.shopId, castingId);
+  const created = await db.transaction(async (tx) => {
+    const open = await tx.select({ id: reviewRequests.id }).from(reviewRequests)
+      .where(and(eq(reviewRequests.castingId, castingId), isNull(reviewRequests.answeredAt))).for("update");
+    if (open.length) return false;
+    await tx.insert(reviewRequests).values({ shopId: m.shopId, castingId, note: note || null, createdBy: m.userId });
+    return true;
+  });
+  return { created, review: await caseReview(m.shopId, castingId) };
+}
+
+export async function confirmCause(m: ShopMember, castingId: number, input: ConfirmationInput): Promise<CaseReview> {
+  await castingInShop(m.shopId, castingId);
+  if (input.causeId && !(await causeTitles(m.shopId)).has(input.causeId))
+    throw new HttpError(400, "Some values need fixing.", { causeId: "not a cause in this rulebook: choose one, or name another" });
+  await db.transaction(async (tx) => {
+    await tx.insert(confirmations).values({
+      shopId: m.shopId, castingId, causeId: input.causeId ?? null, causeText: input.causeId ? null : input.causeText ?? null,
+      note: input.note || null, createdBy: m.userId,
+    });
+    await tx.update(reviewRequests).set({ answeredAt: new Date(), answeredBy: m.userId })
+      .where(and(eq(reviewRequests.shopId, m.shopId), eq(reviewRequests.castingId, castingId), isNull(reviewRequests.answeredAt)));
+  });
+  return caseReview(m.shopId, castingId);
+}
+
+/** Cases waiting for a mentor, oldest request first, each with its defects and the top cause last diagnosed. */
+export async function reviewQueue(shopId: string): Promise<QueueItem[]> {
+  const rows = await db
+    .select({ r: reviewRequests, partName: castings.partName, meltId: castings.meltId, pouredOn: melts.pouredOn, process: melts.process, alloy: alloys.designation })
+    .from(reviewRequests)
+    .innerJoin(castings, eq(castings.id, reviewRequests.castingId))
+    .innerJoin(melts, eq(melts.id, castings.meltId))
+    .innerJoin(alloys, eq(alloys.id, melts.alloyId))
+    .where(and(eq(reviewRequests.shopId, shopId), isNull(reviewRequests.answeredAt)))
+    .orderBy(asc(reviewRequests.createdAt), asc(reviewRequests.id))
+    .limit(200);
+  const ids = rows.map((r) => r.r.castingId);
+  const [marks, snaps, who] = await Promise.all([
+    ids.length ? db.select({ castingId: defectMarks.castingId, type: defectMarks.type }).from(defectMarks).where(inArray(defectMarks.castingId, ids)) : [],
+    ids.length
+      ? db.selectDistinctOn([diagnosisSnapshots.castingId], { castingId: diagnosisSnapshots.castingId, result: diagnosisSnapshots.result })
+          .from(diagnosisSnapshots).where(inArray(diagnosisSnapshots.castingId, ids))
+          .orderBy(diagnosisSnapshots.castingId, desc(diagnosisSnapshots.createdAt), desc(diagnosisSnapshots.id))
+      : [],
+    nameOf(rows.map((r) => r.r.createdBy)),
+  ]);
+  return rows.map(({ r, partName, meltId, pouredOn, process, alloy }) => {
+    const top = (snaps.find((s) => s.castingId === r.castingId)?.result as DiagnosisResult | undefined)?.causes[0];
+    return {
+      requestId: r.id, castingId: r.castingId, meltId, partName, pouredOn, alloy, process: process as Process,
+      defectTypes: [...new Set(marks.filter((mk) => mk.castingId === r.castingId).map((mk) => mk.type as DefectType))],
+      note: r.note, askedBy: who(r.createdBy), askedAt: iso(r.createdAt),
+      topCause: top ? { id: top.id, title: top.title, score: top.score } : null,
+    };
+  });
+}

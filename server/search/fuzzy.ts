@@ -1,0 +1,196 @@
+import type { IFuseOptions } from "fuse.js";
+import { SEARCH_MAX_WORDS, SEARCH_TOKEN, searchWords } from "../../lib/search-schemas";
+import { MAX_TERM_LENGTH, substringDistance, termMask } from "./edit-distance";
+
+/**
+ * The casebook's fuzzy ranking: Fuse.js token search (every query word must match somewhere in a
+ * case, rarer words count more), scored exactly as `new Fuse(cases, FUSE_OPTIONS).search(q)`
+ * scores it, but computed once per distinct word or phrase of the shop instead of once per case.
+ * Each field is cut into units (the whole text, its "; " phrases, or its words); Fuse matches a
+ * query word anywhere in the text, we match it within a unit. The two agree except where Fuse's
+ * best match straddles a unit border ("coldshut" across "cold shut" in a note), which can only
+ * lower a case's rank here. tests/rules/search-fuzzy.test.ts compares both on random casebooks.
+ */
+export const SEARCH_KEYS = ["part", "defects", "causes", "conditions", "notes", "comments"] as const;
+export type SearchKey = (typeof SEARCH_KEYS)[number];
+export type SearchFields = Partial<Record<SearchKey, string>>;
+
+/** What a case is (part, defect, cause) outranks how it was poured, which outranks what was written. */
+const KEY_WEIGHTS: Record<SearchKey, number> = { part: 3, defects: 3, causes: 2, conditions: 1.5, notes: 1, comments: 1 };
+/** Fuse's word separators (its field-length norm counts words between these). */
+const SEPARATORS = /[\t\n\v\f\r \u00a0]+/;
+const UNIT_BORDERS: Record<SearchKey, RegExp | null> = {
+  part: null, conditions: null, defects: /; /, causes: /; /, notes: SEPARATORS, comments: SEPARATORS,
+};
+/** 0.34 lets a six-letter word carry two slips ("misrnu" -> misrun), a three-letter one a single slip. */
+const THRESHOLD = 0.34;
+
+export const FUSE_OPTIONS = {
+  keys: SEARCH_KEYS.map((name) => ({ name, weight: KEY_WEIGHTS[name] })),
+  useTokenSearch: true,
+  tokenMatch: "all",
+  tokenize: SEARCH_TOKEN,
+  threshold: THRESHOLD,
+  ignoreLocation: true,
+  includeScore: true,
+  includeMatches: true,
+} satisfies IFuseOptions<SearchFields>;
+
+const totalWeight = SEARCH_KEYS.reduce((sum, k) => sum + KEY_WEIGHTS[k], 0);
+const WEIGHT = SEARCH_KEYS.map((k) => KEY_WEIGHTS[k] / totalWeight);
+const normCache = new Map<number, number>();
+/** Fuse's field-length norm, 1/sqrt(words) to three decimals, from the word count. */
+const normOf = (words: number) => {
+  let n = normCache.get(words);
+  if (n === undefined) normCache.set(words, (n = Math.round(1000 / Math.pow(words, 0.5)) / 1000));
+  return n;
+};
+const wordCount = (text: string) => text.split(SEPARATORS).filter(Boolean).length || 1;
+/** The most slips Fuse allows a term of length m: errors / m must stay within the threshold. */
+const maxErrors = (m: number) => {
+  let k = 0;
+  while (k + 1 < m && (k + 1) / m <= THRESHOLD) k++;
+  return k;
+};
+
+/** A case compiled against the index: [whole-mask, word counts x6, unit offsets x7, unit ids...]. */
+export type CompiledFields = Int32Array;
+const K = SEARCH_KEYS.length;
+const HEAD = 1 + K + K + 1;
+
+export type PreparedQuery = {
+  terms: string[];
+  idf: number[];
+  maxPossible: number;
+  full: number;
+  /** Per unit: which terms it matches (bit i = term i); per term and unit: Fuse's score. */
+  unitMask: Int32Array;
+  unitScores: Float64Array[];
+};
+
+export class FuzzyIndex {
+  private unitIds = new Map<string, number>();
+  private unitTexts: string[] = [];
+  /** Fuse's inverted-index statistics: fields holding each word, and fields with any word. */
+  private df = new Map<string, number>();
+  private fieldCount = 0;
+
+  get unitCount() {
+    return this.unitTexts.length;
+  }
+
+  compile(fields: SearchFields): CompiledFields {
+    const units: number[] = [];
+    const head = new Int32Array(HEAD);
+    SEARCH_KEYS.forEach((key, k) => {
+      head[1 + K + k] = HEAD + units.length;
+      const text = fields[key] ?? "";
+      if (!text.trim()) return; // Fuse skips blank values
+      head[1 + k] = wordCount(text);
+      const lower = text.toLowerCase();
+      const border = UNIT_BORDERS[key];
+      const pieces = [...new Set(border ? lower.split(border).filter(Boolean) : [lower])];
+      if (pieces.length === 1 && pieces[0] === lower) head[0] |= 1 << k;
+      for (const p of pieces) units.push(this.intern(p));
+      this.count(lower, 1);
+    });
+    head[HEAD - 1] = HEAD + units.length;
+    const out = new Int32Array(HEAD + units.length);
+    out.set(head);
+    out.set(units, HEAD);
+    return out;
+  }
+
+  /** Takes a case's words out of the statistics; its units stay until the next rebuild. */
+  release(fields: SearchFields) {
+    for (const key of SEARCH_KEYS) {
+      const text = fields[key] ?? "";
+      if (text.trim()) this.count(text.toLowerCase(), -1);
+    }
+  }
+
+  /** Matches every query term against every distinct unit once; null when the query has no words. */
+  prepare(query: string): PreparedQuery | null {
+    const terms = searchWords(query);
+    if (!terms.length) return null;
+    if (terms.length > SEARCH_MAX_WORDS || terms.some((t) => t.length > MAX_TERM_LENGTH)) throw new Error("query too long");
+    const idf = terms.map((t) => {
+      const d = this.df.get(t) ?? 0;
+      return Math.log(1 + (this.fieldCount - d + 0.5) / (d + 0.5));
+    });
+    let maxPossible = 0;
+    for (const x of idf) maxPossible += x;
+    const n = this.unitTexts.length;
+    const unitMask = new Int32Array(n);
+    const unitScores = terms.map((term, i) => {
+      const scores = new Float64Array(n);
+      const mask = termMask(term);
+      const m = term.length;
+      const k = maxErrors(m);
+      for (let u = 0; u < n; u++) {
+        const text = this.unitTexts[u];
+        if (text.length < m - k) continue;
+        const e = substringDistance(mask, text);
+        if (e > k) continue;
+        unitMask[u] |= 1 << i;
+        scores[u] = text === term ? 0 : Math.max(0.001, e / m);
+      }
+      return scores;
+    });
+    return { terms, idf, maxPossible, full: 2 ** terms.length - 1, unitMask, unitScores };
+  }
+
+  /** Fuse's score for the case (lower is better), or -1 when some term matches none of its fields. */
+  score(p: PreparedQuery, c: CompiledFields): number {
+    const { unitMask, unitScores, idf } = p;
+    let total = 1;
+    let covered = 0;
+    for (let k = 0; k < K; k++) {
+      const words = c[1 + k];
+      if (words === 0) continue;
+      const from = c[1 + K + k];
+      const to = c[2 + K + k];
+      let fieldMask = 0;
+      for (let j = from; j < to; j++) fieldMask |= unitMask[c[j]];
+      if (fieldMask === 0) continue;
+      // A unit equal to the term scores 0 only when it is the field's whole text, as in Fuse.
+      const floor = (c[0] >> k) & 1 ? 0 : 0.001;
+      let weighted = 0;
+      for (let i = 0; i < idf.length; i++) {
+        const bit = 1 << i;
+        if (!(fieldMask & bit)) continue;
+        let best = 1;
+        for (let j = from; j < to; j++) {
+          const u = c[j];
+          if (unitMask[u] & bit && unitScores[i][u] < best) best = unitScores[i][u];
+        }
+        weighted += idf[i] * (1 - Math.max(floor, best));
+      }
+      const normalized = p.maxPossible > 0 ? 1 - weighted / p.maxPossible : 0;
+      total *= Math.pow(Math.max(0.001, normalized), WEIGHT[k] * normOf(words));
+      covered |= fieldMask;
+    }
+    return covered !== 0 && covered === p.full ? total : -1;
+  }
+
+  private intern(unit: string): number {
+    let id = this.unitIds.get(unit);
+    if (id === undefined) {
+      id = this.unitTexts.length;
+      this.unitIds.set(unit, id);
+      this.unitTexts.push(unit);
+    }
+    return id;
+  }
+
+  private count(lower: string, delta: 1 | -1) {
+    const words = lower.match(SEARCH_TOKEN);
+    if (!words) return;
+    this.fieldCount += delta;
+    for (const w of new Set(words)) {
+      const d = (this.df.get(w) ?? 0) + delta;
+      if (d > 0) this.df.set(w, d);
+      else this.df.delete(w);
+    }
+  }
+}

@@ -1,0 +1,52 @@
+import Fuse from "fuse.js";
+import type { Marked, MarkedField } from "../../lib/search-schemas";
+import { FUSE_OPTIONS, SEARCH_KEYS, type SearchFields } from "./fuzzy";
+
+/**
+ * The matched words of one page of results, marked for the screen. Fuse itself finds them, run on
+ * just that page (a few dozen cases), so what is marked is exactly what Fuse matched.
+ */
+type Range = readonly [number, number];
+/** Long texts are cut to a window around the first match so a card stays short. */
+const SNIPPET_CHARS = 180;
+const LONG: ReadonlySet<MarkedField> = new Set(["notes", "comments"]);
+
+export function markRuns(text: string, ranges: readonly Range[]): Marked {
+  const out: Marked = [];
+  let at = 0;
+  for (const [start, end] of [...ranges].sort((a, b) => a[0] - b[0])) {
+    if (start < at) continue;
+    if (start > at) out.push({ text: text.slice(at, start), hit: false });
+    out.push({ text: text.slice(start, end + 1), hit: true });
+    at = end + 1;
+  }
+  if (at < text.length) out.push({ text: text.slice(at), hit: false });
+  return out;
+}
+
+export function snippet(text: string, ranges: readonly Range[]): Marked {
+  if (text.length <= SNIPPET_CHARS) return markRuns(text, ranges);
+  const first = Math.min(...ranges.map((r) => r[0]));
+  let start = Math.max(0, first - 50);
+  if (start > 0) start = text.lastIndexOf(" ", start) + 1;
+  const end = Math.min(text.length, start + SNIPPET_CHARS);
+  const inside = ranges.filter(([s]) => s >= start && s < end).map(([s, e]) => [s - start, Math.min(e, end - 1) - start] as const);
+  const runs = markRuns(text.slice(start, end), inside);
+  if (start > 0) runs.unshift({ text: "…", hit: false });
+  if (end < text.length) runs.push({ text: "…", hit: false });
+  return runs;
+}
+
+/** For each case of the page, its fields with the words that matched `query` marked. */
+export function markPage(page: SearchFields[], query: string): Partial<Record<MarkedField, Marked>>[] {
+  const out = page.map(() => ({}) as Partial<Record<MarkedField, Marked>>);
+  if (!page.length || !query.trim()) return out;
+  for (const result of new Fuse(page, FUSE_OPTIONS).search(query)) {
+    for (const m of result.matches ?? []) {
+      const key = m.key as MarkedField;
+      if (!m.value || !SEARCH_KEYS.includes(key)) continue;
+      out[result.refIndex][key] = LONG.has(key) ? snippet(m.value, m.indices) : markRuns(m.value, m.indices);
+    }
+  }
+  return out;
+}

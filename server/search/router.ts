@@ -1,0 +1,18 @@
+import { Router } from "express";
+import { searchQuery } from "../../lib/search-schemas";
+import { allow, currentMember, requireShopMember } from "../auth/shop-access";
+import { parseOr400 } from "../http/errors";
+import { idParam } from "../notebook/shared";
+import { searchCases, similarTo } from "./service";
+
+/** The casebook: search the active shop's cases, and the cases most like one casting. */
+export const searchRouter = Router();
+const read = [requireShopMember, allow({ casebook: ["read"] })];
+
+searchRouter.get("/search", ...read, async (req, res) => {
+  res.json(await searchCases(currentMember(req).shopId, parseOr400(searchQuery, req.query)));
+});
+
+searchRouter.get("/castings/:id/similar", ...read, async (req, res) => {
+  res.json(await similarTo(currentMember(req).shopId, idParam(req.params.id, "No such casting")));
+});

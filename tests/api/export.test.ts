@@ -1,0 +1,75 @@
+import request from "supertest";
+import { beforeAll, describe, expect, it } from "vitest";
+import { app, migrateOnce, shopWithCrew } from "./helpers";
+import { newCasting, newMelt } from "./notebook-fixtures";
+
+beforeAll(migrateOnce);
+
+/** RFC 4180 reading, enough for the test: quoted fields, doubled quotes, CRLF or LF. */
+function parseCsv(text: string): string[][] {
+  const rows: string[][] = [[]];
+  let field = "", quoted = false;
+  for (let i = 0; i < text.length; i++) {
+    const ch = text[i];
+    if (quoted) {
+      if (ch === '"' && text[i + 1] === '"') {
+        field += '"';
+        i++;
+      } else if (ch === '"') quoted = false;
+      else field += ch;
+    } else if (ch === '"') quoted = true;
+    else if (ch === "," || ch === "\n") {
+      rows[rows.length - 1].push(field);
+      field = "";
+      if (ch === "\n") rows.push([]);
+    } else if (ch !== "\r") field += ch;
+  }
+  if (field || rows[rows.length - 1].length) rows[rows.length - 1].push(field);
+  return rows.filter((r) => r.length > 1);
+}
+
+const csvOf = async (res: request.Response) => {
+  const [header, ...rows] = parseCsv(res.text.replace(/^\uFEFF/, ""));
+  return rows.map((r) => Object.fromEntries(header.map((h, i) => [h, r[i]])));
+};
+
+describe("CSV export", () => {
+  it("gives the owner one row per casting with melt conditions, marks and the latest diagnosis", async () => {
+    const { owner, caster } = await shopWithCrew("Export Shop");
+    const other = await shopWithCrew("Export Other Shop");
+    await newCasting(other.caster, (await newMelt(other.caster)).id, { partName: "Not ours" });
+    const melt = await newMelt(caster);
+    const plate = await newCasting(caster, melt.id, {
+      notes: "=HYPERLINK(\"http://example.invalid\")", marks: [{ type: "misrun", location: "far-from-gate", severity: 3 }],
+    });
+    await newCasting(caster, melt.id, { partName: "Bracket, left", outcome: "good" });
+    await caster.agent.post(`/api/castings/${plate.id}/diagnosis`);
+
+    const res = await owner.agent.get("/api/export/castings.csv");
+    expect(res.status).toBe(200);
+    expect(res.headers["content-type"]).toMatch(/^text\/csv/);
+    expect(res.headers["content-disposition"]).toMatch(/attachment; filename="castings-\d{4}-\d{2}-\d{2}\.csv"/);
+    const rows = await csvOf(res);
+    expect(rows.map((r) => r.part_name).sort()).toEqual(["Bracket, left", "Ribbed cover plate"]);
+    const row = rows.find((r) => r.casting_id === String(plate.id))!;
+    // A356.0 liquidus 615 °C ([mem] ASM Vol. 2): 700 °C pour is 85 °C of superheat.
+    expect(row).toMatchObject({
+      alloy: "A356.0", process: "lost-foam", pour_temp_c: "700", superheat_c: "85", humidity_pct: "45",
+      coating_dried: "yes", min_section_mm: "4", riser: "no", outcome: "scrap",
+      marks: "misrun at far-from-gate (severity 3)", photo_count: "0",
+    });
+    expect(row.likely_cause).not.toBe("");
+    // A formula typed into a note stays text in a spreadsheet.
+    expect(row.casting_notes.startsWith("'=")).toBe(true);
+  });
+
+  it("is the owner's alone (403 for mentor and caster), and a shop with no castings gets the header only", async () => {
+    const { owner, mentor, caster } = await shopWithCrew("Export Rules Shop");
+    expect((await caster.agent.get("/api/export/castings.csv")).status).toBe(403);
+    expect((await mentor.agent.get("/api/export/castings.csv")).status).toBe(403);
+    expect((await request(app).get("/api/export/castings.csv")).status).toBe(401);
+    const empty = await owner.agent.get("/api/export/castings.csv");
+    expect(empty.status).toBe(200);
+    expect(parseCsv(empty.text.replace(/^\uFEFF/, ""))).toHaveLength(1);
+  });
+});

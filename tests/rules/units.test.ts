@@ -1,0 +1,82 @@
+import convert from "convert-units";
+import { describe, expect, it } from "vitest";
+import { formatValue, fromField, fromSi, KG_M3_PER_LB_FT3, toField, toSi, type Units } from "../../lib/units";
+
+const US: Units = { temperature: "F", length: "in", mass: "lb" };
+const SI: Units = { temperature: "C", length: "mm", mass: "kg" };
+
+describe("length", () => {
+  it("takes 1 in as exactly 25.4 mm", () => {
+    // International yard and pound agreement (1959): 1 yd = 0.9144 m exactly, so 1 in = 25.4 mm exactly.
+    expect(toSi("length", 1, US)).toBe(25.4);
+    expect(fromSi("length", 254, US)).toBe(10);
+    // Same agreement: 1 ft = 0.3048 m exactly (also in NIST SP 811, the Guide for the Use of the SI).
+    expect(toSi("length", 12, US)).toBeCloseTo(304.8, 10);
+  });
+
+  it("agrees with convert-units to within its rounded foot", () => {
+    // convert-units 2.3.4 defines the foot as 1/3.28084 m (a rounded figure), so only 1e-7 relative.
+    expect(toSi("length", 1, US) / convert(1).from("in").to("mm")).toBeCloseTo(1, 6);
+  });
+});
+
+describe("mass", () => {
+  it("takes 1 lb as exactly 0.45359237 kg", () => {
+    // International yard and pound agreement (1959): 1 lb = 0.45359237 kg exactly.
+    expect(toSi("mass", 1, US)).toBe(0.45359237);
+    expect(fromSi("mass", 0.45359237 * 100, US)).toBeCloseTo(100, 10);
+  });
+
+  it("agrees with convert-units to within its rounded pound", () => {
+    // convert-units 2.3.4 uses 453.592 g (rounded), 8e-7 relative off the definition.
+    expect(toSi("mass", 1, US) / convert(1).from("lb").to("kg")).toBeCloseTo(1, 5);
+  });
+
+  it("converts foam density between kg/m³ and lb/ft³", () => {
+    // From the 1959 definitions: 1 lb/ft³ = 0.45359237 kg / 0.3048³ m³ = 16.018463... kg/m³.
+    expect(KG_M3_PER_LB_FT3).toBeCloseTo(16.01846337, 7);
+    expect(fromSi("density", 20.8, US)).toBeCloseTo(1.2985, 3);
+  });
+});
+
+describe("temperature", () => {
+  it("uses °F = °C × 9/5 + 32 at water's freezing point", () => {
+    // The Fahrenheit scale's definition as given in NIST SP 811: t/°F = 1.8 t/°C + 32; water freezes at 0 °C = 32 °F.
+    expect(fromSi("temperature", 0, US)).toBe(32);
+    expect(toSi("temperature", 32, US)).toBe(0);
+    // Same definition: water boils at 100 °C = 212 °F at standard pressure.
+    expect(fromSi("temperature", 100, US)).toBeCloseTo(212, 10);
+  });
+
+  it("converts aluminium's ITS-90 freezing point, 660.323 °C, to 1220.58 °F", () => {
+    // ITS-90, Preston-Thomas, Metrologia 27 (1990) Table 1: Al freezing point 660.323 °C; ×9/5+32 = 1220.5814 °F.
+    expect(fromSi("temperature", 660.323, US)).toBeCloseTo(1220.5814, 9);
+    expect(toSi("temperature", 1220.5814, US)).toBeCloseTo(660.323, 9);
+  });
+
+  it("converts a temperature difference without the 32° offset", () => {
+    // A kelvin (or °C step) is 9/5 of a °F step: same definition, no offset for differences.
+    expect(fromSi("temperature-difference", 100, US)).toBe(180);
+    expect(toSi("temperature-difference", 9, US)).toBe(5);
+  });
+});
+
+describe("form text", () => {
+  it("leaves SI values alone for a person who works in SI", () => {
+    expect(toSi("temperature", 725, SI)).toBe(725);
+    expect(toField("length", 4.25, SI)).toBe("4.3");
+  });
+
+  it("shows values rounded for the unit and reads them back", () => {
+    expect(toField("temperature", 725, US)).toBe("1337");
+    expect(toField("length", 5, US)).toBe("0.197");
+    expect(fromField("length", "0,25", US)).toBeCloseTo(6.35, 10);
+    expect(formatValue("temperature", 725, US)).toBe("1337 °F");
+    expect(formatValue("length", null, US)).toBe("–");
+  });
+
+  it("reads empty text as not logged and nonsense as not a number", () => {
+    expect(fromField("temperature", "  ", US)).toBeUndefined();
+    expect(fromField("temperature", "hot", US)).toBeNaN();
+  });
+});
