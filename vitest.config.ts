@@ -35,6 +35,9 @@ export default defineConfig({
           environment: "node",
           globalSetup: ["tests/e2e/global-setup.ts"],
           fileParallelism: false,
+          // One retry: a browser step on a loaded 2-core machine can miss its wait once. A test that
+          // fails twice still fails the run.
+          retry: 1,
           testTimeout: 60000,
           hookTimeout: 300000,
         },

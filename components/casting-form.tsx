@@ -63,7 +63,7 @@ export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOp
         <NumberField label="Thickest section" unit={mm} value={draft.maxSectionMm} onChangeText={(v) => set("maxSectionMm", v)} error={errors.maxSectionMm} />
       </Pair>
       {more ? <CastingMore draft={draft} set={set} errors={errors} units={units} />
-        : <Button kind="plain" label="More details: sprue, riser, vents…" onPress={() => setMore(true)} />}
+        : <View style={styles.start}><Button kind="plain" label="More details: sprue, riser, vents…" onPress={() => setMore(true)} /></View>}
       {failure ? <Notice tone="error">{failure}</Notice> : null}
       {saved ? <Text style={styles.saved} role="status">{saved}</Text> : null}
       <Button label={submitLabel} onPress={submit} busy={busy} testID="save-casting" />
@@ -73,5 +73,6 @@ export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOp
 
 const styles = StyleSheet.create({
   form: { gap: space.md },
+  start: { alignSelf: "flex-start" },
   saved: { color: colors.steel, fontSize: 15, fontWeight: "600" },
 });

@@ -23,13 +23,12 @@ export function CastingSummary({ casting, units, mayEdit }: { casting: CastingDe
       <Text style={styles.melt}>
         {m.alloy} · {PROCESS_LABELS[m.process]} · poured at {formatValue("temperature", m.pourTempC, units)}
       </Text>
-      <OutcomeChips value={casting.outcome} onChange={(outcome) => mayEdit && update.mutate({ outcome })} />
+      <OutcomeChips value={casting.outcome} onChange={(outcome) => update.mutate({ outcome })} disabled={!mayEdit || update.isPending} />
       {update.error ? <Notice tone="error">{update.error.message}</Notice> : null}
       {editing ? (
         <CastingForm initial={casting} units={units} startExpanded submitLabel="Save changes"
           onSubmit={async (input) => {
-            const { marks: _ignored, ...change } = input;
-            await update.mutateAsync(change);
+            await update.mutateAsync(input);
             setEditing(false);
           }} />
       ) : (

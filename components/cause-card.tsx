@@ -1,10 +1,12 @@
 import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
+import { CauseRecordLine } from "@/components/rule-record";
 import { ScoreBar } from "@/components/score-bar";
 import { colors, radius, space } from "@/constants/theme";
-import type { DiagnosisResult } from "@/rules/engine";
+import type { CauseWithRecord } from "@/lib/review-schemas";
 
-type Cause = DiagnosisResult["causes"][number];
+/** A ranked cause; `record` says how often it was right in this shop's confirmed cases. */
+type Cause = CauseWithRecord;
 
 /** One likely cause: how strongly it is pointed at, the fixes to try (tick them off), and why. */
 export function CauseCard({ cause, rank }: { cause: Cause; rank: number }) {
@@ -16,7 +18,8 @@ export function CauseCard({ cause, rank }: { cause: Cause; rank: number }) {
     <View style={styles.card} testID={`cause-${rank}`}>
       <Text style={styles.title}>{rank}. {cause.title}</Text>
       <ScoreBar score={cause.score} />
-      <Text style={styles.sub}>Fixes to try</Text>
+      <CauseRecordLine cause={cause} />
+      <Text style={styles.sub}>Fixes to try <Text style={styles.subNote}>(ticks help you keep track here; they are not saved)</Text></Text>
       {cause.fixes.map((f, i) => (
         <Pressable key={f} role="checkbox" aria-checked={done.has(i)} onPress={() => toggle(i)} style={styles.fix}>
           <View style={[styles.box, done.has(i) && styles.boxOn]}>{done.has(i) ? <Text style={styles.tick}>✓</Text> : null}</View>
@@ -40,6 +43,7 @@ const styles = StyleSheet.create({
   card: { gap: space.sm, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
   title: { fontSize: 16, fontWeight: "700", color: colors.ink },
   sub: { fontSize: 13, fontWeight: "700", color: colors.muted, marginTop: space.xs },
+  subNote: { fontWeight: "400" },
   fix: { flexDirection: "row", gap: space.sm, alignItems: "flex-start", minHeight: 32 },
   box: { width: 22, height: 22, borderRadius: 4, borderWidth: 2, borderColor: colors.steel, alignItems: "center", justifyContent: "center", marginTop: 1 },
   boxOn: { backgroundColor: colors.steel },

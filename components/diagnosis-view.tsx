@@ -4,7 +4,7 @@ import { CauseCard } from "@/components/cause-card";
 import { DiagnosisExtras } from "@/components/diagnosis-extras";
 import { Heading } from "@/components/heading";
 import { Notice } from "@/components/notice";
-import { colors, space } from "@/constants/theme";
+import { colors, CONTENT_MAX_PX, space } from "@/constants/theme";
 import { useRunDiagnosis } from "@/hooks/use-diagnosis";
 import { formatMoment } from "@/lib/dates";
 import type { CastingDetail } from "@/lib/notebook-schemas";
@@ -24,8 +24,10 @@ export function DiagnosisView({ casting, units, mayRun }: { casting: CastingDeta
       <Heading level={2}>Likely causes</Heading>
       {noMarks ? <Notice>Mark at least one defect first: the causes are worked out from the marks.</Notice> : null}
       {mayRun && !noMarks ? (
-        <Button label={snapshot ? "Find likely causes again" : "Find likely causes"} onPress={() => run.mutate()}
-          busy={run.isPending} testID="find-causes" />
+        <View style={styles.start}>
+          <Button label={snapshot ? "Find likely causes again" : "Find likely causes"} onPress={() => run.mutate()}
+            busy={run.isPending} testID="find-causes" />
+        </View>
       ) : null}
       {run.error ? <Notice tone="error">{run.error.message}</Notice> : null}
       {snapshot ? (
@@ -45,6 +47,8 @@ export function DiagnosisView({ casting, units, mayRun }: { casting: CastingDeta
 }
 
 const styles = StyleSheet.create({
-  wrap: { gap: space.md },
+  // Reading width: causes and fixes are sentences, not table rows.
+  wrap: { gap: space.md, maxWidth: CONTENT_MAX_PX },
+  start: { alignSelf: "flex-start" },
   when: { fontSize: 14, lineHeight: 20, color: colors.muted },
 });

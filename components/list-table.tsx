@@ -8,8 +8,8 @@ export type Column<Row> = {
   /** Relative width. */
   flex: number;
   render: (row: Row) => ReactNode;
-  /** The server's sort for this column, when it can sort by it; a second tap flips date order. */
-  sorts?: readonly string[];
+  /** The server's sorts for this column, when it can sort by it; another tap moves to the next one. */
+  sorts?: readonly { value: string; dir: "ascending" | "descending" }[];
   align?: "left" | "right";
 };
 
@@ -28,12 +28,14 @@ export function ListTable<Row>({ columns, rows, rowKey, sort, onSort, onOpen }: 
     <View style={styles.table} role="table">
       <View style={[styles.row, styles.head]} role="row">
         {columns.map((c) => {
-          const active = c.sorts?.includes(sort);
-          const next = c.sorts ? (active ? c.sorts[(c.sorts.indexOf(sort) + 1) % c.sorts.length] : c.sorts[0]) : undefined;
-          const arrow = active ? (sort.endsWith("-asc") ? " ↑" : " ↓") : "";
+          const at = c.sorts?.findIndex((s) => s.value === sort) ?? -1;
+          const active = at >= 0 ? c.sorts![at] : undefined;
+          const next = c.sorts?.[(at + 1) % c.sorts.length]?.value;
+          const arrow = active ? (active.dir === "ascending" ? " ↑" : " ↓") : "";
           return (
-            <Pressable key={c.key} role="columnheader" disabled={!next} onPress={() => next && onSort(next)}
-              aria-sort={active ? (sort.endsWith("-asc") ? "ascending" : "descending") : undefined}
+            <Pressable key={c.key} role="columnheader" disabled={!next || (active && c.sorts!.length === 1)}
+              onPress={() => next && onSort(next)}
+              aria-sort={active?.dir}
               style={[styles.cell, { flex: c.flex }]}>
               <Text style={[styles.headText, c.sorts && styles.sortable, c.align === "right" && styles.right]}>{c.label}{arrow}</Text>
             </Pressable>

@@ -34,7 +34,8 @@ export function NumberField({ label, unit, value, onChangeText, error, hint, who
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
   label: { fontSize: 14, fontWeight: "600", color: colors.ink },
-  row: { flexDirection: "row", alignItems: "center", gap: space.sm },
+  // A number is short: the box stays narrow on a wide screen.
+  row: { flexDirection: "row", alignItems: "center", gap: space.sm, maxWidth: 280 },
   input: {
     flex: 1, minWidth: 0, minHeight: 44, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm,
     paddingHorizontal: space.md, fontSize: 16, backgroundColor: colors.surface, color: colors.ink,

@@ -4,22 +4,29 @@ import { RuleRecordLine } from "@/components/rule-record";
 import { colors, radius, space } from "@/constants/theme";
 import { DEFECTS } from "@/lib/defects";
 import type { RuleRow } from "@/lib/rulebook-schemas";
+import { unitsFormat } from "@/lib/rule-units";
+import type { Units } from "@/lib/units";
+import { conditionLines } from "@/rules/rule-words";
 
-export const STATUS_WORDS: Record<RuleRow["status"], string> = {
-  "built-in": "built in", draft: "draft", published: "in use", retired: "retired",
-};
+/** A rule's state in a word or two: a draft over a published version leaves that version in use. */
+export function stateWords(r: Pick<RuleRow, "status" | "inUse" | "switchedOff">): string {
+  if (r.switchedOff) return "switched off here";
+  if (r.status === "draft") return r.inUse ? "in use, changes not published" : "draft";
+  return { "built-in": "built in", published: "in use", retired: "retired" }[r.status];
+}
 
-/** One rule in the list: what it points to, for which defects, where it comes from and how it did here. */
-export function RuleListItem({ rule }: { rule: RuleRow }) {
+/** One rule in the list: what it points to, when, for which defects, where it comes from and how it did here. */
+export function RuleListItem({ rule, units }: { rule: RuleRow; units: Units }) {
   const defects = rule.explains.map((t) => DEFECTS[t].label.toLowerCase()).join(", ");
-  const state = rule.switchedOff ? "switched off here" : STATUS_WORDS[rule.status];
+  // A plain style: Link asChild hands the style through a Slot that drops a style function.
   return (
     <Link href={`/rulebook/${rule.id}`} asChild>
-      <Pressable role="link" style={({ pressed }) => [styles.row, pressed && styles.pressed]} testID={`rule-${rule.id}`}>
+      <Pressable role="link" style={styles.row} testID={`rule-${rule.id}`}>
         <View style={styles.top}>
           <Text style={styles.title} numberOfLines={2}>{rule.effect === "weakens" ? "Against: " : ""}{rule.cause.title}</Text>
-          <Text style={[styles.state, !rule.inUse && styles.off]}>{state}</Text>
+          <Text style={[styles.state, !rule.inUse && styles.off]}>{stateWords(rule)}</Text>
         </View>
+        <Text style={styles.when} numberOfLines={2}>When {conditionLines(rule.conditions, unitsFormat(units)).join("; ")}</Text>
         <Text style={styles.meta} numberOfLines={1}>{defects} · {rule.source === "shop" ? "written here" : rule.family.toLowerCase()}</Text>
         <RuleRecordLine record={rule.record} />
       </Pressable>
@@ -29,10 +36,10 @@ export function RuleListItem({ rule }: { rule: RuleRow }) {
 
 const styles = StyleSheet.create({
   row: { gap: 2, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
-  pressed: { opacity: 0.8 },
   top: { flexDirection: "row", gap: space.sm, alignItems: "flex-start" },
   title: { flex: 1, fontSize: 15, fontWeight: "700", color: colors.ink },
   state: { fontSize: 12, fontWeight: "700", color: colors.steel, textTransform: "uppercase" },
   off: { color: colors.muted },
+  when: { fontSize: 14, lineHeight: 20, color: colors.ink },
   meta: { fontSize: 13, color: colors.muted },
 });

@@ -7,7 +7,6 @@ import { unitsFormat } from "@/lib/rule-units";
 import type { Units } from "@/lib/units";
 import type { DefectLocation, DefectType } from "@/rules/case";
 import { ruleChanges } from "@/rules/rule-diff";
-import { STATUS_WORDS } from "@/components/rule-list-item";
 
 /** Every version of a shop rule, newest first, each with who, when and what changed from the one before. */
 export function RuleVersions({ versions, causes, units }: { versions: RuleVersion[]; causes: CauseOption[]; units: Units }) {
@@ -22,7 +21,7 @@ export function RuleVersions({ versions, causes, units }: { versions: RuleVersio
       {versions.map((v, i) => (
         <View key={v.version} style={styles.item} testID={`version-${v.version}`}>
           <Text style={styles.head}>
-            Version {v.version} · {STATUS_WORDS[v.status]} · {v.createdBy?.name ?? "someone"}, {formatMoment(v.createdAt)}
+            Version {v.version} · {v.status} · {v.createdBy?.name ?? "someone"}, {formatMoment(v.createdAt)}
           </Text>
           {ruleChanges(versions[i + 1] ?? null, v, words).map((line) => <Text key={line} style={styles.change}>• {line}</Text>)}
         </View>

@@ -34,12 +34,15 @@ BEGIN
   RETURN NULL;
 END $$;
 --> statement-breakpoint
--- A shop alloy's figures (liquidus, so superheat) can be updated in place.
+-- An alloy's liquidus (so superheat) and family can be updated in place. The built-ins are
+-- upserted at every server start, so only a real change logs the castings poured in that alloy.
 CREATE FUNCTION search_log_alloys() RETURNS trigger LANGUAGE plpgsql AS $$
 BEGIN
   INSERT INTO search_changes (shop_id, casting_id, xid)
     SELECT c.shop_id, c.id, pg_current_xact_id()::text::bigint
-    FROM castings c JOIN melts m ON m.id = c.melt_id JOIN new_rows a ON a.id = m.alloy_id;
+    FROM new_rows a JOIN old_rows o ON o.id = a.id
+    JOIN melts m ON m.alloy_id = a.id JOIN castings c ON c.melt_id = m.id
+    WHERE a.liquidus_c IS DISTINCT FROM o.liquidus_c OR a.family IS DISTINCT FROM o.family;
   RETURN NULL;
 END $$;
 --> statement-breakpoint
@@ -51,7 +54,7 @@ CREATE TRIGGER search_castings_del AFTER DELETE ON castings REFERENCING OLD TABL
 --> statement-breakpoint
 CREATE TRIGGER search_melts_upd AFTER UPDATE ON melts REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION search_log_melts();
 --> statement-breakpoint
-CREATE TRIGGER search_alloys_upd AFTER UPDATE ON alloys REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION search_log_alloys();
+CREATE TRIGGER search_alloys_upd AFTER UPDATE ON alloys REFERENCING OLD TABLE AS old_rows NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION search_log_alloys();
 --> statement-breakpoint
 CREATE TRIGGER search_defect_marks_ins AFTER INSERT ON defect_marks REFERENCING NEW TABLE AS new_rows FOR EACH STATEMENT EXECUTE FUNCTION search_log_casting_rows();
 --> statement-breakpoint

@@ -18,7 +18,11 @@ export type MeltDraft = Record<NumberKey, string> & {
 };
 
 type Initial = { [K in keyof MeltInput]?: MeltInput[K] | null };
-const today = () => new Date().toISOString().slice(0, 10);
+/** Today where the person is: an evening pour west of Greenwich is already tomorrow in UTC. */
+const today = () => {
+  const d = new Date();
+  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, "0")}-${String(d.getDate()).padStart(2, "0")}`;
+};
 const orUndefined = <T,>(v: T | null | undefined) => v ?? undefined;
 
 /** Which fields a process has: foam density only for lost foam; no mould moisture in a metal mould. */

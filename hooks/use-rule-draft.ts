@@ -1,13 +1,11 @@
 import { useMemo, useState } from "react";
-import { ruleDraftInput, ruleToDraft, SHOP_EXPERIENCE, type Comparison, type RuleDraft } from "@/lib/rulebook-schemas";
+import { draftToRule, ruleDraftInput, ruleToDraft, SHOP_EXPERIENCE, type Comparison, type RuleDraft } from "@/lib/rulebook-schemas";
 import { siToText, textToSi, unitsFormat } from "@/lib/rule-units";
 import type { Units } from "@/lib/units";
 import type { DefectLocation, DefectType } from "@/rules/case";
 import { factSpec } from "@/rules/fact-catalog";
 import type { KbRule } from "@/rules/kb-schema";
-import type { NumberFact } from "@/rules/rule-words";
 import { contradictions } from "@/rules/satisfiable";
-import { draftToRule } from "@/lib/rulebook-schemas";
 
 /**
  * The rule form's state as typed (text in the person's units), turned into a draft (SI) and

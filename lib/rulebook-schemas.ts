@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { DEFECT_LOCATIONS, DEFECT_TYPES, type DefectLocation, type DefectType } from "../rules/case";
 import { FACTS, factSpec, type FactSpec } from "../rules/fact-catalog";
-import type { KbRule, Leaf } from "../rules/kb-schema";
+import type { Condition, KbRule, Leaf } from "../rules/kb-schema";
 import type { RuleStatus } from "../rules/rule-diff";
 import type { Backtest } from "../rules/backtest";
 import type { CauseRecord, RuleRecord } from "../rules/calibration";
@@ -167,6 +167,8 @@ export type RuleRow = {
   cause: { id: string; title: string };
   effect: "supports" | "weakens";
   weight: number;
+  /** Shown in words in the person's units (rules/rule-words.ts). */
+  conditions: Condition;
   status: "built-in" | RuleStatus;
   /** Used in this shop's diagnoses right now (built-in and not switched off; shop rule with a published version). */
   inUse: boolean;

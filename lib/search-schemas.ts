@@ -52,8 +52,9 @@ export const searchQuery = z
     pageSize: z.coerce.number({ error: "a number" }).int().min(1, "at least 1").max(SEARCH_PAGE_MAX, `at most ${SEARCH_PAGE_MAX}`).default(20),
   })
   .refine((s) => !s.from || !s.to || s.from <= s.to, { path: ["to"], message: "the end date is before the start date" });
-export type SearchQuery = z.input<typeof searchQuery>;
 export type SearchParams = z.output<typeof searchQuery>;
+/** What the screen sends; lists go as "a,b" (hooks/use-search.ts). */
+export type SearchRequest = Partial<Omit<SearchParams, "outcome">> & { outcome?: Outcome[] };
 
 /** A field's text cut into runs, `hit` where a search word matched. */
 export type Marked = { text: string; hit: boolean }[];
@@ -70,6 +71,8 @@ export type CaseHit = CaseSummary & { score: number | null; marked: Partial<Reco
 export type SearchFacets = {
   defect: Partial<Record<DefectType, number>>; alloy: Record<string, number>;
   process: Partial<Record<Process, number>>; outcome: Partial<Record<Outcome, number>>;
+  /** By cause id: confirmed causes, else the latest diagnosis's first. */
+  cause: Record<string, { title: string; count: number }>;
 };
 export type SearchAnswer = {
   items: CaseHit[]; total: number; page: number; pageSize: number; sort: SearchSort;
@@ -119,7 +122,7 @@ export function reasonText(parts: ReasonPart[], units: Units = SI_UNITS): string
 }
 
 /** The sentence under the search box when nothing matched: "no cases with cold shut in 319.0 yet". */
-export function emptyText(p: Pick<SearchParams, "q" | "defect" | "alloy" | "process" | "outcome">): string {
+export function emptyText(p: Pick<SearchRequest, "q" | "defect" | "alloy" | "process" | "outcome">): string {
   const bits: string[] = [];
   if (p.q) bits.push(`matching “${p.q}”`);
   if (p.defect?.length) bits.push(`with ${p.defect.map((d) => DEFECTS[d].label.toLowerCase()).join(" or ")}`);

@@ -69,7 +69,10 @@ function numbersPossible(leaves: Leaf[], quantity: FactQuantity): boolean {
   for (const { operator: op, value: v } of leaves) {
     if (op === "lessThan" || op === "lessThanInclusive") below(v as number, op === "lessThanInclusive");
     if (op === "greaterThan" || op === "greaterThanInclusive") above(v as number, op === "greaterThanInclusive");
-    if (op === "between") [above((v as number[])[0], true), below((v as number[])[1], true)];
+    if (op === "between") {
+      above((v as number[])[0], true);
+      below((v as number[])[1], true);
+    }
     if (op === "equal") only([v as number]);
     if (op === "in") only(v as number[]);
     if (op === "notEqual") excluded.push(v);

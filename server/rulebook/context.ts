@@ -4,7 +4,7 @@ import { ruleSwitches, shopCauses, shopRuleVersions } from "../../db/schema";
 import { causeRecords, confirmedFirings, ruleRecords, weightFactors, type CauseRecord, type Firing, type RuleRecord } from "../../rules/calibration";
 import { ruleSetFor, type DiagnosisResult } from "../../rules/engine";
 import type { CauseWithRecord } from "../../lib/review-schemas";
-import type { KbCause, KbRule, RuleSet } from "../../rules/kb-schema";
+import { checkRule, type KbCause, type KbRule, type RuleSet } from "../../rules/kb-schema";
 import { BUILT_IN_RULE_SET, ruleSetVersion } from "../../rules/knowledge-base";
 import type { RuleStatus } from "../../rules/rule-diff";
 import { storedCases } from "./cases";
@@ -68,7 +68,11 @@ export async function shopRules(shopId: string): Promise<ShopRules> {
   const [causes, versions, off] = await Promise.all([causesOf(shopId), versionsOf(shopId), switchedOff(shopId)]);
   const allCauses = [...BUILT_IN_RULE_SET.causes, ...causes];
   const base = { version: ruleSetVersion(allCauses, BUILT_IN_RULE_SET.rules), causes: allCauses, rules: BUILT_IN_RULE_SET.rules };
-  const inUse = [...versions.values()].map(versionInUse).filter((v) => v !== undefined).map((v) => v.rule);
+  // A stored rule that no longer passes the knowledge base's checks (a fact renamed in a later
+  // release, say) is left out rather than failing every diagnosis in the shop.
+  const causeIds = new Set(allCauses.map((c) => c.id));
+  const inUse = [...versions.values()].map(versionInUse).filter((v) => v !== undefined).map((v) => v.rule)
+    .filter((r) => checkRule(r, causeIds).length === 0);
   return { base, inUse, off, versions, ruleSet: ruleSetFor(base, inUse, off), everyRule: ruleSetFor(base, inUse) };
 }
 

@@ -2,7 +2,8 @@ import { Router } from "express";
 import { switchInput, trialInput } from "../../lib/rulebook-schemas";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
-import { createRule, publishRule, retireRule, ruleDetail, rulebook, switchBuiltIn, tryRule, updateRule } from "./service";
+import { createRule, publishRule, retireRule, switchBuiltIn, updateRule } from "./changes";
+import { ruleDetail, rulebook, tryRule } from "./service";
 
 /** The rulebook: everyone in the shop reads it; mentors and owners write, try, publish, retire and switch rules. */
 export const rulebookRouter = Router();

@@ -3,7 +3,7 @@ import { DEGASSING_LABELS, PROCESS_LABELS } from "../../lib/labels";
 import type { Outcome } from "../../lib/notebook-schemas";
 import type { Worked } from "../../lib/review-schemas";
 import type { CaseCause, CaseSummary } from "../../lib/search-schemas";
-import { DEFECT_TYPES, type DefectLocation, type DefectType, type Process } from "../../rules/case";
+import { DEFECT_LOCATIONS, DEFECT_TYPES, type DefectLocation, type DefectType, type Process } from "../../rules/case";
 import type { SearchFields } from "./fuzzy";
 
 /**
@@ -30,6 +30,8 @@ export type CaseRows = {
 export type CaseDoc = Omit<CaseSummary, "createdBy"> & {
   createdBy: string;
   alloyKey: string; alloyFamily: string; defectMask: number;
+  /** Each mark as type index * 16 + location index (rules/case.ts lists), for quick comparing. */
+  markCodes: number[];
   degassing: string | null; superheatC: number | null; minSectionMm: number | null;
   fields: SearchFields;
 };
@@ -37,6 +39,7 @@ export type CaseDoc = Omit<CaseSummary, "createdBy"> & {
 /** Upper case without spaces, as the alloy table keys designations ("a356.0" is "A356.0"). */
 export const alloyKey = (designation: string) => designation.trim().toUpperCase().replace(/\s+/g, "");
 export const defectBit = (t: DefectType) => 1 << DEFECT_TYPES.indexOf(t);
+export const markCode = (t: DefectType, l: DefectLocation) => DEFECT_TYPES.indexOf(t) * 16 + DEFECT_LOCATIONS.indexOf(l);
 
 /** Trade words a defect's plain label leaves out, so "penetration" or "inclusion" still find it. */
 const ALIASES: Partial<Record<DefectType, string>> = {
@@ -78,6 +81,7 @@ export function caseDocs(rows: CaseRows): CaseDoc[] {
       outcome: c.outcome as Outcome | null, defects: m.map(({ type, location, severity }) => ({ type, location, severity })),
       cause, fixWorked, createdBy: c.createdBy,
       alloyKey: alloyKey(c.alloy), alloyFamily: c.alloyFamily, defectMask: m.reduce((mask, r) => mask | defectBit(r.type), 0),
+      markCodes: m.map((r) => markCode(r.type, r.location)),
       degassing: c.degassing, superheatC: c.pourTempC === null ? null : c.pourTempC - c.liquidusC, minSectionMm: c.minSectionMm,
       fields: {
         part: joined([c.partName, c.pattern], " "),

@@ -2,41 +2,48 @@ import { eq, inArray, isNull, or } from "drizzle-orm";
 import { db } from "../../db/client";
 import { alloys, member, user } from "../../db/schema";
 import type { SearchParams } from "../../lib/search-schemas";
+import { PROCESSES } from "../../rules/case";
 import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
 import { HttpError } from "../http/errors";
 import { causesOf } from "../rulebook/context";
 import { alloyKey, defectBit } from "./case-doc";
-import type { IndexedCase, ShopIndex } from "./index-cache";
+import { dayNumber, OUTCOME_CODES, type Names, type ShopIndex } from "./shop-index";
 
 /**
- * The exact filters. The four with chips (defect, alloy, process, outcome) report which of them a
- * case fails, so one pass over the shop counts each chip with every other filter applied.
- * Within a filter the values are alternatives; filters combine with "and". The cause filter reads
- * the mentor's confirmed cause, or the latest diagnosis's first cause where none is confirmed.
+ * The exact filters, read from the index's columns by slot. The five with chips (defect, alloy,
+ * process, outcome, cause) report which of them a case fails (one bit each), so one pass over the
+ * shop counts each chip with every other filter applied. Several values of one filter are
+ * alternatives; filters combine with "and". The cause is the mentor's confirmed cause, or the
+ * latest diagnosis's first cause where none is confirmed.
  */
-export const FACETS = ["defect", "alloy", "process", "outcome"] as const;
-export type Facet = (typeof FACETS)[number];
-export type CaseFilter = { failed: (c: IndexedCase) => number; other: (c: IndexedCase) => boolean };
+export type SlotFilter = { failed: (slot: number) => number; other: (slot: number) => boolean };
 
-export function caseFilter(p: SearchParams): CaseFilter {
-  const defects = p.defect?.length ? p.defect.reduce((m, t) => m | defectBit(t), 0) : 0;
-  const alloyKeys = p.alloy?.length ? new Set(p.alloy.map(alloyKey)) : null;
-  const processes = p.process?.length ? new Set<string>(p.process) : null;
-  const outcomes = p.outcome?.length ? new Set<string>(p.outcome) : null;
-  const causes = p.cause?.length ? new Set(p.cause) : null;
-  const people = p.by?.length ? new Set(p.by) : null;
-  const { from, to } = p;
+const flags = (names: Names, wanted: string[]) => {
+  const f = new Uint8Array(names.list.length);
+  for (const w of wanted) f[names.find(w) ?? 0] = 1;
+  f[0] = 0; // a case with none never matches a value asked for
+  return f;
+};
+const bitsOf = <T>(values: T[] | undefined, all: readonly T[]) => (values ?? []).reduce((m, v) => m | (1 << all.indexOf(v)), 0);
+
+export function slotFilter(index: ShopIndex, p: SearchParams): SlotFilter {
+  const defects = (p.defect ?? []).reduce((m, t) => m | defectBit(t), 0);
+  const alloyOk = p.alloy?.length ? flags(index.alloys, p.alloy.map(alloyKey)) : null;
+  const processes = bitsOf(p.process, PROCESSES);
+  const outcomes = bitsOf(p.outcome, OUTCOME_CODES);
+  const causeOk = p.cause?.length ? flags(index.causes, p.cause) : null;
+  const personOk = p.by?.length ? flags(index.people, p.by) : null;
+  const from = p.from ? dayNumber(p.from) : -Infinity;
+  const to = p.to ? dayNumber(p.to) : Infinity;
+  const { defects: dm, alloy, process, outcome, cause, person, day } = index;
   return {
-    failed: (c) =>
-      (defects && !(c.defectMask & defects) ? 1 : 0) |
-      (alloyKeys && !alloyKeys.has(c.alloyKey) ? 2 : 0) |
-      (processes && !processes.has(c.process) ? 4 : 0) |
-      (outcomes && !(c.outcome && outcomes.has(c.outcome)) ? 8 : 0),
-    other: (c) =>
-      (!causes || (!!c.cause?.id && causes.has(c.cause.id))) &&
-      (!people || people.has(c.createdBy)) &&
-      (!from || c.pouredOn >= from) &&
-      (!to || c.pouredOn <= to),
+    failed: (s) =>
+      (defects && !(dm[s] & defects) ? 1 : 0) |
+      (alloyOk && !alloyOk[alloy[s]] ? 2 : 0) |
+      (processes && !((processes >> process[s]) & 1) ? 4 : 0) |
+      (outcomes && !((outcomes >> outcome[s]) & 1) ? 8 : 0) |
+      (causeOk && !causeOk[cause[s]] ? 16 : 0),
+    other: (s) => (!personOk || personOk[person[s]] === 1) && day[s] >= from && day[s] <= to,
   };
 }
 
@@ -46,8 +53,8 @@ const unknown = (field: string, values: string[], what: string) =>
 /** Alloys, causes and people must be ones this shop knows; a stranger's id is refused like a typo. */
 export async function checkNames(shopId: string, index: ShopIndex, p: SearchParams) {
   if (p.alloy?.length) {
-    const rows = await db.select({ d: alloys.designation }).from(alloys).where(or(isNull(alloys.shopId), eq(alloys.shopId, shopId)));
     // Every melt names a row of the alloy table, so the table lists every alloy a case can have.
+    const rows = await db.select({ d: alloys.designation }).from(alloys).where(or(isNull(alloys.shopId), eq(alloys.shopId, shopId)));
     const known = new Set(rows.map((r) => alloyKey(r.d)));
     const bad = p.alloy.filter((a) => !known.has(alloyKey(a)));
     if (bad.length) throw unknown("alloy", bad, "an alloy");
@@ -61,7 +68,7 @@ export async function checkNames(shopId: string, index: ShopIndex, p: SearchPara
     const rows = await db.select({ id: member.userId }).from(member).where(eq(member.organizationId, shopId));
     const members = new Set(rows.map((r) => r.id));
     // Someone who has left the shop still logged its cases.
-    const bad = p.by.filter((b) => !members.has(b) && !index.cases.some((c) => c.createdBy === b));
+    const bad = p.by.filter((b) => !members.has(b) && index.people.find(b) === undefined);
     if (bad.length) throw unknown("by", bad, "a person");
   }
 }

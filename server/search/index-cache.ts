@@ -1,63 +1,23 @@
-import { byDateDesc, type CaseDoc } from "./case-doc";
-import { FuzzyIndex, type CompiledFields } from "./fuzzy";
-import { CHANGE_LOG_KEEP_MS, changesSince, loadCases, pruneChangeLog, type Loaded } from "./loader";
+import { CHANGE_LOG_KEEP_MS, changesSince, loadCases, pruneChangeLog } from "./loader";
+import { ShopIndex } from "./shop-index";
 
 /**
- * Each shop's cases, compiled for the fuzzy search and kept in memory, newest pour first. Before
- * every search the shop's index asks the change log what was written since it last looked (one
- * indexed lookup) and reloads just those castings; a long silence or a large batch of changes
- * rebuilds it instead. The cases never leave the server: a search answers with one page.
+ * Each shop's index (shop-index.ts), kept in memory. Before every search the shop's entry asks the
+ * change log what was written since it last looked (one indexed lookup) and reloads just those
+ * castings; a long silence or a large batch of changes rebuilds it from the database instead.
  */
-export type IndexedCase = CaseDoc & { compiled: CompiledFields };
-
 /** A patch larger than this (or than 5 % of the shop) is slower than a rebuild. */
 const PATCH_MAX = 500;
-/** Shops kept in memory at once; a 100,000-case shop takes roughly 150 MB. */
+/** Shops kept in memory at once; a 100,000-case shop takes roughly 200 MB. */
 const SHOPS_MAX = 8;
-
-export class ShopIndex {
-  readonly fuzzy = new FuzzyIndex();
-  cases: IndexedCase[] = [];
-  private byId = new Map<number, IndexedCase>();
-  xmin: number;
-  seen: Set<number>;
-  checkedAt = Date.now();
-
-  constructor(loaded: Loaded) {
-    this.xmin = loaded.xmin;
-    this.seen = new Set(loaded.seen);
-    this.replace([], loaded.docs);
-  }
-
-  get(id: number) {
-    return this.byId.get(id);
-  }
-
-  /** Drops the castings `ids` and puts back those of `docs` (the ones that still exist), in order. */
-  replace(ids: number[], docs: CaseDoc[]) {
-    const gone = new Set(ids);
-    for (const id of ids) {
-      const old = this.byId.get(id);
-      if (old) this.fuzzy.release(old.fields);
-      this.byId.delete(id);
-    }
-    const added = docs.map((d) => ({ ...d, compiled: this.fuzzy.compile(d.fields) })).sort(byDateDesc);
-    for (const a of added) this.byId.set(a.id, a);
-    const kept = gone.size ? this.cases.filter((c) => !gone.has(c.id)) : this.cases;
-    // Merge two sorted lists rather than re-sorting 100,000 cases for a handful of new ones.
-    const merged: IndexedCase[] = new Array(kept.length + added.length);
-    let i = 0;
-    let j = 0;
-    for (let k = 0; k < merged.length; k++) {
-      merged[k] = j >= added.length || (i < kept.length && byDateDesc(kept[i], added[j]) <= 0) ? kept[i++] : added[j++];
-    }
-    this.cases = merged;
-  }
-}
 
 /** At most one refresh per shop at a time; a request arriving meanwhile waits for the next one. */
 class Entry {
-  index?: ShopIndex;
+  private index?: ShopIndex;
+  /** The change log is read from this transaction id on; rows already applied are `seen`. */
+  private xmin = 0;
+  private seen = new Set<number>();
+  private checkedAt = 0;
   private running: Promise<ShopIndex> | null = null;
   private queued: Promise<ShopIndex> | null = null;
 
@@ -78,15 +38,26 @@ class Entry {
 
   private async refresh(): Promise<ShopIndex> {
     const index = this.index;
-    if (!index || Date.now() - index.checkedAt > CHANGE_LOG_KEEP_MS / 2) return (this.index = new ShopIndex(await loadCases(this.shopId)));
-    const { xmin, changes } = await changesSince(this.shopId, index.xmin);
-    const ids = [...new Set(changes.filter((c) => !index.seen.has(c.id)).map((c) => c.castingId))];
-    if (ids.length > Math.max(PATCH_MAX, index.cases.length / 20)) return (this.index = new ShopIndex(await loadCases(this.shopId)));
+    if (!index || Date.now() - this.checkedAt > CHANGE_LOG_KEEP_MS / 2) return this.rebuild();
+    const { xmin, changes } = await changesSince(this.shopId, this.xmin);
+    const ids = [...new Set(changes.filter((c) => !this.seen.has(c.id)).map((c) => c.castingId))];
+    if (ids.length > Math.max(PATCH_MAX, index.cases.length / 20)) return this.rebuild();
     if (ids.length) index.replace(ids, (await loadCases(this.shopId, ids)).docs);
-    index.xmin = xmin;
-    index.seen = new Set(changes.map((c) => c.id));
-    index.checkedAt = Date.now();
-    return index;
+    // Slots of changed cases stay empty until compacted; compacting needs no database.
+    if (index.dead > Math.max(1000, index.cases.length / 4)) this.index = new ShopIndex(index.cases);
+    this.xmin = xmin;
+    this.seen = new Set(changes.map((c) => c.id));
+    this.checkedAt = Date.now();
+    return this.index!;
+  }
+
+  private async rebuild(): Promise<ShopIndex> {
+    const loaded = await loadCases(this.shopId);
+    this.index = new ShopIndex(loaded.docs);
+    this.xmin = loaded.xmin;
+    this.seen = new Set(loaded.seen);
+    this.checkedAt = Date.now();
+    return this.index;
   }
 }
 

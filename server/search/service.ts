@@ -1,57 +1,111 @@
 import type { CaseHit, CaseSummary, SearchAnswer, SearchFacets, SearchParams, SearchSort, SimilarAnswer } from "../../lib/search-schemas";
 import { reasonText } from "../../lib/search-schemas";
+import { DEFECT_TYPES, PROCESSES } from "../../rules/case";
 import { notFound } from "../http/errors";
-import { caseFilter, checkNames, namesOf } from "./filters";
-import { shopIndex, type IndexedCase } from "./index-cache";
+import { checkNames, namesOf, slotFilter } from "./filters";
+import { shopIndex } from "./index-cache";
 import { markPage } from "./marks";
-import { similarCases } from "./similarity";
+import { OUTCOME_CODES, type IndexedCase, type ShopIndex } from "./shop-index";
+import { similarInIndex } from "./similar-scan";
 
 /**
- * GET /api/search and GET /api/castings/:id/similar over the shop's in-memory index. One pass over
- * the shop's cases applies the filters, scores the words and counts the chips; only the page
- * asked for is dressed (names, marked words) and sent.
+ * GET /api/search and GET /api/castings/:id/similar over the shop's in-memory index. Words first
+ * narrow to the cases holding a match for every word (the index's postings), then one pass in
+ * date order applies the filters, scores the words as Fuse would and counts the chips; only the
+ * page asked for is dressed (names, marked words) and sent.
  */
 export async function searchCases(shopId: string, p: SearchParams): Promise<SearchAnswer> {
   const index = await shopIndex(shopId);
   await checkNames(shopId, index, p);
   const prepared = index.fuzzy.prepare(p.q);
   const sort: SearchSort = prepared ? (p.sort ?? "relevance") : p.sort === "date-asc" ? "date-asc" : "date-desc";
-  const filter = caseFilter(p);
-  const facets: SearchFacets = { defect: {}, alloy: {}, process: {}, outcome: {} };
-  const found: number[] = [];
-  const scores: number[] = [];
-  const cases = index.cases;
-  for (let pos = 0; pos < cases.length; pos++) {
-    const c = cases[pos];
-    if (!filter.other(c)) continue;
-    const failed = filter.failed(c);
+  const filter = slotFilter(index, p);
+  const counts = new Counts(index);
+  const hit = prepared ? termHits(index, prepared.unitMask) : null;
+  const full = prepared?.full ?? 0;
+  const { order, compiled, start } = index;
+  // Typed scratch arrays: a scan of 100,000 must not leave 100,000 boxed numbers for the GC.
+  const found = new Int32Array(order.length);
+  const scores = prepared ? new Float64Array(order.length) : null;
+  let total = 0;
+  for (let pos = 0; pos < order.length; pos++) {
+    const s = order[pos];
+    if (hit && hit[s] !== full) continue;
+    if (!filter.other(s)) continue;
+    const failed = filter.failed(s);
     if (failed & (failed - 1)) continue; // fails two chip filters: counts for no chip
-    const score = prepared ? index.fuzzy.score(prepared, c.compiled) : 0;
+    const score = prepared ? index.fuzzy.score(prepared, compiled, start[s]) : 0;
     if (score < 0) continue;
-    count(facets, c, failed);
+    counts.add(s, failed);
     if (failed) continue;
-    found.push(pos);
-    scores.push(score);
+    if (scores) scores[total] = score;
+    found[total++] = pos;
   }
-  const order = found.map((_, i) => i);
-  // `cases` is newest first, so position breaks ties as Fuse's own order would.
-  if (sort === "relevance") order.sort((a, b) => scores[a] - scores[b] || found[a] - found[b]);
-  if (sort === "date-asc") order.reverse();
-  const slice = order.slice((p.page - 1) * p.pageSize, p.page * p.pageSize);
-  const page = slice.map((i) => cases[found[i]]);
+  const from = (p.page - 1) * p.pageSize;
+  const upto = Math.min(total, from + p.pageSize);
+  let slice: number[];
+  if (sort === "relevance" && scores) {
+    // `order` is newest first, so position breaks ties as Fuse's own order would.
+    const ranks = new Int32Array(total).map((_, i) => i).sort((a, b) => scores[a] - scores[b] || found[a] - found[b]);
+    slice = Array.from(ranks.subarray(from, upto));
+  } else {
+    slice = Array.from({ length: Math.max(0, upto - from) }, (_, k) => (sort === "date-asc" ? total - 1 - from - k : from + k));
+  }
+  const page = slice.map((i) => index.cases[found[i]]);
   const names = await namesOf(page.map((c) => c.createdBy));
   const marked = markPage(page.map((c) => c.fields), prepared ? p.q : "");
-  const items: CaseHit[] = page.map((c, i) => ({
-    ...summary(c, names), score: sort === "relevance" ? scores[slice[i]] : null, marked: marked[i],
-  }));
-  return { items, total: found.length, page: p.page, pageSize: p.pageSize, sort, facets };
+  const items: CaseHit[] = page.map((c, i) => ({ ...summary(c, names), score: scores && sort === "relevance" ? scores[slice[i]] : null, marked: marked[i] }));
+  return { items, total, page: p.page, pageSize: p.pageSize, sort, facets: counts.facets() };
 }
 
-function count(f: SearchFacets, c: IndexedCase, failed: number) {
-  if (!failed || failed === 1) for (const t of new Set(c.defects.map((d) => d.type))) f.defect[t] = (f.defect[t] ?? 0) + 1;
-  if (!failed || failed === 2) f.alloy[c.alloy] = (f.alloy[c.alloy] ?? 0) + 1;
-  if (!failed || failed === 4) f.process[c.process] = (f.process[c.process] ?? 0) + 1;
-  if ((!failed || failed === 8) && c.outcome) f.outcome[c.outcome] = (f.outcome[c.outcome] ?? 0) + 1;
+/** Per slot, which query words some unit of the case matches (bit i = word i). */
+function termHits(index: ShopIndex, unitMask: Int32Array): Int32Array {
+  const hit = new Int32Array(index.slots.length);
+  for (let u = 0; u < unitMask.length; u++) {
+    const m = unitMask[u];
+    const list = m ? index.postings[u] : undefined;
+    if (list) for (let i = 0; i < list.length; i++) hit[list[i]] |= m;
+  }
+  return hit;
+}
+
+/** Chip counts in typed arrays during the scan, named at the end. */
+class Counts {
+  private defect = new Int32Array(DEFECT_TYPES.length);
+  private alloy: Int32Array;
+  private process = new Int32Array(PROCESSES.length);
+  private outcome = new Int32Array(OUTCOME_CODES.length);
+  private cause: Int32Array;
+  constructor(private readonly index: ShopIndex) {
+    this.alloy = new Int32Array(index.alloys.list.length);
+    this.cause = new Int32Array(index.causes.list.length);
+  }
+  add(s: number, failed: number) {
+    const x = this.index;
+    if (!failed || failed === 1) for (let m = x.defects[s]; m; m &= m - 1) this.defect[31 - Math.clz32(m & -m)]++;
+    if (!failed || failed === 2) this.alloy[x.alloy[s]]++;
+    if (!failed || failed === 4) this.process[x.process[s]]++;
+    if (!failed || failed === 8) this.outcome[x.outcome[s]]++;
+    if (!failed || failed === 16) this.cause[x.cause[s]]++;
+  }
+  facets(): SearchFacets {
+    const named = <K extends string>(counts: Int32Array, name: (i: number) => K | "") => {
+      const out: Partial<Record<K, number>> = {};
+      counts.forEach((n, i) => {
+        const k = name(i);
+        if (n && k) out[k] = n;
+      });
+      return out as Record<K, number>;
+    };
+    const causes = named(this.cause, (i) => this.index.causes.list[i]);
+    return {
+      defect: named(this.defect, (i) => DEFECT_TYPES[i]),
+      alloy: named(this.alloy, (i) => this.index.alloys.labels[i]),
+      process: named(this.process, (i) => PROCESSES[i]),
+      outcome: named(this.outcome, (i) => OUTCOME_CODES[i]),
+      cause: Object.fromEntries(Object.entries(causes).map(([id, count]) => [id, { title: this.index.causes.labels[this.index.causes.find(id)!], count }])),
+    };
+  }
 }
 
 const summary = (c: IndexedCase, names: Map<string, string>): CaseSummary => ({
@@ -64,7 +118,7 @@ export async function similarTo(shopId: string, castingId: number): Promise<Simi
   const index = await shopIndex(shopId);
   const target = index.get(castingId);
   if (!target) throw notFound("No such casting");
-  const found = similarCases(target, index.cases);
+  const found = similarInIndex(index, target);
   const names = await namesOf(found.map((s) => s.doc.createdBy));
   return {
     items: found.map((s) => ({ ...summary(s.doc, names), similarity: s.similarity, reason: reasonText(s.parts), parts: s.parts })),

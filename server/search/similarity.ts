@@ -1,16 +1,16 @@
 import type { ReasonPart } from "../../lib/search-schemas";
-import type { DefectType } from "../../rules/case";
+import { DEFECT_LOCATIONS, DEFECT_TYPES } from "../../rules/case";
 import type { CaseDoc } from "./case-doc";
 
 /**
  * "Cases like this one": past castings with the same defects (type, then location) poured under
  * similar conditions (process, alloy, superheat, degassing, thinnest section). Among cases alike
  * enough, the ones whose cause a mentor confirmed and whose fix worked come first: those are the
- * ones that teach something. Pure; the weights are our judgement, not a published figure.
+ * ones that teach something. The weights are our judgement, not a published figure.
  */
 export type SimilarInput = Pick<
   CaseDoc,
-  "id" | "pouredOn" | "defects" | "process" | "alloyKey" | "alloy" | "alloyFamily" | "superheatC" | "degassing" | "minSectionMm" | "cause" | "fixWorked"
+  "id" | "pouredOn" | "defects" | "defectMask" | "markCodes" | "process" | "alloyKey" | "alloy" | "alloyFamily" | "superheatC" | "degassing" | "minSectionMm" | "cause" | "fixWorked"
 >;
 export type Similar<T> = { doc: T; similarity: number; parts: ReasonPart[] };
 
@@ -22,69 +22,107 @@ const SUPERHEAT_SPAN_C = 60;
 
 /** How much a case teaches: 2 = confirmed cause and a fix that worked, 1 = either, 0 = neither. */
 export const teaches = (c: Pick<SimilarInput, "cause" | "fixWorked">) => (c.cause?.confirmed ? 1 : 0) + (c.fixWorked === "yes" ? 1 : 0);
+const bits = (m: number) => {
+  let n = 0;
+  for (; m; m &= m - 1) n++;
+  return n;
+};
 
-export function compare(target: SimilarInput, other: SimilarInput): Similar<SimilarInput> {
-  const parts: ReasonPart[] = [];
-  const mine = new Set(target.defects.map((d) => d.type));
-  const theirs = new Set(other.defects.map((d) => d.type));
-  let shared = 0;
-  let best: ReasonPart | null = null;
-  for (const type of mine) {
-    if (!theirs.has(type)) continue;
-    const places = new Set(target.defects.filter((d) => d.type === type).map((d) => d.location));
-    const same = other.defects.find((d) => d.type === type && places.has(d.location));
-    shared += same ? 1 : 0.6;
-    if (!best || (same && best.kind === "defect" && !best.location)) best = { kind: "defect", type: type as DefectType, location: same?.location ?? null };
-  }
-  const union = new Set([...mine, ...theirs]).size;
-  let similarity = union ? (WEIGHTS.defects * shared) / union : 0;
-  if (best) parts.push(best);
+/** For each defect type, the locations the target was marked at (bit per DEFECT_LOCATIONS). */
+export function placesOf(markCodes: readonly number[]): Int32Array {
+  const places = new Int32Array(DEFECT_TYPES.length);
+  for (const code of markCodes) places[code >> 4] |= 1 << (code & 15);
+  return places;
+}
+/** Types of `codes` marked at a place the target also had that type. */
+function samePlaces(places: Int32Array, codes: readonly number[]): number {
+  let same = 0;
+  for (const code of codes) if ((places[code >> 4] >> (code & 15)) & 1) same |= 1 << (code >> 4);
+  return same;
+}
+/** Shared types count 1 at the same place, 0.6 elsewhere, over every type either case has. */
+export function defectShare(targetMask: number, otherMask: number, samePlace: number): number {
+  const union = bits(targetMask | otherMask);
+  return union ? (WEIGHTS.defects * (bits(samePlace) + 0.6 * bits(targetMask & otherMask & ~samePlace))) / union : 0;
+}
+/** The conditions' share; unknown numbers are NaN and count nothing. */
+export function conditionShare(sameProcess: boolean, sameAlloy: boolean, sameFamily: boolean, superheatDelta: number, sameDegassing: boolean, sectionRatio: number): number {
+  let s = sameProcess ? WEIGHTS.process : 0;
+  if (sameAlloy || sameFamily) s += WEIGHTS.alloy * (sameAlloy ? 1 : 0.5);
+  if (!Number.isNaN(superheatDelta)) s += WEIGHTS.superheat * Math.max(0, 1 - Math.abs(superheatDelta) / SUPERHEAT_SPAN_C);
+  if (sameDegassing) s += WEIGHTS.degassing;
+  if (!Number.isNaN(sectionRatio)) s += WEIGHTS.section * (sectionRatio <= 1.25 ? 1 : sectionRatio <= 2 ? 0.5 : 0);
+  return s;
+}
+export const likenessOf = (defects: number, conditions: number) => Math.round((defects + conditions) * 1000) / 1000;
+export const ratioOf = (a: number | null, b: number | null) => (a && b ? Math.max(a, b) / Math.min(a, b) : NaN);
 
-  if (target.process === other.process) {
-    similarity += WEIGHTS.process;
-    parts.push({ kind: "process", process: other.process });
+/** How alike `other` is to `t` (0-1), and why, case by case. */
+export function likeness(t: SimilarInput, other: SimilarInput, parts?: ReasonPart[]): number {
+  const places = placesOf(t.markCodes);
+  const same = samePlaces(places, other.markCodes);
+  const shared = t.defectMask & other.defectMask;
+  const delta = t.superheatC !== null && other.superheatC !== null ? other.superheatC - t.superheatC : NaN;
+  const sameAlloy = t.alloyKey === other.alloyKey;
+  const sameDegassing = !!t.degassing && t.degassing === other.degassing;
+  const ratio = ratioOf(t.minSectionMm, other.minSectionMm);
+  if (parts) {
+    if (shared) {
+      const pick = same || shared;
+      const type = DEFECT_TYPES[31 - Math.clz32(pick & -pick)];
+      const place = same ? other.defects.find((d) => d.type === type && (places[DEFECT_TYPES.indexOf(type)] >> DEFECT_LOCATIONS.indexOf(d.location)) & 1) : undefined;
+      parts.push({ kind: "defect", type, location: place?.location ?? null });
+    }
+    if (t.process === other.process) parts.push({ kind: "process", process: other.process });
+    if (sameAlloy || t.alloyFamily === other.alloyFamily) parts.push({ kind: "alloy", alloy: other.alloy, sameFamily: !sameAlloy });
+    if (!Number.isNaN(delta)) parts.push({ kind: "superheat", deltaC: Math.round(delta) });
+    if (sameDegassing) parts.push({ kind: "degassing", method: other.degassing! });
+    if (ratio <= 1.25) parts.push({ kind: "section", minSectionMm: other.minSectionMm! });
   }
-  if (target.alloyKey === other.alloyKey || target.alloyFamily === other.alloyFamily) {
-    const same = target.alloyKey === other.alloyKey;
-    similarity += WEIGHTS.alloy * (same ? 1 : 0.5);
-    parts.push({ kind: "alloy", alloy: other.alloy, sameFamily: !same });
-  }
-  if (target.superheatC !== null && other.superheatC !== null) {
-    const delta = other.superheatC - target.superheatC;
-    similarity += WEIGHTS.superheat * Math.max(0, 1 - Math.abs(delta) / SUPERHEAT_SPAN_C);
-    parts.push({ kind: "superheat", deltaC: Math.round(delta) });
-  }
-  if (target.degassing && target.degassing === other.degassing) {
-    similarity += WEIGHTS.degassing;
-    parts.push({ kind: "degassing", method: other.degassing });
-  }
-  if (target.minSectionMm && other.minSectionMm) {
-    const ratio = Math.max(target.minSectionMm, other.minSectionMm) / Math.min(target.minSectionMm, other.minSectionMm);
-    const s = ratio <= 1.25 ? 1 : ratio <= 2 ? 0.5 : 0;
-    similarity += WEIGHTS.section * s;
-    if (s === 1) parts.push({ kind: "section", minSectionMm: other.minSectionMm });
-  }
-  return { doc: other, similarity: Math.round(similarity * 1000) / 1000, parts };
+  return likenessOf(
+    defectShare(t.defectMask, other.defectMask, same),
+    conditionShare(t.process === other.process, sameAlloy, t.alloyFamily === other.alloyFamily, delta, sameDegassing, ratio),
+  );
+}
+
+export type Ranked<T> = { doc: T; similarity: number; alike: number; teaches: number };
+/** Alike enough first; among those, what teaches most; then the closest; then the newest. */
+export const before = <T extends Pick<SimilarInput, "pouredOn" | "id">>(a: Ranked<T>, b: Ranked<T>) =>
+  b.alike - a.alike || a.alike * (b.teaches - a.teaches) || b.similarity - a.similarity ||
+  (a.doc.pouredOn < b.doc.pouredOn ? 1 : a.doc.pouredOn > b.doc.pouredOn ? -1 : b.doc.id - a.doc.id);
+
+/** Keeps the best `limit` seen so far, in order; copies `probe` only when it makes the list. */
+export function keepBest<T extends Pick<SimilarInput, "pouredOn" | "id">>(top: Ranked<T>[], probe: Ranked<T>, limit: number) {
+  if (top.length === limit && before(probe, top[limit - 1]) >= 0) return;
+  let at = Math.min(top.length, limit - 1);
+  while (at > 0 && before(probe, top[at - 1]) < 0) at--;
+  top.splice(at, 0, { ...probe });
+  if (top.length > limit) top.pop();
 }
 
 /**
  * The `limit` cases most like `target`. When it has marked defects, only cases sharing one of
  * them qualify (the point is the same defect coming back); without marks, conditions alone rank.
+ * The shop index runs the same rule over its columns (shop-index.ts, `similarTo`).
  */
-export function similarCases<T extends SimilarInput>(target: SimilarInput, cases: Iterable<T>, limit = 5): Similar<T>[] {
-  const scored: Similar<T>[] = [];
-  const needDefect = target.defects.length > 0;
+export function similarCases<T extends SimilarInput>(target: SimilarInput, cases: readonly T[], limit = 5): Similar<T>[] {
+  const top: Ranked<T>[] = [];
+  const probe: Ranked<T> = { doc: target as T, similarity: 0, alike: 0, teaches: 0 };
   for (const c of cases) {
-    if (c.id === target.id) continue;
-    if (needDefect && !c.defects.some((d) => target.defects.some((t) => t.type === d.type))) continue;
-    scored.push(compare(target, c) as Similar<T>);
+    if (c.id === target.id || (target.defectMask && !(c.defectMask & target.defectMask))) continue;
+    probe.doc = c;
+    probe.similarity = likeness(target, c);
+    probe.alike = probe.similarity >= ALIKE_MIN ? 1 : 0;
+    probe.teaches = teaches(c);
+    keepBest(top, probe, limit);
   }
-  const alike = (s: Similar<T>) => (s.similarity >= ALIKE_MIN ? 1 : 0);
-  return scored
-    .sort((a, b) =>
-      alike(b) - alike(a) ||
-      alike(a) * (teaches(b.doc) - teaches(a.doc)) ||
-      b.similarity - a.similarity ||
-      (a.doc.pouredOn < b.doc.pouredOn ? 1 : a.doc.pouredOn > b.doc.pouredOn ? -1 : b.doc.id - a.doc.id))
-    .slice(0, limit);
+  return withReasons(target, top);
+}
+
+export function withReasons<T extends SimilarInput>(target: SimilarInput, top: Ranked<T>[]): Similar<T>[] {
+  return top.map((r) => {
+    const parts: ReasonPart[] = [];
+    likeness(target, r.doc, parts);
+    return { doc: r.doc, similarity: r.similarity, parts };
+  });
 }

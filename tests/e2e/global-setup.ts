@@ -16,7 +16,13 @@ export default async function setup(project: TestProject) {
   const parent = mkdtempSync(join(tmpdir(), "casebook-e2e-"));
   const pg = startLocalPostgres({ dataDir: join(parent, "pg"), port: await freePort(), database: "casebook_e2e", throwaway: true });
   const port = await freePort();
-  Object.assign(process.env, { DATABASE_URL: pg.url, PORT: String(port), NODE_ENV: "test", PUBLIC_URL: `http://127.0.0.1:${port}` });
+  Object.assign(process.env, {
+    DATABASE_URL: pg.url,
+    PORT: String(port),
+    NODE_ENV: "test",
+    PUBLIC_URL: `http://127.0.0.1:${port}`,
+    UPLOAD_DIR: join(parent, "uploads"), // demo and test photos go with the throwaway cluster
+  });
 
   const { db, pool } = await import("../../db/client");
   const { applyMigrations } = await import("../../db/migrate");

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { formFromRule, formToDraft } from "../../hooks/use-rule-draft";
 import { draftToRule, ruleDraftInput, ruleToDraft, type RuleDraft } from "../../lib/rulebook-schemas";
 import { checkRule, type KbRule } from "../../rules/kb-schema";
 import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
@@ -67,6 +68,20 @@ describe("the rule form's checks", () => {
     expect(rule.explains).toEqual([{ type: "misrun", locations: ["far-from-gate"] }]);
     expect(checkRule(rule, new Set(BUILT_IN_RULE_SET.causes.map((c) => c.id)))).toEqual([]);
     expect(ruleToDraft(rule)).toMatchObject({ ...good, effect: "supports" });
+  });
+
+  it("shows a stored rule in the person's units and reads their typing back to SI", () => {
+    const rule = draftToRule(ruleDraftInput.parse(good), "shop-1", "cold-pour");
+    const imperial = { temperature: "F", length: "in", mass: "lb" } as const;
+    const form = formFromRule(rule, imperial);
+    expect(form.rows[0]).toMatchObject({ fact: "pourTempC", comparison: "below", low: "1274" }); // 690 °C × 9/5 + 32
+    const back = ruleDraftInput.parse(formToDraft({ ...form, rows: [{ ...form.rows[0], low: "1292" }, form.rows[1]] }, imperial));
+    expect(back.conditions[0].value).toBeCloseTo(700, 6); // (1292 − 32) × 5/9
+    expect(back.conditions[1]).toEqual({ fact: "process", comparison: "one-of", value: ["lost-foam"] });
+    expect(back.sources).toEqual(["shop experience"]);
+    // Text that is not a number is refused on its own field.
+    const typo = formToDraft({ ...form, rows: [{ ...form.rows[0], low: "12o0" }] }, imperial);
+    expect(fieldsOf(typo)).toEqual({ "conditions.0.value": "type a number" });
   });
 
   it("names the field of each problem: unknown fact, comparison that does not fit, empty cause", () => {

@@ -12,6 +12,7 @@ import { TextField } from "@/components/text-field";
 import { colors, space } from "@/constants/theme";
 import { useReviewQueue } from "@/hooks/use-review";
 import { useMay, useRulebook } from "@/hooks/use-rulebook";
+import { useUnits } from "@/hooks/use-units";
 import { DEFECTS } from "@/lib/defects";
 import type { RuleRow } from "@/lib/rulebook-schemas";
 
@@ -31,6 +32,7 @@ export default function RulebookScreen() {
   const mayWrite = useMay({ rule: ["write"] });
   const mayReview = useMay({ review: ["confirm"] });
   const queue = useReviewQueue(mayReview);
+  const units = useUnits();
   const router = useRouter();
   const [query, setQuery] = useState("");
   const [show, setShow] = useState("all");
@@ -46,8 +48,10 @@ export default function RulebookScreen() {
     <Screen>
       <Heading>Rulebook</Heading>
       <Text style={styles.intro}>
-        The rules behind each diagnosis: {inUse} in use here, built in or written by the shop's mentors.
-        {" "}{book.data.confirmedCases} confirmed case{book.data.confirmedCases === 1 ? "" : "s"} so far tune how much each one counts.
+        The rules behind each diagnosis: {inUse} in use here, built in or written by the shop's mentors.{" "}
+        {book.data.confirmedCases
+          ? `Each rule's record in the shop's ${book.data.confirmedCases} confirmed case${book.data.confirmedCases === 1 ? "" : "s"} tunes how much it counts.`
+          : "Once mentors confirm causes, each rule's record here tunes how much it counts."}
       </Text>
       {mayWrite || mayReview ? (
         <View style={styles.actions}>
@@ -63,7 +67,7 @@ export default function RulebookScreen() {
       <ChoiceChips label="Show" options={SHOW} value={show} onChange={(v) => { setShow(v); setLimit(PAGE); }} />
       {rules.length === 0 ? <Notice>No rule matches.</Notice> : null}
       <View style={styles.list}>
-        {rules.slice(0, limit).map((r) => <RuleListItem key={r.id} rule={r} />)}
+        {rules.slice(0, limit).map((r) => <RuleListItem key={r.id} rule={r} units={units} />)}
       </View>
       {rules.length > limit ? <Button kind="plain" label={`Show more (${rules.length - limit} left)`} onPress={() => setLimit((l) => l + PAGE)} /> : null}
     </Screen>

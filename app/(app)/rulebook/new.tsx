@@ -8,16 +8,19 @@ import { RuleForm } from "@/components/rule-form";
 import { Screen } from "@/components/screen";
 import { useMay, useRulebook } from "@/hooks/use-rulebook";
 import { emptyForm } from "@/hooks/use-rule-draft";
-import { useUnits } from "@/hooks/use-units";
+import { useUnitsQuery } from "@/hooks/use-units";
+import { SI_UNITS } from "@/lib/units";
 
 /** A new rule, written as a draft; it is published from its own page once tried. */
 export default function NewRuleScreen() {
   const book = useRulebook();
-  const units = useUnits();
+  // The form shows values in the person's units: wait for them, or typed values would be read in the wrong ones.
+  const unitsQuery = useUnitsQuery();
+  const units = unitsQuery.data ?? SI_UNITS;
   const mayWrite = useMay({ rule: ["write"] });
   const router = useRouter();
   const [initial] = useState(emptyForm);
-  if (book.isPending) return <Loading />;
+  if (book.isPending || unitsQuery.isPending) return <Loading />;
   if (book.error) return <LoadFailed error={book.error} />;
   return (
     <Screen>

@@ -8,18 +8,21 @@ import { RuleForm } from "@/components/rule-form";
 import { Screen } from "@/components/screen";
 import { useMay, useRule, useRulebook } from "@/hooks/use-rulebook";
 import { formFromRule } from "@/hooks/use-rule-draft";
-import { useUnits } from "@/hooks/use-units";
+import { useUnitsQuery } from "@/hooks/use-units";
+import { SI_UNITS } from "@/lib/units";
 
 /** Changing a shop rule saves a new draft version; the published one stays in use until this one is published. */
 export default function EditRuleScreen() {
   const ruleId = String(useLocalSearchParams<{ ruleId: string }>().ruleId);
   const rule = useRule(ruleId);
   const book = useRulebook();
-  const units = useUnits();
+  // The form shows values in the person's units: wait for them, or typed values would be read in the wrong ones.
+  const unitsQuery = useUnitsQuery();
+  const units = unitsQuery.data ?? SI_UNITS;
   const mayWrite = useMay({ rule: ["write"] });
   const router = useRouter();
   const initial = useMemo(() => (rule.data ? formFromRule(rule.data.rule, units) : undefined), [rule.data, units]);
-  if (rule.isPending || book.isPending) return <Loading />;
+  if (rule.isPending || book.isPending || unitsQuery.isPending) return <Loading />;
   if (rule.error || book.error) return <LoadFailed error={(rule.error ?? book.error)!} />;
   return (
     <Screen>

@@ -1,10 +1,13 @@
 import { useLocalSearchParams } from "expo-router";
 import { BackLink } from "@/components/back-link";
 import { CastingSummary } from "@/components/casting-summary";
+import { CommentThread } from "@/components/comment-thread";
 import { DiagnosisView } from "@/components/diagnosis-view";
+import { FollowupPanel } from "@/components/followup-panel";
 import { Heading } from "@/components/heading";
 import { Inspection } from "@/components/inspection";
 import { LoadFailed, Loading } from "@/components/query-state";
+import { ReviewPanel } from "@/components/review-panel";
 import { Screen } from "@/components/screen";
 import { useCasting } from "@/hooks/use-castings";
 import { useIsWide } from "@/hooks/use-layout";
@@ -12,8 +15,12 @@ import { useMe } from "@/hooks/use-me";
 import { useUnits } from "@/hooks/use-units";
 import { formatDay } from "@/lib/dates";
 import { roleCan } from "@/lib/permissions";
+import type { CauseWithRecord } from "@/lib/review-schemas";
 
-/** One casting: how it came out, its photos with the defects marked on them, and the likely causes. */
+/**
+ * One casting: how it came out, its photos with the defects marked on them, the likely causes, the
+ * mentor's review, the fix tried and the next casting, and the thread of notes.
+ */
 export default function CastingScreen() {
   const params = useLocalSearchParams<{ id: string; castingId: string }>();
   const casting = useCasting(Number(params.castingId));
@@ -24,6 +31,7 @@ export default function CastingScreen() {
   if (casting.isPending) return <Loading />;
   if (casting.error) return <LoadFailed error={casting.error} />;
   const c = casting.data;
+  const causes = (c.diagnosis?.result.causes ?? []) as CauseWithRecord[];
 
   return (
     <Screen wide={wide}>
@@ -32,6 +40,9 @@ export default function CastingScreen() {
       <Heading level={2}>Photos and marks</Heading>
       <Inspection casting={c} wide={wide} />
       <DiagnosisView casting={c} units={units} mayRun={mayWrite} />
+      <ReviewPanel castingId={c.id} causes={causes} />
+      <FollowupPanel castingId={c.id} suggestions={causes[0]?.fixes} />
+      <CommentThread castingId={c.id} comments={c.comments} mayComment={roleCan(role, { casebook: ["comment"] })} />
     </Screen>
   );
 }

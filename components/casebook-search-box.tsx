@@ -1,0 +1,45 @@
+import { ActivityIndicator, Pressable, StyleSheet, Text, TextInput, View } from "react-native";
+import { colors, radius, space } from "@/constants/theme";
+import { SEARCH_QUERY_MAX } from "@/lib/search-schemas";
+
+type Props = { value: string; onChange: (text: string) => void; busy: boolean };
+
+/** The casebook's search words: it answers as you type, so there is no button to press. */
+export function CasebookSearchBox({ value, onChange, busy }: Props) {
+  return (
+    <View style={styles.wrap}>
+      <TextInput
+        role="searchbox"
+        aria-label="Search the casebook"
+        placeholder="A defect, a part, an alloy, words from the notes…"
+        placeholderTextColor={colors.muted}
+        value={value}
+        onChangeText={onChange}
+        maxLength={SEARCH_QUERY_MAX}
+        autoCapitalize="none"
+        autoCorrect={false}
+        returnKeyType="search"
+        style={styles.input}
+      />
+      <View style={styles.end}>
+        {busy ? <ActivityIndicator color={colors.accent} /> : null}
+        {value ? (
+          <Pressable role="button" aria-label="Clear the search words" onPress={() => onChange("")} style={styles.clear}>
+            <Text style={styles.clearText}>×</Text>
+          </Pressable>
+        ) : null}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: {
+    flexDirection: "row", alignItems: "center", borderWidth: 1, borderColor: colors.steel, borderRadius: radius.md,
+    backgroundColor: colors.surface, paddingLeft: space.md,
+  },
+  input: { flex: 1, minHeight: 48, fontSize: 17, color: colors.ink },
+  end: { flexDirection: "row", alignItems: "center", gap: space.xs, paddingRight: space.xs },
+  clear: { width: 40, height: 40, alignItems: "center", justifyContent: "center" },
+  clearText: { fontSize: 24, color: colors.muted, lineHeight: 26 },
+});

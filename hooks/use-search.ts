@@ -1,0 +1,53 @@
+import { keepPreviousData, useQuery } from "@tanstack/react-query";
+import { useEffect, useState } from "react";
+import { api } from "@/lib/api";
+import type { SearchAnswer, SearchRequest, SimilarAnswer } from "@/lib/search-schemas";
+
+/** The casebook: search (GET /api/search) and "cases like this one" (GET /api/castings/:id/similar). */
+export const searchKeys = {
+  all: ["search"] as const,
+  query: (q: SearchRequest) => ["search", q] as const,
+  similar: (castingId: number) => ["search", "similar", castingId] as const,
+};
+
+/** Lists travel as "a,b"; empty values stay out of the URL. */
+export function searchParams(q: SearchRequest): string {
+  const out = new URLSearchParams();
+  for (const [key, value] of Object.entries(q)) {
+    const text = Array.isArray(value) ? value.join(",") : value === undefined || value === null ? "" : String(value);
+    if (text.trim()) out.set(key, text);
+  }
+  return out.toString();
+}
+
+/** A value that settles `ms` after the last change: the search answers as you type, not per key. */
+export function useDebounced<T>(value: T, ms = 250): T {
+  const [settled, setSettled] = useState(value);
+  useEffect(() => {
+    const t = setTimeout(() => setSettled(value), ms);
+    return () => clearTimeout(t);
+  }, [value, ms]);
+  return settled;
+}
+
+/**
+ * One page of matching cases. The previous answer stays on screen while the next loads, and an
+ * answer is never reused from cache: another person may have logged a case since.
+ */
+export function useCaseSearch(query: SearchRequest) {
+  return useQuery({
+    queryKey: searchKeys.query(query),
+    queryFn: () => api<SearchAnswer>(`/search?${searchParams(query)}`),
+    placeholderData: keepPreviousData,
+    staleTime: 0,
+  });
+}
+
+export function useSimilarCases(castingId: number) {
+  return useQuery({
+    queryKey: searchKeys.similar(castingId),
+    queryFn: () => api<SimilarAnswer>(`/castings/${castingId}/similar`),
+    enabled: Number.isInteger(castingId),
+    staleTime: 0,
+  });
+}

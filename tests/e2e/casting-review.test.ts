@@ -1,0 +1,60 @@
+import type { Browser, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { DEMO_PEOPLE } from "../../db/demo-people";
+import { launchBrowser, PHONE, shot, signIn, WIDE } from "./browser";
+
+const baseUrl = inject("baseUrl");
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+const person = (role: string) => DEMO_PEOPLE.find((p) => p.role === role)!;
+
+async function signedIn(role: string, size: { width: number; height: number }): Promise<Page> {
+  const page = await (await browser.newContext({ viewport: size })).newPage();
+  await signIn(page, baseUrl, person(role).email, person(role).password);
+  await expect.poll(() => page.getByTestId("active-role").textContent(), { timeout: 15000 }).toBe(role);
+  return page;
+}
+
+describe("a casting's review and thread", () => {
+  it("a caster writes a note and asks for review; a mentor confirms the cause; the caster sees it", async () => {
+    const caster = await signedIn("caster", PHONE);
+    // A demo casting with marks, diagnosed first through the API the page itself uses.
+    const list = await (await caster.request.get(`${baseUrl}/api/castings?pageSize=50`)).json();
+    const target = list.items.find((c: { markCount: number }) => c.markCount > 0);
+    expect((await caster.request.post(`${baseUrl}/api/castings/${target.id}/diagnosis`)).status()).toBe(201);
+    const url = `${baseUrl}/melts/${target.meltId}/castings/${target.id}`;
+
+    await caster.goto(url);
+    await caster.getByLabel("Add a note or question").fill("Pinholes only on the cope side");
+    await caster.getByRole("button", { name: "Post" }).click();
+    await expect.poll(() => caster.getByText("Pinholes only on the cope side").count(), { timeout: 10000 }).toBe(1);
+    await caster.getByTestId("ask-review").click();
+    await expect.poll(() => caster.getByText(/Waiting for a mentor since/).count(), { timeout: 10000 }).toBe(1);
+    await shot(caster, "phone-casting-review-asked");
+
+    const mentor = await signedIn("mentor", WIDE);
+    await mentor.goto(`${baseUrl}/rulebook/review`);
+    await expect.poll(() => mentor.getByText(target.partName).count(), { timeout: 10000 }).toBeGreaterThan(0);
+    await shot(mentor, "wide-review-queue");
+    await mentor.goto(url);
+    await expect.poll(() => mentor.getByText("Pinholes only on the cope side").count(), { timeout: 10000 }).toBe(1);
+    const firstCause = mentor.getByRole("radiogroup", { name: "What caused it" }).getByRole("radio").first();
+    await firstCause.click();
+    await mentor.getByTestId("confirm-cause").click();
+    await expect.poll(() => mentor.getByTestId("confirmed-cause").count(), { timeout: 10000 }).toBe(1);
+    await shot(mentor, "wide-casting-confirmed");
+
+    await caster.reload();
+    await expect.poll(() => caster.getByTestId("confirmed-cause").count(), { timeout: 10000 }).toBe(1);
+    expect(await caster.getByTestId("confirm-cause").count()).toBe(0); // a caster may not confirm
+    await shot(caster, "phone-casting-confirmed");
+    await caster.context().close();
+    await mentor.context().close();
+  });
+});
