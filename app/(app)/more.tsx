@@ -3,10 +3,12 @@ import { Heading } from "@/components/heading";
 import { Notice } from "@/components/notice";
 import { SafetyCautions } from "@/components/safety-cautions";
 import { Screen } from "@/components/screen";
+import { ShopExport } from "@/components/shop-export";
 import { ShopSettingsForm } from "@/components/shop-settings-form";
 import { UnitsChooser } from "@/components/units-chooser";
 import { colors, space } from "@/constants/theme";
 import { useShop, useShopMembers } from "@/hooks/use-shop";
+import { roleCan } from "@/lib/permissions";
 
 /** The shop itself: its people, your units, its defaults, and the standing cautions. */
 export default function MoreScreen() {
@@ -33,6 +35,12 @@ export default function MoreScreen() {
       <UnitsChooser />
       <Heading level={2}>Shop defaults</Heading>
       <ShopSettingsForm shop={shop.data} />
+      {roleCan(shop.data.role, { shop: ["export"] }) ? (
+        <>
+          <Heading level={2}>Shop records</Heading>
+          <ShopExport />
+        </>
+      ) : null}
       <Heading level={2}>Safety</Heading>
       <SafetyCautions />
     </Screen>

@@ -78,6 +78,7 @@ for (const [sizeName, size] of [["phone", PHONE], ["wide", WIDE]] as const) {
         await expect.poll(() => page.getByText("Shop defaults").count(), { timeout: 10000 }).toBe(1);
         const ownerOnly = await page.getByRole("button", { name: "Save defaults" }).count();
         expect(ownerOnly).toBe(role === "owner" ? 1 : 0);
+        expect(await page.getByTestId("export-csv").count()).toBe(role === "owner" ? 1 : 0);
         await shot(page, `${sizeName}-${role}-more`);
         await page.context().close();
       });
