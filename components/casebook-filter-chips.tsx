@@ -27,10 +27,14 @@ export const activeCount = (f: CasebookFilters) =>
   f.defect.length + f.alloy.length + f.process.length + f.outcome.length + f.cause.length + f.by.length + (f.from ? 1 : 0) + (f.to ? 1 : 0);
 
 type Option = { value: string; label: string; count?: number };
-type Props = { filters: CasebookFilters; onChange: (f: CasebookFilters) => void; facets?: SearchFacets; people: { userId: string; name: string }[] };
+type Props = {
+  filters: CasebookFilters; onChange: (f: CasebookFilters) => void; facets?: SearchFacets; people: { userId: string; name: string }[];
+  /** A side panel is narrow: the two dates go one under the other. */
+  narrow?: boolean;
+};
 
 /** Chips for each filter, busiest values first, each with how many cases it would leave. */
-export function CasebookFilterChips({ filters, onChange, facets, people }: Props) {
+export function CasebookFilterChips({ filters, onChange, facets, people, narrow }: Props) {
   const toggle = (key: ListKey, value: string) => {
     const on = filters[key].includes(value);
     onChange({ ...filters, [key]: on ? filters[key].filter((v) => v !== value) : [...filters[key], value] });
@@ -50,9 +54,9 @@ export function CasebookFilterChips({ filters, onChange, facets, people }: Props
       {group("alloy", "Alloy", counted(facets?.alloy, (v) => v, filters.alloy))}
       {group("process", "Process", counted(facets?.process, (v) => PROCESS_LABELS[v as Process] ?? v, filters.process))}
       {group("outcome", "Outcome", counted(facets?.outcome, (v) => OUTCOME_LABELS[v as keyof typeof OUTCOME_LABELS] ?? v, filters.outcome))}
-      {group("cause", "Cause (confirmed, else the diagnosis's first)", counted(causeCounts, causeTitle, filters.cause))}
+      {group("cause", "Cause (confirmed or likely)", counted(causeCounts, causeTitle, filters.cause))}
       {group("by", "Logged by", people.map((p) => ({ value: p.userId, label: p.name })))}
-      <View style={styles.dates}>
+      <View style={[styles.dates, narrow && styles.stacked]}>
         {(["from", "to"] as const).map((k) => (
           <View key={k} style={styles.date}>
             <TextField label={k === "from" ? "Poured from" : "Poured until"} placeholder="YYYY-MM-DD" value={filters[k]} maxLength={10}
@@ -100,13 +104,17 @@ const styles = StyleSheet.create({
   group: { gap: space.xs },
   label: { fontSize: 13, fontWeight: "700", color: colors.muted },
   row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: 6, backgroundColor: colors.surface, minHeight: 36, justifyContent: "center" },
+  chip: {
+    borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: 6,
+    backgroundColor: colors.surface, minHeight: 36, justifyContent: "center", maxWidth: "100%",
+  },
   on: { backgroundColor: colors.steel, borderColor: colors.steel },
-  text: { color: colors.ink, fontSize: 14 },
+  text: { color: colors.ink, fontSize: 14, flexShrink: 1 },
   count: { color: colors.muted, fontSize: 12 },
   textOn: { color: "#FFFFFF", fontWeight: "600" },
   more: { paddingHorizontal: space.sm, paddingVertical: 6, justifyContent: "center", minHeight: 36 },
   moreText: { color: colors.steel, fontSize: 14, textDecorationLine: "underline" },
   dates: { flexDirection: "row", gap: space.md },
+  stacked: { flexDirection: "column" },
   date: { flex: 1 },
 });

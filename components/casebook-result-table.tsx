@@ -1,5 +1,5 @@
 import { useRouter } from "expo-router";
-import { StyleSheet } from "react-native";
+import { StyleSheet, View } from "react-native";
 import { MarkedText } from "@/components/casebook-marked-text";
 import { castingHref, causeLine, defectsLine, OutcomeTag } from "@/components/casebook-result-card";
 import { ListTable, type Column } from "@/components/list-table";
@@ -14,15 +14,20 @@ const DATE_SORTS = [{ value: "date-desc", dir: "descending" }, { value: "date-as
 export function CasebookResultTable({ hits, sort, onSort }: { hits: CaseHit[]; sort: SearchSort; onSort: (s: SearchSort) => void }) {
   const router = useRouter();
   const columns: Column<CaseHit>[] = [
-    { key: "part", label: "Part", flex: 2, render: (h) => <MarkedText style={styles.strong} runs={h.marked.part} plain={h.partName} numberOfLines={2} /> },
-    { key: "poured", label: "Poured", flex: 1.2, sorts: DATE_SORTS, render: (h) => formatDay(h.pouredOn) },
-    { key: "how", label: "Alloy, process", flex: 1.6, render: (h) => <MarkedText style={styles.text} runs={h.marked.conditions} plain={`${h.alloy} · ${PROCESS_LABELS[h.process]}`} numberOfLines={2} /> },
-    { key: "defects", label: "Defects", flex: 2.6, render: (h) => <MarkedText style={styles.text} runs={h.marked.defects} plain={defectsLine(h)} numberOfLines={3} /> },
+    { key: "part", label: "Part", flex: 1.9, render: (h) => <MarkedText style={styles.strong} runs={h.marked.part} plain={h.partName} numberOfLines={2} /> },
+    { key: "poured", label: "Poured", flex: 1.7, sorts: DATE_SORTS, render: (h) => formatDay(h.pouredOn) },
+    { key: "how", label: "Alloy, process", flex: 1.5, render: (h) => <MarkedText style={styles.text} runs={h.marked.conditions} plain={`${h.alloy} · ${PROCESS_LABELS[h.process]}`} numberOfLines={2} /> },
     {
-      key: "cause", label: "Cause", flex: 2.4,
-      render: (h) => <MarkedText style={styles.cause} runs={h.marked.causes ?? h.marked.notes ?? h.marked.comments} plain={causeLine(h)} numberOfLines={3} />,
+      key: "defects", label: "Defects and notes", flex: 2.6,
+      render: (h) => (
+        <View>
+          <MarkedText style={styles.text} runs={h.marked.defects} plain={defectsLine(h)} numberOfLines={3} />
+          {h.marked.notes ?? h.marked.comments ? <MarkedText style={styles.words} runs={h.marked.notes ?? h.marked.comments} plain="" numberOfLines={2} /> : null}
+        </View>
+      ),
     },
-    { key: "outcome", label: "Outcome", flex: 1.2, render: (h) => <OutcomeTag outcome={h.outcome} /> },
+    { key: "cause", label: "Cause", flex: 2.1, render: (h) => <MarkedText style={styles.cause} runs={h.marked.causes} plain={causeLine(h)} numberOfLines={3} /> },
+    { key: "outcome", label: "Outcome", flex: 1.3, render: (h) => <OutcomeTag outcome={h.outcome} /> },
   ];
   return (
     <ListTable columns={columns} rows={hits} rowKey={(h) => h.id} sort={sort} onSort={(s) => onSort(s as SearchSort)}
@@ -34,4 +39,5 @@ const styles = StyleSheet.create({
   strong: { fontSize: 15, fontWeight: "600", color: colors.ink },
   text: { fontSize: 14, color: colors.ink },
   cause: { fontSize: 14, color: colors.steel },
+  words: { fontSize: 13, color: colors.muted, fontStyle: "italic", marginTop: 2 },
 });

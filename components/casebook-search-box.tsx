@@ -21,7 +21,8 @@ export function CasebookSearchBox({ value, onChange, busy }: Props) {
         returnKeyType="search"
         style={styles.input}
       />
-      <View style={styles.end}>
+      {/* Over the input's right end, so the border (and the browser's focus ring) is the input's own. */}
+      <View style={styles.end} pointerEvents="box-none">
         {busy ? <ActivityIndicator color={colors.accent} /> : null}
         {value ? (
           <Pressable role="button" aria-label="Clear the search words" onPress={() => onChange("")} style={styles.clear}>
@@ -34,12 +35,12 @@ export function CasebookSearchBox({ value, onChange, busy }: Props) {
 }
 
 const styles = StyleSheet.create({
-  wrap: {
-    flexDirection: "row", alignItems: "center", borderWidth: 1, borderColor: colors.steel, borderRadius: radius.md,
-    backgroundColor: colors.surface, paddingLeft: space.md,
+  wrap: { justifyContent: "center" },
+  input: {
+    minHeight: 48, fontSize: 17, color: colors.ink, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.steel,
+    borderRadius: radius.md, paddingLeft: space.md, paddingRight: 88,
   },
-  input: { flex: 1, minHeight: 48, fontSize: 17, color: colors.ink },
-  end: { flexDirection: "row", alignItems: "center", gap: space.xs, paddingRight: space.xs },
+  end: { position: "absolute", right: space.xs, flexDirection: "row", alignItems: "center", gap: space.xs },
   clear: { width: 40, height: 40, alignItems: "center", justifyContent: "center" },
   clearText: { fontSize: 24, color: colors.muted, lineHeight: 26 },
 });

@@ -18,7 +18,7 @@ import { marksRouter } from "./marks/router";
 import { meltsRouter } from "./melts/router";
 import { peopleRouter } from "./people/router";
 import { photosRouter } from "./photos/router";
-// Mentors (issue 6): review, follow-ups and the shop's rulebook.
+// Mentors: review, follow-ups and the shop's rulebook.
 import { followupsRouter } from "./followups/router";
 import { reviewRouter } from "./review/router";
 import { rulebookRouter } from "./rulebook/router";
@@ -46,8 +46,8 @@ export function createApp(opts: { webDir?: string } = {}) {
   for (const r of [alloysRouter, meltsRouter, castingsRouter, photosRouter, marksRouter, commentsRouter, peopleRouter, exportRouter, diagnosisRouter]) {
     api.use(r);
   }
-  api.use(reviewRouter, followupsRouter, rulebookRouter); // issue 6
-  api.use(searchRouter); // the casebook search (issue 5)
+  api.use(reviewRouter, followupsRouter, rulebookRouter);
+  api.use(searchRouter); // the casebook search
   api.use(apiNotFound);
   app.use("/api", api);
 

@@ -1,5 +1,6 @@
 import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
+import { Button } from "@/components/button";
 import { CasebookEmptyState } from "@/components/casebook-empty-state";
 import { activeCount, CasebookFilterChips, filterQuery, NO_FILTERS, type CasebookFilters } from "@/components/casebook-filter-chips";
 import { CasebookResultCard } from "@/components/casebook-result-card";
@@ -41,6 +42,32 @@ export default function CasebookScreen() {
   const order = [...(words ? [{ value: "relevance", label: "best match" }] : []), { value: "date-desc", label: "newest" }, { value: "date-asc", label: "oldest" }];
   const error = search.error as ApiError | null;
 
+  const filterPanel = showFilters ? (
+    <CasebookFilterChips filters={filters} onChange={setFilters} facets={answer?.facets} people={members.data ?? []} narrow={wide} />
+  ) : null;
+  const results = (
+    <View style={styles.results}>
+      {answer && answer.total > 1 ? (
+        <ChoiceChips label="Order" options={order} value={answer.sort} onChange={(v) => setSort(v as SearchSort)} />
+      ) : null}
+      {error ? <Notice tone="error">{[error.message, ...Object.values(error.fields ?? {})].join(" ")}</Notice> : null}
+      {search.isPending ? <Loading /> : null}
+      {answer && answer.total === 0 ? (
+        <CasebookEmptyState query={query} filtered={active > 0} onClearFilters={() => setFilters(NO_FILTERS)} onClearWords={() => setText("")} />
+      ) : null}
+      {answer && answer.items.length ? (
+        wide ? (
+          <CasebookResultTable hits={answer.items} sort={answer.sort} onSort={setSort} />
+        ) : (
+          answer.items.map((hit) => <CasebookResultCard key={hit.id} hit={hit} />)
+        )
+      ) : null}
+      {answer && answer.total > PAGE_SIZE ? (
+        <Pager page={page} pageSize={PAGE_SIZE} total={answer.total} onPage={(n) => setPaging({ for: key, page: n })} />
+      ) : null}
+    </View>
+  );
+
   return (
     <Screen wide={wide}>
       <Heading>Casebook</Heading>
@@ -54,37 +81,33 @@ export default function CasebookScreen() {
             <Text style={styles.toggleText}>Clear filters</Text>
           </Pressable>
         ) : null}
-        {answer ? <Text style={styles.count} testID="casebook-total">{answer.total === 1 ? "1 case" : `${answer.total.toLocaleString("en")} cases`}</Text> : null}
+        {answer ? <Text style={styles.count} testID="casebook-total">{casesText(answer.total)}</Text> : null}
       </View>
-      {showFilters ? (
-        <CasebookFilterChips filters={filters} onChange={setFilters} facets={answer?.facets} people={members.data ?? []} />
-      ) : null}
-      {answer && answer.total > 1 ? (
-        <ChoiceChips label="Order" options={order} value={answer.sort} onChange={(s) => setSort(s as SearchSort)} />
-      ) : null}
-      {error ? (
-        <Notice tone="error">{[error.message, ...Object.values(error.fields ?? {})].join(" ")}</Notice>
-      ) : null}
-      {search.isPending ? <Loading /> : null}
-      {answer && answer.total === 0 ? (
-        <CasebookEmptyState query={query} filtered={active > 0}
-          onClearFilters={() => setFilters(NO_FILTERS)} onClearWords={() => setText("")} />
-      ) : null}
-      {answer && answer.items.length ? (
-        wide ? (
-          <CasebookResultTable hits={answer.items} sort={answer.sort} onSort={setSort} />
-        ) : (
-          answer.items.map((hit) => <CasebookResultCard key={hit.id} hit={hit} />)
-        )
-      ) : null}
-      {answer && answer.total > PAGE_SIZE ? <Pager page={page} pageSize={PAGE_SIZE} total={answer.total} onPage={(p) => setPaging({ for: key, page: p })} /> : null}
+      {wide ? (
+        <View style={styles.split}>
+          {filterPanel ? <View style={styles.side}>{filterPanel}</View> : null}
+          {results}
+        </View>
+      ) : (
+        <>
+          {filterPanel}
+          {/* On a phone the chips push the results down: one tap closes them and shows what is left. */}
+          {filterPanel && answer ? <Button kind="plain" label={`Show ${casesText(answer.total)}`} onPress={() => setShowFilters(false)} /> : null}
+          {results}
+        </>
+      )}
     </Screen>
   );
 }
+
+const casesText = (n: number) => (n === 0 ? "no cases" : n === 1 ? "1 case" : `${n.toLocaleString("en")} cases`);
 
 const styles = StyleSheet.create({
   bar: { flexDirection: "row", alignItems: "center", flexWrap: "wrap", gap: space.md },
   toggle: { minHeight: 40, justifyContent: "center" },
   toggleText: { fontSize: 15, fontWeight: "600", color: colors.steel, textDecorationLine: "underline" },
   count: { marginLeft: "auto", fontSize: 14, color: colors.muted },
+  split: { flexDirection: "row", alignItems: "flex-start", gap: space.xl },
+  side: { width: 280 },
+  results: { flex: 1, gap: space.md },
 });

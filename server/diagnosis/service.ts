@@ -12,11 +12,10 @@ import { marksOf } from "../marks/service";
 import { getMelt } from "../melts/service";
 import { iso, personRef } from "../notebook/shared";
 import { caseFromCasting } from "./stored-case";
-// Issue 6 (mentors): the shop's own rule set and learned weights; see server/rulebook/context.ts.
 import { shopDiagnosis } from "../rulebook/context";
 
 /**
- * Issue 6: every diagnosis uses the shop's rule set (built-ins + its published rules − built-ins it
+ * Every diagnosis uses the shop's rule set (built-ins + its published rules − built-ins it
  * switched off, via ruleSetFor), weights tuned by its confirmed cases, and gives each cause its record
  * here ("right in 7 of 9 confirmed cases"). All of that lives in server/rulebook/context.ts.
  */
@@ -25,7 +24,7 @@ import { shopDiagnosis } from "../rulebook/context";
 export async function diagnoseCase(shopId: string, body: unknown): Promise<DiagnosisResult> {
   const c = parseOr400(caseSchema, body);
   const alloy = await requireAlloy(shopId, c.alloy);
-  const shop = await shopDiagnosis(shopId); // issue 6
+  const shop = await shopDiagnosis(shopId);
   return shop.withRecords(await diagnose(c, { alloy: toAlloySpec(alloy), ruleSet: shop.ruleSet, weightFactor: shop.weightFactor }));
 }
 
@@ -43,7 +42,7 @@ export async function diagnoseCasting(m: ShopMember, castingId: number): Promise
   // The melt points at its alloy row: use it, not the name, so a shop alloy is read exactly.
   const [{ alloy }] = await db.select({ alloy: alloys }).from(melts)
     .innerJoin(alloys, eq(alloys.id, melts.alloyId)).where(eq(melts.id, casting.meltId));
-  const shop = await shopDiagnosis(m.shopId); // issue 6
+  const shop = await shopDiagnosis(m.shopId);
   const rs = shop.ruleSet;
   const result = shop.withRecords(await diagnose(c, { alloy: toAlloySpec(alloy), ruleSet: rs, weightFactor: shop.weightFactor }));
   const [row] = await db.insert(diagnosisSnapshots).values({

@@ -7,7 +7,8 @@ import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
 import { HttpError } from "../http/errors";
 import { causesOf } from "../rulebook/context";
 import { alloyKey, defectBit } from "./case-doc";
-import { dayNumber, OUTCOME_CODES, type Names, type ShopIndex } from "./shop-index";
+import { dayNumber, OUTCOME_CODES, type Names } from "./names";
+import type { ShopIndex } from "./shop-index";
 
 /**
  * The exact filters, read from the index's columns by slot. The five with chips (defect, alloy,

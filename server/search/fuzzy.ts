@@ -6,10 +6,12 @@ import { MAX_TERM_LENGTH, substringDistance, termMask } from "./edit-distance";
  * The casebook's fuzzy ranking: Fuse.js token search (every query word must match somewhere in a
  * case, rarer words count more), scored exactly as `new Fuse(cases, FUSE_OPTIONS).search(q)`
  * scores it, but computed once per distinct word or phrase of the shop instead of once per case.
- * Each field is cut into units (the whole text, its "; " phrases, or its words); Fuse matches a
- * query word anywhere in the text, we match it within a unit. The two agree except where Fuse's
- * best match straddles a unit border ("coldshut" across "cold shut" in a note), which can only
- * lower a case's rank here. tests/rules/search-fuzzy.test.ts compares both on random casebooks.
+ * Each field is cut into units: the whole text, its "; " phrases, or its words plus each pair of
+ * neighbouring words. Fuse matches a query word anywhere in the text, we match it within a unit;
+ * since a pair holds any match across one space ("m s" is "mis" with one slip, as Fuse counts
+ * it), the two differ only where Fuse's best match crosses two spaces or a "; " (two slips for
+ * the gaps alone), and then a case can only rank lower here. tests/rules/search-fuzzy.test.ts
+ * compares both on random casebooks.
  */
 export const SEARCH_KEYS = ["part", "defects", "causes", "conditions", "notes", "comments"] as const;
 export type SearchKey = (typeof SEARCH_KEYS)[number];
@@ -22,6 +24,21 @@ const SEPARATORS = /[\t\n\v\f\r \u00a0]+/;
 const UNIT_BORDERS: Record<SearchKey, RegExp | null> = {
   part: null, conditions: null, defects: /; /, causes: /; /, notes: SEPARATORS, comments: SEPARATORS,
 };
+const WORDS_AND_GAPS = /([\t\n\v\f\r \u00a0]+)/;
+
+/** A field's units: its words and each pair of neighbours with the gap between them, or its phrases. */
+function unitsOfText(lower: string, border: RegExp | null): string[] {
+  if (!border) return [lower];
+  if (border !== SEPARATORS) return lower.split(border).filter(Boolean);
+  const parts = lower.split(WORDS_AND_GAPS);
+  const out: string[] = [];
+  for (let i = 0; i < parts.length; i += 2) {
+    if (!parts[i]) continue;
+    out.push(parts[i]);
+    if (parts[i + 2]) out.push(parts[i] + parts[i + 1] + parts[i + 2]);
+  }
+  return out;
+}
 /** 0.34 lets a six-letter word carry two slips ("misrnu" -> misrun), a three-letter one a single slip. */
 const THRESHOLD = 0.34;
 
@@ -91,8 +108,7 @@ export class FuzzyIndex {
       if (!text.trim()) return; // Fuse skips blank values
       head[1 + k] = wordCount(text);
       const lower = text.toLowerCase();
-      const border = UNIT_BORDERS[key];
-      const pieces = [...new Set(border ? lower.split(border).filter(Boolean) : [lower])];
+      const pieces = [...new Set(unitsOfText(lower, UNIT_BORDERS[key]))];
       if (pieces.length === 1 && pieces[0] === lower) head[0] |= 1 << k;
       for (const p of pieces) units.push(this.intern(p));
       this.count(lower, 1);

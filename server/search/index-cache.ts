@@ -41,10 +41,10 @@ class Entry {
     if (!index || Date.now() - this.checkedAt > CHANGE_LOG_KEEP_MS / 2) return this.rebuild();
     const { xmin, changes } = await changesSince(this.shopId, this.xmin);
     const ids = [...new Set(changes.filter((c) => !this.seen.has(c.id)).map((c) => c.castingId))];
-    if (ids.length > Math.max(PATCH_MAX, index.cases.length / 20)) return this.rebuild();
+    if (ids.length > Math.max(PATCH_MAX, index.size / 20)) return this.rebuild();
     if (ids.length) index.replace(ids, (await loadCases(this.shopId, ids)).docs);
     // Slots of changed cases stay empty until compacted; compacting needs no database.
-    if (index.dead > Math.max(1000, index.cases.length / 4)) this.index = new ShopIndex(index.cases);
+    if (index.dead > Math.max(1000, index.size / 4)) this.index = new ShopIndex(index.live());
     this.xmin = xmin;
     this.seen = new Set(changes.map((c) => c.id));
     this.checkedAt = Date.now();

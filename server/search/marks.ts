@@ -11,10 +11,30 @@ type Range = readonly [number, number];
 const SNIPPET_CHARS = 180;
 const LONG: ReadonlySet<MarkedField> = new Set(["notes", "comments"]);
 
+const WORD_CHAR = /[\p{L}\p{N}]/u;
+/**
+ * Fuse marks the letters it matched, which for a slip can be scattered ("minu" and "s" of
+ * "minutes"); a person reads words, so each mark grows to the whole word it touches.
+ */
+export function wholeWords(text: string, ranges: readonly Range[]): Range[] {
+  const grown = ranges.map(([s, e]) => {
+    while (s > 0 && WORD_CHAR.test(text[s - 1]) && WORD_CHAR.test(text[s])) s--;
+    while (e < text.length - 1 && WORD_CHAR.test(text[e + 1]) && WORD_CHAR.test(text[e])) e++;
+    return [s, e] as const;
+  });
+  const out: [number, number][] = [];
+  for (const [s, e] of grown.sort((a, b) => a[0] - b[0])) {
+    const last = out[out.length - 1];
+    if (last && s <= last[1] + 1) last[1] = Math.max(last[1], e);
+    else out.push([s, e]);
+  }
+  return out;
+}
+
 export function markRuns(text: string, ranges: readonly Range[]): Marked {
   const out: Marked = [];
   let at = 0;
-  for (const [start, end] of [...ranges].sort((a, b) => a[0] - b[0])) {
+  for (const [start, end] of wholeWords(text, ranges)) {
     if (start < at) continue;
     if (start > at) out.push({ text: text.slice(at, start), hit: false });
     out.push({ text: text.slice(start, end + 1), hit: true });
@@ -26,6 +46,7 @@ export function markRuns(text: string, ranges: readonly Range[]): Marked {
 
 export function snippet(text: string, ranges: readonly Range[]): Marked {
   if (text.length <= SNIPPET_CHARS) return markRuns(text, ranges);
+  ranges = wholeWords(text, ranges);
   const first = Math.min(...ranges.map((r) => r[0]));
   let start = Math.max(0, first - 50);
   if (start > 0) start = text.lastIndexOf(" ", start) + 1;

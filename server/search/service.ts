@@ -2,10 +2,12 @@ import type { CaseHit, CaseSummary, SearchAnswer, SearchFacets, SearchParams, Se
 import { reasonText } from "../../lib/search-schemas";
 import { DEFECT_TYPES, PROCESSES } from "../../rules/case";
 import { notFound } from "../http/errors";
+import { bestFirst } from "./best-first";
 import { checkNames, namesOf, slotFilter } from "./filters";
 import { shopIndex } from "./index-cache";
 import { markPage } from "./marks";
-import { OUTCOME_CODES, type IndexedCase, type ShopIndex } from "./shop-index";
+import { OUTCOME_CODES } from "./names";
+import type { IndexedCase, ShopIndex } from "./shop-index";
 import { similarInIndex } from "./similar-scan";
 
 /**
@@ -21,12 +23,12 @@ export async function searchCases(shopId: string, p: SearchParams): Promise<Sear
   const sort: SearchSort = prepared ? (p.sort ?? "relevance") : p.sort === "date-asc" ? "date-asc" : "date-desc";
   const filter = slotFilter(index, p);
   const counts = new Counts(index);
-  const hit = prepared ? termHits(index, prepared.unitMask) : null;
+  const work = index.scratch();
+  const hit = prepared ? termHits(index, prepared.unitMask, work.hit) : null;
   const full = prepared?.full ?? 0;
   const { order, compiled, start } = index;
-  // Typed scratch arrays: a scan of 100,000 must not leave 100,000 boxed numbers for the GC.
-  const found = new Int32Array(order.length);
-  const scores = prepared ? new Float64Array(order.length) : null;
+  const found = work.found;
+  const scores = prepared ? work.scores : null;
   let total = 0;
   for (let pos = 0; pos < order.length; pos++) {
     const s = order[pos];
@@ -45,22 +47,21 @@ export async function searchCases(shopId: string, p: SearchParams): Promise<Sear
   const upto = Math.min(total, from + p.pageSize);
   let slice: number[];
   if (sort === "relevance" && scores) {
-    // `order` is newest first, so position breaks ties as Fuse's own order would.
-    const ranks = new Int32Array(total).map((_, i) => i).sort((a, b) => scores[a] - scores[b] || found[a] - found[b]);
-    slice = Array.from(ranks.subarray(from, upto));
+    slice = bestFirst(scores.subarray(0, total), upto).slice(from);
   } else {
     slice = Array.from({ length: Math.max(0, upto - from) }, (_, k) => (sort === "date-asc" ? total - 1 - from - k : from + k));
   }
-  const page = slice.map((i) => index.cases[found[i]]);
+  const page = slice.map((i) => index.slots[order[found[i]]]!);
+  const pageScores = slice.map((i) => (scores && sort === "relevance" ? scores[i] : null)); // before the work arrays are reused
   const names = await namesOf(page.map((c) => c.createdBy));
   const marked = markPage(page.map((c) => c.fields), prepared ? p.q : "");
-  const items: CaseHit[] = page.map((c, i) => ({ ...summary(c, names), score: scores && sort === "relevance" ? scores[slice[i]] : null, marked: marked[i] }));
+  const items: CaseHit[] = page.map((c, i) => ({ ...summary(c, names), score: pageScores[i], marked: marked[i] }));
   return { items, total, page: p.page, pageSize: p.pageSize, sort, facets: counts.facets() };
 }
 
 /** Per slot, which query words some unit of the case matches (bit i = word i). */
-function termHits(index: ShopIndex, unitMask: Int32Array): Int32Array {
-  const hit = new Int32Array(index.slots.length);
+function termHits(index: ShopIndex, unitMask: Int32Array, hit: Int32Array): Int32Array {
+  hit.fill(0);
   for (let u = 0; u < unitMask.length; u++) {
     const m = unitMask[u];
     const list = m ? index.postings[u] : undefined;

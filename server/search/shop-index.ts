@@ -1,6 +1,7 @@
 import { PROCESSES } from "../../rules/case";
 import { byDateDesc, type CaseDoc } from "./case-doc";
 import { FuzzyIndex, unitsOf } from "./fuzzy";
+import { dayNumber, Names, OUTCOME_CODES } from "./names";
 import { teaches } from "./similarity";
 
 /**
@@ -17,28 +18,6 @@ export type IndexedCase = CaseDoc;
 class CaseRecord {}
 const indexed = (doc: CaseDoc): IndexedCase => Object.assign(new CaseRecord(), doc);
 
-export const OUTCOME_CODES = ["", "good", "rework", "scrap"] as const;
-export const dayNumber = (isoDay: string) => Math.floor(Date.parse(`${isoDay}T00:00:00Z`) / 86_400_000);
-
-/** Interns names as small numbers (0 is "none"), each with the label first seen for it. */
-export class Names {
-  readonly list: string[] = [""];
-  readonly labels: string[] = [""];
-  private ids = new Map<string, number>([["", 0]]);
-  id(name: string | null | undefined, label?: string): number {
-    if (!name) return 0;
-    let id = this.ids.get(name);
-    if (id === undefined) {
-      this.ids.set(name, (id = this.list.push(name) - 1));
-      this.labels[id] = label ?? name;
-    }
-    return id;
-  }
-  find(name: string): number | undefined {
-    return this.ids.get(name);
-  }
-}
-
 export class ShopIndex {
   readonly fuzzy = new FuzzyIndex();
   readonly alloys = new Names();
@@ -49,7 +28,6 @@ export class ShopIndex {
   /** By slot; a slot whose case changed or went is left empty until the next rebuild. */
   slots: (IndexedCase | undefined)[] = [];
   order = new Int32Array(0);
-  cases: IndexedCase[] = [];
   dead = 0;
   defects = new Int32Array(0);
   day = new Int32Array(0);
@@ -72,12 +50,36 @@ export class ShopIndex {
   private compiledLength = 0;
   private bySlotOf = new Map<number, number>();
 
+  private scratchSpace = { hit: new Int32Array(0), found: new Int32Array(0), scores: new Float64Array(0) };
+  /**
+   * Work arrays for one scan, reused by the next (a scan runs without awaiting, so no two overlap):
+   * allocating 1.6 MB per search at 100,000 cases showed up as garbage-collection pauses.
+   */
+  scratch() {
+    const n = this.slots.length;
+    if (this.scratchSpace.hit.length < n) {
+      const size = Math.ceil(n * 1.25);
+      this.scratchSpace = { hit: new Int32Array(size), found: new Int32Array(size), scores: new Float64Array(size) };
+    }
+    return this.scratchSpace;
+  }
+
   slotOf(castingId: number): number | undefined {
     return this.bySlotOf.get(castingId);
   }
 
+  /** Slots are given newest pour first, so the scan in date order reads memory front to back. */
   constructor(docs: CaseDoc[]) {
-    this.replace([], docs);
+    this.replace([], [...docs].sort(byDateDesc));
+  }
+
+  get size() {
+    return this.order.length;
+  }
+
+  /** The cases, newest pour first (a new array: for compacting and the bench, not the scan). */
+  live(): IndexedCase[] {
+    return Array.from(this.order, (s) => this.slots[s]!);
   }
 
   get(castingId: number): IndexedCase | undefined {
@@ -121,15 +123,18 @@ export class ShopIndex {
     const bySlot = (a: number, b: number) => byDateDesc(this.slots[a]!, this.slots[b]!);
     added.sort(bySlot);
     // Merge the new slots into the order: re-sorting 100,000 for a handful would waste time.
-    const kept = ids.length ? Array.from(this.order).filter((s) => this.slots[s]) : Array.from(this.order);
+    let kept = this.order;
+    if (ids.length) {
+      const live = new Int32Array(kept.length);
+      let n = 0;
+      for (const s of kept) if (this.slots[s]) live[n++] = s;
+      kept = live.subarray(0, n);
+    }
     const merged = new Int32Array(kept.length + added.length);
     for (let i = 0, j = 0, k = 0; k < merged.length; k++) {
       merged[k] = j >= added.length || (i < kept.length && bySlot(kept[i], added[j]) <= 0) ? kept[i++] : added[j++];
     }
     this.order = merged;
-    const cases: IndexedCase[] = [];
-    for (const s of merged) cases.push(this.slots[s]!); // push: a presized array of 100,000 is slow in V8
-    this.cases = cases;
   }
 
   private append(record: Int32Array): number {

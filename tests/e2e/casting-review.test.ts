@@ -31,6 +31,8 @@ describe("a casting's review and thread", () => {
     const url = `${baseUrl}/melts/${target.meltId}/castings/${target.id}`;
 
     await caster.goto(url);
+    // The demo casebook has other cases with marks, so the page offers the most similar of them.
+    await expect.poll(() => caster.getByTestId("similar-cases").count(), { timeout: 10000 }).toBe(1);
     await caster.getByLabel("Add a note or question").fill("Pinholes only on the cope side");
     await caster.getByRole("button", { name: "Post" }).click();
     await expect.poll(() => caster.getByText("Pinholes only on the cope side").count(), { timeout: 10000 }).toBe(1);

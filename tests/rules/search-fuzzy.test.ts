@@ -2,6 +2,7 @@ import Fuse from "fuse.js";
 import { describe, expect, it } from "vitest";
 import { substringDistance, termMask } from "../../server/search/edit-distance";
 import { FUSE_OPTIONS, FuzzyIndex, type SearchFields } from "../../server/search/fuzzy";
+import { bestFirst } from "../../server/search/best-first";
 
 /** Seeded (mulberry32) so a failure can be replayed. */
 function rng(seed: number) {
@@ -39,8 +40,8 @@ function typo(word: string, r: () => number): string {
 }
 
 /**
- * `gap` separates words in notes and comments. Eleven spaces cost more slips than any term may
- * carry, so no match can straddle two words and the two rankings must agree exactly.
+ * `gap` separates words in notes and comments and the phrases of defects: eleven spaces cost more
+ * slips than any term may carry, so no match can cross a gap and the rankings must agree exactly.
  */
 function casebook(seed: number, size: number, gap = " ".repeat(11)): SearchFields[] {
   const r = rng(seed);
@@ -128,5 +129,17 @@ describe("FuzzyIndex ranks as plain Fuse does", () => {
     const prepared = index.prepare(query)!;
     const ours = compiled.slice(0, 100).map((c, i) => [i, index.score(prepared, c)]).filter(([, s]) => s >= 0);
     expect(ours.sort((a, b) => a[1] - b[1] || a[0] - b[0])).toEqual(fuse.search(query).map((x) => [x.refIndex, x.score]));
+  });
+});
+
+describe("the relevance page", () => {
+  it("picks the same first k as a full sort, ties in scan order", () => {
+    const r = rng(5);
+    for (let n = 0; n < 300; n++) {
+      const scores = Float64Array.from({ length: Math.floor(r() * 200) }, () => Math.floor(r() * 20) / 20);
+      const k = Math.floor(r() * 60);
+      const full = Array.from(scores.keys()).sort((a, b) => scores[a] - scores[b] || a - b).slice(0, k);
+      expect(bestFirst(scores, k)).toEqual(full);
+    }
   });
 });

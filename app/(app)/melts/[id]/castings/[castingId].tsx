@@ -9,6 +9,7 @@ import { Inspection } from "@/components/inspection";
 import { LoadFailed, Loading } from "@/components/query-state";
 import { ReviewPanel } from "@/components/review-panel";
 import { Screen } from "@/components/screen";
+import { SimilarCases } from "@/components/similar-cases";
 import { useCasting } from "@/hooks/use-castings";
 import { useIsWide } from "@/hooks/use-layout";
 import { useMe } from "@/hooks/use-me";
@@ -19,7 +20,7 @@ import type { CauseWithRecord } from "@/lib/review-schemas";
 
 /**
  * One casting: how it came out, its photos with the defects marked on them, the likely causes, the
- * mentor's review, the fix tried and the next casting, and the thread of notes.
+ * mentor's review, the fix tried and the next casting, the most similar past cases, and the thread of notes.
  */
 export default function CastingScreen() {
   const params = useLocalSearchParams<{ id: string; castingId: string }>();
@@ -42,6 +43,7 @@ export default function CastingScreen() {
       <DiagnosisView casting={c} units={units} mayRun={mayWrite} />
       <ReviewPanel castingId={c.id} causes={causes} />
       <FollowupPanel castingId={c.id} suggestions={causes[0]?.fixes} />
+      <SimilarCases castingId={c.id} />
       <CommentThread castingId={c.id} comments={c.comments} mayComment={roleCan(role, { casebook: ["comment"] })} />
     </Screen>
   );
