@@ -3,13 +3,15 @@ import { Pressable, StyleSheet, Text, View } from "react-native";
 import { CauseRecordLine } from "@/components/rule-record";
 import { ScoreBar } from "@/components/score-bar";
 import { colors, radius, space } from "@/constants/theme";
+import { reasonInUnits } from "@/lib/reason-text";
 import type { CauseWithRecord } from "@/lib/review-schemas";
+import type { Units } from "@/lib/units";
 
 /** A ranked cause; `record` says how often it was right in this shop's confirmed cases. */
 type Cause = CauseWithRecord;
 
 /** One likely cause: how strongly it is pointed at, the fixes to try (tick them off), and why. */
-export function CauseCard({ cause, rank }: { cause: Cause; rank: number }) {
+export function CauseCard({ cause, rank, units }: { cause: Cause; rank: number; units: Units }) {
   const [done, setDone] = useState<ReadonlySet<number>>(new Set());
   const [why, setWhy] = useState(false);
   const toggle = (i: number) => setDone((d) => { const n = new Set(d); if (n.has(i)) n.delete(i); else n.add(i); return n; });
@@ -31,7 +33,10 @@ export function CauseCard({ cause, rank }: { cause: Cause; rank: number }) {
       </Pressable>
       {why ? (
         <View style={styles.why}>
-          {cause.because.map((b) => <Text key={b} style={styles.reason}>• {b}</Text>)}
+          {/* Older saved results carry only the SI sentences. */}
+          {(cause.reasons ? cause.reasons.map((r) => reasonInUnits(r, units)) : cause.because).map((b) => (
+            <Text key={b} style={styles.reason}>• {b}</Text>
+          ))}
           <Text style={styles.sources}>Sources: {cause.sources.join("; ")}</Text>
         </View>
       ) : null}

@@ -38,7 +38,7 @@ export function DiagnosisView({ casting, units, mayRun }: { casting: CastingDeta
           </Text>
           {snapshot.result.causes.length === 0 ? (
             <Notice>No rule fits these marks and conditions. Logging more of the melt and casting (below) may help; a mentor can also add what the shop has learned.</Notice>
-          ) : snapshot.result.causes.map((c, i) => <CauseCard key={c.id} cause={c} rank={i + 1} />)}
+          ) : snapshot.result.causes.map((c, i) => <CauseCard key={c.id} cause={c} rank={i + 1} units={units} />)}
           <DiagnosisExtras result={snapshot.result} units={units} />
         </>
       ) : !noMarks ? <Text style={styles.when}>Not worked out yet for this casting.</Text> : null}

@@ -3,7 +3,20 @@ import { FACTS, factSpec, type Facts } from "./fact-catalog";
 import { roundFact } from "./facts";
 import { conditionLeaves, evaluateLeaf, type Condition, type KbCause, type KbRule } from "./kb-schema";
 
-export type RankedCause = { id: string; title: string; score: number; fixes: string[]; because: string[]; sources: string[] };
+/**
+ * A reason as data as well as words: the rule's sentence template and the (rounded, SI) values of the
+ * facts it quotes, so the app can say it again in a person's own units. `because` is the SI text.
+ */
+export type Reason = { template: string; against: boolean; values: Record<string, string | number | boolean | null> };
+export type RankedCause = {
+  id: string;
+  title: string;
+  score: number;
+  fixes: string[];
+  because: string[];
+  reasons: Reason[];
+  sources: string[];
+};
 export type MissingInput = { fact: string; label: string; note: string };
 export type DiagnosisResult = {
   causes: RankedCause[];
@@ -26,6 +39,12 @@ const display = (name: string, facts: Facts) => {
 };
 export const fillBecause = (template: string, facts: Facts) =>
   template.replace(/\{([^}]+)\}/g, (_, name: string) => display(name, facts));
+
+const reasonOf = (template: string, against: boolean, facts: Facts): Reason => {
+  const values: Reason["values"] = {};
+  for (const [, name] of template.matchAll(/\{([^}]+)\}/g)) values[name] = roundFact(name, facts[name]) ?? null;
+  return { template, against, values };
+};
 
 /**
  * Per cause: noisy-OR of the supporting rules (weight × shop factor × severity factor), times
@@ -55,6 +74,7 @@ export function rankCauses(hits: Hit[], causes: Map<string, KbCause>, facts: Fac
         ...pro.map((h) => fillBecause(h.rule.because, facts)),
         ...con.map((h) => `Against: ${fillBecause(h.rule.because, facts)}`),
       ],
+      reasons: [...pro.map((h) => reasonOf(h.rule.because, false, facts)), ...con.map((h) => reasonOf(h.rule.because, true, facts))],
       sources: [...new Set([...pro, ...con].flatMap((h) => h.rule.sources))],
     });
   }
