@@ -208,6 +208,30 @@ describe("the notebook at wide size (1280 px)", () => {
     await page.getByText("Castings from this melt").waitFor({ state: "visible", timeout: 15000 });
     await seen(page, "1373 °F");
     await shot(page, "wide-melt-in-fahrenheit");
+    // The reasons behind a cause follow the person's units too: find a demo casting whose causes quote
+    // a temperature, and read them on its page.
+    type Snapshot = { result: { causes: { reasons: { template: string }[] }[] } };
+    const quotesTemperature = (s: Snapshot) =>
+      s.result.causes.some((c) => c.reasons.some((r) => /\{[a-zA-Z]*C\} °C/.test(r.template)));
+    const list = await (await page.request.get(`${baseUrl}/api/castings?pageSize=100`)).json();
+    let target: { id: number; meltId: number } | undefined;
+    for (const c of list.items.filter((x: { markCount: number }) => x.markCount > 0)) {
+      const snapshot: Snapshot = await (await page.request.post(`${baseUrl}/api/castings/${c.id}/diagnosis`)).json();
+      if (quotesTemperature(snapshot)) {
+        target = c;
+        break;
+      }
+    }
+    expect(target).toBeDefined();
+    await page.goto(`${baseUrl}/melts/${target!.meltId}/castings/${target!.id}`);
+    const whyButtons = page.getByRole("button", { name: /Why this cause/ });
+    await expect.poll(() => whyButtons.count(), { timeout: 10000 }).toBeGreaterThan(0);
+    while ((await whyButtons.count()) > 0) await whyButtons.first().click();
+    // Only the reasons inside the cause cards; fixes and cautions are fixed texts written in SI.
+    const reasons = () =>
+      page.locator('[data-testid^="cause-"]').getByText(/^• /).allTextContents().then((t) => t.join(" "));
+    await expect.poll(reasons, { timeout: 10000 }).toMatch(/\d °F/);
+    expect(await reasons()).not.toMatch(/\d °C/);
     await page.getByRole("tab", { name: "More" }).click();
     await page.getByRole("radio", { name: "°C" }).click();
     await expect.poll(() => page.getByRole("radio", { name: "°C" }).getAttribute("aria-checked")).toBe("true");
