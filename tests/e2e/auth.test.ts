@@ -1,21 +1,15 @@
-import type { Browser, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import type { Page } from "playwright-core";
+import { describe, expect, inject, it } from "vitest";
 import { DEMO_PEOPLE } from "../../db/demo-people";
-import { launchBrowser, PHONE, shot, signIn, WIDE } from "./browser";
+import { PHONE, shot, signIn, useBrowser, WIDE } from "./browser";
 
 const baseUrl = inject("baseUrl");
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = useBrowser();
 
 const demo = (role: string) => DEMO_PEOPLE.find((p) => p.role === role)!;
 
 async function newPage(size: { width: number; height: number }): Promise<Page> {
-  const context = await browser.newContext({ viewport: size });
+  const context = await browser().newContext({ viewport: size });
   return context.newPage();
 }
 

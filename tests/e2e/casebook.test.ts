@@ -1,17 +1,11 @@
-import type { Browser, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import type { Page } from "playwright-core";
+import { describe, expect, inject, it } from "vitest";
 import { DEMO_PEOPLE } from "../../db/demo-people";
-import { launchBrowser, PHONE, shot, signIn, WIDE } from "./browser";
+import { PHONE, shot, signIn, useBrowser, WIDE } from "./browser";
 
 /** The casebook on the demo shop: a misspelled defect still finds its cases, a chip narrows them. */
 const baseUrl = inject("baseUrl");
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = useBrowser();
 
 const caster = DEMO_PEOPLE.find((p) => p.role === "caster")!;
 const total = async (page: Page) => Number(((await page.getByTestId("casebook-total").textContent()) ?? "").replace(/\D/g, ""));
@@ -19,7 +13,7 @@ const total = async (page: Page) => Number(((await page.getByTestId("casebook-to
 for (const [sizeName, size] of [["phone", PHONE], ["wide", WIDE]] as const) {
   describe(`casebook at ${sizeName} size (${size.width} px)`, () => {
     it("finds misruns from a misspelling, marks the word, and narrows with a process chip", async () => {
-      const page = await (await browser.newContext({ viewport: size })).newPage();
+      const page = await (await browser().newContext({ viewport: size })).newPage();
       await signIn(page, baseUrl, caster.email, caster.password);
       await expect.poll(() => page.getByRole("searchbox", { name: "Search the casebook" }).count(), { timeout: 15000 }).toBe(1);
       await expect.poll(() => total(page), { timeout: 10000 }).toBeGreaterThan(10);

@@ -1,25 +1,9 @@
-import type { Browser, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import { DEMO_PEOPLE } from "../../db/demo-people";
-import { launchBrowser, PHONE, shot, signIn, WIDE } from "./browser";
+import { describe, expect, inject, it } from "vitest";
+import { PHONE, shot, signedInAs, useBrowser, WIDE } from "./browser";
 
 const baseUrl = inject("baseUrl");
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
-const person = (role: string) => DEMO_PEOPLE.find((p) => p.role === role)!;
-
-async function signedIn(role: string, size: { width: number; height: number }): Promise<Page> {
-  const page = await (await browser.newContext({ viewport: size })).newPage();
-  await signIn(page, baseUrl, person(role).email, person(role).password);
-  await expect.poll(() => page.getByTestId("active-role").textContent(), { timeout: 15000 }).toBe(role);
-  return page;
-}
+const browser = useBrowser();
+const signedIn = (role: string, size: { width: number; height: number }) => signedInAs(browser(), baseUrl, size, role);
 
 describe("a casting's review and thread", () => {
   it("a caster writes a note and asks for review; a mentor confirms the cause; the caster sees it", async () => {

@@ -1,19 +1,17 @@
 import { mkdtempSync, readFileSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import type { Browser, Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import sharp from "sharp";
-import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import { DEMO_PEOPLE } from "../../db/demo-people";
-import { launchBrowser, PHONE, shot, signIn, WIDE } from "./browser";
+import { beforeAll, describe, expect, inject, it } from "vitest";
+import { longShot, PHONE, seen, shot, signedInAs, useBrowser, WIDE } from "./browser";
 
 const baseUrl = inject("baseUrl");
 const files = mkdtempSync(join(tmpdir(), "casebook-notebook-e2e-"));
-let browser: Browser;
+const browser = useBrowser();
 let photoPath: string;
 
 beforeAll(async () => {
-  browser = await launchBrowser();
   // A small JPEG drawn here: a grey plate with a darker patch, like a casting on the bench.
   const plate = Buffer.from(
     `<svg xmlns="http://www.w3.org/2000/svg" width="640" height="480"><rect width="640" height="480" fill="#c9b58f"/>` +
@@ -22,31 +20,7 @@ beforeAll(async () => {
   photoPath = join(files, "casting.jpg");
   writeFileSync(photoPath, await sharp(plate).jpeg({ quality: 80 }).toBuffer());
 });
-afterAll(async () => {
-  await browser?.close();
-});
-
-const who = (role: string) => DEMO_PEOPLE.find((p) => p.role === role)!;
-async function signedIn(size: { width: number; height: number }, role = "caster"): Promise<Page> {
-  const page = await (await browser.newContext({ viewport: size })).newPage();
-  await signIn(page, baseUrl, who(role).email, who(role).password);
-  await expect.poll(() => page.getByTestId("active-role").count(), { timeout: 15000 }).toBe(1);
-  return page;
-}
-const seen = (page: Page, text: string | RegExp) => expect.poll(() => page.getByText(text).count(), { timeout: 15000 }).toBeGreaterThan(0);
-
-/**
- * The app scrolls inside its own view, so a full-page picture would show one screen only: stretch
- * the window to the content's height for the picture (same width, so the same layout), then put it back.
- */
-async function longShot(page: Page, name: string) {
-  const size = page.viewportSize()!;
-  const tallest = await page.evaluate(() => Math.max(...[...document.querySelectorAll("div")].map((d) => d.scrollHeight)));
-  await page.setViewportSize({ width: size.width, height: Math.min(6000, Math.max(size.height, tallest + 140)) });
-  await page.waitForTimeout(300);
-  await shot(page, name);
-  await page.setViewportSize(size);
-}
+const signedIn = (size: { width: number; height: number }, role = "caster") => signedInAs(browser(), baseUrl, size, role);
 
 /** Clicks the photo at fractions of its size, as a person taps a spot. */
 async function tapPhoto(page: Page, fx: number, fy: number) {

@@ -1,35 +1,10 @@
-import type { Browser, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
-import { DEMO_PEOPLE } from "../../db/demo-people";
-import { launchBrowser, PHONE, shot, signIn, WIDE } from "./browser";
+import type { Page } from "playwright-core";
+import { describe, expect, inject, it } from "vitest";
+import { longShot, PHONE, seen, shot, signedInAs, useBrowser, WIDE } from "./browser";
 
 const baseUrl = inject("baseUrl");
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
-
-const who = (role: string) => DEMO_PEOPLE.find((p) => p.role === role)!;
-async function signedIn(size: { width: number; height: number }, role: string): Promise<Page> {
-  const page = await (await browser.newContext({ viewport: size })).newPage();
-  await signIn(page, baseUrl, who(role).email, who(role).password);
-  await expect.poll(() => page.getByTestId("active-role").textContent(), { timeout: 15000 }).toBe(role);
-  return page;
-}
-const seen = (page: Page, text: string | RegExp) => expect.poll(() => page.getByText(text).count(), { timeout: 15000 }).toBeGreaterThan(0);
-
-/** The app scrolls inside its own view: stretch the window to the content for the picture, then put it back. */
-async function longShot(page: Page, name: string) {
-  const size = page.viewportSize()!;
-  const tallest = await page.evaluate(() => Math.max(...[...document.querySelectorAll("div")].map((d) => d.scrollHeight)));
-  await page.setViewportSize({ width: size.width, height: Math.min(6000, Math.max(size.height, tallest + 140)) });
-  await page.waitForTimeout(300);
-  await shot(page, name);
-  await page.setViewportSize(size);
-}
+const browser = useBrowser();
+const signedIn = (size: { width: number; height: number }, role: string) => signedInAs(browser(), baseUrl, size, role);
 
 /** A caster's defect on a part poured through a tall sprue, logged through the API with the caster's session. */
 async function markedCasting(caster: Page, partName: string, defect: string) {
