@@ -8,16 +8,8 @@ import { BUILT_IN_ALLOYS } from "../rules/alloys";
 import { CHARGES, DEFECT_LOCATIONS, DEFECT_TYPES, DEGASSING_METHODS, PROCESSES, type DiagnosisCase } from "../rules/case";
 import { diagnose, engineBuilds } from "../rules/engine";
 import { BUILT_IN_RULE_SET } from "../rules/knowledge-base";
+import { rng } from "./seeded-random";
 
-/** Seeded (mulberry32) so every run times the same cases. */
-function rng(seed: number) {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** Cases shaped like stored castings: a few marks, most fields logged, some left out. */
 function makeCases(count: number, seed = 42): DiagnosisCase[] {

@@ -6,20 +6,14 @@ import {
 import { BUILT_IN_ALLOYS } from "../rules/alloys";
 import { DEFECT_LOCATIONS, DEFECT_TYPES, DEGASSING_METHODS, PROCESSES } from "../rules/case";
 import { BUILT_IN_RULE_SET } from "../rules/knowledge-base";
+import { rng } from "./seeded-random";
+
 
 /**
  * A synthetic casebook for `npm run bench:search`: a shop with a few people, about three castings
  * per melt, marks on most bad castings, notes on half, comments on a fifth, a stored diagnosis on
  * a third, a few confirmations and fixes. Seeded, so every run searches the same cases.
  */
-export function rng(seed: number) {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const PARTS = [
   "Ribbed cover plate", "Impeller", "Pump housing", "Bracket", "Valve body", "Gearbox lid", "Manifold", "Pulley", "Flywheel",

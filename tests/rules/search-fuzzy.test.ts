@@ -3,16 +3,8 @@ import { describe, expect, it } from "vitest";
 import { substringDistance, termMask } from "../../server/search/edit-distance";
 import { FUSE_OPTIONS, FuzzyIndex, type SearchFields } from "../../server/search/fuzzy";
 import { bestFirst } from "../../server/search/best-first";
+import { rng } from "../../scripts/seeded-random";
 
-/** Seeded (mulberry32) so a failure can be replayed. */
-function rng(seed: number) {
-  return () => {
-    seed = (seed + 0x6d2b79f5) | 0;
-    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
-    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** Textbook dynamic programme: the fewest edits from `term` to any substring of `text`. */
 function naiveDistance(term: string, text: string): number {
