@@ -7,13 +7,13 @@ type Props = { label: string; options: readonly Choice[]; value: string | null; 
 /** Pick one of a short list by tapping: quicker than a drop-down on a phone. */
 export function ChoiceChips({ label, options, value, onChange, disabled }: Props) {
   return (
-    <View style={styles.wrap} role="radiogroup" aria-label={label}>
-      <Text style={styles.label}>{label}</Text>
-      <View style={styles.row}>
+    <View style={chipStyles.wrap} role="radiogroup" aria-label={label}>
+      <Text style={chipStyles.label}>{label}</Text>
+      <View style={chipStyles.row}>
         {options.map((o) => (
           <Pressable key={o.value} role="radio" aria-checked={o.value === value} disabled={disabled}
-            onPress={() => onChange(o.value)} style={[styles.chip, o.value === value && styles.on]}>
-            <Text style={[styles.text, o.value === value && styles.textOn]}>{o.label}</Text>
+            onPress={() => onChange(o.value)} style={[chipStyles.chip, o.value === value && chipStyles.on]}>
+            <Text style={[chipStyles.text, o.value === value && chipStyles.textOn]}>{o.label}</Text>
           </Pressable>
         ))}
       </View>
@@ -21,7 +21,8 @@ export function ChoiceChips({ label, options, value, onChange, disabled }: Props
   );
 }
 
-const styles = StyleSheet.create({
+/** The chip look, shared with the many-choice chips (rule-multi-chips.tsx). */
+export const chipStyles = StyleSheet.create({
   wrap: { gap: space.xs },
   label: { fontSize: 14, fontWeight: "600", color: colors.ink },
   row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },

@@ -1,6 +1,6 @@
 import { Pressable, StyleSheet, Text, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
-import type { Choice } from "@/components/choice-chips";
+import { colors } from "@/constants/theme";
+import { chipStyles, type Choice } from "@/components/choice-chips";
 
 type Props = { label: string; hint?: string; options: readonly Choice[]; values: readonly string[]; onChange: (v: string[]) => void; disabled?: boolean };
 
@@ -26,13 +26,4 @@ export function MultiChips({ label, hint, options, values, onChange, disabled }:
   );
 }
 
-const styles = StyleSheet.create({
-  wrap: { gap: space.xs },
-  label: { fontSize: 14, fontWeight: "600", color: colors.ink },
-  hint: { fontSize: 13, color: colors.muted },
-  row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.surface },
-  on: { backgroundColor: colors.steel, borderColor: colors.steel },
-  text: { color: colors.ink, fontSize: 14 },
-  textOn: { color: "#FFFFFF", fontWeight: "600" },
-});
+const styles = { ...chipStyles, ...StyleSheet.create({ hint: { fontSize: 13, color: colors.muted } }) };
