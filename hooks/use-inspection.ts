@@ -1,5 +1,5 @@
 import { useState } from "react";
-import type { MarkDescription } from "@/components/mark-editor";
+import type { MarkDescription } from "@/lib/notebook-schemas";
 import { useCreateMark, useDeleteMark, useUpdateMark } from "@/hooks/use-marks";
 import type { CastingDetail } from "@/lib/notebook-schemas";
 

@@ -109,6 +109,8 @@ export function markConflicts(m: Partial<z.infer<typeof markFields>>): Record<st
 }
 export const markInput = markFields.superRefine((m, ctx) => addConflicts(markConflicts(m), ctx), always);
 export const markPatch = markFields.partial();
+/** What the mark editor returns: the description of a mark, without its place on the photo. */
+export type MarkDescription = Pick<z.infer<typeof markFields>, "type" | "location" | "severity"> & { note: string | null };
 export type MarkInput = z.infer<typeof markInput>;
 
 export const castingFields = z.object({

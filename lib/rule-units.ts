@@ -1,4 +1,4 @@
-import type { FactQuantity } from "../rules/fact-catalog";
+import type { FactQuantity, FactSpec } from "../rules/fact-catalog";
 import { SI_UNIT, type NumberFact, type ValueFormat } from "../rules/rule-words";
 import { fromField, toField, unitLabel, type Quantity, type Units } from "./units";
 
@@ -35,4 +35,10 @@ export function textToSi(spec: NumberFact, text: string, u: Units): number | und
 export const unitsFormat = (u: Units): ValueFormat => (spec, si) => {
   const unit = factUnit(spec, u);
   return `${siToText(spec, Number(si.toFixed(6)), u)}${unit ? ` ${unit}` : ""}`;
+};
+
+/** A fact's label with the unit a person reads it in. */
+export const factLabel = (spec: FactSpec, u: Units) => {
+  const unit = spec.kind === "number" ? factUnit(spec, u) : "";
+  return unit ? `${spec.label} (${unit})` : spec.label;
 };

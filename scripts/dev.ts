@@ -17,7 +17,7 @@ const childEnv = { ...process.env, PORT: apiPort, DEV_WEB_ORIGIN: devWebOrigin, 
 
 const { db, pool } = await import("../db/client");
 const { applyMigrations } = await import("../db/migrate");
-const { seedDemoShop } = await import("../db/seed");
+const { seedDemoShop } = await import("../server/seed/seed");
 await applyMigrations(db);
 await seedDemoShop();
 await pool.end();

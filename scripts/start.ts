@@ -25,8 +25,8 @@ try {
 const { env } = await import("../server/env");
 const { db, pool } = await import("../db/client");
 const { applyMigrations } = await import("../db/migrate");
-const { seedDemoShop } = await import("../db/seed");
-const { DEMO_PEOPLE } = await import("../db/demo-people");
+const { seedDemoShop } = await import("../server/seed/seed");
+const { DEMO_PEOPLE } = await import("../server/seed/demo-people");
 const { listen } = await import("../server/index");
 
 await applyMigrations(db);

@@ -1,9 +1,9 @@
 import { TabList, Tabs, TabSlot, TabTrigger } from "expo-router/ui";
 import { ActivityIndicator, StyleSheet, View } from "react-native";
-import { CreateShopForm } from "@/components/create-shop-form";
-import { NavButton } from "@/components/nav-button";
-import { Notice } from "@/components/notice";
-import { ShopHeader } from "@/components/shop-header";
+import { CreateShopForm } from "@/components/auth/create-shop-form";
+import { NavButton } from "@/components/ui/nav-button";
+import { Notice } from "@/components/ui/notice";
+import { ShopHeader } from "@/components/shops/shop-header";
 import { colors } from "@/constants/theme";
 import { useIsWide } from "@/hooks/use-layout";
 import { useMe } from "@/hooks/use-me";

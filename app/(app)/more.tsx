@@ -1,11 +1,11 @@
 import { ActivityIndicator, StyleSheet, Text, View } from "react-native";
-import { Heading } from "@/components/heading";
-import { Notice } from "@/components/notice";
-import { SafetyCautions } from "@/components/safety-cautions";
-import { Screen } from "@/components/screen";
-import { ShopExport } from "@/components/shop-export";
-import { ShopSettingsForm } from "@/components/shop-settings-form";
-import { UnitsChooser } from "@/components/units-chooser";
+import { Heading } from "@/components/ui/heading";
+import { Notice } from "@/components/ui/notice";
+import { SafetyCautions } from "@/components/diagnosis/safety-cautions";
+import { Screen } from "@/components/ui/screen";
+import { ShopExport } from "@/components/export/shop-export";
+import { ShopSettingsForm } from "@/components/shops/shop-settings-form";
+import { UnitsChooser } from "@/components/people/units-chooser";
 import { colors, space } from "@/constants/theme";
 import { useShop, useShopMembers } from "@/hooks/use-shop";
 import { roleCan } from "@/lib/permissions";

@@ -1,4 +1,4 @@
-import { NotBuiltYet } from "@/components/not-built-yet";
+import { NotBuiltYet } from "@/components/ui/not-built-yet";
 
 export default function TrendsScreen() {
   return (

@@ -1,10 +1,10 @@
 import { Link } from "expo-router";
 import { useState } from "react";
 import { StyleSheet, Text } from "react-native";
-import { AuthCard } from "@/components/auth-card";
-import { Button } from "@/components/button";
-import { Notice } from "@/components/notice";
-import { TextField } from "@/components/text-field";
+import { AuthCard } from "@/components/auth/auth-card";
+import { Button } from "@/components/ui/button";
+import { Notice } from "@/components/ui/notice";
+import { TextField } from "@/components/ui/text-field";
 import { colors } from "@/constants/theme";
 import { useFormErrors } from "@/hooks/use-form-errors";
 import { authClient } from "@/lib/auth-client";

@@ -1,6 +1,6 @@
 import { rmSync } from "node:fs";
 import { beforeAll, afterAll, describe, expect, it } from "vitest";
-import { seedDemoNotebook } from "../../db/seed-notebook";
+import { seedDemoNotebook } from "../../server/seed/seed-notebook";
 import type { CastingDetail, CastingSummary, Page } from "../../lib/notebook-schemas";
 import { env } from "../../server/env";
 import { migrateOnce, shopWithCrew } from "./helpers";

@@ -1,6 +1,6 @@
 import type { Page } from "playwright-core";
 import { describe, expect, inject, it } from "vitest";
-import { DEMO_PEOPLE } from "../../db/demo-people";
+import { DEMO_PEOPLE } from "../../server/seed/demo-people";
 import { PHONE, shot, signIn, useBrowser, WIDE } from "./browser";
 
 const baseUrl = inject("baseUrl");

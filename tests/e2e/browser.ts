@@ -2,7 +2,7 @@ import { mkdirSync } from "node:fs";
 import { join } from "node:path";
 import { chromium, type Browser, type Page } from "playwright-core";
 import { afterAll, beforeAll, expect } from "vitest";
-import { DEMO_PEOPLE } from "../../db/demo-people";
+import { DEMO_PEOPLE } from "../../server/seed/demo-people";
 
 /** Debian's chromium, headless, with the flags this closed network needs; playwright gives it a new empty profile. */
 export async function launchBrowser(): Promise<Browser> {

@@ -26,7 +26,7 @@ export default async function setup(project: TestProject) {
 
   const { db, pool } = await import("../../db/client");
   const { applyMigrations } = await import("../../db/migrate");
-  const { seedDemoShop } = await import("../../db/seed");
+  const { seedDemoShop } = await import("../../server/seed/seed");
   const { listen } = await import("../../server/index");
   await applyMigrations(db);
   await seedDemoShop();

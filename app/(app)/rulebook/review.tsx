@@ -1,10 +1,10 @@
 import { StyleSheet, Text } from "react-native";
-import { BackLink } from "@/components/back-link";
-import { Heading } from "@/components/heading";
-import { Notice } from "@/components/notice";
-import { LoadFailed, Loading } from "@/components/query-state";
-import { ReviewQueueItem } from "@/components/review-queue-item";
-import { Screen } from "@/components/screen";
+import { BackLink } from "@/components/ui/back-link";
+import { Heading } from "@/components/ui/heading";
+import { Notice } from "@/components/ui/notice";
+import { LoadFailed, Loading } from "@/components/ui/query-state";
+import { ReviewQueueItem } from "@/components/review/review-queue-item";
+import { Screen } from "@/components/ui/screen";
 import { useReviewQueue } from "@/hooks/use-review";
 import { useMay } from "@/hooks/use-rulebook";
 import { colors } from "@/constants/theme";

@@ -1,9 +1,9 @@
 import { useLocalSearchParams, useRouter } from "expo-router";
-import { BackLink } from "@/components/back-link";
-import { Heading } from "@/components/heading";
-import { MeltForm } from "@/components/melt-form";
-import { LoadFailed, Loading } from "@/components/query-state";
-import { Screen } from "@/components/screen";
+import { BackLink } from "@/components/ui/back-link";
+import { Heading } from "@/components/ui/heading";
+import { MeltForm } from "@/components/melts/melt-form";
+import { LoadFailed, Loading } from "@/components/ui/query-state";
+import { Screen } from "@/components/ui/screen";
 import { useMelt, useUpdateMelt } from "@/hooks/use-melts";
 import { useUnitsQuery } from "@/hooks/use-units";
 import { formatDay } from "@/lib/dates";

@@ -1,11 +1,11 @@
 import { useLocalSearchParams, useRouter } from "expo-router";
 import { useMemo } from "react";
-import { BackLink } from "@/components/back-link";
-import { Heading } from "@/components/heading";
-import { Notice } from "@/components/notice";
-import { LoadFailed, Loading } from "@/components/query-state";
-import { RuleForm } from "@/components/rule-form";
-import { Screen } from "@/components/screen";
+import { BackLink } from "@/components/ui/back-link";
+import { Heading } from "@/components/ui/heading";
+import { Notice } from "@/components/ui/notice";
+import { LoadFailed, Loading } from "@/components/ui/query-state";
+import { RuleForm } from "@/components/rulebook/rule-form";
+import { Screen } from "@/components/ui/screen";
 import { useMay, useRule, useRulebook } from "@/hooks/use-rulebook";
 import { formFromRule } from "@/hooks/use-rule-draft";
 import { useUnitsQuery } from "@/hooks/use-units";

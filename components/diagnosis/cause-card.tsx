@@ -1,0 +1,62 @@
+import { useState } from "react";
+import { Pressable, StyleSheet, Text, View } from "react-native";
+import { CauseRecordLine } from "@/components/rulebook/rule-record";
+import { ScoreBar } from "@/components/ui/score-bar";
+import { colors, radius, space } from "@/constants/theme";
+import { reasonInUnits } from "@/lib/reason-text";
+import type { CauseWithRecord } from "@/lib/review-schemas";
+import type { Units } from "@/lib/units";
+
+/** A ranked cause; `record` says how often it was right in this shop's confirmed cases. */
+type Cause = CauseWithRecord;
+
+/** One likely cause: how strongly it is pointed at, the fixes to try (tick them off), and why. */
+export function CauseCard({ cause, rank, units }: { cause: Cause; rank: number; units: Units }) {
+  const [done, setDone] = useState<ReadonlySet<number>>(new Set());
+  const [why, setWhy] = useState(false);
+  const toggle = (i: number) => setDone((d) => { const n = new Set(d); if (n.has(i)) n.delete(i); else n.add(i); return n; });
+
+  return (
+    <View style={styles.card} testID={`cause-${rank}`}>
+      <Text style={styles.title}>{rank}. {cause.title}</Text>
+      <ScoreBar score={cause.score} />
+      <CauseRecordLine cause={cause} />
+      <Text style={styles.sub}>Fixes to try <Text style={styles.subNote}>(ticks help you keep track here; they are not saved)</Text></Text>
+      {cause.fixes.map((f, i) => (
+        <Pressable key={f} role="checkbox" aria-checked={done.has(i)} onPress={() => toggle(i)} style={styles.fix}>
+          <View style={[styles.box, done.has(i) && styles.boxOn]}>{done.has(i) ? <Text style={styles.tick}>✓</Text> : null}</View>
+          <Text style={[styles.fixText, done.has(i) && styles.fixDone]}>{f}</Text>
+        </Pressable>
+      ))}
+      <Pressable role="button" aria-expanded={why} onPress={() => setWhy((w) => !w)}>
+        <Text style={styles.toggle}>{why ? "▾ Hide why" : "▸ Why this cause"}</Text>
+      </Pressable>
+      {why ? (
+        <View style={styles.why}>
+          {/* Older saved results carry only the SI sentences. */}
+          {(cause.reasons ? cause.reasons.map((r) => reasonInUnits(r, units)) : cause.because).map((b) => (
+            <Text key={b} style={styles.reason}>• {b}</Text>
+          ))}
+          <Text style={styles.sources}>Sources: {cause.sources.join("; ")}</Text>
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: { gap: space.sm, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  title: { fontSize: 16, fontWeight: "700", color: colors.ink },
+  sub: { fontSize: 13, fontWeight: "700", color: colors.muted, marginTop: space.xs },
+  subNote: { fontWeight: "400" },
+  fix: { flexDirection: "row", gap: space.sm, alignItems: "flex-start", minHeight: 32 },
+  box: { width: 22, height: 22, borderRadius: 4, borderWidth: 2, borderColor: colors.steel, alignItems: "center", justifyContent: "center", marginTop: 1 },
+  boxOn: { backgroundColor: colors.steel },
+  tick: { color: "#FFFFFF", fontSize: 14, fontWeight: "700", lineHeight: 16 },
+  fixText: { flex: 1, fontSize: 15, lineHeight: 22, color: colors.ink },
+  fixDone: { color: colors.muted, textDecorationLine: "line-through" },
+  toggle: { fontSize: 15, fontWeight: "600", color: colors.accent, paddingVertical: space.xs },
+  why: { gap: space.xs, paddingLeft: space.sm, borderLeftWidth: 3, borderLeftColor: colors.line },
+  reason: { fontSize: 14, lineHeight: 21, color: colors.ink },
+  sources: { fontSize: 13, lineHeight: 19, color: colors.muted, fontStyle: "italic" },
+});

@@ -1,0 +1,49 @@
+import { useState } from "react";
+import { Pressable, StyleSheet, Text, View } from "react-native";
+import { Heading } from "@/components/ui/heading";
+import { Notice } from "@/components/ui/notice";
+import { colors, space } from "@/constants/theme";
+import { formatFact } from "@/lib/fact-display";
+import type { Units } from "@/lib/units";
+import type { DiagnosisResult } from "@/rules/rank";
+
+/** Under the causes: what was not logged, the values worked out from the log, and the cautions. */
+export function DiagnosisExtras({ result, units }: { result: DiagnosisResult; units: Units }) {
+  const [showFacts, setShowFacts] = useState(false);
+  const facts = Object.entries(result.facts).map(([name, v]) => ({ name, ...formatFact(name, v, units) }));
+  return (
+    <View style={styles.wrap}>
+      {result.missing.length ? (
+        <View style={styles.block}>
+          <Heading level={3}>Would sharpen the answer</Heading>
+          {result.missing.map((m) => <Text key={m.fact} style={styles.line}>• {m.note}</Text>)}
+        </View>
+      ) : null}
+      {facts.length ? (
+        <View style={styles.block}>
+          <Pressable role="button" aria-expanded={showFacts} onPress={() => setShowFacts((s) => !s)}>
+            <Text style={styles.toggle}>{showFacts ? "▾ Hide the values worked out" : "▸ Values worked out from the log"}</Text>
+          </Pressable>
+          {showFacts ? facts.map((f) => (
+            <Text key={f.name} style={styles.line}>{f.label}: <Text style={styles.value}>{f.value}</Text></Text>
+          )) : null}
+        </View>
+      ) : null}
+      {result.cautions.length ? (
+        <Notice tone="caution">
+          <Text style={styles.cautionHead}>Before you change the next pour</Text>
+          {result.cautions.map((c) => <Text key={c} style={styles.line}>• {c}</Text>)}
+        </Notice>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.md },
+  block: { gap: space.xs },
+  line: { fontSize: 14, lineHeight: 21, color: colors.ink },
+  value: { fontWeight: "700" },
+  toggle: { fontSize: 15, fontWeight: "600", color: colors.accent, paddingVertical: space.xs },
+  cautionHead: { fontSize: 15, fontWeight: "700", color: colors.ink },
+});

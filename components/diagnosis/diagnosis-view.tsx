@@ -1,0 +1,54 @@
+import { StyleSheet, Text, View } from "react-native";
+import { Button } from "@/components/ui/button";
+import { CauseCard } from "@/components/diagnosis/cause-card";
+import { DiagnosisExtras } from "@/components/diagnosis/diagnosis-extras";
+import { Heading } from "@/components/ui/heading";
+import { Notice } from "@/components/ui/notice";
+import { colors, CONTENT_MAX_PX, space } from "@/constants/theme";
+import { useRunDiagnosis } from "@/hooks/use-diagnosis";
+import { formatMoment } from "@/lib/dates";
+import type { CastingDetail } from "@/lib/notebook-schemas";
+import type { Units } from "@/lib/units";
+
+/**
+ * The likely causes of what was marked on this casting, from the shop's rules and the melt's and
+ * casting's conditions. The last answer is kept and shown on opening; the button works it out again.
+ */
+export function DiagnosisView({ casting, units, mayRun }: { casting: CastingDetail; units: Units; mayRun: boolean }) {
+  const run = useRunDiagnosis(casting.id);
+  const snapshot = casting.diagnosis;
+  const noMarks = casting.marks.length === 0;
+
+  return (
+    <View style={styles.wrap} testID="diagnosis">
+      <Heading level={2}>Likely causes</Heading>
+      {noMarks ? <Notice>Mark at least one defect first: the causes are worked out from the marks.</Notice> : null}
+      {mayRun && !noMarks ? (
+        <View style={styles.start}>
+          <Button label={snapshot ? "Find likely causes again" : "Find likely causes"} onPress={() => run.mutate()}
+            busy={run.isPending} testID="find-causes" />
+        </View>
+      ) : null}
+      {run.error ? <Notice tone="error">{run.error.message}</Notice> : null}
+      {snapshot ? (
+        <>
+          <Text style={styles.when}>
+            Worked out {formatMoment(snapshot.createdAt)}{snapshot.createdBy?.name ? ` by ${snapshot.createdBy.name}` : ""} · rules version {snapshot.ruleSetVersion.slice(0, 8)}.
+            {" "}If marks or conditions changed since, work it out again.
+          </Text>
+          {snapshot.result.causes.length === 0 ? (
+            <Notice>No rule fits these marks and conditions. Logging more of the melt and casting (below) may help; a mentor can also add what the shop has learned.</Notice>
+          ) : snapshot.result.causes.map((c, i) => <CauseCard key={c.id} cause={c} rank={i + 1} units={units} />)}
+          <DiagnosisExtras result={snapshot.result} units={units} />
+        </>
+      ) : !noMarks ? <Text style={styles.when}>Not worked out yet for this casting.</Text> : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  // Reading width: causes and fixes are sentences, not table rows.
+  wrap: { gap: space.md, maxWidth: CONTENT_MAX_PX },
+  start: { alignSelf: "flex-start" },
+  when: { fontSize: 14, lineHeight: 20, color: colors.muted },
+});

@@ -1,0 +1,37 @@
+import { StyleSheet, Text, View } from "react-native";
+import { FollowupAdd } from "@/components/followups/followup-add";
+import { FollowupChain } from "@/components/followups/followup-chain";
+import { FollowupFix } from "@/components/followups/followup-fix";
+import { Heading } from "@/components/ui/heading";
+import { Notice } from "@/components/ui/notice";
+import { Loading } from "@/components/ui/query-state";
+import { colors, space } from "@/constants/theme";
+import { useFollowups } from "@/hooks/use-followups";
+import { useMay } from "@/hooks/use-rulebook";
+
+/**
+ * The casting page's follow-up panel: the fixes tried after this casting, the next casting of the
+ * same part each was tried on, whether it worked, and the whole chain. `suggestions` (the confirmed
+ * or top cause's fixes) fill the text with one tap.
+ */
+export function FollowupPanel({ castingId, suggestions = [] }: { castingId: number; suggestions?: string[] }) {
+  const data = useFollowups(castingId);
+  const mayWrite = useMay({ casebook: ["write"] });
+  if (data.isPending) return <Loading />;
+  if (data.error) return <Notice tone="error">{data.error.message}</Notice>;
+  const { fixes, chain, candidates } = data.data;
+  return (
+    <View style={styles.wrap} testID="followup-panel">
+      <Heading level={2}>Fixes tried</Heading>
+      {chain.length > 1 ? <FollowupChain chain={chain} /> : null}
+      {fixes.length === 0 ? <Text style={styles.meta}>No fix recorded after this casting yet.</Text> : null}
+      {fixes.map((f) => <FollowupFix key={f.id} fix={f} candidates={candidates} mayWrite={mayWrite} />)}
+      {mayWrite ? <FollowupAdd castingId={castingId} candidates={candidates} suggestions={suggestions} /> : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.md },
+  meta: { fontSize: 14, color: colors.muted },
+});

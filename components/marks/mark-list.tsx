@@ -1,0 +1,46 @@
+import { Pressable, StyleSheet, Text, View } from "react-native";
+import type { Pin } from "@/components/photos/photo-marker";
+import { colors, radius, space } from "@/constants/theme";
+import { DEFECTS, LOCATION_LABELS, SEVERITY_LABELS } from "@/lib/defects";
+
+type Props = { pins: Pin[]; selectedId: number | null; onOpen: (pin: Pin) => void; photoNumbers: Map<number, number> };
+
+/** Every mark of the casting, numbered as on the photos; tap one to change, move or remove it. */
+export function MarkList({ pins, selectedId, onOpen, photoNumbers }: Props) {
+  if (!pins.length) return <Text style={styles.empty}>No marks yet.</Text>;
+  return (
+    <View style={styles.list} testID="mark-list">
+      {pins.map((p) => {
+        const info = DEFECTS[p.mark.type];
+        const where = p.mark.photoId === null ? "not on a photo" : `photo ${photoNumbers.get(p.mark.photoId) ?? "?"}`;
+        return (
+          <Pressable key={p.mark.id} role="button" onPress={() => onOpen(p)} testID={`mark-${p.number}`}
+            style={[styles.row, p.mark.id === selectedId && styles.on]}>
+            <View style={styles.badge}><Text style={styles.badgeText}>{p.number}</Text></View>
+            <View style={styles.body}>
+              <Text style={styles.title}>{info.label} <Text style={styles.cls}>({info.defectClass})</Text></Text>
+              <Text style={styles.meta}>
+                {LOCATION_LABELS[p.mark.location]} · {SEVERITY_LABELS[p.mark.severity as 1 | 2 | 3] ?? p.mark.severity} · {where}
+              </Text>
+              {p.mark.note ? <Text style={styles.note}>{p.mark.note}</Text> : null}
+            </View>
+          </Pressable>
+        );
+      })}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { gap: space.sm },
+  empty: { fontSize: 15, color: colors.muted },
+  row: { flexDirection: "row", gap: space.md, alignItems: "flex-start", padding: space.sm, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  on: { borderColor: colors.steel, borderWidth: 2 },
+  badge: { width: 28, height: 28, borderRadius: 14, backgroundColor: colors.accent, alignItems: "center", justifyContent: "center" },
+  badgeText: { color: "#FFFFFF", fontWeight: "700" },
+  body: { flex: 1, gap: 2 },
+  title: { fontSize: 15, fontWeight: "600", color: colors.ink },
+  cls: { color: colors.muted, fontWeight: "400" },
+  meta: { fontSize: 14, color: colors.muted },
+  note: { fontSize: 14, color: colors.ink },
+});

@@ -1,0 +1,78 @@
+import { useState } from "react";
+import { StyleSheet, View } from "react-native";
+import { Button } from "@/components/ui/button";
+import { ChoiceChips } from "@/components/ui/choice-chips";
+import { FieldError } from "@/components/ui/field-error";
+import { CleaningSection, DaySection, MetalSection, MouldSection } from "@/components/melts/melt-form-sections";
+import { Notice } from "@/components/ui/notice";
+import { SafetyCautions } from "@/components/diagnosis/safety-cautions";
+import { TextField } from "@/components/ui/text-field";
+import { space } from "@/constants/theme";
+import { useMeltDraft } from "@/hooks/use-melt-draft";
+import { useAlloys } from "@/hooks/use-melts";
+import { ApiError } from "@/lib/api";
+import { PROCESS_LABELS } from "@/lib/labels";
+import type { MeltInput } from "@/lib/notebook-schemas";
+import type { Units } from "@/lib/units";
+import { PROCESSES, type Process } from "@/rules/case";
+
+const PROCESS_CHOICES = PROCESSES.map((p) => ({ value: p, label: PROCESS_LABELS[p] }));
+
+type Props = {
+  initial: { [K in keyof MeltInput]?: MeltInput[K] | null };
+  units: Units;
+  submitLabel: string;
+  onSubmit: (input: MeltInput) => Promise<unknown>;
+};
+
+/** Every condition of a melt, checked here with the API's own schema before anything is sent. */
+export function MeltForm({ initial, units, submitLabel, onSubmit }: Props) {
+  const alloys = useAlloys();
+  const { draft, set, errors, setErrors, check } = useMeltDraft(initial, units);
+  const [busy, setBusy] = useState(false);
+  const [failure, setFailure] = useState<string>();
+  const sectionProps = { draft, set, errors, units };
+
+  async function submit() {
+    const input = check(alloys.data ?? []);
+    setFailure(input ? undefined : "Some values need fixing: see the messages by the fields.");
+    if (!input) return;
+    setBusy(true);
+    try {
+      await onSubmit(input);
+    } catch (e) {
+      // The server checks again (the alloy table may have changed): its field messages land by the fields.
+      if (e instanceof ApiError && Object.keys(e.fields).length) setErrors(e.fields);
+      setFailure(e instanceof Error ? e.message : String(e));
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  const alloyChoices = (alloys.data ?? []).map((a) => ({ value: a.designation, label: a.designation }));
+  return (
+    <View style={styles.form}>
+      <TextField label="Poured on" value={draft.pouredOn} onChangeText={(v) => set("pouredOn", v)} error={errors.pouredOn}
+        placeholder="YYYY-MM-DD" />
+      {alloys.error ? <Notice tone="error">{alloys.error.message}</Notice> : null}
+      <ChoiceChips label="Alloy" options={alloyChoices} value={draft.alloy} onChange={(v) => set("alloy", v)} />
+      <FieldError message={errors.alloy} />
+      <ChoiceChips label="Process" options={PROCESS_CHOICES} value={draft.process} onChange={(v) => set("process", v as Process)} />
+      <FieldError message={errors.process} />
+      <MetalSection {...sectionProps} />
+      <CleaningSection {...sectionProps} />
+      <DaySection {...sectionProps} />
+      <MouldSection {...sectionProps} />
+      <TextField label="Notes" value={draft.notes} onChangeText={(v) => set("notes", v)} error={errors.notes} multiline
+        style={styles.notes} placeholder="Anything else about this melt" />
+      <SafetyCautions />
+      {failure ? <Notice tone="error">{failure}</Notice> : null}
+      <Button label={submitLabel} onPress={submit} busy={busy} testID="save-melt" />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+  notes: { minHeight: 88, paddingTop: space.sm, textAlignVertical: "top" },
+});

@@ -1,0 +1,53 @@
+import { Link } from "expo-router";
+import { Pressable, StyleSheet, Text, View } from "react-native";
+import { MarkedText } from "@/components/search/casebook-marked-text";
+import { colors, radius, space } from "@/constants/theme";
+import { formatDay } from "@/lib/dates";
+import { OUTCOME_LABELS, PROCESS_LABELS } from "@/lib/labels";
+import type { CaseHit, CaseSummary } from "@/lib/search-schemas";
+import { castingHref, causeLine, defectsLine } from "@/lib/case-words";
+
+const OUTCOME_COLOURS = { good: colors.steel, rework: "#8A6D1F", scrap: colors.danger } as const;
+
+export function OutcomeTag({ outcome }: { outcome: CaseSummary["outcome"] }) {
+  if (!outcome) return <Text style={styles.muted}>not judged</Text>;
+  return <Text style={[styles.tag, { color: OUTCOME_COLOURS[outcome], borderColor: OUTCOME_COLOURS[outcome] }]}>{OUTCOME_LABELS[outcome]}</Text>;
+}
+
+/** One case on a phone: what it was, when and how it was poured, what went wrong and why. */
+export function CasebookResultCard({ hit }: { hit: CaseHit }) {
+  const words = hit.marked.notes ?? hit.marked.comments;
+  return (
+    <Link href={castingHref(hit)} asChild>
+      <Pressable role="link" style={styles.card} testID="case-card">
+        <View style={styles.top}>
+          <MarkedText style={styles.part} runs={hit.marked.part} plain={hit.partName} numberOfLines={1} />
+          <OutcomeTag outcome={hit.outcome} />
+        </View>
+        <Text style={styles.muted}>
+          {formatDay(hit.pouredOn)} · {hit.alloy} · {PROCESS_LABELS[hit.process]}
+        </Text>
+        <MarkedText style={styles.line} runs={hit.marked.defects} plain={defectsLine(hit)} />
+        {hit.marked.causes ? (
+          <Text style={styles.cause} numberOfLines={2}>
+            {hit.cause?.confirmed ? "Confirmed" : "Cause, fixes"}: <MarkedText runs={hit.marked.causes} plain="" />
+          </Text>
+        ) : hit.cause ? (
+          <Text style={styles.cause} numberOfLines={2}>{causeLine(hit)}</Text>
+        ) : null}
+        {words ? <MarkedText style={styles.words} runs={words} plain="" numberOfLines={3} /> : null}
+      </Pressable>
+    </Link>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, padding: space.md, gap: 4 },
+  top: { flexDirection: "row", justifyContent: "space-between", alignItems: "center", gap: space.sm },
+  part: { flex: 1, fontSize: 17, fontWeight: "600", color: colors.ink },
+  line: { fontSize: 15, color: colors.ink },
+  cause: { fontSize: 14, color: colors.steel },
+  words: { fontSize: 14, color: colors.muted, fontStyle: "italic" },
+  muted: { fontSize: 14, color: colors.muted },
+  tag: { fontSize: 13, fontWeight: "700", borderWidth: 1, borderRadius: radius.sm, paddingHorizontal: 6, paddingVertical: 1 },
+});

@@ -1,0 +1,26 @@
+import { StyleSheet, Text, View } from "react-native";
+import { Button } from "@/components/ui/button";
+import { colors, space } from "@/constants/theme";
+
+type Props = { page: number; pageSize: number; total: number; onPage: (page: number) => void };
+
+/** Earlier / later pages of a list, with where you are in it. */
+export function Pager({ page, pageSize, total, onPage }: Props) {
+  const pages = Math.max(1, Math.ceil(total / pageSize));
+  if (pages <= 1) return <Text style={styles.where}>{total} in all</Text>;
+  const first = (page - 1) * pageSize + 1;
+  const last = Math.min(total, page * pageSize);
+  return (
+    <View style={styles.row}>
+      {page > 1 ? <Button kind="plain" label="Previous page" onPress={() => onPage(page - 1)} /> : <View style={styles.gap} />}
+      <Text style={styles.where}>{first}–{last} of {total}</Text>
+      {page < pages ? <Button kind="plain" label="Next page" onPress={() => onPage(page + 1)} /> : <View style={styles.gap} />}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { flexDirection: "row", alignItems: "center", justifyContent: "space-between", gap: space.sm },
+  where: { fontSize: 14, color: colors.muted, textAlign: "center" },
+  gap: { width: 100 },
+});
