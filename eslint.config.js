@@ -10,7 +10,14 @@ export default tseslint.config(
       "@typescript-eslint/no-require-imports": "off", // Expo loads fonts and images with require()
       "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_" }],
       // Configuration is read and validated in one place each for server and app.
-      "no-restricted-properties": ["error", { object: "process", property: "env", message: "Read configuration through server/env.ts (server) or lib/client-env.ts (app)." }],
+      "no-restricted-properties": [
+        "error",
+        {
+          object: "process",
+          property: "env",
+          message: "Read configuration through server/env.ts (server) or lib/client-env.ts (app).",
+        },
+      ],
     },
   },
   {

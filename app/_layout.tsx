@@ -8,7 +8,9 @@ import { authClient } from "@/lib/auth-client";
 
 /** Fonts, one QueryClient, and the guard: signed-in people see (app), everyone else (auth). */
 export default function RootLayout() {
-  const [queryClient] = useState(() => new QueryClient({ defaultOptions: { queries: { retry: 1, staleTime: 30_000 } } }));
+  const [queryClient] = useState(
+    () => new QueryClient({ defaultOptions: { queries: { retry: 1, staleTime: 30_000 } } }),
+  );
   const [fontsLoaded] = useFonts({
     "Lora-Regular": require("@/assets/fonts/Lora_400Regular.ttf"),
     "Lora-SemiBold": require("@/assets/fonts/Lora_600SemiBold.ttf"),

@@ -1,4 +1,15 @@
-import { boolean, index, integer, jsonb, pgTable, primaryKey, serial, text, timestamp, unique } from "drizzle-orm/pg-core";
+import {
+  boolean,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  primaryKey,
+  serial,
+  text,
+  timestamp,
+  unique,
+} from "drizzle-orm/pg-core";
 import type { KbRule } from "../rules/kb-schema";
 import { organization, user } from "./auth-schema";
 import { castings } from "./notebook-schema";
@@ -8,10 +19,19 @@ import { castings } from "./notebook-schema";
  * confirmed causes, fixes tried with the casting that followed, and the shop's own rules. Rows are
  * only ever added (a new confirmation, version or switch row), so every change keeps who and when.
  */
-const shopId = () => text("shop_id").notNull().references(() => organization.id, { onDelete: "cascade" });
-const createdBy = () => text("created_by").notNull().references(() => user.id);
+const shopId = () =>
+  text("shop_id")
+    .notNull()
+    .references(() => organization.id, { onDelete: "cascade" });
+const createdBy = () =>
+  text("created_by")
+    .notNull()
+    .references(() => user.id);
 const createdAt = () => timestamp("created_at", { withTimezone: true }).defaultNow().notNull();
-const castingId = () => integer("casting_id").notNull().references(() => castings.id, { onDelete: "cascade" });
+const castingId = () =>
+  integer("casting_id")
+    .notNull()
+    .references(() => castings.id, { onDelete: "cascade" });
 
 /** A caster asks a mentor to look at a casting; answered when a mentor confirms its cause. */
 export const reviewRequests = pgTable(
@@ -26,7 +46,10 @@ export const reviewRequests = pgTable(
     answeredAt: timestamp("answered_at", { withTimezone: true }),
     answeredBy: text("answered_by").references(() => user.id),
   },
-  (t) => [index("review_requests_queue_idx").on(t.shopId, t.answeredAt, t.createdAt), index("review_requests_casting_idx").on(t.castingId)],
+  (t) => [
+    index("review_requests_queue_idx").on(t.shopId, t.answeredAt, t.createdAt),
+    index("review_requests_casting_idx").on(t.castingId),
+  ],
 );
 
 /**
@@ -62,7 +85,9 @@ export const fixesTried = pgTable(
     createdBy: createdBy(),
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).defaultNow().notNull(),
-    updatedBy: text("updated_by").notNull().references(() => user.id),
+    updatedBy: text("updated_by")
+      .notNull()
+      .references(() => user.id),
   },
   (t) => [index("fixes_tried_casting_idx").on(t.castingId), index("fixes_tried_next_idx").on(t.nextCastingId)],
 );
@@ -81,7 +106,9 @@ export const shopRuleVersions = pgTable(
   {
     id: serial("id").primaryKey(),
     shopId: shopId(),
-    shopRuleId: integer("shop_rule_id").notNull().references(() => shopRules.id, { onDelete: "cascade" }),
+    shopRuleId: integer("shop_rule_id")
+      .notNull()
+      .references(() => shopRules.id, { onDelete: "cascade" }),
     version: integer("version").notNull(),
     /** draft | published | retired */
     status: text("status").notNull(),
@@ -89,7 +116,10 @@ export const shopRuleVersions = pgTable(
     createdBy: createdBy(),
     createdAt: createdAt(),
   },
-  (t) => [unique("shop_rule_versions_uq").on(t.shopRuleId, t.version), index("shop_rule_versions_shop_idx").on(t.shopId)],
+  (t) => [
+    unique("shop_rule_versions_uq").on(t.shopRuleId, t.version),
+    index("shop_rule_versions_shop_idx").on(t.shopId),
+  ],
 );
 
 /** Causes a shop named in its rules, beside the built-in ones; ids start with "shop-". */

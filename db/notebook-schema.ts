@@ -1,6 +1,17 @@
 import { sql } from "drizzle-orm";
 import {
-  boolean, check, date, doublePrecision, index, integer, jsonb, pgTable, serial, text, timestamp, unique,
+  boolean,
+  check,
+  date,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  serial,
+  text,
+  timestamp,
+  unique,
 } from "drizzle-orm/pg-core";
 import { organization, user } from "./auth-schema";
 
@@ -9,8 +20,14 @@ import { organization, user } from "./auth-schema";
  * Every shop row carries its shop, who made it and when. Values are SI (°C, mm, kg/m³, s, %);
  * the app converts for each person's units (person_units).
  */
-const shopId = () => text("shop_id").notNull().references(() => organization.id, { onDelete: "cascade" });
-const createdBy = () => text("created_by").notNull().references(() => user.id);
+const shopId = () =>
+  text("shop_id")
+    .notNull()
+    .references(() => organization.id, { onDelete: "cascade" });
+const createdBy = () =>
+  text("created_by")
+    .notNull()
+    .references(() => user.id);
 const createdAt = () => timestamp("created_at", { withTimezone: true }).defaultNow().notNull();
 const updatedAt = () => timestamp("updated_at", { withTimezone: true }).defaultNow().notNull();
 
@@ -44,7 +61,9 @@ export const melts = pgTable(
   {
     id: serial("id").primaryKey(),
     shopId: shopId(),
-    alloyId: integer("alloy_id").notNull().references(() => alloys.id),
+    alloyId: integer("alloy_id")
+      .notNull()
+      .references(() => alloys.id),
     pouredOn: date("poured_on", { mode: "string" }).notNull(),
     process: text("process").notNull(),
     charge: text("charge"),
@@ -80,7 +99,9 @@ export const castings = pgTable(
   {
     id: serial("id").primaryKey(),
     shopId: shopId(),
-    meltId: integer("melt_id").notNull().references(() => melts.id, { onDelete: "cascade" }),
+    meltId: integer("melt_id")
+      .notNull()
+      .references(() => melts.id, { onDelete: "cascade" }),
     partName: text("part_name").notNull(),
     pattern: text("pattern"),
     minSectionMm: doublePrecision("min_section_mm"),
@@ -111,7 +132,9 @@ export const photos = pgTable(
   {
     id: serial("id").primaryKey(),
     shopId: shopId(),
-    castingId: integer("casting_id").notNull().references(() => castings.id, { onDelete: "cascade" }),
+    castingId: integer("casting_id")
+      .notNull()
+      .references(() => castings.id, { onDelete: "cascade" }),
     fileName: text("file_name").notNull().unique(),
     thumbName: text("thumb_name").notNull().unique(),
     width: integer("width").notNull(),
@@ -131,7 +154,9 @@ export const defectMarks = pgTable(
   {
     id: serial("id").primaryKey(),
     shopId: shopId(),
-    castingId: integer("casting_id").notNull().references(() => castings.id, { onDelete: "cascade" }),
+    castingId: integer("casting_id")
+      .notNull()
+      .references(() => castings.id, { onDelete: "cascade" }),
     photoId: integer("photo_id").references(() => photos.id, { onDelete: "set null" }),
     x: doublePrecision("x"),
     y: doublePrecision("y"),
@@ -147,7 +172,10 @@ export const defectMarks = pgTable(
     index("marks_casting_idx").on(t.castingId),
     index("marks_shop_type_idx").on(t.shopId, t.type),
     check("marks_severity_ck", sql`${t.severity} between 1 and 3`),
-    check("marks_xy_ck", sql`(${t.x} is null or ${t.x} between 0 and 1) and (${t.y} is null or ${t.y} between 0 and 1)`),
+    check(
+      "marks_xy_ck",
+      sql`(${t.x} is null or ${t.x} between 0 and 1) and (${t.y} is null or ${t.y} between 0 and 1)`,
+    ),
   ],
 );
 
@@ -156,7 +184,9 @@ export const comments = pgTable(
   {
     id: serial("id").primaryKey(),
     shopId: shopId(),
-    castingId: integer("casting_id").notNull().references(() => castings.id, { onDelete: "cascade" }),
+    castingId: integer("casting_id")
+      .notNull()
+      .references(() => castings.id, { onDelete: "cascade" }),
     body: text("body").notNull(),
     createdBy: createdBy(),
     createdAt: createdAt(),
@@ -170,7 +200,9 @@ export const diagnosisSnapshots = pgTable(
   {
     id: serial("id").primaryKey(),
     shopId: shopId(),
-    castingId: integer("casting_id").notNull().references(() => castings.id, { onDelete: "cascade" }),
+    castingId: integer("casting_id")
+      .notNull()
+      .references(() => castings.id, { onDelete: "cascade" }),
     ruleSetVersion: text("rule_set_version").notNull(),
     input: jsonb("input").notNull(),
     result: jsonb("result").notNull(),
@@ -182,7 +214,9 @@ export const diagnosisSnapshots = pgTable(
 
 /** Each person's display units; the database keeps SI whatever they choose. */
 export const personUnits = pgTable("person_units", {
-  userId: text("user_id").primaryKey().references(() => user.id, { onDelete: "cascade" }),
+  userId: text("user_id")
+    .primaryKey()
+    .references(() => user.id, { onDelete: "cascade" }),
   temperature: text("temperature").notNull(),
   length: text("length").notNull(),
   mass: text("mass").notNull(),

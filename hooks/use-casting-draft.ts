@@ -4,21 +4,35 @@ import { castingInput, type CastingInput, type Outcome } from "@/lib/notebook-sc
 import type { Units } from "@/lib/units";
 
 export const CASTING_NUMBERS = {
-  minSectionMm: "length", maxSectionMm: "length", sprueHeightMm: "length", pourTimeS: null,
+  minSectionMm: "length",
+  maxSectionMm: "length",
+  sprueHeightMm: "length",
+  pourTimeS: null,
 } as const satisfies NumberSpec<string>;
 type NumberKey = keyof typeof CASTING_NUMBERS;
 
 export type CastingDraft = Record<NumberKey, string> & {
-  partName: string; pattern: string; orientation: string; notes: string; outcome: Outcome | null;
-  hasRiser?: boolean; hasOverflow?: boolean; hasVents?: boolean;
+  partName: string;
+  pattern: string;
+  orientation: string;
+  notes: string;
+  outcome: Outcome | null;
+  hasRiser?: boolean;
+  hasOverflow?: boolean;
+  hasVents?: boolean;
 };
 export type CastingInitial = { [K in keyof CastingInput]?: CastingInput[K] | null };
 
 function draftFrom(c: CastingInitial, units: Units): CastingDraft {
   return {
     ...numbersToText(CASTING_NUMBERS, c, units),
-    partName: c.partName ?? "", pattern: c.pattern ?? "", orientation: c.orientation ?? "", notes: c.notes ?? "",
-    outcome: c.outcome ?? null, hasRiser: c.hasRiser ?? undefined, hasOverflow: c.hasOverflow ?? undefined,
+    partName: c.partName ?? "",
+    pattern: c.pattern ?? "",
+    orientation: c.orientation ?? "",
+    notes: c.notes ?? "",
+    outcome: c.outcome ?? null,
+    hasRiser: c.hasRiser ?? undefined,
+    hasOverflow: c.hasOverflow ?? undefined,
     hasVents: c.hasVents ?? undefined,
   };
 }
@@ -27,14 +41,21 @@ function draftFrom(c: CastingInitial, units: Units): CastingDraft {
 export function useCastingDraft(initial: CastingInitial, units: Units) {
   const [draft, setDraft] = useState(() => draftFrom(initial, units));
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const set = <K extends keyof CastingDraft>(key: K, value: CastingDraft[K]) => setDraft((d) => ({ ...d, [key]: value }));
+  const set = <K extends keyof CastingDraft>(key: K, value: CastingDraft[K]) =>
+    setDraft((d) => ({ ...d, [key]: value }));
 
   function check(): CastingInput | undefined {
     const numbers = textToNumbers(CASTING_NUMBERS, draft, units);
     const input = {
-      ...numbers.values, partName: draft.partName.trim(), pattern: draft.pattern.trim() || null,
-      orientation: draft.orientation.trim() || null, notes: draft.notes.trim() || null, outcome: draft.outcome,
-      hasRiser: draft.hasRiser ?? null, hasOverflow: draft.hasOverflow ?? null, hasVents: draft.hasVents ?? null,
+      ...numbers.values,
+      partName: draft.partName.trim(),
+      pattern: draft.pattern.trim() || null,
+      orientation: draft.orientation.trim() || null,
+      notes: draft.notes.trim() || null,
+      outcome: draft.outcome,
+      hasRiser: draft.hasRiser ?? null,
+      hasOverflow: draft.hasOverflow ?? null,
+      hasVents: draft.hasVents ?? null,
     };
     const parsed = castingInput.safeParse(input);
     const found = { ...(parsed.success ? {} : issuesToFields(parsed.error.issues)), ...numbers.errors };

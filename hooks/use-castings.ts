@@ -8,16 +8,21 @@ export const castingKeys = {
 };
 
 export function useCasting(id: number) {
-  return useQuery({ queryKey: castingKeys.detail(id), queryFn: () => api<CastingDetail>(`/castings/${id}`), enabled: Number.isInteger(id) });
+  return useQuery({
+    queryKey: castingKeys.detail(id),
+    queryFn: () => api<CastingDetail>(`/castings/${id}`),
+    enabled: Number.isInteger(id),
+  });
 }
 
 /** After any change to a casting, its page and the melt pages that list it are stale. */
 export function useRefreshCasting() {
   const queryClient = useQueryClient();
-  return (castingId?: number) => Promise.all([
-    queryClient.invalidateQueries({ queryKey: castingId ? castingKeys.detail(castingId) : castingKeys.all }),
-    queryClient.invalidateQueries({ queryKey: ["melts"] }),
-  ]);
+  return (castingId?: number) =>
+    Promise.all([
+      queryClient.invalidateQueries({ queryKey: castingId ? castingKeys.detail(castingId) : castingKeys.all }),
+      queryClient.invalidateQueries({ queryKey: ["melts"] }),
+    ]);
 }
 
 export function useCreateCasting(meltId: number) {

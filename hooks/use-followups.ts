@@ -6,18 +6,28 @@ import type { FixInput, FixPatch, FixTried, Followups } from "@/lib/review-schem
 export const followupKeys = { all: ["followups"] as const, casting: (id: number) => ["followups", id] as const };
 
 export function useFollowups(castingId: number) {
-  return useQuery({ queryKey: followupKeys.casting(castingId), queryFn: () => api<Followups>(`/castings/${castingId}/followups`) });
+  return useQuery({
+    queryKey: followupKeys.casting(castingId),
+    queryFn: () => api<Followups>(`/castings/${castingId}/followups`),
+  });
 }
 
 function useFixChange<T>(fn: (arg: T) => Promise<FixTried>) {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: fn, onSuccess: () => queryClient.invalidateQueries({ queryKey: followupKeys.all }) });
+  return useMutation({
+    mutationFn: fn,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: followupKeys.all }),
+  });
 }
 
 export function useAddFix(castingId: number) {
-  return useFixChange((input: FixInput) => api<FixTried>(`/castings/${castingId}/fixes`, { method: "POST", body: input }));
+  return useFixChange((input: FixInput) =>
+    api<FixTried>(`/castings/${castingId}/fixes`, { method: "POST", body: input }),
+  );
 }
 
 export function usePatchFix() {
-  return useFixChange(({ id, ...patch }: FixPatch & { id: number }) => api<FixTried>(`/fixes/${id}`, { method: "PATCH", body: patch }));
+  return useFixChange(({ id, ...patch }: FixPatch & { id: number }) =>
+    api<FixTried>(`/fixes/${id}`, { method: "PATCH", body: patch }),
+  );
 }

@@ -45,7 +45,10 @@ export function useInspection(casting: CastingDetail) {
   async function save(d: MarkDescription) {
     if (mode.kind === "new") {
       const mark = await create.mutateAsync({ ...d, photoId: mode.photoId, x: mode.x, y: mode.y }).catch(() => null);
-      if (mark) { setSelectedId(mark.id); setMode({ kind: "idle" }); }
+      if (mark) {
+        setSelectedId(mark.id);
+        setMode({ kind: "idle" });
+      }
     } else if (mode.kind === "edit") {
       const mark = await update.mutateAsync({ id: mode.markId, change: d }).catch(() => null);
       if (mark) setMode({ kind: "idle" });
@@ -54,14 +57,35 @@ export function useInspection(casting: CastingDetail) {
 
   async function removeMark() {
     if (mode.kind !== "edit") return;
-    const ok = await remove.mutateAsync(mode.markId).then(() => true, () => false);
-    if (ok) { setSelectedId(null); setMode({ kind: "idle" }); }
+    const ok = await remove.mutateAsync(mode.markId).then(
+      () => true,
+      () => false,
+    );
+    if (ok) {
+      setSelectedId(null);
+      setMode({ kind: "idle" });
+    }
   }
 
   return {
-    mode, pins, selectedId, busy, failure, tapPhoto, openMark, save, removeMark,
-    addWithoutPhoto: () => { reset(); setSelectedId(null); setMode({ kind: "new", photoId: null, x: null, y: null }); },
+    mode,
+    pins,
+    selectedId,
+    busy,
+    failure,
+    tapPhoto,
+    openMark,
+    save,
+    removeMark,
+    addWithoutPhoto: () => {
+      reset();
+      setSelectedId(null);
+      setMode({ kind: "new", photoId: null, x: null, y: null });
+    },
     startMove: () => mode.kind === "edit" && setMode({ kind: "move", markId: mode.markId }),
-    cancel: () => { reset(); setMode({ kind: "idle" }); },
+    cancel: () => {
+      reset();
+      setMode({ kind: "idle" });
+    },
   };
 }

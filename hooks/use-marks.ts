@@ -17,7 +17,8 @@ export function useUpdateMark(castingId: number) {
   const refresh = useRefreshCasting();
   const key = castingKeys.detail(castingId);
   return useMutation({
-    mutationFn: ({ id, change }: { id: number; change: Partial<MarkInput> }) => api<Mark>(`/marks/${id}`, { method: "PATCH", body: change }),
+    mutationFn: ({ id, change }: { id: number; change: Partial<MarkInput> }) =>
+      api<Mark>(`/marks/${id}`, { method: "PATCH", body: change }),
     onMutate: async ({ id, change }) => {
       await queryClient.cancelQueries({ queryKey: key });
       const before = queryClient.getQueryData<CastingDetail>(key);

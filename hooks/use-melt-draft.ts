@@ -6,15 +6,29 @@ import type { Charge, DegassingMethod, Process } from "@/rules/case";
 
 /** The melt's number fields and how each converts to the person's units. */
 export const MELT_NUMBERS = {
-  meltTempC: "temperature", pourTempC: "temperature", degasMinutes: null, ambientTempC: "temperature",
-  humidityPct: null, sandMoisturePct: null, coatingCoats: null, foamDensityKgM3: "density",
+  meltTempC: "temperature",
+  pourTempC: "temperature",
+  degasMinutes: null,
+  ambientTempC: "temperature",
+  humidityPct: null,
+  sandMoisturePct: null,
+  coatingCoats: null,
+  foamDensityKgM3: "density",
 } as const satisfies NumberSpec<string>;
 type NumberKey = keyof typeof MELT_NUMBERS;
 
 export type MeltDraft = Record<NumberKey, string> & {
-  pouredOn: string; alloy: string; process: Process | null; charge: Charge | null; furnace: string;
-  degassing: DegassingMethod | null; fluxed?: boolean; skimmed?: boolean;
-  coatingApplied?: boolean; coatingDried?: boolean; notes: string;
+  pouredOn: string;
+  alloy: string;
+  process: Process | null;
+  charge: Charge | null;
+  furnace: string;
+  degassing: DegassingMethod | null;
+  fluxed?: boolean;
+  skimmed?: boolean;
+  coatingApplied?: boolean;
+  coatingDried?: boolean;
+  notes: string;
 };
 
 type Initial = { [K in keyof MeltInput]?: MeltInput[K] | null };
@@ -23,7 +37,7 @@ const today = () => {
   const d = new Date();
   return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, "0")}-${String(d.getDate()).padStart(2, "0")}`;
 };
-const orUndefined = <T,>(v: T | null | undefined) => v ?? undefined;
+const orUndefined = <T>(v: T | null | undefined) => v ?? undefined;
 
 /** Which fields a process has: foam density only for lost foam; no mould moisture in a metal mould. */
 export const showsFoam = (p: Process | null) => p === "lost-foam";
@@ -32,9 +46,17 @@ export const showsMoisture = (p: Process | null) => p !== "permanent-mould";
 function draftFrom(m: Initial, units: Units): MeltDraft {
   return {
     ...numbersToText(MELT_NUMBERS, m, units),
-    pouredOn: m.pouredOn ?? today(), alloy: m.alloy ?? "", process: m.process ?? null, charge: m.charge ?? null,
-    furnace: m.furnace ?? "", degassing: m.degassing ?? null, fluxed: orUndefined(m.fluxed), skimmed: orUndefined(m.skimmed),
-    coatingApplied: orUndefined(m.coatingApplied), coatingDried: orUndefined(m.coatingDried), notes: m.notes ?? "",
+    pouredOn: m.pouredOn ?? today(),
+    alloy: m.alloy ?? "",
+    process: m.process ?? null,
+    charge: m.charge ?? null,
+    furnace: m.furnace ?? "",
+    degassing: m.degassing ?? null,
+    fluxed: orUndefined(m.fluxed),
+    skimmed: orUndefined(m.skimmed),
+    coatingApplied: orUndefined(m.coatingApplied),
+    coatingDried: orUndefined(m.coatingDried),
+    notes: m.notes ?? "",
   };
 }
 
@@ -57,10 +79,17 @@ export function useMeltDraft(initial: Initial, units: Units) {
       // Hidden fields send nothing: minutes without degassing, coats of a coating that was not applied.
       degasMinutes: draft.degassing && draft.degassing !== "none" ? v.degasMinutes : null,
       coatingCoats: draft.coatingApplied === false ? null : v.coatingCoats,
-      pouredOn: draft.pouredOn.trim(), alloy: draft.alloy, process: draft.process, charge: draft.charge,
-      furnace: draft.furnace.trim() || null, degassing: draft.degassing, fluxed: draft.fluxed ?? null,
-      skimmed: draft.skimmed ?? null, coatingApplied: draft.coatingApplied ?? null,
-      coatingDried: draft.coatingApplied === false ? null : draft.coatingDried ?? null, notes: draft.notes.trim() || null,
+      pouredOn: draft.pouredOn.trim(),
+      alloy: draft.alloy,
+      process: draft.process,
+      charge: draft.charge,
+      furnace: draft.furnace.trim() || null,
+      degassing: draft.degassing,
+      fluxed: draft.fluxed ?? null,
+      skimmed: draft.skimmed ?? null,
+      coatingApplied: draft.coatingApplied ?? null,
+      coatingDried: draft.coatingApplied === false ? null : (draft.coatingDried ?? null),
+      notes: draft.notes.trim() || null,
     };
     const parsed = meltInput.safeParse(input);
     const alloy = alloys.find((a) => a.designation === draft.alloy);

@@ -15,22 +15,38 @@ export const meltKeys = {
 export const alloysKey = ["alloys"] as const;
 
 export function useAlloys() {
-  return useQuery({ queryKey: alloysKey, queryFn: () => api<{ alloys: Alloy[] }>("/alloys").then((r) => r.alloys), staleTime: 10 * 60_000 });
+  return useQuery({
+    queryKey: alloysKey,
+    queryFn: () => api<{ alloys: Alloy[] }>("/alloys").then((r) => r.alloys),
+    staleTime: 10 * 60_000,
+  });
 }
 
 export function useMelts(q: MeltListQuery) {
   const search = new URLSearchParams({ page: String(q.page), pageSize: String(q.pageSize), sort: q.sort });
   // The last page stays on screen while the next one loads, so the list does not jump.
-  return useQuery({ queryKey: meltKeys.list(q), queryFn: () => api<Page<MeltSummary>>(`/melts?${search}`), placeholderData: keepPreviousData });
+  return useQuery({
+    queryKey: meltKeys.list(q),
+    queryFn: () => api<Page<MeltSummary>>(`/melts?${search}`),
+    placeholderData: keepPreviousData,
+  });
 }
 
 export function useMelt(id: number) {
-  return useQuery({ queryKey: meltKeys.detail(id), queryFn: () => api<MeltDetail>(`/melts/${id}`), enabled: Number.isInteger(id) });
+  return useQuery({
+    queryKey: meltKeys.detail(id),
+    queryFn: () => api<MeltDetail>(`/melts/${id}`),
+    enabled: Number.isInteger(id),
+  });
 }
 
 /** What a new melt starts from: the shop's defaults and the last melt's furnace and alloy. Always fresh. */
 export function useMeltDefaults() {
-  return useQuery({ queryKey: meltKeys.defaults, queryFn: () => api<Partial<MeltInput>>("/melts/defaults"), staleTime: 0 });
+  return useQuery({
+    queryKey: meltKeys.defaults,
+    queryFn: () => api<Partial<MeltInput>>("/melts/defaults"),
+    staleTime: 0,
+  });
 }
 
 export function useCreateMelt() {
@@ -46,9 +62,10 @@ export function useUpdateMelt(id: number) {
   return useMutation({
     mutationFn: (input: Partial<MeltInput>) => api<Melt>(`/melts/${id}`, { method: "PATCH", body: input }),
     // A casting's page shows its melt's conditions too.
-    onSuccess: () => Promise.all([
-      queryClient.invalidateQueries({ queryKey: meltKeys.all }),
-      queryClient.invalidateQueries({ queryKey: castingKeys.all }),
-    ]),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: meltKeys.all }),
+        queryClient.invalidateQueries({ queryKey: castingKeys.all }),
+      ]),
   });
 }

@@ -14,10 +14,16 @@ function toSource(asset: ImagePicker.ImagePickerAsset): PhotoSource {
 export async function pickPhoto(from: "camera" | "library"): Promise<PhotoSource | { refused: string } | null> {
   if (from === "camera") {
     const permission = await ImagePicker.requestCameraPermissionsAsync();
-    if (!permission.granted) return { refused: "The camera is not allowed for this app. Allow it in the phone's settings, or choose a photo instead." };
+    if (!permission.granted)
+      return {
+        refused: "The camera is not allowed for this app. Allow it in the phone's settings, or choose a photo instead.",
+      };
   }
   const options: ImagePicker.ImagePickerOptions = { mediaTypes: ["images"], quality: 1, exif: false };
-  const result = from === "camera" ? await ImagePicker.launchCameraAsync(options) : await ImagePicker.launchImageLibraryAsync(options);
+  const result =
+    from === "camera"
+      ? await ImagePicker.launchCameraAsync(options)
+      : await ImagePicker.launchImageLibraryAsync(options);
   if (result.canceled || !result.assets?.length) return null;
   return toSource(result.assets[0]);
 }

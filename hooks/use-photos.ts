@@ -10,9 +10,15 @@ export type PhotoSource = { file: Blob; name?: string } | { uri: string; name: s
 
 /** Plain words for what the server refuses; its own message for anything else. */
 function uploadError(status: number, body: string): ApiError {
-  if (status === 413) return new ApiError(413, "That photo is larger than 15 MB. Send a smaller one (most phones can share a reduced size).");
-  if (status === 415) return new ApiError(415, "That file is not a photo we can read. Send a JPEG, PNG, WebP or HEIC picture.");
-  if (status === 0) return new ApiError(0, "The upload stopped: the server cannot be reached. Check the connection and try again.");
+  if (status === 413)
+    return new ApiError(
+      413,
+      "That photo is larger than 15 MB. Send a smaller one (most phones can share a reduced size).",
+    );
+  if (status === 415)
+    return new ApiError(415, "That file is not a photo we can read. Send a JPEG, PNG, WebP or HEIC picture.");
+  if (status === 0)
+    return new ApiError(0, "The upload stopped: the server cannot be reached. Check the connection and try again.");
   let message = `The server answered ${status}.`;
   try {
     message = JSON.parse(body)?.error?.message ?? message;
@@ -26,7 +32,11 @@ function uploadError(status: number, body: string): ApiError {
  * fetch() cannot report upload progress, so the photo goes up with XMLHttpRequest, cookies
  * included (the session is a cookie), reporting the fraction sent.
  */
-export function sendPhoto(castingId: number, source: PhotoSource, onProgress: (fraction: number) => void): Promise<Photo> {
+export function sendPhoto(
+  castingId: number,
+  source: PhotoSource,
+  onProgress: (fraction: number) => void,
+): Promise<Photo> {
   const form = new FormData();
   if ("file" in source) form.append("photo", source.file, source.name ?? "photo");
   // React Native's FormData takes { uri, name, type } for a file on the device.

@@ -10,31 +10,49 @@ export const reviewKeys = {
 };
 
 export function useCaseReview(castingId: number) {
-  return useQuery({ queryKey: reviewKeys.casting(castingId), queryFn: () => api<CaseReview>(`/castings/${castingId}/review`) });
+  return useQuery({
+    queryKey: reviewKeys.casting(castingId),
+    queryFn: () => api<CaseReview>(`/castings/${castingId}/review`),
+  });
 }
 
 export function useReviewQueue(enabled = true) {
-  return useQuery({ queryKey: reviewKeys.queue, queryFn: () => api<{ items: QueueItem[] }>("/review/queue").then((r) => r.items), enabled });
+  return useQuery({
+    queryKey: reviewKeys.queue,
+    queryFn: () => api<{ items: QueueItem[] }>("/review/queue").then((r) => r.items),
+    enabled,
+  });
 }
 
-function useReviewChange<T>(castingId: number, fn: (arg: T) => Promise<CaseReview>, alsoStale: readonly (readonly unknown[])[] = []) {
+function useReviewChange<T>(
+  castingId: number,
+  fn: (arg: T) => Promise<CaseReview>,
+  alsoStale: readonly (readonly unknown[])[] = [],
+) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: fn,
     onSuccess: async (review) => {
       queryClient.setQueryData(reviewKeys.casting(castingId), review);
-      await Promise.all([reviewKeys.queue, ...alsoStale].map((queryKey) => queryClient.invalidateQueries({ queryKey })));
+      await Promise.all(
+        [reviewKeys.queue, ...alsoStale].map((queryKey) => queryClient.invalidateQueries({ queryKey })),
+      );
     },
   });
 }
 
 export function useAskReview(castingId: number) {
   return useReviewChange(castingId, (note?: string) =>
-    api<CaseReview>(`/castings/${castingId}/review-requests`, { method: "POST", body: { note: note || undefined } }));
+    api<CaseReview>(`/castings/${castingId}/review-requests`, { method: "POST", body: { note: note || undefined } }),
+  );
 }
 
 /** A confirmed cause changes the shop's records, so the rulebook and the casting page go stale. */
 export function useConfirmCause(castingId: number) {
-  return useReviewChange(castingId, (input: ConfirmationInput) =>
-    api<CaseReview>(`/castings/${castingId}/confirmations`, { method: "POST", body: input }), [rulebookKeys.all, castingKeys.detail(castingId)]);
+  return useReviewChange(
+    castingId,
+    (input: ConfirmationInput) =>
+      api<CaseReview>(`/castings/${castingId}/confirmations`, { method: "POST", body: input }),
+    [rulebookKeys.all, castingKeys.detail(castingId)],
+  );
 }

@@ -21,7 +21,11 @@ export function useRulebook() {
 }
 
 export function useRule(id: string) {
-  return useQuery({ queryKey: rulebookKeys.rule(id), queryFn: () => api<RuleDetail>(`/rulebook/rules/${encodeURIComponent(id)}`), enabled: !!id });
+  return useQuery({
+    queryKey: rulebookKeys.rule(id),
+    queryFn: () => api<RuleDetail>(`/rulebook/rules/${encodeURIComponent(id)}`),
+    enabled: !!id,
+  });
 }
 
 /** Any change to a rule changes the list (status, records) and the rule's own page. */
@@ -54,7 +58,9 @@ export function useRetireRule(id: string) {
 }
 
 export function useSwitchRule(id: string) {
-  return useRuleChange((off: boolean) => api<RuleDetail>(`/rulebook/rules/${encodeURIComponent(id)}/switch`, { method: "PUT", body: { off } }));
+  return useRuleChange((off: boolean) =>
+    api<RuleDetail>(`/rulebook/rules/${encodeURIComponent(id)}/switch`, { method: "PUT", body: { off } }),
+  );
 }
 
 /** Runs a draft on the shop's past cases; nothing is stored. */

@@ -3,7 +3,13 @@ import { api } from "@/lib/api";
 import type { ShopRole } from "@/lib/permissions";
 import type { ShopSettingsInput } from "@/lib/shop-settings";
 
-export type Shop = { id: string; name: string; role: ShopRole; defaultAlloy: string | null; defaultProcess: string | null };
+export type Shop = {
+  id: string;
+  name: string;
+  role: ShopRole;
+  defaultAlloy: string | null;
+  defaultProcess: string | null;
+};
 export type ShopMemberRow = { userId: string; name: string; email: string; role: ShopRole };
 
 export const shopKeys = { shop: ["shop"] as const, members: ["shop", "members"] as const };

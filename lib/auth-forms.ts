@@ -17,7 +17,12 @@ export const signUpForm = z.object({
 });
 
 export function slugFor(shopName: string): string {
-  const base = shopName.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 40) || "shop";
+  const base =
+    shopName
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-|-$/g, "")
+      .slice(0, 40) || "shop";
   return `${base}-${Math.random().toString(36).slice(2, 8)}`;
 }
 

@@ -9,11 +9,15 @@ import type { CaseSummary } from "./search-schemas";
 export const castingHref = (c: Pick<CaseSummary, "id" | "meltId">) => `/melts/${c.meltId}/castings/${c.id}` as const;
 /** The defects as the search reads them, so marked and unmarked results look alike. */
 export const defectsLine = (c: Pick<CaseSummary, "defects">) =>
-  [...new Set(c.defects.map((d) => `${DEFECTS[d.type].label} (${LOCATION_LABELS[d.location]})`))].join("; ") || "no defects marked";
+  [...new Set(c.defects.map((d) => `${DEFECTS[d.type].label} (${LOCATION_LABELS[d.location]})`))].join("; ") ||
+  "no defects marked";
 export const causeLine = (c: Pick<CaseSummary, "cause" | "fixWorked">) =>
-  c.cause ? `${c.cause.confirmed ? "Confirmed" : "Likely"}: ${c.cause.title}${c.fixWorked === "yes" ? " · the fix worked" : ""}` : "";
+  c.cause
+    ? `${c.cause.confirmed ? "Confirmed" : "Likely"}: ${c.cause.title}${c.fixWorked === "yes" ? " · the fix worked" : ""}`
+    : "";
 export const castingWords = (c: CastingRef) =>
   `${c.partName} · ${formatDay(c.pouredOn)}${c.outcome ? ` (${OUTCOME_LABELS[c.outcome]})` : ""}`;
 export const castingsLine = (m: Pick<MeltSummary, "castingCount" | "scrapCount">) =>
-  m.castingCount === 0 ? "no castings yet"
+  m.castingCount === 0
+    ? "no castings yet"
     : `${m.castingCount} casting${m.castingCount === 1 ? "" : "s"}${m.scrapCount ? `, ${m.scrapCount} scrap` : ""}`;

@@ -3,14 +3,26 @@ import { formatValue, type Quantity, type Units } from "./units";
 
 /** Units of the quantities that no person's choice changes. */
 const FIXED: Partial<Record<FactQuantity, string>> = {
-  velocity: "m/s", time: "s", minutes: "min", percent: "%", hydrogen: "cm³ per 100 g", pressure: "kPa",
+  velocity: "m/s",
+  time: "s",
+  minutes: "min",
+  percent: "%",
+  hydrogen: "cm³ per 100 g",
+  pressure: "kPa",
 };
 const CONVERTED: Partial<Record<FactQuantity, Quantity>> = {
-  temperature: "temperature", "temperature-difference": "temperature-difference", length: "length", density: "density",
+  temperature: "temperature",
+  "temperature-difference": "temperature-difference",
+  length: "length",
+  density: "density",
 };
 
 /** A derived fact as a person reads it: its label and its value in their units ("superheat at pouring: 171 °F"). */
-export function formatFact(name: string, value: number | boolean | string, units: Units): { label: string; value: string } {
+export function formatFact(
+  name: string,
+  value: number | boolean | string,
+  units: Units,
+): { label: string; value: string } {
   const spec = factSpec(name);
   const label = spec?.label ?? name;
   if (typeof value === "boolean") return { label, value: value ? "yes" : "no" };

@@ -4,7 +4,11 @@ import { fromField, toField, type Quantity, type Units } from "./units";
 export type NumberSpec<K extends string> = Record<K, Quantity | null>;
 
 /** Stored SI values to the text a form shows, in the person's units. */
-export function numbersToText<S extends NumberSpec<string>>(spec: S, values: { [K in keyof S]?: number | null }, units: Units) {
+export function numbersToText<S extends NumberSpec<string>>(
+  spec: S,
+  values: { [K in keyof S]?: number | null },
+  units: Units,
+) {
   const out = {} as Record<keyof S & string, string>;
   for (const key of Object.keys(spec) as (keyof S & string)[]) {
     const q = spec[key];
@@ -18,7 +22,11 @@ export function numbersToText<S extends NumberSpec<string>>(spec: S, values: { [
  * Typed text back to SI numbers for the API: empty text is null (not logged, and clears a stored
  * value on a change), text that is not a number gets a message of its own rather than zod's.
  */
-export function textToNumbers<S extends NumberSpec<string>>(spec: S, text: Record<keyof S & string, string>, units: Units) {
+export function textToNumbers<S extends NumberSpec<string>>(
+  spec: S,
+  text: Record<keyof S & string, string>,
+  units: Units,
+) {
   const values = {} as Record<keyof S & string, number | null>;
   const errors: Record<string, string> = {};
   for (const key of Object.keys(spec) as (keyof S & string)[]) {

@@ -110,7 +110,9 @@ export function markConflicts(m: Partial<z.infer<typeof markFields>>): Record<st
 export const markInput = markFields.superRefine((m, ctx) => addConflicts(markConflicts(m), ctx), always);
 export const markPatch = markFields.partial();
 /** What the mark editor returns: the description of a mark, without its place on the photo. */
-export type MarkDescription = Pick<z.infer<typeof markFields>, "type" | "location" | "severity"> & { note: string | null };
+export type MarkDescription = Pick<z.infer<typeof markFields>, "type" | "location" | "severity"> & {
+  note: string | null;
+};
 export type MarkInput = z.infer<typeof markInput>;
 
 export const castingFields = z.object({
@@ -134,13 +136,20 @@ export function castingConflicts(c: Partial<z.infer<typeof castingFields>>): Rec
 }
 /** A new casting may carry marks; a photo comes after the casting exists, so these have none. */
 export const castingInput = castingFields
-  .extend({ marks: z.array(markFields.omit({ photoId: true, x: true, y: true }).strict()).max(50).optional() })
+  .extend({
+    marks: z
+      .array(markFields.omit({ photoId: true, x: true, y: true }).strict())
+      .max(50)
+      .optional(),
+  })
   .superRefine((c, ctx) => addConflicts(castingConflicts(c), ctx), always);
 export const castingPatch = castingFields.partial();
 export type CastingInput = z.infer<typeof castingInput>;
 export type Outcome = NonNullable<CastingInput["outcome"]>;
 
-export const commentInput = z.object({ body: z.string().trim().min(1, "write something").max(4000, "at most 4,000 characters") });
+export const commentInput = z.object({
+  body: z.string().trim().min(1, "write something").max(4000, "at most 4,000 characters"),
+});
 
 export const unitsInput = z.object({
   temperature: z.enum(["C", "F"], { error: "C or F" }),
@@ -150,7 +159,10 @@ export const unitsInput = z.object({
 export type Units = z.infer<typeof unitsInput>;
 export const DEFAULT_UNITS: Units = { temperature: "C", length: "mm", mass: "kg" };
 
-const pageQuery = { page: z.coerce.number().int().min(1).default(1), pageSize: z.coerce.number().int().min(1).max(100).default(20) };
+const pageQuery = {
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(100).default(20),
+};
 export const MELT_SORTS = ["date-desc", "date-asc", "alloy", "castings"] as const;
 export const CASTING_SORTS = ["date-desc", "date-asc", "part", "outcome"] as const;
 export const meltListQuery = z.object({ ...pageQuery, sort: z.enum(MELT_SORTS).default("date-desc") });
@@ -163,35 +175,82 @@ type Nullable<T> = { [K in keyof T]-?: Exclude<T[K], undefined> | null };
 export type Page<T> = { items: T[]; total: number; page: number; pageSize: number };
 
 export type Alloy = {
-  id: number; designation: string; family: AlloyFamily; solidusC: number; liquidusC: number; densityKgM3: number;
-  shrinkAllowancePct: number; siliconPct: number | null; sources: string;
+  id: number;
+  designation: string;
+  family: AlloyFamily;
+  solidusC: number;
+  liquidusC: number;
+  densityKgM3: number;
+  shrinkAllowancePct: number;
+  siliconPct: number | null;
+  sources: string;
   /** Built-in alloys come from rules/alloys.ts and belong to no shop (createdBy null). */
-  builtIn: boolean; createdBy: PersonRef | null; createdAt: string;
+  builtIn: boolean;
+  createdBy: PersonRef | null;
+  createdAt: string;
 };
-export type Melt = Row & Nullable<Omit<MeltInput, "pouredOn" | "alloy" | "process">> & {
-  pouredOn: string; alloy: string; process: Process;
-  charge: Charge | null; degassing: DegassingMethod | null; updatedAt: string;
-};
+export type Melt = Row &
+  Nullable<Omit<MeltInput, "pouredOn" | "alloy" | "process">> & {
+    pouredOn: string;
+    alloy: string;
+    process: Process;
+    charge: Charge | null;
+    degassing: DegassingMethod | null;
+    updatedAt: string;
+  };
 export type MeltSummary = Row & {
-  pouredOn: string; alloy: string; process: Process; furnace: string | null; pourTempC: number | null;
-  castingCount: number; scrapCount: number;
+  pouredOn: string;
+  alloy: string;
+  process: Process;
+  furnace: string | null;
+  pourTempC: number | null;
+  castingCount: number;
+  scrapCount: number;
 };
-export type Casting = Row & Nullable<Omit<CastingInput, "partName" | "marks">> & {
-  meltId: number; partName: string; outcome: Outcome | null; updatedAt: string;
-};
+export type Casting = Row &
+  Nullable<Omit<CastingInput, "partName" | "marks">> & {
+    meltId: number;
+    partName: string;
+    outcome: Outcome | null;
+    updatedAt: string;
+  };
 export type CastingSummary = Row & {
-  meltId: number; partName: string; pattern: string | null; outcome: Outcome | null;
-  pouredOn: string; alloy: string; process: Process;
-  markCount: number; photoCount: number; defectTypes: DefectType[]; thumbUrl: string | null;
+  meltId: number;
+  partName: string;
+  pattern: string | null;
+  outcome: Outcome | null;
+  pouredOn: string;
+  alloy: string;
+  process: Process;
+  markCount: number;
+  photoCount: number;
+  defectTypes: DefectType[];
+  thumbUrl: string | null;
 };
 export type Photo = Row & { castingId: number; width: number; height: number; imageUrl: string; thumbUrl: string };
 export type Mark = Row & {
-  castingId: number; photoId: number | null; x: number | null; y: number | null;
-  type: DefectType; location: DefectLocation; severity: number; note: string | null;
+  castingId: number;
+  photoId: number | null;
+  x: number | null;
+  y: number | null;
+  type: DefectType;
+  location: DefectLocation;
+  severity: number;
+  note: string | null;
 };
 export type Comment = Row & { castingId: number; body: string };
-export type DiagnosisSnapshot = { id: number; createdAt: string; createdBy: PersonRef; ruleSetVersion: string; result: DiagnosisResult };
+export type DiagnosisSnapshot = {
+  id: number;
+  createdAt: string;
+  createdBy: PersonRef;
+  ruleSetVersion: string;
+  result: DiagnosisResult;
+};
 export type CastingDetail = Casting & {
-  melt: Melt; photos: Photo[]; marks: Mark[]; comments: Comment[]; diagnosis: DiagnosisSnapshot | null;
+  melt: Melt;
+  photos: Photo[];
+  marks: Mark[];
+  comments: Comment[];
+  diagnosis: DiagnosisSnapshot | null;
 };
 export type MeltDetail = Melt & { castings: CastingSummary[] };

@@ -16,7 +16,8 @@ function quantityOf(name: string): Quantity | undefined {
   return q && q in SI_TOKEN ? (q as Quantity) : undefined;
 }
 
-const decimals = (q: Quantity, u: Units) => (q === "length" && u.length === "in" ? 2 : q === "density" && u.mass === "lb" ? 2 : 0);
+const decimals = (q: Quantity, u: Units) =>
+  q === "length" && u.length === "in" ? 2 : q === "density" && u.mass === "lb" ? 2 : 0;
 
 function plain(value: Reason["values"][string]): string {
   if (value === null || value === undefined) return "unknown";
@@ -29,14 +30,17 @@ function plain(value: Reason["values"][string]): string {
  * SI unit written right after it in the rule's sentence is swapped for theirs ("{pourTempC} °C" -> "1373 °F").
  */
 export function reasonInUnits(reason: Reason, units: Units): string {
-  const text = reason.template.replace(/\{([^}]+)\}(\s*)(°C|mm|kg\/m³)?/g, (whole, name: string, gap: string, token?: string) => {
-    const value = reason.values[name];
-    const q = quantityOf(name);
-    if (!q || typeof value !== "number") return plain(value) + gap + (token ?? "");
-    const inSi = unitLabel(q, units) === SI_TOKEN[q] || (q === "density" && units.mass === "kg");
-    const shown = inSi ? value : Number(fromSi(q, value, units).toFixed(decimals(q, units)));
-    const unit = token && token === SI_TOKEN[q] ? unitLabel(q, units) : token;
-    return String(shown) + gap + (unit ?? "");
-  });
+  const text = reason.template.replace(
+    /\{([^}]+)\}(\s*)(°C|mm|kg\/m³)?/g,
+    (whole, name: string, gap: string, token?: string) => {
+      const value = reason.values[name];
+      const q = quantityOf(name);
+      if (!q || typeof value !== "number") return plain(value) + gap + (token ?? "");
+      const inSi = unitLabel(q, units) === SI_TOKEN[q] || (q === "density" && units.mass === "kg");
+      const shown = inSi ? value : Number(fromSi(q, value, units).toFixed(decimals(q, units)));
+      const unit = token && token === SI_TOKEN[q] ? unitLabel(q, units) : token;
+      return String(shown) + gap + (unit ?? "");
+    },
+  );
   return reason.against ? `Against: ${text}` : text;
 }

@@ -23,7 +23,11 @@ export const confirmationInput = z
     if (!c.causeId && !c.causeText)
       ctx.addIssue({ code: "custom", path: ["causeId"], message: "choose a cause, or name another" });
     if (c.causeId && c.causeText)
-      ctx.addIssue({ code: "custom", path: ["causeText"], message: "either a cause from the list or another, not both" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["causeText"],
+        message: "either a cause from the list or another, not both",
+      });
   });
 export type ConfirmationInput = z.infer<typeof confirmationInput>;
 
@@ -38,7 +42,8 @@ const fixFields = z.object({
 });
 /** Whether a fix worked is read off the next casting, so it needs one linked. */
 const workedNeedsNext = (f: { nextCastingId?: number | null; worked?: Worked | null }, ctx: z.RefinementCtx) => {
-  if (f.worked && !f.nextCastingId) ctx.addIssue({ code: "custom", path: ["worked"], message: "link the next casting first" });
+  if (f.worked && !f.nextCastingId)
+    ctx.addIssue({ code: "custom", path: ["worked"], message: "link the next casting first" });
 };
 export const fixInput = fixFields.superRefine(workedNeedsNext);
 export const fixPatch = fixFields.partial();
@@ -47,23 +52,52 @@ export type FixPatch = z.infer<typeof fixPatch>;
 
 // ---- Answers ----
 export type ReviewRequest = {
-  id: number; castingId: number; note: string | null;
-  createdBy: PersonRef | null; createdAt: string; answeredAt: string | null;
+  id: number;
+  castingId: number;
+  note: string | null;
+  createdBy: PersonRef | null;
+  createdAt: string;
+  answeredAt: string | null;
 };
 export type Confirmation = {
-  id: number; castingId: number; causeId: string | null; causeTitle: string; note: string | null;
-  createdBy: PersonRef | null; createdAt: string;
+  id: number;
+  castingId: number;
+  causeId: string | null;
+  causeTitle: string;
+  note: string | null;
+  createdBy: PersonRef | null;
+  createdAt: string;
 };
-export type CaseReview = { waiting: ReviewRequest | null; requests: ReviewRequest[]; current: Confirmation | null; confirmations: Confirmation[] };
+export type CaseReview = {
+  waiting: ReviewRequest | null;
+  requests: ReviewRequest[];
+  current: Confirmation | null;
+  confirmations: Confirmation[];
+};
 export type QueueItem = {
-  requestId: number; castingId: number; meltId: number; partName: string; pouredOn: string; alloy: string;
-  process: Process; defectTypes: DefectType[]; note: string | null; askedBy: PersonRef | null; askedAt: string;
+  requestId: number;
+  castingId: number;
+  meltId: number;
+  partName: string;
+  pouredOn: string;
+  alloy: string;
+  process: Process;
+  defectTypes: DefectType[];
+  note: string | null;
+  askedBy: PersonRef | null;
+  askedAt: string;
   topCause: { id: string; title: string; score: number } | null;
 };
 export type CastingRef = { id: number; meltId: number; partName: string; pouredOn: string; outcome: Outcome | null };
 export type FixTried = {
-  id: number; castingId: number; fix: string; next: CastingRef | null; worked: Worked | null;
-  createdBy: PersonRef | null; createdAt: string; updatedAt: string;
+  id: number;
+  castingId: number;
+  fix: string;
+  next: CastingRef | null;
+  worked: Worked | null;
+  createdBy: PersonRef | null;
+  createdAt: string;
+  updatedAt: string;
 };
 /** One casting of the part in the chain of fixes, oldest first; `current` marks the casting on screen. */
 export type ChainLink = { casting: CastingRef; fixes: FixTried[]; current: boolean };
@@ -73,4 +107,6 @@ export type Followups = { fixes: FixTried[]; chain: ChainLink[]; candidates: Cas
 export type CauseWithRecord = RankedCause & { record?: CauseRecord | null };
 /** "right in 7 of 9 confirmed cases here", or null with no confirmed case yet. */
 export const recordWords = (r: CauseRecord | null | undefined) =>
-  r && r.confirmed > 0 ? `right in ${r.right} of ${r.confirmed} confirmed case${r.confirmed === 1 ? "" : "s"} here` : null;
+  r && r.confirmed > 0
+    ? `right in ${r.right} of ${r.confirmed} confirmed case${r.confirmed === 1 ? "" : "s"} here`
+    : null;

@@ -8,7 +8,10 @@ import { fromField, toField, unitLabel, type Quantity, type Units } from "./unit
  * everyone and stay as the rules store them.
  */
 const CONVERTED: Partial<Record<FactQuantity, Quantity>> = {
-  temperature: "temperature", "temperature-difference": "temperature-difference", length: "length", density: "density",
+  temperature: "temperature",
+  "temperature-difference": "temperature-difference",
+  length: "length",
+  density: "density",
 };
 
 export const factUnit = (spec: NumberFact, u: Units) => {
@@ -32,10 +35,12 @@ export function textToSi(spec: NumberFact, text: string, u: Units): number | und
 }
 
 /** For rules/rule-words.ts: "1274 °F", "0.5 in", "4 %". */
-export const unitsFormat = (u: Units): ValueFormat => (spec, si) => {
-  const unit = factUnit(spec, u);
-  return `${siToText(spec, Number(si.toFixed(6)), u)}${unit ? ` ${unit}` : ""}`;
-};
+export const unitsFormat =
+  (u: Units): ValueFormat =>
+  (spec, si) => {
+    const unit = factUnit(spec, u);
+    return `${siToText(spec, Number(si.toFixed(6)), u)}${unit ? ` ${unit}` : ""}`;
+  };
 
 /** A fact's label with the unit a person reads it in. */
 export const factLabel = (spec: FactSpec, u: Units) => {

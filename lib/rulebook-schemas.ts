@@ -16,13 +16,20 @@ import type { PersonRef } from "./notebook-schemas";
 export const COMPARISONS = ["below", "above", "between", "one-of", "not-one-of", "is", "missing"] as const;
 export type Comparison = (typeof COMPARISONS)[number];
 export const COMPARISON_WORDS: Record<Comparison, string> = {
-  below: "is below", above: "is above", between: "is between", "one-of": "is one of",
-  "not-one-of": "is not one of", is: "is", missing: "is missing",
+  below: "is below",
+  above: "is above",
+  between: "is between",
+  "one-of": "is one of",
+  "not-one-of": "is not one of",
+  is: "is",
+  missing: "is missing",
 };
 export const comparisonsFor = (spec: FactSpec): Comparison[] =>
-  spec.kind === "number" ? ["below", "above", "between", "missing"]
-  : spec.kind === "enum" ? ["one-of", "not-one-of", "missing"]
-  : ["is", "missing"];
+  spec.kind === "number"
+    ? ["below", "above", "between", "missing"]
+    : spec.kind === "enum"
+      ? ["one-of", "not-one-of", "missing"]
+      : ["is", "missing"];
 
 export type ConditionRow = { fact: string; comparison: Comparison | ""; value?: unknown };
 
@@ -61,9 +68,14 @@ export function rowProblems(row: ConditionRow): Partial<Record<"fact" | "compari
 }
 
 const conditionRow = z
-  .object({ fact: z.string(), comparison: z.union([z.enum(COMPARISONS), z.literal("")]), value: z.unknown().optional() })
+  .object({
+    fact: z.string(),
+    comparison: z.union([z.enum(COMPARISONS), z.literal("")]),
+    value: z.unknown().optional(),
+  })
   .superRefine((row, ctx) => {
-    for (const [part, message] of Object.entries(rowProblems(row))) ctx.addIssue({ code: "custom", path: [part], message });
+    for (const [part, message] of Object.entries(rowProblems(row)))
+      ctx.addIssue({ code: "custom", path: [part], message });
   });
 
 const line = (what: string, max: number) => z.string().trim().min(1, what).max(max, `at most ${max} characters`);
@@ -74,7 +86,10 @@ export const causeChoice = z.discriminatedUnion(
     z.object({
       kind: z.literal("new"),
       title: line("name the cause", 200),
-      fixes: z.array(line("write the fix or remove the line", 300)).min(1, "give at least one fix to try").max(10, "at most 10 fixes"),
+      fixes: z
+        .array(line("write the fix or remove the line", 300))
+        .min(1, "give at least one fix to try")
+        .max(10, "at most 10 fixes"),
     }),
   ],
   { error: "choose a cause or name a new one" },
@@ -88,12 +103,18 @@ export const ruleDraftInput = z.object({
   conditions: z.array(conditionRow).min(1, "add at least one condition").max(12, "at most 12 conditions"),
   effect: z.enum(["supports", "weakens"]).default("supports"),
   cause: causeChoice,
-  weight: z.number({ error: "choose how strong the evidence is" }).gt(0, "weight must be above 0").lte(1, "weight is at most 1"),
+  weight: z
+    .number({ error: "choose how strong the evidence is" })
+    .gt(0, "weight must be above 0")
+    .lte(1, "weight is at most 1"),
   because: line("say in a sentence why", 500).refine(
     (s) => [...s.matchAll(/\{([^}]*)\}/g)].every(([, name]) => factSpec(name)),
     "text in {braces} must be a fact name; leave braces out",
   ),
-  sources: z.array(line("write the source or remove the line", 300)).min(1, "name a source, or choose shop experience").max(10),
+  sources: z
+    .array(line("write the source or remove the line", 300))
+    .min(1, "name a source, or choose shop experience")
+    .max(10),
 });
 export type RuleDraft = z.input<typeof ruleDraftInput>;
 export type RuleDraftParsed = z.output<typeof ruleDraftInput>;
@@ -101,7 +122,15 @@ export type RuleDraftParsed = z.output<typeof ruleDraftInput>;
 export const SHOP_EXPERIENCE = "shop experience";
 
 export function rowToLeaf(row: ConditionRow): Leaf {
-  const op = { below: "lessThan", above: "greaterThan", between: "between", "one-of": "in", "not-one-of": "notIn", is: "equal", missing: "isMissing" } as const;
+  const op = {
+    below: "lessThan",
+    above: "greaterThan",
+    between: "between",
+    "one-of": "in",
+    "not-one-of": "notIn",
+    is: "equal",
+    missing: "isMissing",
+  } as const;
   if (!row.comparison) throw new Error("a condition without a comparison");
   return { fact: row.fact, operator: op[row.comparison], value: row.comparison === "missing" ? true : row.value };
 }
@@ -111,14 +140,28 @@ export function leafToRow(l: Leaf): ConditionRow {
   const spec = factSpec(l.fact);
   const v = l.value;
   switch (l.operator) {
-    case "lessThan": case "lessThanInclusive": return { fact: l.fact, comparison: "below", value: v };
-    case "greaterThan": case "greaterThanInclusive": return { fact: l.fact, comparison: "above", value: v };
-    case "between": return { fact: l.fact, comparison: "between", value: v };
-    case "in": return { fact: l.fact, comparison: "one-of", value: v };
-    case "notIn": return { fact: l.fact, comparison: "not-one-of", value: v };
-    case "equal": return spec?.kind === "boolean" ? { fact: l.fact, comparison: "is", value: v } : { fact: l.fact, comparison: "one-of", value: [v] };
-    case "notEqual": return spec?.kind === "boolean" ? { fact: l.fact, comparison: "is", value: !v } : { fact: l.fact, comparison: "not-one-of", value: [v] };
-    default: return { fact: l.fact, comparison: "missing" };
+    case "lessThan":
+    case "lessThanInclusive":
+      return { fact: l.fact, comparison: "below", value: v };
+    case "greaterThan":
+    case "greaterThanInclusive":
+      return { fact: l.fact, comparison: "above", value: v };
+    case "between":
+      return { fact: l.fact, comparison: "between", value: v };
+    case "in":
+      return { fact: l.fact, comparison: "one-of", value: v };
+    case "notIn":
+      return { fact: l.fact, comparison: "not-one-of", value: v };
+    case "equal":
+      return spec?.kind === "boolean"
+        ? { fact: l.fact, comparison: "is", value: v }
+        : { fact: l.fact, comparison: "one-of", value: [v] };
+    case "notEqual":
+      return spec?.kind === "boolean"
+        ? { fact: l.fact, comparison: "is", value: !v }
+        : { fact: l.fact, comparison: "not-one-of", value: [v] };
+    default:
+      return { fact: l.fact, comparison: "missing" };
   }
 }
 
@@ -178,7 +221,13 @@ export type RuleRow = {
 };
 export type CauseOption = { id: string; title: string; fixes: string[]; shop: boolean };
 export type Rulebook = { rules: RuleRow[]; causes: CauseOption[]; confirmedCases: number };
-export type RuleVersion = { version: number; status: RuleStatus; rule: KbRule; createdBy: PersonRef | null; createdAt: string };
+export type RuleVersion = {
+  version: number;
+  status: RuleStatus;
+  rule: KbRule;
+  createdBy: PersonRef | null;
+  createdAt: string;
+};
 export type RuleSwitch = { off: boolean; createdBy: PersonRef | null; createdAt: string };
 export type RuleDetail = RuleRow & {
   rule: KbRule;

@@ -24,11 +24,26 @@ export const searchWords = (q: string) => q.toLowerCase().match(SEARCH_TOKEN) ??
 
 /** A list in a query string: "a,b", or the parameter repeated; blanks dropped. */
 const splitList = (v: unknown) =>
-  v === undefined ? undefined : (Array.isArray(v) ? v : [v]).flatMap((s) => String(s).split(",")).map((s) => s.trim()).filter(Boolean);
+  v === undefined
+    ? undefined
+    : (Array.isArray(v) ? v : [v])
+        .flatMap((s) => String(s).split(","))
+        .map((s) => s.trim())
+        .filter(Boolean);
 const oneOf = <T extends readonly [string, ...string[]]>(what: string, values: T) =>
-  z.preprocess(splitList, z.array(z.enum(values, { error: (i) => `"${String(i.input)}" is not ${what}; use one of: ${values.join(", ")}` }))).optional();
+  z
+    .preprocess(
+      splitList,
+      z.array(
+        z.enum(values, { error: (i) => `"${String(i.input)}" is not ${what}; use one of: ${values.join(", ")}` }),
+      ),
+    )
+    .optional();
 /** Alloys, causes and people are checked against the shop's own lists by the server. */
-const names = (max: number) => z.preprocess(splitList, z.array(z.string().max(max, `at most ${max} characters`)).max(20, "at most 20 at once")).optional();
+const names = (max: number) =>
+  z
+    .preprocess(splitList, z.array(z.string().max(max, `at most ${max} characters`)).max(20, "at most 20 at once"))
+    .optional();
 
 export const searchQuery = z
   .object({
@@ -37,7 +52,10 @@ export const searchQuery = z
       .trim()
       .max(SEARCH_QUERY_MAX, `search words are limited to ${SEARCH_QUERY_MAX} characters`)
       .refine((q) => searchWords(q).length <= SEARCH_MAX_WORDS, `use at most ${SEARCH_MAX_WORDS} words`)
-      .refine((q) => searchWords(q).every((w) => w.length <= SEARCH_WORD_MAX), `a word may have at most ${SEARCH_WORD_MAX} letters`)
+      .refine(
+        (q) => searchWords(q).every((w) => w.length <= SEARCH_WORD_MAX),
+        `a word may have at most ${SEARCH_WORD_MAX} letters`,
+      )
       .default(""),
     defect: oneOf("a defect type", DEFECT_TYPES),
     alloy: names(40),
@@ -48,10 +66,23 @@ export const searchQuery = z
     from: z.iso.date("a date as YYYY-MM-DD").optional(),
     to: z.iso.date("a date as YYYY-MM-DD").optional(),
     sort: z.enum(SEARCH_SORTS, { error: `sort is one of: ${SEARCH_SORTS.join(", ")}` }).optional(),
-    page: z.coerce.number({ error: "a page number" }).int("a whole page number").min(1, "pages start at 1").max(10_000).default(1),
-    pageSize: z.coerce.number({ error: "a number" }).int().min(1, "at least 1").max(SEARCH_PAGE_MAX, `at most ${SEARCH_PAGE_MAX}`).default(20),
+    page: z.coerce
+      .number({ error: "a page number" })
+      .int("a whole page number")
+      .min(1, "pages start at 1")
+      .max(10_000)
+      .default(1),
+    pageSize: z.coerce
+      .number({ error: "a number" })
+      .int()
+      .min(1, "at least 1")
+      .max(SEARCH_PAGE_MAX, `at most ${SEARCH_PAGE_MAX}`)
+      .default(20),
   })
-  .refine((s) => !s.from || !s.to || s.from <= s.to, { path: ["to"], message: "the end date is before the start date" });
+  .refine((s) => !s.from || !s.to || s.from <= s.to, {
+    path: ["to"],
+    message: "the end date is before the start date",
+  });
 export type SearchParams = z.output<typeof searchQuery>;
 /** What the screen sends; lists go as "a,b" (hooks/use-search.ts). */
 export type SearchRequest = Partial<Omit<SearchParams, "outcome">> & { outcome?: Outcome[] };
@@ -62,20 +93,34 @@ export type MarkedField = "part" | "defects" | "causes" | "conditions" | "notes"
 
 export type CaseCause = { id: string | null; title: string; confirmed: boolean };
 export type CaseSummary = {
-  id: number; meltId: number; partName: string; pouredOn: string; alloy: string; process: Process;
-  outcome: Outcome | null; defects: { type: DefectType; location: DefectLocation; severity: number }[];
+  id: number;
+  meltId: number;
+  partName: string;
+  pouredOn: string;
+  alloy: string;
+  process: Process;
+  outcome: Outcome | null;
+  defects: { type: DefectType; location: DefectLocation; severity: number }[];
   /** The mentor's confirmed cause, else the latest diagnosis's first cause. */
-  cause: CaseCause | null; fixWorked: Worked | null; createdBy: PersonRef;
+  cause: CaseCause | null;
+  fixWorked: Worked | null;
+  createdBy: PersonRef;
 };
 export type CaseHit = CaseSummary & { score: number | null; marked: Partial<Record<MarkedField, Marked>> };
 export type SearchFacets = {
-  defect: Partial<Record<DefectType, number>>; alloy: Record<string, number>;
-  process: Partial<Record<Process, number>>; outcome: Partial<Record<Outcome, number>>;
+  defect: Partial<Record<DefectType, number>>;
+  alloy: Record<string, number>;
+  process: Partial<Record<Process, number>>;
+  outcome: Partial<Record<Outcome, number>>;
   /** By cause id: confirmed causes, else the latest diagnosis's first. */
   cause: Record<string, { title: string; count: number }>;
 };
 export type SearchAnswer = {
-  items: CaseHit[]; total: number; page: number; pageSize: number; sort: SearchSort;
+  items: CaseHit[];
+  total: number;
+  page: number;
+  pageSize: number;
+  sort: SearchSort;
   /** Counts for each filter's chips, with every other filter applied. */
   facets: SearchFacets;
 };
@@ -92,8 +137,15 @@ export type SimilarCase = CaseSummary & { similarity: number; reason: string; pa
 export type SimilarAnswer = { items: SimilarCase[] };
 
 const LOCATION_PHRASES: Record<DefectLocation, string> = {
-  top: "at the top", bottom: "at the bottom", side: "on the side", corner: "at a corner", "thin-section": "in a thin section",
-  "thick-section": "in a thick section", "near-gate": "near the gate", "far-from-gate": "far from the gate", throughout: "throughout",
+  top: "at the top",
+  bottom: "at the bottom",
+  side: "on the side",
+  corner: "at a corner",
+  "thin-section": "in a thin section",
+  "thick-section": "in a thick section",
+  "near-gate": "near the gate",
+  "far-from-gate": "far from the gate",
+  throughout: "throughout",
 };
 
 /** "same defect at the top, lost foam, superheat 30 °C lower" */
@@ -108,10 +160,14 @@ export function reasonText(parts: ReasonPart[], units: Units = SI_UNITS): string
         return p.sameFamily ? `${p.alloy} (same family)` : p.alloy;
       case "superheat": {
         const d = Math.round(fromSi("temperature-difference", Math.abs(p.deltaC), units));
-        return d === 0 ? "same superheat" : `superheat ${d} ${unitLabel("temperature", units)} ${p.deltaC < 0 ? "lower" : "higher"}`;
+        return d === 0
+          ? "same superheat"
+          : `superheat ${d} ${unitLabel("temperature", units)} ${p.deltaC < 0 ? "lower" : "higher"}`;
       }
       case "degassing":
-        return p.method === "none" ? "not degassed either" : `${DEGASSING_LABELS[p.method as keyof typeof DEGASSING_LABELS] ?? p.method} degassing`;
+        return p.method === "none"
+          ? "not degassed either"
+          : `${DEGASSING_LABELS[p.method as keyof typeof DEGASSING_LABELS] ?? p.method} degassing`;
       case "section": {
         const mm = fromSi("length", p.minSectionMm, units);
         return `similar ${Number(mm.toFixed(units.length === "in" ? 2 : 0))} ${units.length} section`;

@@ -24,14 +24,21 @@ const locationFits = (rule: KbRule, type: DefectType, at: DefectLocation) =>
   rule.explains.some((e) => e.type === type && (!e.locations || at === "throughout" || e.locations.includes(at)));
 
 /** The rules that fire on a case for at least one of its marks (type and location), as diagnose counts them. */
-export async function firedRules(c: DiagnosisCase, alloy: AlloySpec, rs: RuleSet | CompiledRuleSet): Promise<Set<string>> {
+export async function firedRules(
+  c: DiagnosisCase,
+  alloy: AlloySpec,
+  rs: RuleSet | CompiledRuleSet,
+): Promise<Set<string>> {
   const compiled = "byType" in rs ? rs : compiledRuleSet(rs);
   const facts = deriveFacts(c, alloy);
   const out = new Set<string>();
   for (const type of new Set(c.defects.map((d) => d.type))) {
     const fired = await firedRuleIds(compiled, type, facts);
     for (const rule of compiled.byType.get(type)?.rules ?? [])
-      if (fired.has(rule.id) && c.defects.some((d) => d.type === type && locationFits(rule, type, d.location ?? "throughout")))
+      if (
+        fired.has(rule.id) &&
+        c.defects.some((d) => d.type === type && locationFits(rule, type, d.location ?? "throughout"))
+      )
         out.add(rule.id);
   }
   return out;
@@ -79,12 +86,22 @@ export type BacktestInput = {
   weightFactor?: (ruleId: string) => number;
 };
 
-const top = (r: { causes: { id: string; title: string }[] }): CauseRef => (r.causes[0] ? { id: r.causes[0].id, title: r.causes[0].title } : null);
+const top = (r: { causes: { id: string; title: string }[] }): CauseRef =>
+  r.causes[0] ? { id: r.causes[0].id, title: r.causes[0].title } : null;
 
 export async function backtest({ cases, base, rule, cause, weightFactor }: BacktestInput): Promise<Backtest> {
   const after = withRule(base, rule, cause);
   const only = compiledRuleSet({ ...after, rules: [rule], version: `${after.version}:only:${rule.id}` });
-  const out: Backtest = { cases: cases.length, fired: 0, firedConfirmed: 0, agreed: 0, confirmedCases: 0, topRightBefore: 0, topRightAfter: 0, changed: [] };
+  const out: Backtest = {
+    cases: cases.length,
+    fired: 0,
+    firedConfirmed: 0,
+    agreed: 0,
+    confirmedCases: 0,
+    topRightBefore: 0,
+    topRightAfter: 0,
+    changed: [],
+  };
   for (const s of cases) {
     const fired = (await firedRules(s.case, s.alloy, only)).has(rule.id);
     const confirmedId = s.confirmed ? s.confirmed.causeId : undefined;
@@ -110,7 +127,16 @@ export async function backtest({ cases, base, rule, cause, weightFactor }: Backt
     const verdict: Verdict =
       confirmedId === undefined ? "unconfirmed" : rightAfter ? "now-right" : rightBefore ? "now-wrong" : "still-wrong";
     const { castingId, meltId, partName, pouredOn } = s;
-    out.changed.push({ castingId, meltId, partName, pouredOn, before: b, after: a, confirmed: confirmedId === undefined ? null : { id: confirmedId }, verdict });
+    out.changed.push({
+      castingId,
+      meltId,
+      partName,
+      pouredOn,
+      before: b,
+      after: a,
+      confirmed: confirmedId === undefined ? null : { id: confirmedId },
+      verdict,
+    });
   }
   return out;
 }

@@ -59,4 +59,5 @@ export function causeRecords(firings: Firing[], rules: KbRule[]): Map<string, Ca
   return out;
 }
 
-export const weightFactors = (records: Map<string, RuleRecord>) => (ruleId: string) => weightFactorOf(records.get(ruleId));
+export const weightFactors = (records: Map<string, RuleRecord>) => (ruleId: string) =>
+  weightFactorOf(records.get(ruleId));

@@ -79,9 +79,7 @@ export const caseSchema = z
     process: z.enum(PROCESSES, { error: `process must be one of: ${list(PROCESSES)}` }),
     pourTempC: temperatureC.optional(),
     meltTempC: temperatureC.optional(),
-    degassing: z
-      .enum(DEGASSING_METHODS, { error: `degassing must be one of: ${list(DEGASSING_METHODS)}` })
-      .optional(),
+    degassing: z.enum(DEGASSING_METHODS, { error: `degassing must be one of: ${list(DEGASSING_METHODS)}` }).optional(),
     degasMinutes: z.number().min(0, "cannot be negative").max(240).optional(),
     fluxed: z.boolean().optional(),
     skimmed: z.boolean().optional(),
@@ -107,7 +105,11 @@ export const caseSchema = z
   })
   .superRefine((c, ctx) => {
     if (c.minSectionMm !== undefined && c.maxSectionMm !== undefined && c.minSectionMm > c.maxSectionMm) {
-      ctx.addIssue({ code: "custom", path: ["minSectionMm"], message: "thinnest section is thicker than the thickest" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["minSectionMm"],
+        message: "thinnest section is thicker than the thickest",
+      });
     }
   });
 export type DiagnosisCase = z.infer<typeof caseSchema>;

@@ -3,7 +3,16 @@ import { BUILT_IN_ALLOYS, findBuiltInAlloy, type AlloySpec } from "./alloys";
 import type { DefectLocation, DefectType, DiagnosisCase } from "./case";
 import type { Facts } from "./fact-catalog";
 import { deriveFacts } from "./facts";
-import { checkRule, conditionLeaves, isKnown, OPERATORS, RuleFileError, type KbCause, type KbRule, type RuleSet } from "./kb-schema";
+import {
+  checkRule,
+  conditionLeaves,
+  isKnown,
+  OPERATORS,
+  RuleFileError,
+  type KbCause,
+  type KbRule,
+  type RuleSet,
+} from "./kb-schema";
 import { BUILT_IN_RULE_SET, ruleSetVersion } from "./knowledge-base";
 import { cautionsFor, displayFacts, missingInputs, rankCauses, type DiagnosisResult, type Hit } from "./rank";
 
@@ -13,7 +22,10 @@ export type DiagnoseOptions = { alloy?: AlloySpec; ruleSet?: RuleSet; weightFact
 /** Bad input the caller can fix (an alloy not in the table); the message lists what is accepted. */
 export class DiagnosisInputError extends Error {
   readonly code = "unknown-alloy";
-  constructor(readonly alloy: string, readonly accepted: string[]) {
+  constructor(
+    readonly alloy: string,
+    readonly accepted: string[],
+  ) {
     super(`Unknown alloy "${alloy}". Accepted: ${accepted.join(", ")}`);
     this.name = "DiagnosisInputError";
   }
@@ -94,11 +106,17 @@ const locationFits = (rule: KbRule, type: DefectType, at: DefectLocation) =>
 
 export async function diagnose(c: DiagnosisCase, options: DiagnoseOptions = {}): Promise<DiagnosisResult> {
   const alloy = options.alloy ?? findBuiltInAlloy(c.alloy);
-  if (!alloy) throw new DiagnosisInputError(c.alloy, BUILT_IN_ALLOYS.map((a) => a.designation));
+  if (!alloy)
+    throw new DiagnosisInputError(
+      c.alloy,
+      BUILT_IN_ALLOYS.map((a) => a.designation),
+    );
   const compiled = compiledRuleSet(options.ruleSet ?? BUILT_IN_RULE_SET);
   const facts = deriveFacts(c, alloy);
   const types = [...new Set(c.defects.map((d) => d.type))];
-  const fired = new Map(await Promise.all(types.map(async (t) => [t, await firedRuleIds(compiled, t, facts)] as const)));
+  const fired = new Map(
+    await Promise.all(types.map(async (t) => [t, await firedRuleIds(compiled, t, facts)] as const)),
+  );
   const hits: Hit[] = [];
   const unfired: KbRule[] = [];
   for (const d of c.defects) {
@@ -113,7 +131,10 @@ export async function diagnose(c: DiagnosisCase, options: DiagnoseOptions = {}):
   return {
     causes,
     facts: displayFacts(facts),
-    cautions: cautionsFor(c, causes.slice(0, 3).map((x) => compiled.causes.get(x.id)!)),
+    cautions: cautionsFor(
+      c,
+      causes.slice(0, 3).map((x) => compiled.causes.get(x.id)!),
+    ),
     missing: missingInputs(unfired, facts, weightFactor, new Set(causes.map((x) => x.id))),
   };
 }

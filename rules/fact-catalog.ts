@@ -33,11 +33,19 @@ export const MOISTURE_RISKS = ["low", "moderate", "high"] as const;
 export const POUR_WINDOW_POSITIONS = ["below", "inside", "above"] as const;
 
 const n = (name: string, label: string, quantity: FactQuantity, derived = false): FactSpec => ({
-  name, label, kind: "number", quantity, derived,
+  name,
+  label,
+  kind: "number",
+  quantity,
+  derived,
 });
 const b = (name: string, label: string, derived = false): FactSpec => ({ name, label, kind: "boolean", derived });
 const e = (name: string, label: string, values: readonly string[], derived = false): FactSpec => ({
-  name, label, kind: "enum", values, derived,
+  name,
+  label,
+  kind: "enum",
+  values,
+  derived,
 });
 
 export const FACTS: readonly FactSpec[] = [

@@ -35,14 +35,16 @@ export const causeSchema = z.strictObject({
 export const ruleSchema = z.strictObject({
   id: z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, "ids are lower-case words joined by hyphens"),
   explains: z
-    .array(z.strictObject({ type: z.enum(DEFECT_TYPES), locations: z.array(z.enum(DEFECT_LOCATIONS)).min(1).optional() }))
+    .array(
+      z.strictObject({ type: z.enum(DEFECT_TYPES), locations: z.array(z.enum(DEFECT_LOCATIONS)).min(1).optional() }),
+    )
     .min(1, "a rule explains at least one defect type"),
   cause: z.string().min(1),
   effect: z.enum(["supports", "weakens"]).default("supports"),
   weight: z.number().gt(0, "weight must be above 0").lte(1, "weight must be at most 1"),
   conditions: topConditionSchema,
   because: text,
-  sources: z.array(text).min(1, "name at least one source (or \"common practice\", \"shop experience\")"),
+  sources: z.array(text).min(1, 'name at least one source (or "common practice", "shop experience")'),
 });
 export const ruleFileSchema = z.strictObject({
   family: z.string().min(1),
@@ -81,7 +83,9 @@ export const OPERATORS: Record<string, Op> = {
   isMissing: (a, b: boolean) => !isKnown(a) === b,
 };
 export const evaluateLeaf = (leaf: Leaf, factValue: unknown) =>
-  leaf.operator === "isMissing" || isKnown(factValue) ? OPERATORS[leaf.operator](factValue, leaf.value as never) : false;
+  leaf.operator === "isMissing" || isKnown(factValue)
+    ? OPERATORS[leaf.operator](factValue, leaf.value as never)
+    : false;
 
 const COMPARE = ["lessThan", "lessThanInclusive", "greaterThan", "greaterThanInclusive"];
 const isNum = (v: unknown) => typeof v === "number" && Number.isFinite(v);
@@ -95,7 +99,8 @@ function checkLeaf(leaf: Leaf, spec: FactSpec): string[] {
     if (COMPARE.includes(op) || op === "equal" || op === "notEqual") return isNum(v) ? [] : [`${on} needs a number`];
     if (op === "between")
       return Array.isArray(v) && v.length === 2 && v.every(isNum) && v[0] <= v[1] ? [] : [`${on} needs [low, high]`];
-    if (op === "in" || op === "notIn") return Array.isArray(v) && v.length > 0 && v.every(isNum) ? [] : [`${on} needs a list of numbers`];
+    if (op === "in" || op === "notIn")
+      return Array.isArray(v) && v.length > 0 && v.every(isNum) ? [] : [`${on} needs a list of numbers`];
     return [`${on} is not allowed`];
   }
   if (spec.kind === "boolean") {
@@ -103,7 +108,8 @@ function checkLeaf(leaf: Leaf, spec: FactSpec): string[] {
     return [`${on} is not allowed (use equal, notEqual or isMissing)`];
   }
   const known = (x: unknown) => typeof x === "string" && spec.values.includes(x);
-  const bad = (x: unknown) => `value ${JSON.stringify(x)} is not one of ${spec.name}'s values (${spec.values.join(", ")})`;
+  const bad = (x: unknown) =>
+    `value ${JSON.stringify(x)} is not one of ${spec.name}'s values (${spec.values.join(", ")})`;
   if (op === "equal" || op === "notEqual") return known(v) ? [] : [bad(v)];
   if (op === "in" || op === "notIn") {
     if (!Array.isArray(v) || v.length === 0) return [`${on} needs a list`];
@@ -144,7 +150,8 @@ const describeIssue = (file: string, raw: unknown, issue: z.core.$ZodIssue) => {
   const [k, i, ...rest] = issue.path;
   const list = (raw as Record<string, unknown> | null)?.[k as string];
   const id = Array.isArray(list) && typeof i === "number" ? (list[i] as { id?: unknown })?.id : undefined;
-  const where = id !== undefined ? `${k === "rules" ? "rule" : "cause"} "${String(id)}" ${rest.join(".")}` : issue.path.join(".");
+  const where =
+    id !== undefined ? `${k === "rules" ? "rule" : "cause"} "${String(id)}" ${rest.join(".")}` : issue.path.join(".");
   return `${file}: ${where}: ${issue.message}`;
 };
 
@@ -161,10 +168,17 @@ export function validateRuleFiles(files: { name: string; json: unknown }[]): { c
   const rules = parsed.flatMap((p) => p.file.rules);
   const seen = (ids: string[], what: string) =>
     ids.filter((id, i) => ids.indexOf(id) !== i).forEach((id) => problems.push(`${what} "${id}" is defined twice`));
-  seen(causes.map((c) => c.id), "cause");
-  seen(rules.map((r) => r.id), "rule");
+  seen(
+    causes.map((c) => c.id),
+    "cause",
+  );
+  seen(
+    rules.map((r) => r.id),
+    "rule",
+  );
   const causeIds = new Set(causes.map((c) => c.id));
-  for (const p of parsed) for (const r of p.file.rules) problems.push(...checkRule(r, causeIds).map((m) => `${p.name}: ${m}`));
+  for (const p of parsed)
+    for (const r of p.file.rules) problems.push(...checkRule(r, causeIds).map((m) => `${p.name}: ${m}`));
   if (problems.length) throw new RuleFileError(problems);
   return { causes, rules };
 }

@@ -51,7 +51,12 @@ const reasonOf = (template: string, against: boolean, facts: Facts): Reason => {
  * Π(1 − weight × shop factor) over the rules that speak against it. A rule counts once, at the worst
  * severity of the marks it fired for. Causes with no support are left out.
  */
-export function rankCauses(hits: Hit[], causes: Map<string, KbCause>, facts: Facts, weightFactor: (ruleId: string) => number): RankedCause[] {
+export function rankCauses(
+  hits: Hit[],
+  causes: Map<string, KbCause>,
+  facts: Facts,
+  weightFactor: (ruleId: string) => number,
+): RankedCause[] {
   const worst = new Map<string, Hit>();
   for (const h of hits) if ((worst.get(h.rule.id)?.severity ?? 0) < h.severity) worst.set(h.rule.id, h);
   const byCause = new Map<string, Hit[]>();
@@ -74,7 +79,10 @@ export function rankCauses(hits: Hit[], causes: Map<string, KbCause>, facts: Fac
         ...pro.map((h) => fillBecause(h.rule.because, facts)),
         ...con.map((h) => `Against: ${fillBecause(h.rule.because, facts)}`),
       ],
-      reasons: [...pro.map((h) => reasonOf(h.rule.because, false, facts)), ...con.map((h) => reasonOf(h.rule.because, true, facts))],
+      reasons: [
+        ...pro.map((h) => reasonOf(h.rule.because, false, facts)),
+        ...con.map((h) => reasonOf(h.rule.because, true, facts)),
+      ],
       sources: [...new Set([...pro, ...con].flatMap((h) => h.rule.sources))],
     });
   }
@@ -83,18 +91,31 @@ export function rankCauses(hits: Hit[], causes: Map<string, KbCause>, facts: Fac
 
 /** Derived facts are missing because an input is: point at the input a person can log. */
 const NEEDS: Record<string, string[]> = {
-  superheatC: ["pourTempC"], pourWindowPosition: ["pourTempC"], pourBelowWindowC: ["pourTempC"], pourAboveWindowC: ["pourTempC"],
-  meltSuperheatC: ["meltTempC"], hydrogenSolubilityCm3Per100g: ["meltTempC"],
-  vapourPressureKPa: ["humidityPct", "ambientTempC"], moistureRisk: ["humidityPct", "sandMoisturePct"],
-  frontVelocityMS: ["sprueHeightMm"], frontVelocityRatio: ["sprueHeightMm"], thickSectionModulusMm: ["maxSectionMm"],
-  sectionRatio: ["minSectionMm", "maxSectionMm"], freezeTimeRatio: ["minSectionMm", "maxSectionMm"],
+  superheatC: ["pourTempC"],
+  pourWindowPosition: ["pourTempC"],
+  pourBelowWindowC: ["pourTempC"],
+  pourAboveWindowC: ["pourTempC"],
+  meltSuperheatC: ["meltTempC"],
+  hydrogenSolubilityCm3Per100g: ["meltTempC"],
+  vapourPressureKPa: ["humidityPct", "ambientTempC"],
+  moistureRisk: ["humidityPct", "sandMoisturePct"],
+  frontVelocityMS: ["sprueHeightMm"],
+  frontVelocityRatio: ["sprueHeightMm"],
+  thickSectionModulusMm: ["maxSectionMm"],
+  sectionRatio: ["minSectionMm", "maxSectionMm"],
+  freezeTimeRatio: ["minSectionMm", "maxSectionMm"],
 };
 const NOTES: Record<string, string> = {
-  pourTempC: "no pour temperature logged", meltTempC: "no highest melt temperature logged",
-  degassing: "no degassing method logged (\"none\" counts too)", humidityPct: "no humidity logged for the day",
-  ambientTempC: "no air temperature logged", sandMoisturePct: "no sand moisture measured",
-  coatingApplied: "not recorded whether a coating was applied", coatingDried: "not recorded whether the coating was dried",
-  hasVents: "not recorded whether the mould had vents", hasOverflow: "not recorded whether there was an overflow",
+  pourTempC: "no pour temperature logged",
+  meltTempC: "no highest melt temperature logged",
+  degassing: 'no degassing method logged ("none" counts too)',
+  humidityPct: "no humidity logged for the day",
+  ambientTempC: "no air temperature logged",
+  sandMoisturePct: "no sand moisture measured",
+  coatingApplied: "not recorded whether a coating was applied",
+  coatingDried: "not recorded whether the coating was dried",
+  hasVents: "not recorded whether the mould had vents",
+  hasOverflow: "not recorded whether there was an overflow",
   hasRiser: "not recorded whether there was a riser",
 };
 const noteFor = (name: string) => {
@@ -139,9 +160,11 @@ export function missingInputs(
     const inputs = new Set<string>();
     for (const leaf of conditionLeaves(rule.conditions)) {
       if (leaf.operator === "isMissing" || facts[leaf.fact] !== undefined) continue;
-      for (const name of NEEDS[leaf.fact] ?? [leaf.fact]) if (facts[name] === undefined && !factSpec(name)!.derived) inputs.add(name);
+      for (const name of NEEDS[leaf.fact] ?? [leaf.fact])
+        if (facts[name] === undefined && !factSpec(name)!.derived) inputs.add(name);
     }
-    for (const name of inputs) blocked.set(name, (blocked.get(name) ?? 0) + clamp01(rule.weight * weightFactor(rule.id)));
+    for (const name of inputs)
+      blocked.set(name, (blocked.get(name) ?? 0) + clamp01(rule.weight * weightFactor(rule.id)));
   }
   return [...blocked]
     .sort((a, b) => b[1] - a[1] || a[0].localeCompare(b[0]))
@@ -150,12 +173,15 @@ export function missingInputs(
 }
 
 const SAFETY = {
-  steam: "Molten metal and water do not mix: moisture in tools, scrap, moulds or on the floor turns to steam and can throw metal. Preheat tools and charge; pour over dry sand, not concrete.",
+  steam:
+    "Molten metal and water do not mix: moisture in tools, scrap, moulds or on the floor turns to steam and can throw metal. Preheat tools and charge; pour over dry sand, not concrete.",
   ppe: "Wear a face shield, natural-fibre clothing, gloves and leather boots with trousers over them when melting and pouring.",
   foam: "Burning foam gives off styrene and other harmful fumes: pour lost-foam moulds with good ventilation.",
   flux: "Fluxes, fluoride fluxes especially, give off harmful fumes: use them under extraction.",
-  argon: "Argon is odourless, heavier than air and collects in pits and low places where it can suffocate: ventilate, and read the gas's safety data sheet.",
-  defer: "These notes do not replace local codes, the suppliers' safety data sheets and trained practice: follow those first.",
+  argon:
+    "Argon is odourless, heavier than air and collects in pits and low places where it can suffocate: ventilate, and read the gas's safety data sheet.",
+  defer:
+    "These notes do not replace local codes, the suppliers' safety data sheets and trained practice: follow those first.",
 };
 
 /** The top causes' own cautions, then the general ones for this case, ending with the deferral. */

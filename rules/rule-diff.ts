@@ -36,7 +36,8 @@ export function ruleChanges(before: VersionLike | null, after: VersionLike, word
   if (!before) return [`Written as a ${after.status === "draft" ? "draft" : after.status} rule`];
   const b = before.rule;
   const out: string[] = [];
-  if (before.status !== after.status) out.push(STATUS_CHANGE[`${before.status}>${after.status}`] ?? `Now ${after.status}`);
+  if (before.status !== after.status)
+    out.push(STATUS_CHANGE[`${before.status}>${after.status}`] ?? `Now ${after.status}`);
 
   const types = (r: KbRule) => r.explains.map((e) => e.type);
   for (const t of added(types(b), types(a))) out.push(`Now also explains ${defect(t)}`);
@@ -44,7 +45,9 @@ export function ruleChanges(before: VersionLike | null, after: VersionLike, word
   const places = (r: KbRule) => [...new Set(r.explains.flatMap((e) => e.locations ?? []))];
   const [pb, pa] = [places(b), places(a)];
   if (pb.join() !== pa.join())
-    out.push(`Where on the part: ${pb.length ? pb.map(place).join(", ") : "anywhere"} → ${pa.length ? pa.map(place).join(", ") : "anywhere"}`);
+    out.push(
+      `Where on the part: ${pb.length ? pb.map(place).join(", ") : "anywhere"} → ${pa.length ? pa.map(place).join(", ") : "anywhere"}`,
+    );
 
   const conds = (r: KbRule) => conditionLeaves(r.conditions).map((l) => describeLeaf(l, fmt));
   for (const c of added(conds(b), conds(a))) out.push(`Condition added: ${c}`);

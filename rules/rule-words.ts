@@ -24,15 +24,22 @@ export const SI_UNIT: Record<FactQuantity, string> = {
 };
 
 const trim = (n: number) => String(Number(n.toFixed(Math.abs(n) >= 100 ? 0 : 2)));
-export const siFormat: ValueFormat = (spec, si) => `${trim(si)}${SI_UNIT[spec.quantity] ? ` ${SI_UNIT[spec.quantity]}` : ""}`;
+export const siFormat: ValueFormat = (spec, si) =>
+  `${trim(si)}${SI_UNIT[spec.quantity] ? ` ${SI_UNIT[spec.quantity]}` : ""}`;
 
 // Codes that read badly with their hyphens simply turned into spaces.
 const VALUE_WORDS: Record<string, string> = {
-  "al-si": "Al-Si", "al-si-cu": "Al-Si-Cu", "al-cu": "Al-Cu", "al-mg": "Al-Mg", "al-zn": "Al-Zn",
-  "al-wrought": "wrought aluminium", "copper-base": "copper-base",
+  "al-si": "Al-Si",
+  "al-si-cu": "Al-Si-Cu",
+  "al-cu": "Al-Cu",
+  "al-mg": "Al-Mg",
+  "al-zn": "Al-Zn",
+  "al-wrought": "wrought aluminium",
+  "copper-base": "copper-base",
 };
-export const valueWord = (v: unknown) => (typeof v === "string" ? VALUE_WORDS[v] ?? v.replace(/-/g, " ") : String(v));
-const list = (vs: unknown[]) => (vs.length === 1 ? valueWord(vs[0]) : `${vs.slice(0, -1).map(valueWord).join(", ")} or ${valueWord(vs.at(-1))}`);
+export const valueWord = (v: unknown) => (typeof v === "string" ? (VALUE_WORDS[v] ?? v.replace(/-/g, " ")) : String(v));
+const list = (vs: unknown[]) =>
+  vs.length === 1 ? valueWord(vs[0]) : `${vs.slice(0, -1).map(valueWord).join(", ")} or ${valueWord(vs.at(-1))}`;
 
 /** "pour temperature is below 650 °C", "flux used: no", "process is lost foam or plaster". */
 export function describeLeaf(leaf: Leaf, fmt: ValueFormat = siFormat): string {

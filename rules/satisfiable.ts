@@ -18,9 +18,14 @@ function complement(l: Leaf): Condition {
   const missing = leaf(l.fact, "isMissing", true);
   const or = (...c: Condition[]): Condition => ({ any: [missing, ...c] });
   const flip: Record<string, string> = {
-    lessThan: "greaterThanInclusive", lessThanInclusive: "greaterThan",
-    greaterThan: "lessThanInclusive", greaterThanInclusive: "lessThan",
-    equal: "notEqual", notEqual: "equal", in: "notIn", notIn: "in",
+    lessThan: "greaterThanInclusive",
+    lessThanInclusive: "greaterThan",
+    greaterThan: "lessThanInclusive",
+    greaterThanInclusive: "lessThan",
+    equal: "notEqual",
+    notEqual: "equal",
+    in: "notIn",
+    notIn: "in",
   };
   if (l.operator === "isMissing") return leaf(l.fact, "isMissing", !l.value);
   if (l.operator === "between") {
@@ -51,7 +56,17 @@ function alternatives(c: Condition, negate = false): Leaf[][] | null {
 
 // Values a quantity can never leave: humidity and moisture are 0-100 %, sizes and times are not negative.
 const DOMAIN: Partial<Record<FactQuantity, [number, number]>> = { percent: [0, 100] };
-const NON_NEGATIVE: FactQuantity[] = ["length", "velocity", "time", "minutes", "density", "hydrogen", "pressure", "ratio", "count"];
+const NON_NEGATIVE: FactQuantity[] = [
+  "length",
+  "velocity",
+  "time",
+  "minutes",
+  "density",
+  "hydrogen",
+  "pressure",
+  "ratio",
+  "count",
+];
 
 function numbersPossible(leaves: Leaf[], quantity: FactQuantity): boolean {
   let [lo, hi] = DOMAIN[quantity] ?? (NON_NEGATIVE.includes(quantity) ? [0, Infinity] : [-Infinity, Infinity]);

@@ -5,11 +5,17 @@
  */
 import { performance } from "node:perf_hooks";
 import { BUILT_IN_ALLOYS } from "../rules/alloys";
-import { CHARGES, DEFECT_LOCATIONS, DEFECT_TYPES, DEGASSING_METHODS, PROCESSES, type DiagnosisCase } from "../rules/case";
+import {
+  CHARGES,
+  DEFECT_LOCATIONS,
+  DEFECT_TYPES,
+  DEGASSING_METHODS,
+  PROCESSES,
+  type DiagnosisCase,
+} from "../rules/case";
 import { diagnose, engineBuilds } from "../rules/engine";
 import { BUILT_IN_RULE_SET } from "../rules/knowledge-base";
 import { rng } from "./seeded-random";
-
 
 /** Cases shaped like stored castings: a few marks, most fields logged, some left out. */
 function makeCases(count: number, seed = 42): DiagnosisCase[] {
@@ -23,7 +29,9 @@ function makeCases(count: number, seed = 42): DiagnosisCase[] {
     const minSectionMm = maybe(num(1.5, 12, 0.5));
     return {
       defects: Array.from({ length: 1 + Math.floor(r() * 3) }, () => ({
-        type: pick(DEFECT_TYPES), location: pick(DEFECT_LOCATIONS), severity: 1 + Math.floor(r() * 3),
+        type: pick(DEFECT_TYPES),
+        location: pick(DEFECT_LOCATIONS),
+        severity: 1 + Math.floor(r() * 3),
       })),
       alloy: alloy.designation,
       process,
@@ -37,7 +45,10 @@ function makeCases(count: number, seed = 42): DiagnosisCase[] {
       ambientTempC: maybe(num(0, 35)),
       humidityPct: maybe(num(20, 95)),
       sandMoisturePct: process === "green-sand" || process === "no-bake-sand" ? maybe(num(0.5, 8, 0.1)) : undefined,
-      coating: process === "lost-foam" || process === "investment" ? { applied: true, dried: maybe(r() < 0.6), coats: maybe(num(1, 4)) } : undefined,
+      coating:
+        process === "lost-foam" || process === "investment"
+          ? { applied: true, dried: maybe(r() < 0.6), coats: maybe(num(1, 4)) }
+          : undefined,
       foamDensityKgM3: process === "lost-foam" ? maybe(num(16, 32)) : undefined,
       minSectionMm,
       maxSectionMm: minSectionMm !== undefined ? maybe(minSectionMm + num(0, 40)) : undefined,
@@ -79,7 +90,9 @@ const stored = makeCases(10_000, 42);
 const t0 = performance.now();
 for (const c of stored) await diagnose(c);
 const totalS = (performance.now() - t0) / 1000;
-console.log(`10,000 stored-style cases: ${totalS.toFixed(2)} s (${((totalS * 1000) / stored.length).toFixed(3)} ms each); engines built meanwhile: ${engineBuilds() - buildsBefore}`);
+console.log(
+  `10,000 stored-style cases: ${totalS.toFixed(2)} s (${((totalS * 1000) / stored.length).toFixed(3)} ms each); engines built meanwhile: ${engineBuilds() - buildsBefore}`,
+);
 
 // The same diagnosis with the engines built afresh for every call: a new rule-set version each time.
 const fresh = await timeEach(makeCases(300, 9), (c, i) => diagnose(c, { ruleSet: { ...rs, version: `bench-${i}` } }));
@@ -88,4 +101,6 @@ console.log(`New engines on every call (300 cases): median ${ms(freshMedian)}, p
 console.log(
   `Ratio, new engines per call over cached engines: ${(freshMedian / median).toFixed(1)}x (medians), ${(mean(fresh) / mean(single)).toFixed(1)}x (means)`,
 );
-console.log(`Targets: median ≤ 2 ms (${median <= 2 ? "met" : "missed"}), 10,000 cases ≤ 10 s (${totalS <= 10 ? "met" : "missed"})`);
+console.log(
+  `Targets: median ≤ 2 ms (${median <= 2 ? "met" : "missed"}), 10,000 cases ≤ 10 s (${totalS <= 10 ? "met" : "missed"})`,
+);

@@ -8,12 +8,21 @@ import { startLocalPostgres, type LocalPostgres } from "./local-postgres";
 const root = fileURLToPath(new URL("..", import.meta.url));
 let localDb: LocalPostgres | undefined;
 if (!process.env.DATABASE_URL) {
-  localDb = startLocalPostgres({ dataDir: join(root, ".data", "pg"), port: Number(process.env.LOCAL_PG_PORT ?? 54329), database: "casebook" });
+  localDb = startLocalPostgres({
+    dataDir: join(root, ".data", "pg"),
+    port: Number(process.env.LOCAL_PG_PORT ?? 54329),
+    database: "casebook",
+  });
   process.env.DATABASE_URL = localDb.url;
 }
 const apiPort = process.env.PORT ?? "8080";
 const devWebOrigin = "http://localhost:8081";
-const childEnv = { ...process.env, PORT: apiPort, DEV_WEB_ORIGIN: devWebOrigin, EXPO_PUBLIC_API_URL: `http://127.0.0.1:${apiPort}` };
+const childEnv = {
+  ...process.env,
+  PORT: apiPort,
+  DEV_WEB_ORIGIN: devWebOrigin,
+  EXPO_PUBLIC_API_URL: `http://127.0.0.1:${apiPort}`,
+};
 
 const { db, pool } = await import("../db/client");
 const { applyMigrations } = await import("../db/migrate");
@@ -23,8 +32,16 @@ await seedDemoShop();
 await pool.end();
 
 const children: ChildProcess[] = [
-  spawn("npx", ["tsx", "watch", "--clear-screen=false", "server/dev-server.ts"], { cwd: root, env: childEnv, stdio: "inherit" }),
-  spawn("npx", ["expo", "start", "--web", "--port", "8081"], { cwd: root, env: { ...childEnv, EXPO_OFFLINE: "1" }, stdio: "inherit" }),
+  spawn("npx", ["tsx", "watch", "--clear-screen=false", "server/dev-server.ts"], {
+    cwd: root,
+    env: childEnv,
+    stdio: "inherit",
+  }),
+  spawn("npx", ["expo", "start", "--web", "--port", "8081"], {
+    cwd: root,
+    env: { ...childEnv, EXPO_OFFLINE: "1" },
+    stdio: "inherit",
+  }),
 ];
 
 function stop() {

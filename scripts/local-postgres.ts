@@ -94,8 +94,16 @@ export function startLocalPostgres(opts: {
   if (!isRunning(bin, dataDir)) {
     const logFile = join(dataDir, "server.log");
     run(join(bin, "pg_ctl"), [
-      "start", "-w", "-t", "60", "-D", dataDir, "-l", logFile,
-      "-o", `-k ${socketDir} -p ${opts.port} -c listen_addresses=127.0.0.1${opts.throwaway ? " -c fsync=off" : ""}`,
+      "start",
+      "-w",
+      "-t",
+      "60",
+      "-D",
+      dataDir,
+      "-l",
+      logFile,
+      "-o",
+      `-k ${socketDir} -p ${opts.port} -c listen_addresses=127.0.0.1${opts.throwaway ? " -c fsync=off" : ""}`,
     ]);
   }
   const stop = () => {
@@ -116,7 +124,13 @@ export function startLocalPostgres(opts: {
 
 function ensureDatabase(bin: string, port: number, database: string) {
   const exists = run(join(bin, "psql"), [
-    "-h", "127.0.0.1", "-p", String(port), "-U", "postgres", "-tAc",
+    "-h",
+    "127.0.0.1",
+    "-p",
+    String(port),
+    "-U",
+    "postgres",
+    "-tAc",
     `SELECT 1 FROM pg_database WHERE datname = '${database}'`,
   ]).trim();
   if (exists !== "1") run(join(bin, "createdb"), ["-h", "127.0.0.1", "-p", String(port), "-U", "postgres", database]);

@@ -43,7 +43,17 @@ export function createApp(opts: { webDir?: string } = {}) {
   api.use(healthRouter);
   api.use(shopsRouter);
   // The notebook (docs/notebook-api.md); photos take multipart bodies through multer, not express.json.
-  for (const r of [alloysRouter, meltsRouter, castingsRouter, photosRouter, marksRouter, commentsRouter, peopleRouter, exportRouter, diagnosisRouter]) {
+  for (const r of [
+    alloysRouter,
+    meltsRouter,
+    castingsRouter,
+    photosRouter,
+    marksRouter,
+    commentsRouter,
+    peopleRouter,
+    exportRouter,
+    diagnosisRouter,
+  ]) {
     api.use(r);
   }
   api.use(reviewRouter, followupsRouter, rulebookRouter);

@@ -49,5 +49,13 @@ export default function AppLayout() {
 const styles = StyleSheet.create({
   fill: { flex: 1, backgroundColor: colors.background },
   bar: { flexDirection: "row", backgroundColor: colors.surface, borderTopWidth: 1, borderTopColor: colors.line },
-  rail: { flexDirection: "column", justifyContent: "flex-start", width: 200, paddingTop: 8, backgroundColor: colors.surface, borderRightWidth: 1, borderRightColor: colors.line },
+  rail: {
+    flexDirection: "column",
+    justifyContent: "flex-start",
+    width: 200,
+    paddingTop: 8,
+    backgroundColor: colors.surface,
+    borderRightWidth: 1,
+    borderRightColor: colors.line,
+  },
 });

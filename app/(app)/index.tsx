@@ -31,7 +31,11 @@ export default function CasebookScreen() {
   const [sort, setSort] = useState<SearchSort | undefined>();
   const [showFilters, setShowFilters] = useState(wide);
   const members = useShopMembers();
-  const asked: SearchRequest = { q: words, ...filterQuery(filters), sort: words ? sort : sort === "relevance" ? undefined : sort };
+  const asked: SearchRequest = {
+    q: words,
+    ...filterQuery(filters),
+    sort: words ? sort : sort === "relevance" ? undefined : sort,
+  };
   // New words, filters or order start again at page 1: the page belongs to the question asked.
   const [paging, setPaging] = useState({ for: "", page: 1 });
   const key = JSON.stringify(asked);
@@ -40,11 +44,21 @@ export default function CasebookScreen() {
   const search = useCaseSearch(query);
   const answer = search.data;
   const active = activeCount(filters);
-  const order = [...(words ? [{ value: "relevance", label: "best match" }] : []), { value: "date-desc", label: "newest" }, { value: "date-asc", label: "oldest" }];
+  const order = [
+    ...(words ? [{ value: "relevance", label: "best match" }] : []),
+    { value: "date-desc", label: "newest" },
+    { value: "date-asc", label: "oldest" },
+  ];
   const error = search.error as ApiError | null;
 
   const filterPanel = showFilters ? (
-    <CasebookFilterChips filters={filters} onChange={setFilters} facets={answer?.facets} people={members.data ?? []} narrow={wide} />
+    <CasebookFilterChips
+      filters={filters}
+      onChange={setFilters}
+      facets={answer?.facets}
+      people={members.data ?? []}
+      narrow={wide}
+    />
   ) : null;
   const results = (
     <View style={styles.results}>
@@ -54,7 +68,12 @@ export default function CasebookScreen() {
       {error ? <Notice tone="error">{[error.message, ...Object.values(error.fields ?? {})].join(" ")}</Notice> : null}
       {search.isPending ? <Loading /> : null}
       {answer && answer.total === 0 ? (
-        <CasebookEmptyState query={query} filtered={active > 0} onClearFilters={() => setFilters(NO_FILTERS)} onClearWords={() => setText("")} />
+        <CasebookEmptyState
+          query={query}
+          filtered={active > 0}
+          onClearFilters={() => setFilters(NO_FILTERS)}
+          onClearWords={() => setText("")}
+        />
       ) : null}
       {answer && answer.items.length ? (
         wide ? (
@@ -74,15 +93,27 @@ export default function CasebookScreen() {
       <Heading>Casebook</Heading>
       <CasebookSearchBox value={text} onChange={setText} busy={search.isFetching || text.trim() !== words} />
       <View style={styles.bar}>
-        <Pressable role="button" aria-expanded={showFilters} onPress={() => setShowFilters(!showFilters)} style={styles.toggle}>
-          <Text style={styles.toggleText}>{showFilters ? "Hide filters" : "Filters"}{active ? ` (${active} on)` : ""}</Text>
+        <Pressable
+          role="button"
+          aria-expanded={showFilters}
+          onPress={() => setShowFilters(!showFilters)}
+          style={styles.toggle}
+        >
+          <Text style={styles.toggleText}>
+            {showFilters ? "Hide filters" : "Filters"}
+            {active ? ` (${active} on)` : ""}
+          </Text>
         </Pressable>
         {active ? (
           <Pressable role="button" onPress={() => setFilters(NO_FILTERS)} style={styles.toggle}>
             <Text style={styles.toggleText}>Clear filters</Text>
           </Pressable>
         ) : null}
-        {answer ? <Text style={styles.count} testID="casebook-total">{casesText(answer.total)}</Text> : null}
+        {answer ? (
+          <Text style={styles.count} testID="casebook-total">
+            {casesText(answer.total)}
+          </Text>
+        ) : null}
       </View>
       {wide ? (
         <View style={styles.split}>
@@ -93,7 +124,9 @@ export default function CasebookScreen() {
         <>
           {filterPanel}
           {/* On a phone the chips push the results down: one tap closes them and shows what is left. */}
-          {filterPanel && answer ? <Button kind="plain" label={`Show ${casesText(answer.total)}`} onPress={() => setShowFilters(false)} /> : null}
+          {filterPanel && answer ? (
+            <Button kind="plain" label={`Show ${casesText(answer.total)}`} onPress={() => setShowFilters(false)} />
+          ) : null}
           {results}
         </>
       )}

@@ -15,7 +15,12 @@ export default function MoreScreen() {
   const shop = useShop();
   const members = useShopMembers();
   if (shop.isPending) return <ActivityIndicator color={colors.accent} style={{ marginTop: space.xl }} />;
-  if (shop.error) return <Screen><Notice tone="error">{shop.error.message}</Notice></Screen>;
+  if (shop.error)
+    return (
+      <Screen>
+        <Notice tone="error">{shop.error.message}</Notice>
+      </Screen>
+    );
 
   return (
     <Screen>
@@ -26,12 +31,16 @@ export default function MoreScreen() {
         {members.data?.map((m) => (
           <View key={m.userId} style={styles.person}>
             <Text style={styles.name}>{m.name}</Text>
-            <Text style={styles.meta}>{m.email} · {m.role}</Text>
+            <Text style={styles.meta}>
+              {m.email} · {m.role}
+            </Text>
           </View>
         ))}
       </View>
       <Heading level={2}>Your units</Heading>
-      <Text style={styles.meta}>How you see and type temperatures, sizes and weights. Only for you; the shop's records stay the same.</Text>
+      <Text style={styles.meta}>
+        How you see and type temperatures, sizes and weights. Only for you; the shop's records stay the same.
+      </Text>
       <UnitsChooser />
       <Heading level={2}>Shop defaults</Heading>
       <ShopSettingsForm shop={shop.data} />
@@ -49,7 +58,13 @@ export default function MoreScreen() {
 
 const styles = StyleSheet.create({
   list: { gap: space.sm },
-  person: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: 8, padding: space.md },
+  person: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: 8,
+    padding: space.md,
+  },
   name: { fontSize: 16, fontWeight: "600", color: colors.ink },
   meta: { fontSize: 14, color: colors.muted },
 });

@@ -30,13 +30,31 @@ export default function SignIn() {
   return (
     <AuthCard title="Sign in">
       {failure ? <Notice tone="error">{failure}</Notice> : null}
-      <TextField label="E-mail" value={email} onChangeText={setEmail} error={errors.email}
-        autoCapitalize="none" autoComplete="email" keyboardType="email-address" inputMode="email" />
-      <TextField label="Password" value={password} onChangeText={setPassword} error={errors.password}
-        secureTextEntry autoComplete="current-password" onSubmitEditing={submit} />
+      <TextField
+        label="E-mail"
+        value={email}
+        onChangeText={setEmail}
+        error={errors.email}
+        autoCapitalize="none"
+        autoComplete="email"
+        keyboardType="email-address"
+        inputMode="email"
+      />
+      <TextField
+        label="Password"
+        value={password}
+        onChangeText={setPassword}
+        error={errors.password}
+        secureTextEntry
+        autoComplete="current-password"
+        onSubmitEditing={submit}
+      />
       <Button label="Sign in" onPress={submit} busy={busy} />
       <Text style={styles.alt}>
-        New here? <Link href="/sign-up" style={styles.link}>Create an account and a shop</Link>
+        New here?{" "}
+        <Link href="/sign-up" style={styles.link}>
+          Create an account and a shop
+        </Link>
       </Text>
     </AuthCard>
   );

@@ -27,7 +27,11 @@ export default function SignUp() {
     const values = check(form);
     if (!values) return;
     setBusy(true);
-    const { error } = await authClient.signUp.email({ name: values.name, email: values.email, password: values.password });
+    const { error } = await authClient.signUp.email({
+      name: values.name,
+      email: values.email,
+      password: values.password,
+    });
     if (error) {
       setBusy(false);
       setFailure(
@@ -46,17 +50,47 @@ export default function SignUp() {
   return (
     <AuthCard title="Create an account">
       {failure ? <Notice tone="error">{failure}</Notice> : null}
-      <TextField label="Your name" value={form.name} onChangeText={set("name")} error={errors.name} autoComplete="name" />
-      <TextField label="E-mail" value={form.email} onChangeText={set("email")} error={errors.email}
-        autoCapitalize="none" autoComplete="email" keyboardType="email-address" inputMode="email" />
-      <TextField label="Password" value={form.password} onChangeText={set("password")} error={errors.password}
-        secureTextEntry autoComplete="new-password" placeholder="at least 8 characters" />
-      <TextField label="Shop name" value={form.shopName} onChangeText={set("shopName")} error={errors.shopName}
-        placeholder="the foundry, lab or club you cast with" onSubmitEditing={submit} />
+      <TextField
+        label="Your name"
+        value={form.name}
+        onChangeText={set("name")}
+        error={errors.name}
+        autoComplete="name"
+      />
+      <TextField
+        label="E-mail"
+        value={form.email}
+        onChangeText={set("email")}
+        error={errors.email}
+        autoCapitalize="none"
+        autoComplete="email"
+        keyboardType="email-address"
+        inputMode="email"
+      />
+      <TextField
+        label="Password"
+        value={form.password}
+        onChangeText={set("password")}
+        error={errors.password}
+        secureTextEntry
+        autoComplete="new-password"
+        placeholder="at least 8 characters"
+      />
+      <TextField
+        label="Shop name"
+        value={form.shopName}
+        onChangeText={set("shopName")}
+        error={errors.shopName}
+        placeholder="the foundry, lab or club you cast with"
+        onSubmitEditing={submit}
+      />
       <Text style={styles.note}>You will own this shop: its casebook, its rules and who may use them.</Text>
       <Button label="Create account" onPress={submit} busy={busy} />
       <Text style={styles.alt}>
-        Have an account? <Link href="/sign-in" style={styles.link}>Sign in</Link>
+        Have an account?{" "}
+        <Link href="/sign-in" style={styles.link}>
+          Sign in
+        </Link>
       </Text>
     </AuthCard>
   );

@@ -23,8 +23,14 @@ const styles = StyleSheet.create({
   scroll: { flex: 1, backgroundColor: colors.background },
   outer: { flexGrow: 1, alignItems: "center", justifyContent: "center", padding: space.lg },
   card: {
-    width: "100%", maxWidth: 420, gap: space.lg, backgroundColor: colors.surface,
-    borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, padding: space.xl,
+    width: "100%",
+    maxWidth: 420,
+    gap: space.lg,
+    backgroundColor: colors.surface,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    padding: space.xl,
   },
   lede: { color: colors.muted, fontSize: 15, lineHeight: 22 },
 });

@@ -35,7 +35,13 @@ export function CreateShopForm() {
       <Heading>Start a shop</Heading>
       <Notice>You do not belong to a shop yet. Start one (you will own it), or ask a shop owner to add you.</Notice>
       {failure ? <Notice tone="error">{failure}</Notice> : null}
-      <TextField label="Shop name" value={shopName} onChangeText={setShopName} error={errors.shopName} onSubmitEditing={submit} />
+      <TextField
+        label="Shop name"
+        value={shopName}
+        onChangeText={setShopName}
+        error={errors.shopName}
+        onSubmitEditing={submit}
+      />
       <Button label="Start the shop" onPress={submit} busy={busy} />
     </Screen>
   );

@@ -17,19 +17,47 @@ export function CastingMore({ draft, set, errors, units }: Props) {
   return (
     <>
       <Pair>
-        <NumberField label="Sprue height" unit={unitLabel("length", units)} value={draft.sprueHeightMm}
-          onChangeText={(v) => set("sprueHeightMm", v)} error={errors.sprueHeightMm} />
-        <NumberField label="Pour time" unit="s" value={draft.pourTimeS} onChangeText={(v) => set("pourTimeS", v)} error={errors.pourTimeS} />
+        <NumberField
+          label="Sprue height"
+          unit={unitLabel("length", units)}
+          value={draft.sprueHeightMm}
+          onChangeText={(v) => set("sprueHeightMm", v)}
+          error={errors.sprueHeightMm}
+        />
+        <NumberField
+          label="Pour time"
+          unit="s"
+          value={draft.pourTimeS}
+          onChangeText={(v) => set("pourTimeS", v)}
+          error={errors.pourTimeS}
+        />
       </Pair>
-      <TextField label="Pattern" value={draft.pattern} onChangeText={(v) => set("pattern", v)} error={errors.pattern}
-        placeholder="which pattern or foam block" />
+      <TextField
+        label="Pattern"
+        value={draft.pattern}
+        onChangeText={(v) => set("pattern", v)}
+        error={errors.pattern}
+        placeholder="which pattern or foam block"
+      />
       <YesNoChips label="Riser" value={draft.hasRiser} onChange={(v) => set("hasRiser", v)} />
       <YesNoChips label="Overflow" value={draft.hasOverflow} onChange={(v) => set("hasOverflow", v)} />
       <YesNoChips label="Vents" value={draft.hasVents} onChange={(v) => set("hasVents", v)} />
-      <TextField label="Orientation in the mould" value={draft.orientation} onChangeText={(v) => set("orientation", v)}
-        error={errors.orientation} placeholder="e.g. flat face down, gate at the thick end" />
-      <TextField label="Notes" value={draft.notes} onChangeText={(v) => set("notes", v)} error={errors.notes} multiline
-        placeholder="Anything else about this casting" style={{ minHeight: 72, paddingTop: 8 }} />
+      <TextField
+        label="Orientation in the mould"
+        value={draft.orientation}
+        onChangeText={(v) => set("orientation", v)}
+        error={errors.orientation}
+        placeholder="e.g. flat face down, gate at the thick end"
+      />
+      <TextField
+        label="Notes"
+        value={draft.notes}
+        onChangeText={(v) => set("notes", v)}
+        error={errors.notes}
+        multiline
+        placeholder="Anything else about this casting"
+        style={{ minHeight: 72, paddingTop: 8 }}
+      />
     </>
   );
 }

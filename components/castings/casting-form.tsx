@@ -42,7 +42,9 @@ export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOp
     try {
       await onSubmit(input);
       if (keepOpen) {
-        setSaved(`Saved ${input.partName}${input.outcome ? ` (${OUTCOME_LABELS[input.outcome]})` : ""}. Ready for the next one.`);
+        setSaved(
+          `Saved ${input.partName}${input.outcome ? ` (${OUTCOME_LABELS[input.outcome]})` : ""}. Ready for the next one.`,
+        );
         next();
       }
     } catch (e) {
@@ -55,17 +57,44 @@ export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOp
 
   return (
     <View style={styles.form}>
-      <TextField label="Part" value={draft.partName} onChangeText={(v) => set("partName", v)} error={errors.partName}
-        placeholder="e.g. bracket, pulley, plaque" onSubmitEditing={submit} />
+      <TextField
+        label="Part"
+        value={draft.partName}
+        onChangeText={(v) => set("partName", v)}
+        error={errors.partName}
+        placeholder="e.g. bracket, pulley, plaque"
+        onSubmitEditing={submit}
+      />
       <OutcomeChips value={draft.outcome} onChange={(o) => set("outcome", o)} />
       <Pair>
-        <NumberField label="Thinnest section" unit={mm} value={draft.minSectionMm} onChangeText={(v) => set("minSectionMm", v)} error={errors.minSectionMm} />
-        <NumberField label="Thickest section" unit={mm} value={draft.maxSectionMm} onChangeText={(v) => set("maxSectionMm", v)} error={errors.maxSectionMm} />
+        <NumberField
+          label="Thinnest section"
+          unit={mm}
+          value={draft.minSectionMm}
+          onChangeText={(v) => set("minSectionMm", v)}
+          error={errors.minSectionMm}
+        />
+        <NumberField
+          label="Thickest section"
+          unit={mm}
+          value={draft.maxSectionMm}
+          onChangeText={(v) => set("maxSectionMm", v)}
+          error={errors.maxSectionMm}
+        />
       </Pair>
-      {more ? <CastingMore draft={draft} set={set} errors={errors} units={units} />
-        : <View style={styles.start}><Button kind="plain" label="More details: sprue, riser, vents…" onPress={() => setMore(true)} /></View>}
+      {more ? (
+        <CastingMore draft={draft} set={set} errors={errors} units={units} />
+      ) : (
+        <View style={styles.start}>
+          <Button kind="plain" label="More details: sprue, riser, vents…" onPress={() => setMore(true)} />
+        </View>
+      )}
       {failure ? <Notice tone="error">{failure}</Notice> : null}
-      {saved ? <Text style={styles.saved} role="status">{saved}</Text> : null}
+      {saved ? (
+        <Text style={styles.saved} role="status">
+          {saved}
+        </Text>
+      ) : null}
       <Button label={submitLabel} onPress={submit} busy={busy} testID="save-casting" />
     </View>
   );

@@ -14,17 +14,30 @@ export function CastingRow({ casting }: { casting: CastingSummary }) {
   return (
     <Link href={`/melts/${casting.meltId}/castings/${casting.id}`} asChild>
       <Pressable role="link" style={styles.row}>
-        {casting.thumbUrl ? <Image source={{ uri: photoUri(casting.thumbUrl) }} style={styles.thumb} accessibilityIgnoresInvertColors />
-          : <View style={[styles.thumb, styles.noThumb]}><Text style={styles.noThumbText}>no photo</Text></View>}
+        {casting.thumbUrl ? (
+          <Image source={{ uri: photoUri(casting.thumbUrl) }} style={styles.thumb} accessibilityIgnoresInvertColors />
+        ) : (
+          <View style={[styles.thumb, styles.noThumb]}>
+            <Text style={styles.noThumbText}>no photo</Text>
+          </View>
+        )}
         <View style={styles.body}>
           <View style={styles.top}>
-            <Text style={styles.part} numberOfLines={1}>{casting.partName}</Text>
+            <Text style={styles.part} numberOfLines={1}>
+              {casting.partName}
+            </Text>
             {casting.outcome ? (
-              <Text style={[styles.outcome, { color: OUTCOME_COLOURS[casting.outcome] }]}>{OUTCOME_LABELS[casting.outcome]}</Text>
-            ) : <Text style={styles.muted}>not judged</Text>}
+              <Text style={[styles.outcome, { color: OUTCOME_COLOURS[casting.outcome] }]}>
+                {OUTCOME_LABELS[casting.outcome]}
+              </Text>
+            ) : (
+              <Text style={styles.muted}>not judged</Text>
+            )}
           </View>
           <Text style={styles.muted} numberOfLines={2}>
-            {casting.markCount ? `${casting.markCount} mark${casting.markCount === 1 ? "" : "s"}: ${defects.join(", ")}` : "nothing marked"}
+            {casting.markCount
+              ? `${casting.markCount} mark${casting.markCount === 1 ? "" : "s"}: ${defects.join(", ")}`
+              : "nothing marked"}
             {casting.photoCount ? ` · ${casting.photoCount} photo${casting.photoCount === 1 ? "" : "s"}` : ""}
           </Text>
         </View>
@@ -34,7 +47,16 @@ export function CastingRow({ casting }: { casting: CastingSummary }) {
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: "row", gap: space.md, alignItems: "center", backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, padding: space.sm },
+  row: {
+    flexDirection: "row",
+    gap: space.md,
+    alignItems: "center",
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.md,
+    padding: space.sm,
+  },
   thumb: { width: 56, height: 56, borderRadius: radius.sm, backgroundColor: colors.background },
   noThumb: { alignItems: "center", justifyContent: "center" },
   noThumbText: { fontSize: 11, color: colors.muted },

@@ -13,7 +13,15 @@ import type { CastingDetail } from "@/lib/notebook-schemas";
 import { formatValue, type Units } from "@/lib/units";
 
 /** The casting's own record: how it came out (one tap to change), its melt in a line, its sizes. */
-export function CastingSummary({ casting, units, mayEdit }: { casting: CastingDetail; units: Units; mayEdit: boolean }) {
+export function CastingSummary({
+  casting,
+  units,
+  mayEdit,
+}: {
+  casting: CastingDetail;
+  units: Units;
+  mayEdit: boolean;
+}) {
   const update = useUpdateCasting(casting.id);
   const [editing, setEditing] = useState(false);
   const m = casting.melt;
@@ -23,22 +31,39 @@ export function CastingSummary({ casting, units, mayEdit }: { casting: CastingDe
       <Text style={styles.melt}>
         {m.alloy} · {PROCESS_LABELS[m.process]} · poured at {formatValue("temperature", m.pourTempC, units)}
       </Text>
-      <OutcomeChips value={casting.outcome} onChange={(outcome) => update.mutate({ outcome })} disabled={!mayEdit || update.isPending} />
+      <OutcomeChips
+        value={casting.outcome}
+        onChange={(outcome) => update.mutate({ outcome })}
+        disabled={!mayEdit || update.isPending}
+      />
       {update.error ? <Notice tone="error">{update.error.message}</Notice> : null}
       {editing ? (
-        <CastingForm initial={casting} units={units} startExpanded submitLabel="Save changes"
+        <CastingForm
+          initial={casting}
+          units={units}
+          startExpanded
+          submitLabel="Save changes"
           onSubmit={async (input) => {
             await update.mutateAsync(input);
             setEditing(false);
-          }} />
+          }}
+        />
       ) : (
         <>
           <CastingFacts casting={casting} units={units} />
           {casting.notes ? <Notice>{casting.notes}</Notice> : null}
-          {mayEdit ? <View style={styles.start}><Button kind="plain" label="Change sizes and details" onPress={() => setEditing(true)} /></View> : null}
+          {mayEdit ? (
+            <View style={styles.start}>
+              <Button kind="plain" label="Change sizes and details" onPress={() => setEditing(true)} />
+            </View>
+          ) : null}
         </>
       )}
-      {editing ? <View style={styles.start}><Button kind="plain" label="Cancel" onPress={() => setEditing(false)} /></View> : null}
+      {editing ? (
+        <View style={styles.start}>
+          <Button kind="plain" label="Cancel" onPress={() => setEditing(false)} />
+        </View>
+      ) : null}
     </View>
   );
 }

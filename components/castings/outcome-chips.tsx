@@ -7,5 +7,13 @@ const OPTIONS = (Object.keys(OUTCOME_LABELS) as Outcome[]).map((o) => ({ value: 
 type Props = { value: Outcome | null; onChange: (o: Outcome) => void; label?: string; disabled?: boolean };
 
 export function OutcomeChips({ value, onChange, label = "How it came out", disabled }: Props) {
-  return <ChoiceChips label={label} options={OPTIONS} value={value} onChange={(v) => onChange(v as Outcome)} disabled={disabled} />;
+  return (
+    <ChoiceChips
+      label={label}
+      options={OPTIONS}
+      value={value}
+      onChange={(v) => onChange(v as Outcome)}
+      disabled={disabled}
+    />
+  );
 }

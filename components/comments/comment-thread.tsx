@@ -10,7 +10,15 @@ import { formatDay } from "@/lib/dates";
 import { commentInput, type Comment } from "@/lib/notebook-schemas";
 
 /** The casting's conversation: what people noticed, asked and answered, oldest first. */
-export function CommentThread({ castingId, comments, mayComment }: { castingId: number; comments: Comment[]; mayComment: boolean }) {
+export function CommentThread({
+  castingId,
+  comments,
+  mayComment,
+}: {
+  castingId: number;
+  comments: Comment[];
+  mayComment: boolean;
+}) {
   const [draft, setDraft] = useState("");
   const [error, setError] = useState<string>();
   const add = useAddComment(castingId);
@@ -28,14 +36,22 @@ export function CommentThread({ castingId, comments, mayComment }: { castingId: 
       {comments.length === 0 ? <Text style={styles.empty}>Nobody has written here yet.</Text> : null}
       {comments.map((c) => (
         <View key={c.id} style={styles.comment} testID="comment">
-          <Text style={styles.meta}>{c.createdBy.name} · {formatDay(c.createdAt)}</Text>
+          <Text style={styles.meta}>
+            {c.createdBy.name} · {formatDay(c.createdAt)}
+          </Text>
           <Text style={styles.body}>{c.body}</Text>
         </View>
       ))}
       {mayComment ? (
         <>
-          <TextField label="Add a note or question" value={draft} onChangeText={setDraft} error={error} multiline
-            style={styles.input} />
+          <TextField
+            label="Add a note or question"
+            value={draft}
+            onChangeText={setDraft}
+            error={error}
+            multiline
+            style={styles.input}
+          />
           {add.error ? <Notice tone="error">{add.error.message}</Notice> : null}
           <Button label="Post" kind="plain" onPress={submit} busy={add.isPending} />
         </>
@@ -47,7 +63,14 @@ export function CommentThread({ castingId, comments, mayComment }: { castingId: 
 const styles = StyleSheet.create({
   wrap: { gap: space.sm },
   empty: { color: colors.muted, fontSize: 15 },
-  comment: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, padding: space.md, gap: space.xs },
+  comment: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.md,
+    padding: space.md,
+    gap: space.xs,
+  },
   meta: { fontSize: 13, color: colors.muted },
   body: { fontSize: 15, lineHeight: 22, color: colors.ink },
   input: { minHeight: 80, paddingVertical: space.sm, textAlignVertical: "top" },

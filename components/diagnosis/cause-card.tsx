@@ -14,17 +14,29 @@ type Cause = CauseWithRecord;
 export function CauseCard({ cause, rank, units }: { cause: Cause; rank: number; units: Units }) {
   const [done, setDone] = useState<ReadonlySet<number>>(new Set());
   const [why, setWhy] = useState(false);
-  const toggle = (i: number) => setDone((d) => { const n = new Set(d); if (n.has(i)) n.delete(i); else n.add(i); return n; });
+  const toggle = (i: number) =>
+    setDone((d) => {
+      const n = new Set(d);
+      if (n.has(i)) n.delete(i);
+      else n.add(i);
+      return n;
+    });
 
   return (
     <View style={styles.card} testID={`cause-${rank}`}>
-      <Text style={styles.title}>{rank}. {cause.title}</Text>
+      <Text style={styles.title}>
+        {rank}. {cause.title}
+      </Text>
       <ScoreBar score={cause.score} />
       <CauseRecordLine cause={cause} />
-      <Text style={styles.sub}>Fixes to try <Text style={styles.subNote}>(ticks help you keep track here; they are not saved)</Text></Text>
+      <Text style={styles.sub}>
+        Fixes to try <Text style={styles.subNote}>(ticks help you keep track here; they are not saved)</Text>
+      </Text>
       {cause.fixes.map((f, i) => (
         <Pressable key={f} role="checkbox" aria-checked={done.has(i)} onPress={() => toggle(i)} style={styles.fix}>
-          <View style={[styles.box, done.has(i) && styles.boxOn]}>{done.has(i) ? <Text style={styles.tick}>✓</Text> : null}</View>
+          <View style={[styles.box, done.has(i) && styles.boxOn]}>
+            {done.has(i) ? <Text style={styles.tick}>✓</Text> : null}
+          </View>
           <Text style={[styles.fixText, done.has(i) && styles.fixDone]}>{f}</Text>
         </Pressable>
       ))}
@@ -35,7 +47,9 @@ export function CauseCard({ cause, rank, units }: { cause: Cause; rank: number; 
         <View style={styles.why}>
           {/* Older saved results carry only the SI sentences. */}
           {(cause.reasons ? cause.reasons.map((r) => reasonInUnits(r, units)) : cause.because).map((b) => (
-            <Text key={b} style={styles.reason}>• {b}</Text>
+            <Text key={b} style={styles.reason}>
+              • {b}
+            </Text>
           ))}
           <Text style={styles.sources}>Sources: {cause.sources.join("; ")}</Text>
         </View>
@@ -45,12 +59,28 @@ export function CauseCard({ cause, rank, units }: { cause: Cause; rank: number; 
 }
 
 const styles = StyleSheet.create({
-  card: { gap: space.sm, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  card: {
+    gap: space.sm,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
   title: { fontSize: 16, fontWeight: "700", color: colors.ink },
   sub: { fontSize: 13, fontWeight: "700", color: colors.muted, marginTop: space.xs },
   subNote: { fontWeight: "400" },
   fix: { flexDirection: "row", gap: space.sm, alignItems: "flex-start", minHeight: 32 },
-  box: { width: 22, height: 22, borderRadius: 4, borderWidth: 2, borderColor: colors.steel, alignItems: "center", justifyContent: "center", marginTop: 1 },
+  box: {
+    width: 22,
+    height: 22,
+    borderRadius: 4,
+    borderWidth: 2,
+    borderColor: colors.steel,
+    alignItems: "center",
+    justifyContent: "center",
+    marginTop: 1,
+  },
   boxOn: { backgroundColor: colors.steel },
   tick: { color: "#FFFFFF", fontSize: 14, fontWeight: "700", lineHeight: 16 },
   fixText: { flex: 1, fontSize: 15, lineHeight: 22, color: colors.ink },

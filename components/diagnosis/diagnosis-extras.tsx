@@ -16,23 +16,37 @@ export function DiagnosisExtras({ result, units }: { result: DiagnosisResult; un
       {result.missing.length ? (
         <View style={styles.block}>
           <Heading level={3}>Would sharpen the answer</Heading>
-          {result.missing.map((m) => <Text key={m.fact} style={styles.line}>• {m.note}</Text>)}
+          {result.missing.map((m) => (
+            <Text key={m.fact} style={styles.line}>
+              • {m.note}
+            </Text>
+          ))}
         </View>
       ) : null}
       {facts.length ? (
         <View style={styles.block}>
           <Pressable role="button" aria-expanded={showFacts} onPress={() => setShowFacts((s) => !s)}>
-            <Text style={styles.toggle}>{showFacts ? "▾ Hide the values worked out" : "▸ Values worked out from the log"}</Text>
+            <Text style={styles.toggle}>
+              {showFacts ? "▾ Hide the values worked out" : "▸ Values worked out from the log"}
+            </Text>
           </Pressable>
-          {showFacts ? facts.map((f) => (
-            <Text key={f.name} style={styles.line}>{f.label}: <Text style={styles.value}>{f.value}</Text></Text>
-          )) : null}
+          {showFacts
+            ? facts.map((f) => (
+                <Text key={f.name} style={styles.line}>
+                  {f.label}: <Text style={styles.value}>{f.value}</Text>
+                </Text>
+              ))
+            : null}
         </View>
       ) : null}
       {result.cautions.length ? (
         <Notice tone="caution">
           <Text style={styles.cautionHead}>Before you change the next pour</Text>
-          {result.cautions.map((c) => <Text key={c} style={styles.line}>• {c}</Text>)}
+          {result.cautions.map((c) => (
+            <Text key={c} style={styles.line}>
+              • {c}
+            </Text>
+          ))}
         </Notice>
       ) : null}
     </View>

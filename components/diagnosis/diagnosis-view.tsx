@@ -25,23 +25,35 @@ export function DiagnosisView({ casting, units, mayRun }: { casting: CastingDeta
       {noMarks ? <Notice>Mark at least one defect first: the causes are worked out from the marks.</Notice> : null}
       {mayRun && !noMarks ? (
         <View style={styles.start}>
-          <Button label={snapshot ? "Find likely causes again" : "Find likely causes"} onPress={() => run.mutate()}
-            busy={run.isPending} testID="find-causes" />
+          <Button
+            label={snapshot ? "Find likely causes again" : "Find likely causes"}
+            onPress={() => run.mutate()}
+            busy={run.isPending}
+            testID="find-causes"
+          />
         </View>
       ) : null}
       {run.error ? <Notice tone="error">{run.error.message}</Notice> : null}
       {snapshot ? (
         <>
           <Text style={styles.when}>
-            Worked out {formatMoment(snapshot.createdAt)}{snapshot.createdBy?.name ? ` by ${snapshot.createdBy.name}` : ""} · rules version {snapshot.ruleSetVersion.slice(0, 8)}.
-            {" "}If marks or conditions changed since, work it out again.
+            Worked out {formatMoment(snapshot.createdAt)}
+            {snapshot.createdBy?.name ? ` by ${snapshot.createdBy.name}` : ""} · rules version{" "}
+            {snapshot.ruleSetVersion.slice(0, 8)}. If marks or conditions changed since, work it out again.
           </Text>
           {snapshot.result.causes.length === 0 ? (
-            <Notice>No rule fits these marks and conditions. Logging more of the melt and casting (below) may help; a mentor can also add what the shop has learned.</Notice>
-          ) : snapshot.result.causes.map((c, i) => <CauseCard key={c.id} cause={c} rank={i + 1} units={units} />)}
+            <Notice>
+              No rule fits these marks and conditions. Logging more of the melt and casting (below) may help; a mentor
+              can also add what the shop has learned.
+            </Notice>
+          ) : (
+            snapshot.result.causes.map((c, i) => <CauseCard key={c.id} cause={c} rank={i + 1} units={units} />)
+          )}
           <DiagnosisExtras result={snapshot.result} units={units} />
         </>
-      ) : !noMarks ? <Text style={styles.when}>Not worked out yet for this casting.</Text> : null}
+      ) : !noMarks ? (
+        <Text style={styles.when}>Not worked out yet for this casting.</Text>
+      ) : null}
     </View>
   );
 }

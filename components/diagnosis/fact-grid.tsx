@@ -26,7 +26,14 @@ export function FactGrid({ rows }: { rows: FactRow[] }) {
 }
 
 const styles = StyleSheet.create({
-  box: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, padding: space.md, gap: space.sm },
+  box: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.md,
+    padding: space.md,
+    gap: space.sm,
+  },
   grid: { flexDirection: "row", flexWrap: "wrap", rowGap: space.sm },
   cell: { flexBasis: 160, flexGrow: 1, paddingRight: space.sm },
   label: { fontSize: 13, color: colors.muted },

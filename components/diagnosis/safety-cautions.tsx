@@ -3,15 +3,17 @@ import { Notice } from "@/components/ui/notice";
 import { colors } from "@/constants/theme";
 import { GENERAL_CAUTIONS } from "@/rules/safety";
 
-
 export function SafetyCautions() {
   return (
     <Notice tone="caution">
       {GENERAL_CAUTIONS.map((c) => (
-        <Text key={c} style={styles.line}>• {c}</Text>
+        <Text key={c} style={styles.line}>
+          • {c}
+        </Text>
       ))}
       <Text style={styles.defer}>
-        These are reminders, not a safety programme: follow local codes, the supplier's safety data sheets and trained practice.
+        These are reminders, not a safety programme: follow local codes, the supplier's safety data sheets and trained
+        practice.
       </Text>
     </Notice>
   );

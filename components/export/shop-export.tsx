@@ -7,9 +7,15 @@ import { apiBaseUrl } from "@/lib/client-env";
 export function ShopExport() {
   return (
     <>
-      <Text style={styles.meta}>Every casting with its melt conditions and marks, in SI units, one row per casting.</Text>
-      <Button kind="plain" label="Download castings (CSV)" testID="export-csv"
-        onPress={() => Linking.openURL(`${apiBaseUrl}/api/export/castings.csv`)} />
+      <Text style={styles.meta}>
+        Every casting with its melt conditions and marks, in SI units, one row per casting.
+      </Text>
+      <Button
+        kind="plain"
+        label="Download castings (CSV)"
+        testID="export-csv"
+        onPress={() => Linking.openURL(`${apiBaseUrl}/api/export/castings.csv`)}
+      />
     </>
   );
 }

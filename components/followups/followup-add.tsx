@@ -23,8 +23,11 @@ export function FollowupAdd({ castingId, candidates, suggestions }: Props) {
     if (!parsed.success) return setError(parsed.error.issues[0].message);
     setError(undefined);
     add.mutate(parsed.data, {
-      onSuccess: () => { setFix(""); setNext(null); },
-      onError: (e) => setError(e instanceof ApiError ? Object.values(e.fields)[0] ?? e.message : e.message),
+      onSuccess: () => {
+        setFix("");
+        setNext(null);
+      },
+      onError: (e) => setError(e instanceof ApiError ? (Object.values(e.fields)[0] ?? e.message) : e.message),
     });
   };
   return (
@@ -34,16 +37,32 @@ export function FollowupAdd({ castingId, candidates, suggestions }: Props) {
         <View style={styles.suggestions}>
           <Text style={styles.label}>Suggested by the rulebook (tap to use)</Text>
           {suggestions.slice(0, 4).map((s) => (
-            <Pressable key={s} role="button" aria-label={`Use: ${s}`} onPress={() => setFix(s)} style={[styles.suggestion, fix === s && styles.on]}>
+            <Pressable
+              key={s}
+              role="button"
+              aria-label={`Use: ${s}`}
+              onPress={() => setFix(s)}
+              style={[styles.suggestion, fix === s && styles.on]}
+            >
               <Text style={styles.suggestionText}>{s}</Text>
             </Pressable>
           ))}
         </View>
       ) : null}
-      <TextField label="What was changed for the next pour" value={fix} onChangeText={setFix} error={error} placeholder="e.g. Poured 40 °C hotter" />
+      <TextField
+        label="What was changed for the next pour"
+        value={fix}
+        onChangeText={setFix}
+        error={error}
+        placeholder="e.g. Poured 40 °C hotter"
+      />
       {candidates.length ? (
-        <ChoiceChips label="Next casting of this part (optional)" value={next} onChange={(v) => setNext(v === next ? null : v)}
-          options={candidates.map((c) => ({ value: String(c.id), label: castingWords(c) }))} />
+        <ChoiceChips
+          label="Next casting of this part (optional)"
+          value={next}
+          onChange={(v) => setNext(v === next ? null : v)}
+          options={candidates.map((c) => ({ value: String(c.id), label: castingWords(c) }))}
+        />
       ) : null}
       <Button label="Record the fix" onPress={submit} busy={add.isPending} testID="record-fix" />
     </View>
@@ -51,10 +70,23 @@ export function FollowupAdd({ castingId, candidates, suggestions }: Props) {
 }
 
 const styles = StyleSheet.create({
-  card: { gap: space.sm, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  card: {
+    gap: space.sm,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
   suggestions: { gap: space.xs },
   label: { fontSize: 14, fontWeight: "600", color: colors.ink },
-  suggestion: { padding: space.sm, borderRadius: radius.sm, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.background },
+  suggestion: {
+    padding: space.sm,
+    borderRadius: radius.sm,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.background,
+  },
   on: { borderColor: colors.steel, backgroundColor: "#E7EFEF" },
   suggestionText: { fontSize: 14, lineHeight: 20, color: colors.ink },
 });

@@ -13,11 +13,18 @@ export function FollowupChain({ chain }: { chain: ChainLink[] }) {
           {link.current ? (
             <Text style={[styles.casting, styles.current]}>{castingWords(link.casting)} · this casting</Text>
           ) : (
-            <Link href={`/melts/${link.casting.meltId}/castings/${link.casting.id}`} style={styles.casting}>{castingWords(link.casting)}</Link>
+            <Link href={`/melts/${link.casting.meltId}/castings/${link.casting.id}`} style={styles.casting}>
+              {castingWords(link.casting)}
+            </Link>
           )}
-          {link.fixes.filter((f) => f.next).map((f) => (
-            <Text key={f.id} style={styles.fix}>↓ {f.fix}{f.worked ? ` — ${WORKED_LABELS[f.worked]}` : " — not judged yet"}</Text>
-          ))}
+          {link.fixes
+            .filter((f) => f.next)
+            .map((f) => (
+              <Text key={f.id} style={styles.fix}>
+                ↓ {f.fix}
+                {f.worked ? ` — ${WORKED_LABELS[f.worked]}` : " — not judged yet"}
+              </Text>
+            ))}
         </View>
       ))}
     </View>
@@ -25,7 +32,14 @@ export function FollowupChain({ chain }: { chain: ChainLink[] }) {
 }
 
 const styles = StyleSheet.create({
-  list: { gap: space.xs, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  list: {
+    gap: space.xs,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
   step: { gap: 2 },
   casting: { fontSize: 15, fontWeight: "700", color: colors.accent },
   current: { color: colors.ink },

@@ -25,7 +25,9 @@ export function FollowupPanel({ castingId, suggestions = [] }: { castingId: numb
       <Heading level={2}>Fixes tried</Heading>
       {chain.length > 1 ? <FollowupChain chain={chain} /> : null}
       {fixes.length === 0 ? <Text style={styles.meta}>No fix recorded after this casting yet.</Text> : null}
-      {fixes.map((f) => <FollowupFix key={f.id} fix={f} candidates={candidates} mayWrite={mayWrite} />)}
+      {fixes.map((f) => (
+        <FollowupFix key={f.id} fix={f} candidates={candidates} mayWrite={mayWrite} />
+      ))}
       {mayWrite ? <FollowupAdd castingId={castingId} candidates={candidates} suggestions={suggestions} /> : null}
     </View>
   );

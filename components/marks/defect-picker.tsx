@@ -15,16 +15,25 @@ export function DefectPicker({ value, onChange }: { value: DefectType | null; on
   return (
     <View style={styles.wrap}>
       {GROUPS.map((g) => (
-        <ChoiceChips key={g.c} label={`${g.c} · ${DEFECT_CLASSES[g.c]}`} value={value}
-          options={g.types.map((t) => ({ value: t, label: DEFECTS[t].label }))} onChange={(t) => onChange(t as DefectType)} />
+        <ChoiceChips
+          key={g.c}
+          label={`${g.c} · ${DEFECT_CLASSES[g.c]}`}
+          value={value}
+          options={g.types.map((t) => ({ value: t, label: DEFECTS[t].label }))}
+          onChange={(t) => onChange(t as DefectType)}
+        />
       ))}
       <View style={styles.about} aria-live="polite">
         {info ? (
           <>
-            <Text style={styles.name}>{info.label} · class {info.defectClass}, {DEFECT_CLASSES[info.defectClass]}</Text>
+            <Text style={styles.name}>
+              {info.label} · class {info.defectClass}, {DEFECT_CLASSES[info.defectClass]}
+            </Text>
             <Text style={styles.text}>{info.description}</Text>
           </>
-        ) : <Text style={styles.text}>Choose what you see; its description shows here.</Text>}
+        ) : (
+          <Text style={styles.text}>Choose what you see; its description shows here.</Text>
+        )}
       </View>
     </View>
   );

@@ -24,25 +24,51 @@ export function Inspection({ casting, wide }: { casting: CastingDetail; wide: bo
   const editing = mode.kind === "edit" ? ins.pins.find((p) => p.mark.id === mode.markId) : undefined;
   const editorPhotoId = mode.kind === "new" ? mode.photoId : editing ? editing.mark.photoId : undefined;
 
-  const editor = mode.kind === "new" || editing ? (
-    <MarkEditor key={mode.kind === "new" ? `new-${mode.photoId}-${mode.x}-${mode.y}` : `edit-${editing!.mark.id}`}
-      title={editing ? `Mark ${editing.number}` : "New mark"} mark={editing?.mark} busy={ins.busy} failure={ins.failure}
-      onSave={ins.save} onCancel={ins.cancel} onRemove={editing ? ins.removeMark : undefined}
-      onMove={editing && casting.photos.length ? ins.startMove : undefined} />
-  ) : null;
+  const editor =
+    mode.kind === "new" || editing ? (
+      <MarkEditor
+        key={mode.kind === "new" ? `new-${mode.photoId}-${mode.x}-${mode.y}` : `edit-${editing!.mark.id}`}
+        title={editing ? `Mark ${editing.number}` : "New mark"}
+        mark={editing?.mark}
+        busy={ins.busy}
+        failure={ins.failure}
+        onSave={ins.save}
+        onCancel={ins.cancel}
+        onRemove={editing ? ins.removeMark : undefined}
+        onMove={editing && casting.photos.length ? ins.startMove : undefined}
+      />
+    ) : null;
   const inlineEditor = (photoId: number | null): ReactNode => (!wide && editorPhotoId === photoId ? editor : null);
   const moving = mode.kind === "move" ? ins.pins.find((p) => p.mark.id === mode.markId) : undefined;
 
   const photos = (
     <PhotoDropZone enabled={wide} onFile={(file) => upload.mutate({ file, name: file.name })}>
-      <PhotoAdd upload={upload.mutate} busy={upload.isPending} progress={upload.progress} error={upload.error} wide={wide} />
-      {moving ? <Text style={styles.moving} role="status">Tap the new spot for mark {moving.number}.</Text>
-        : casting.photos.length ? <Text style={styles.hint}>Tap a photo where you see a defect to mark it.</Text> : null}
+      <PhotoAdd
+        upload={upload.mutate}
+        busy={upload.isPending}
+        progress={upload.progress}
+        error={upload.error}
+        wide={wide}
+      />
+      {moving ? (
+        <Text style={styles.moving} role="status">
+          Tap the new spot for mark {moving.number}.
+        </Text>
+      ) : casting.photos.length ? (
+        <Text style={styles.hint}>Tap a photo where you see a defect to mark it.</Text>
+      ) : null}
       {casting.photos.map((p) => (
         <View key={p.id} style={styles.photo}>
-          <PhotoPanel photo={p} number={photoNumbers.get(p.id)!} pins={ins.pins.filter((x) => x.mark.photoId === p.id)}
-            selectedId={ins.selectedId} pending={mode.kind === "new" && mode.photoId === p.id && mode.x !== null ? { x: mode.x, y: mode.y! } : null}
-            onTap={(x, y) => ins.tapPhoto(p.id, x, y)} onPin={(m) => ins.openMark(m.id)} castingId={casting.id} />
+          <PhotoPanel
+            photo={p}
+            number={photoNumbers.get(p.id)!}
+            pins={ins.pins.filter((x) => x.mark.photoId === p.id)}
+            selectedId={ins.selectedId}
+            pending={mode.kind === "new" && mode.photoId === p.id && mode.x !== null ? { x: mode.x, y: mode.y! } : null}
+            onTap={(x, y) => ins.tapPhoto(p.id, x, y)}
+            onPin={(m) => ins.openMark(m.id)}
+            castingId={casting.id}
+          />
           {inlineEditor(p.id)}
         </View>
       ))}
@@ -52,12 +78,29 @@ export function Inspection({ casting, wide }: { casting: CastingDetail; wide: bo
     <View style={styles.side}>
       {wide ? editor : null}
       <Heading level={3}>Marks</Heading>
-      <MarkList pins={ins.pins} selectedId={ins.selectedId} onOpen={(p) => ins.openMark(p.mark.id)} photoNumbers={photoNumbers} />
+      <MarkList
+        pins={ins.pins}
+        selectedId={ins.selectedId}
+        onOpen={(p) => ins.openMark(p.mark.id)}
+        photoNumbers={photoNumbers}
+      />
       {inlineEditor(null)}
-      {mode.kind === "idle" ? <Button kind="plain" label="Add a mark without a photo" onPress={ins.addWithoutPhoto} /> : null}
+      {mode.kind === "idle" ? (
+        <Button kind="plain" label="Add a mark without a photo" onPress={ins.addWithoutPhoto} />
+      ) : null}
     </View>
   );
-  return wide ? <View style={styles.twoPane}><View style={styles.left}>{photos}</View>{marks}</View> : <>{photos}{marks}</>;
+  return wide ? (
+    <View style={styles.twoPane}>
+      <View style={styles.left}>{photos}</View>
+      {marks}
+    </View>
+  ) : (
+    <>
+      {photos}
+      {marks}
+    </>
+  );
 }
 
 const styles = StyleSheet.create({

@@ -52,18 +52,35 @@ export function MarkEditor({ title, mark, busy, failure, onSave, onCancel, onMov
       <Heading level={3}>{title}</Heading>
       <DefectPicker value={type} onChange={setType} />
       <FieldError message={errors.type} />
-      <ChoiceChips label="Where on the part" options={LOCATIONS} value={location} onChange={(l) => setLocation(l as DefectLocation)} />
+      <ChoiceChips
+        label="Where on the part"
+        options={LOCATIONS}
+        value={location}
+        onChange={(l) => setLocation(l as DefectLocation)}
+      />
       <FieldError message={errors.location} />
-      <ChoiceChips label="How bad" options={SEVERITIES} value={String(severity)} onChange={(s) => setSeverity(Number(s))} />
+      <ChoiceChips
+        label="How bad"
+        options={SEVERITIES}
+        value={String(severity)}
+        onChange={(s) => setSeverity(Number(s))}
+      />
       <TextField label="Note" value={note} onChangeText={setNote} error={errors.note} placeholder="optional" />
-      {failure ? <Text role="alert" style={styles.failure}>{failure}</Text> : null}
+      {failure ? (
+        <Text role="alert" style={styles.failure}>
+          {failure}
+        </Text>
+      ) : null}
       <View style={styles.actions}>
         <Button label={mark ? "Save the mark" : "Add the mark"} onPress={save} busy={busy} testID="save-mark" />
         <Button kind="plain" label="Cancel" onPress={onCancel} />
         {onMove ? <Button kind="plain" label="Move on the photo" onPress={onMove} /> : null}
         {onRemove ? (
-          <Button kind="plain" label={confirmRemove ? "Tap again to remove" : "Remove"}
-            onPress={() => (confirmRemove ? onRemove() : setConfirmRemove(true))} />
+          <Button
+            kind="plain"
+            label={confirmRemove ? "Tap again to remove" : "Remove"}
+            onPress={() => (confirmRemove ? onRemove() : setConfirmRemove(true))}
+          />
         ) : null}
       </View>
     </View>
@@ -71,7 +88,14 @@ export function MarkEditor({ title, mark, busy, failure, onSave, onCancel, onMov
 }
 
 const styles = StyleSheet.create({
-  box: { gap: space.md, padding: space.md, borderWidth: 1, borderColor: colors.steel, borderRadius: radius.md, backgroundColor: colors.surface },
+  box: {
+    gap: space.md,
+    padding: space.md,
+    borderWidth: 1,
+    borderColor: colors.steel,
+    borderRadius: radius.md,
+    backgroundColor: colors.surface,
+  },
   actions: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
   failure: { color: colors.danger, fontSize: 14 },
 });

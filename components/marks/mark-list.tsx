@@ -14,13 +14,23 @@ export function MarkList({ pins, selectedId, onOpen, photoNumbers }: Props) {
         const info = DEFECTS[p.mark.type];
         const where = p.mark.photoId === null ? "not on a photo" : `photo ${photoNumbers.get(p.mark.photoId) ?? "?"}`;
         return (
-          <Pressable key={p.mark.id} role="button" onPress={() => onOpen(p)} testID={`mark-${p.number}`}
-            style={[styles.row, p.mark.id === selectedId && styles.on]}>
-            <View style={styles.badge}><Text style={styles.badgeText}>{p.number}</Text></View>
+          <Pressable
+            key={p.mark.id}
+            role="button"
+            onPress={() => onOpen(p)}
+            testID={`mark-${p.number}`}
+            style={[styles.row, p.mark.id === selectedId && styles.on]}
+          >
+            <View style={styles.badge}>
+              <Text style={styles.badgeText}>{p.number}</Text>
+            </View>
             <View style={styles.body}>
-              <Text style={styles.title}>{info.label} <Text style={styles.cls}>({info.defectClass})</Text></Text>
+              <Text style={styles.title}>
+                {info.label} <Text style={styles.cls}>({info.defectClass})</Text>
+              </Text>
               <Text style={styles.meta}>
-                {LOCATION_LABELS[p.mark.location]} · {SEVERITY_LABELS[p.mark.severity as 1 | 2 | 3] ?? p.mark.severity} · {where}
+                {LOCATION_LABELS[p.mark.location]} · {SEVERITY_LABELS[p.mark.severity as 1 | 2 | 3] ?? p.mark.severity}{" "}
+                · {where}
               </Text>
               {p.mark.note ? <Text style={styles.note}>{p.mark.note}</Text> : null}
             </View>
@@ -34,9 +44,25 @@ export function MarkList({ pins, selectedId, onOpen, photoNumbers }: Props) {
 const styles = StyleSheet.create({
   list: { gap: space.sm },
   empty: { fontSize: 15, color: colors.muted },
-  row: { flexDirection: "row", gap: space.md, alignItems: "flex-start", padding: space.sm, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  row: {
+    flexDirection: "row",
+    gap: space.md,
+    alignItems: "flex-start",
+    padding: space.sm,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
   on: { borderColor: colors.steel, borderWidth: 2 },
-  badge: { width: 28, height: 28, borderRadius: 14, backgroundColor: colors.accent, alignItems: "center", justifyContent: "center" },
+  badge: {
+    width: 28,
+    height: 28,
+    borderRadius: 14,
+    backgroundColor: colors.accent,
+    alignItems: "center",
+    justifyContent: "center",
+  },
   badgeText: { color: "#FFFFFF", fontWeight: "700" },
   body: { flex: 1, gap: 2 },
   title: { fontSize: 15, fontWeight: "600", color: colors.ink },

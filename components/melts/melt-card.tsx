@@ -20,7 +20,11 @@ export function MeltCard({ melt, units }: { melt: MeltSummary; units: Units }) {
         <Text style={styles.line}>
           {PROCESS_LABELS[melt.process]} · poured at {formatValue("temperature", melt.pourTempC, units)}
         </Text>
-        {melt.furnace ? <Text style={styles.muted} numberOfLines={1}>{melt.furnace}</Text> : null}
+        {melt.furnace ? (
+          <Text style={styles.muted} numberOfLines={1}>
+            {melt.furnace}
+          </Text>
+        ) : null}
         <Text style={[styles.muted, melt.scrapCount ? styles.scrap : null]}>{castingsLine(melt)}</Text>
       </Pressable>
     </Link>
@@ -28,7 +32,14 @@ export function MeltCard({ melt, units }: { melt: MeltSummary; units: Units }) {
 }
 
 const styles = StyleSheet.create({
-  card: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, padding: space.md, gap: 2 },
+  card: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.md,
+    padding: space.md,
+    gap: 2,
+  },
   top: { flexDirection: "row", justifyContent: "space-between", alignItems: "baseline" },
   day: { fontSize: 16, fontWeight: "600", color: colors.ink },
   alloy: { fontSize: 15, fontWeight: "700", color: colors.steel },

@@ -9,13 +9,23 @@ const yesNo = (v: boolean | null) => (v === null ? null : v ? "yes" : "no");
 export function MeltFacts({ melt, units }: { melt: Melt; units: Units }) {
   const q = (quantity: Quantity, v: number | null) => (v === null ? null : formatValue(quantity, v, units));
   const pct = (v: number | null) => (v === null ? null : `${v} %`);
-  const degassing = melt.degassing === null ? null
-    : melt.degassing === "none" ? "none"
-    : `${DEGASSING_LABELS[melt.degassing]}${melt.degasMinutes !== null ? `, ${melt.degasMinutes} min` : ""}`;
-  const coating = melt.coatingApplied === null ? null
-    : !melt.coatingApplied ? "none"
-    : [melt.coatingCoats !== null ? `${melt.coatingCoats} coat${melt.coatingCoats === 1 ? "" : "s"}` : "applied",
-       melt.coatingDried === null ? null : melt.coatingDried ? "dried" : "not dried"].filter(Boolean).join(", ");
+  const degassing =
+    melt.degassing === null
+      ? null
+      : melt.degassing === "none"
+        ? "none"
+        : `${DEGASSING_LABELS[melt.degassing]}${melt.degasMinutes !== null ? `, ${melt.degasMinutes} min` : ""}`;
+  const coating =
+    melt.coatingApplied === null
+      ? null
+      : !melt.coatingApplied
+        ? "none"
+        : [
+            melt.coatingCoats !== null ? `${melt.coatingCoats} coat${melt.coatingCoats === 1 ? "" : "s"}` : "applied",
+            melt.coatingDried === null ? null : melt.coatingDried ? "dried" : "not dried",
+          ]
+            .filter(Boolean)
+            .join(", ");
   const rows: FactRow[] = [
     { label: "Alloy", value: melt.alloy },
     { label: "Process", value: PROCESS_LABELS[melt.process] },

@@ -26,13 +26,35 @@ export function MetalSection({ draft, set, errors, units }: SectionProps) {
   return (
     <>
       <Heading level={3}>Charge and temperatures</Heading>
-      <ChoiceChips label="Charge" options={CHARGE_CHOICES} value={draft.charge} onChange={(v) => set("charge", v as Charge)} />
+      <ChoiceChips
+        label="Charge"
+        options={CHARGE_CHOICES}
+        value={draft.charge}
+        onChange={(v) => set("charge", v as Charge)}
+      />
       <FieldError message={errors.charge} />
-      <TextField label="Furnace" value={draft.furnace} onChangeText={(v) => set("furnace", v)} error={errors.furnace}
-        placeholder="e.g. propane pot furnace, no. 2 crucible" />
+      <TextField
+        label="Furnace"
+        value={draft.furnace}
+        onChangeText={(v) => set("furnace", v)}
+        error={errors.furnace}
+        placeholder="e.g. propane pot furnace, no. 2 crucible"
+      />
       <Pair>
-        <NumberField label="Hottest the melt got" unit={t} value={draft.meltTempC} onChangeText={(v) => set("meltTempC", v)} error={errors.meltTempC} />
-        <NumberField label="Pour temperature" unit={t} value={draft.pourTempC} onChangeText={(v) => set("pourTempC", v)} error={errors.pourTempC} />
+        <NumberField
+          label="Hottest the melt got"
+          unit={t}
+          value={draft.meltTempC}
+          onChangeText={(v) => set("meltTempC", v)}
+          error={errors.meltTempC}
+        />
+        <NumberField
+          label="Pour temperature"
+          unit={t}
+          value={draft.pourTempC}
+          onChangeText={(v) => set("pourTempC", v)}
+          error={errors.pourTempC}
+        />
       </Pair>
     </>
   );
@@ -42,10 +64,21 @@ export function CleaningSection({ draft, set, errors }: SectionProps) {
   return (
     <>
       <Heading level={3}>Degassing and cleaning</Heading>
-      <ChoiceChips label="Degassing" options={DEGAS_CHOICES} value={draft.degassing} onChange={(v) => set("degassing", v as DegassingMethod)} />
+      <ChoiceChips
+        label="Degassing"
+        options={DEGAS_CHOICES}
+        value={draft.degassing}
+        onChange={(v) => set("degassing", v as DegassingMethod)}
+      />
       <FieldError message={errors.degassing} />
       {draft.degassing && draft.degassing !== "none" ? (
-        <NumberField label="Degassing time" unit="min" value={draft.degasMinutes} onChangeText={(v) => set("degasMinutes", v)} error={errors.degasMinutes} />
+        <NumberField
+          label="Degassing time"
+          unit="min"
+          value={draft.degasMinutes}
+          onChangeText={(v) => set("degasMinutes", v)}
+          error={errors.degasMinutes}
+        />
       ) : null}
       <YesNoChips label="Flux used" value={draft.fluxed} onChange={(v) => set("fluxed", v)} />
       <FieldError message={errors.fluxed} />
@@ -59,8 +92,20 @@ export function DaySection({ draft, set, errors, units }: SectionProps) {
     <>
       <Heading level={3}>The day</Heading>
       <Pair>
-        <NumberField label="Air temperature" unit={unitLabel("temperature", units)} value={draft.ambientTempC} onChangeText={(v) => set("ambientTempC", v)} error={errors.ambientTempC} />
-        <NumberField label="Humidity" unit="%" value={draft.humidityPct} onChangeText={(v) => set("humidityPct", v)} error={errors.humidityPct} />
+        <NumberField
+          label="Air temperature"
+          unit={unitLabel("temperature", units)}
+          value={draft.ambientTempC}
+          onChangeText={(v) => set("ambientTempC", v)}
+          error={errors.ambientTempC}
+        />
+        <NumberField
+          label="Humidity"
+          unit="%"
+          value={draft.humidityPct}
+          onChangeText={(v) => set("humidityPct", v)}
+          error={errors.humidityPct}
+        />
       </Pair>
     </>
   );
@@ -72,20 +117,40 @@ export function MouldSection({ draft, set, errors, units }: SectionProps) {
     <>
       <Heading level={3}>The mould</Heading>
       {showsMoisture(draft.process) ? (
-        <NumberField label={sandy ? "Sand moisture" : "Mould moisture"} unit="%" value={draft.sandMoisturePct}
-          onChangeText={(v) => set("sandMoisturePct", v)} error={errors.sandMoisturePct} />
+        <NumberField
+          label={sandy ? "Sand moisture" : "Mould moisture"}
+          unit="%"
+          value={draft.sandMoisturePct}
+          onChangeText={(v) => set("sandMoisturePct", v)}
+          error={errors.sandMoisturePct}
+        />
       ) : null}
       <YesNoChips label="Coating applied" value={draft.coatingApplied} onChange={(v) => set("coatingApplied", v)} />
       {draft.coatingApplied !== false ? (
         <>
-          <YesNoChips label="Coating dried before pouring" value={draft.coatingDried} onChange={(v) => set("coatingDried", v)} />
+          <YesNoChips
+            label="Coating dried before pouring"
+            value={draft.coatingDried}
+            onChange={(v) => set("coatingDried", v)}
+          />
           <FieldError message={errors.coatingDried} />
-          <NumberField label="Coats" whole value={draft.coatingCoats} onChangeText={(v) => set("coatingCoats", v)} error={errors.coatingCoats} />
+          <NumberField
+            label="Coats"
+            whole
+            value={draft.coatingCoats}
+            onChangeText={(v) => set("coatingCoats", v)}
+            error={errors.coatingCoats}
+          />
         </>
       ) : null}
       {showsFoam(draft.process) ? (
-        <NumberField label="Foam density" unit={unitLabel("density", units)} value={draft.foamDensityKgM3}
-          onChangeText={(v) => set("foamDensityKgM3", v)} error={errors.foamDensityKgM3} />
+        <NumberField
+          label="Foam density"
+          unit={unitLabel("density", units)}
+          value={draft.foamDensityKgM3}
+          onChangeText={(v) => set("foamDensityKgM3", v)}
+          error={errors.foamDensityKgM3}
+        />
       ) : null}
     </>
   );

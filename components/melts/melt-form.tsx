@@ -52,19 +52,36 @@ export function MeltForm({ initial, units, submitLabel, onSubmit }: Props) {
   const alloyChoices = (alloys.data ?? []).map((a) => ({ value: a.designation, label: a.designation }));
   return (
     <View style={styles.form}>
-      <TextField label="Poured on" value={draft.pouredOn} onChangeText={(v) => set("pouredOn", v)} error={errors.pouredOn}
-        placeholder="YYYY-MM-DD" />
+      <TextField
+        label="Poured on"
+        value={draft.pouredOn}
+        onChangeText={(v) => set("pouredOn", v)}
+        error={errors.pouredOn}
+        placeholder="YYYY-MM-DD"
+      />
       {alloys.error ? <Notice tone="error">{alloys.error.message}</Notice> : null}
       <ChoiceChips label="Alloy" options={alloyChoices} value={draft.alloy} onChange={(v) => set("alloy", v)} />
       <FieldError message={errors.alloy} />
-      <ChoiceChips label="Process" options={PROCESS_CHOICES} value={draft.process} onChange={(v) => set("process", v as Process)} />
+      <ChoiceChips
+        label="Process"
+        options={PROCESS_CHOICES}
+        value={draft.process}
+        onChange={(v) => set("process", v as Process)}
+      />
       <FieldError message={errors.process} />
       <MetalSection {...sectionProps} />
       <CleaningSection {...sectionProps} />
       <DaySection {...sectionProps} />
       <MouldSection {...sectionProps} />
-      <TextField label="Notes" value={draft.notes} onChangeText={(v) => set("notes", v)} error={errors.notes} multiline
-        style={styles.notes} placeholder="Anything else about this melt" />
+      <TextField
+        label="Notes"
+        value={draft.notes}
+        onChangeText={(v) => set("notes", v)}
+        error={errors.notes}
+        multiline
+        style={styles.notes}
+        placeholder="Anything else about this melt"
+      />
       <SafetyCautions />
       {failure ? <Notice tone="error">{failure}</Notice> : null}
       <Button label={submitLabel} onPress={submit} busy={busy} testID="save-melt" />

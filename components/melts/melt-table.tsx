@@ -13,15 +13,42 @@ type Props = { melts: MeltSummary[]; units: Units; sort: MeltSort; onSort: (s: M
 export function MeltTable({ melts, units, sort, onSort }: Props) {
   const router = useRouter();
   const columns: Column<MeltSummary>[] = [
-    { key: "day", label: "Poured on", flex: 2, sorts: [{ value: "date-desc", dir: "descending" }, { value: "date-asc", dir: "ascending" }], render: (m) => formatDay(m.pouredOn) },
+    {
+      key: "day",
+      label: "Poured on",
+      flex: 2,
+      sorts: [
+        { value: "date-desc", dir: "descending" },
+        { value: "date-asc", dir: "ascending" },
+      ],
+      render: (m) => formatDay(m.pouredOn),
+    },
     { key: "alloy", label: "Alloy", flex: 1.3, sorts: [{ value: "alloy", dir: "ascending" }], render: (m) => m.alloy },
     { key: "process", label: "Process", flex: 2, render: (m) => PROCESS_LABELS[m.process] },
-    { key: "pour", label: "Pour temp.", flex: 1.5, align: "right", render: (m) => formatValue("temperature", m.pourTempC, units) },
+    {
+      key: "pour",
+      label: "Pour temp.",
+      flex: 1.5,
+      align: "right",
+      render: (m) => formatValue("temperature", m.pourTempC, units),
+    },
     { key: "furnace", label: "Furnace", flex: 2.5, render: (m) => m.furnace ?? "–" },
-    { key: "castings", label: "Castings", flex: 2, sorts: [{ value: "castings", dir: "descending" }], render: (m) => castingsLine(m) },
+    {
+      key: "castings",
+      label: "Castings",
+      flex: 2,
+      sorts: [{ value: "castings", dir: "descending" }],
+      render: (m) => castingsLine(m),
+    },
   ];
   return (
-    <ListTable columns={columns} rows={melts} rowKey={(m) => m.id} sort={sort}
-      onSort={(s) => onSort(s as MeltSort)} onOpen={(m) => router.push(`/melts/${m.id}`)} />
+    <ListTable
+      columns={columns}
+      rows={melts}
+      rowKey={(m) => m.id}
+      sort={sort}
+      onSort={(s) => onSort(s as MeltSort)}
+      onOpen={(m) => router.push(`/melts/${m.id}`)}
+    />
   );
 }

@@ -3,9 +3,18 @@ import { Notice } from "@/components/ui/notice";
 import { useSaveUnits, useUnitsQuery } from "@/hooks/use-units";
 import type { Units } from "@/lib/units";
 
-const TEMPERATURE = [{ value: "C", label: "°C" }, { value: "F", label: "°F" }];
-const LENGTH = [{ value: "mm", label: "mm" }, { value: "in", label: "inches" }];
-const MASS = [{ value: "kg", label: "kg" }, { value: "lb", label: "lb" }];
+const TEMPERATURE = [
+  { value: "C", label: "°C" },
+  { value: "F", label: "°F" },
+];
+const LENGTH = [
+  { value: "mm", label: "mm" },
+  { value: "in", label: "inches" },
+];
+const MASS = [
+  { value: "kg", label: "kg" },
+  { value: "lb", label: "lb" },
+];
 
 /** Each person's own units; saved as soon as a chip is tapped, since there is nothing to undo. */
 export function UnitsChooser() {
@@ -18,12 +27,24 @@ export function UnitsChooser() {
 
   return (
     <>
-      <ChoiceChips label="Temperatures" options={TEMPERATURE} value={current.temperature}
-        onChange={(v) => set({ temperature: v as Units["temperature"] })} />
-      <ChoiceChips label="Lengths and thicknesses" options={LENGTH} value={current.length}
-        onChange={(v) => set({ length: v as Units["length"] })} />
-      <ChoiceChips label="Weights (foam density in kg/m³ or lb/ft³)" options={MASS} value={current.mass}
-        onChange={(v) => set({ mass: v as Units["mass"] })} />
+      <ChoiceChips
+        label="Temperatures"
+        options={TEMPERATURE}
+        value={current.temperature}
+        onChange={(v) => set({ temperature: v as Units["temperature"] })}
+      />
+      <ChoiceChips
+        label="Lengths and thicknesses"
+        options={LENGTH}
+        value={current.length}
+        onChange={(v) => set({ length: v as Units["length"] })}
+      />
+      <ChoiceChips
+        label="Weights (foam density in kg/m³ or lb/ft³)"
+        options={MASS}
+        value={current.mass}
+        onChange={(v) => set({ mass: v as Units["mass"] })}
+      />
       {save.error ? <Notice tone="error">{save.error.message}</Notice> : null}
     </>
   );

@@ -23,11 +23,23 @@ export function PhotoAdd({ upload, busy, progress, error, wide }: Props) {
   return (
     <View style={styles.wrap}>
       <View style={styles.row}>
-        {!wide || Platform.OS !== "web" ? <Button label="Take a photo" onPress={() => pick("camera")} busy={busy} /> : null}
-        <Button kind={wide ? "primary" : "plain"} label="Choose a photo" onPress={() => pick("library")} busy={busy} testID="choose-photo" />
+        {!wide || Platform.OS !== "web" ? (
+          <Button label="Take a photo" onPress={() => pick("camera")} busy={busy} />
+        ) : null}
+        <Button
+          kind={wide ? "primary" : "plain"}
+          label="Choose a photo"
+          onPress={() => pick("library")}
+          busy={busy}
+          testID="choose-photo"
+        />
       </View>
-      {wide && Platform.OS === "web" ? <Text style={styles.hint}>…or drag a photo from your computer onto this area.</Text> : null}
-      <Text style={styles.hint}>JPEG, PNG, WebP or HEIC, up to 15 MB. Location and camera details are removed when it is stored.</Text>
+      {wide && Platform.OS === "web" ? (
+        <Text style={styles.hint}>…or drag a photo from your computer onto this area.</Text>
+      ) : null}
+      <Text style={styles.hint}>
+        JPEG, PNG, WebP or HEIC, up to 15 MB. Location and camera details are removed when it is stored.
+      </Text>
       {busy ? <UploadProgress fraction={progress} /> : null}
       {refused ? <Notice tone="error">{refused}</Notice> : null}
       {error && !busy ? <Notice tone="error">{error.message}</Notice> : null}

@@ -39,11 +39,22 @@ export function PhotoDropZone({ onFile, enabled, children }: Props) {
     };
   }, [enabled]);
 
-  return <View ref={ref} style={[styles.zone, over && styles.over]} testID="photo-drop-zone">{children}</View>;
+  return (
+    <View ref={ref} style={[styles.zone, over && styles.over]} testID="photo-drop-zone">
+      {children}
+    </View>
+  );
 }
 
 const styles = StyleSheet.create({
   // The border is always there (transparent) so that showing it does not shift the photos.
-  zone: { gap: 12, borderRadius: radius.md, borderWidth: 2, borderColor: "transparent", borderStyle: "dashed", margin: -2 },
+  zone: {
+    gap: 12,
+    borderRadius: radius.md,
+    borderWidth: 2,
+    borderColor: "transparent",
+    borderStyle: "dashed",
+    margin: -2,
+  },
   over: { borderColor: colors.steel, backgroundColor: "#EAF1F1" },
 });

@@ -26,7 +26,14 @@ const clamp01 = (v: number) => Math.min(1, Math.max(0, v));
  * on a phone the responder's location is already relative to the photo.
  */
 function tapFraction(e: GestureResponderEvent, node: unknown, size: { w: number; h: number }) {
-  const ne = e.nativeEvent as unknown as { clientX?: number; clientY?: number; pageX: number; pageY: number; locationX: number; locationY: number };
+  const ne = e.nativeEvent as unknown as {
+    clientX?: number;
+    clientY?: number;
+    pageX: number;
+    pageY: number;
+    locationX: number;
+    locationY: number;
+  };
   if (Platform.OS === "web" && node) {
     const box = (node as HTMLElement).getBoundingClientRect();
     const cx = ne.clientX ?? ne.pageX - window.scrollX;
@@ -48,22 +55,44 @@ export function PhotoMarker({ photo, pins, selectedId, pending, onTap, onPin, ma
     <View onLayout={(e) => setWidth(e.nativeEvent.layout.width)} style={styles.outer}>
       {width > 0 ? (
         <View style={{ width: size.w, height: size.h }}>
-          <Pressable ref={ref} testID="casting-photo" aria-label="Photo: tap where the defect is"
+          <Pressable
+            ref={ref}
+            testID="casting-photo"
+            aria-label="Photo: tap where the defect is"
             onPress={(e) => {
               const f = tapFraction(e, ref.current, size);
               onTap(f.x, f.y);
-            }} style={StyleSheet.absoluteFill}>
+            }}
+            style={StyleSheet.absoluteFill}
+          >
             <Image source={{ uri: photoUri(photo.imageUrl) }} style={StyleSheet.absoluteFill} resizeMode="cover" />
           </Pressable>
           {pins.map(({ number, mark }) =>
             mark.x === null || mark.y === null ? null : (
-              <Pressable key={mark.id} onPress={() => onPin(mark)} aria-label={`Mark ${number}`} testID={`pin-${number}`}
-                style={[styles.pin, { left: mark.x * size.w - PIN / 2, top: mark.y * size.h - PIN / 2 }, mark.id === selectedId && styles.pinOn]}>
+              <Pressable
+                key={mark.id}
+                onPress={() => onPin(mark)}
+                aria-label={`Mark ${number}`}
+                testID={`pin-${number}`}
+                style={[
+                  styles.pin,
+                  { left: mark.x * size.w - PIN / 2, top: mark.y * size.h - PIN / 2 },
+                  mark.id === selectedId && styles.pinOn,
+                ]}
+              >
                 <Text style={styles.pinText}>{number}</Text>
               </Pressable>
-            ))}
+            ),
+          )}
           {pending ? (
-            <View pointerEvents="none" style={[styles.pin, styles.pending, { left: pending.x * size.w - PIN / 2, top: pending.y * size.h - PIN / 2 }]}>
+            <View
+              pointerEvents="none"
+              style={[
+                styles.pin,
+                styles.pending,
+                { left: pending.x * size.w - PIN / 2, top: pending.y * size.h - PIN / 2 },
+              ]}
+            >
               <Text style={styles.pinText}>+</Text>
             </View>
           ) : null}
@@ -76,8 +105,15 @@ export function PhotoMarker({ photo, pins, selectedId, pending, onTap, onPin, ma
 const styles = StyleSheet.create({
   outer: { width: "100%", alignItems: "center" },
   pin: {
-    position: "absolute", width: PIN, height: PIN, borderRadius: PIN / 2, alignItems: "center", justifyContent: "center",
-    backgroundColor: colors.accent, borderWidth: 2, borderColor: "#FFFFFF",
+    position: "absolute",
+    width: PIN,
+    height: PIN,
+    borderRadius: PIN / 2,
+    alignItems: "center",
+    justifyContent: "center",
+    backgroundColor: colors.accent,
+    borderWidth: 2,
+    borderColor: "#FFFFFF",
   },
   pinOn: { backgroundColor: colors.steel, transform: [{ scale: 1.2 }] },
   pending: { backgroundColor: colors.ink },

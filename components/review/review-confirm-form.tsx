@@ -23,35 +23,70 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
   const [errors, setErrors] = useState<Record<string, string>>({});
   const confirm = useConfirmCause(castingId);
   const submit = () => {
-    const input = { causeId: choice && choice !== OTHER ? choice : undefined, causeText: choice === OTHER ? other.trim() || undefined : undefined, note: note || undefined };
+    const input = {
+      causeId: choice && choice !== OTHER ? choice : undefined,
+      causeText: choice === OTHER ? other.trim() || undefined : undefined,
+      note: note || undefined,
+    };
     const parsed = confirmationInput.safeParse(input);
-    if (!parsed.success) return setErrors(Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message])));
+    if (!parsed.success)
+      return setErrors(Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message])));
     setErrors({});
     confirm.mutate(parsed.data, {
-      onSuccess: () => { setChoice(null); setOther(""); setNote(""); onDone?.(); },
+      onSuccess: () => {
+        setChoice(null);
+        setOther("");
+        setNote("");
+        onDone?.();
+      },
       onError: (e) => setErrors(e instanceof ApiError ? e.fields : {}),
     });
   };
-  const options = [...causes.map((c) => ({ id: c.id, title: c.title, cause: c })), { id: OTHER, title: "Something else", cause: null }];
+  const options = [
+    ...causes.map((c) => ({ id: c.id, title: c.title, cause: c })),
+    { id: OTHER, title: "Something else", cause: null },
+  ];
   return (
     <View style={styles.wrap}>
       <Heading level={3}>{title}</Heading>
       <Text style={styles.label}>What caused it</Text>
       <View role="radiogroup" aria-label="What caused it" style={styles.list}>
         {options.map((o) => (
-          <Pressable key={o.id} role="radio" aria-checked={choice === o.id} aria-label={o.title} onPress={() => setChoice(o.id)}
-            style={[styles.option, choice === o.id && styles.on]}>
-            <Text style={styles.title}>{choice === o.id ? "● " : "○ "}{o.title}</Text>
+          <Pressable
+            key={o.id}
+            role="radio"
+            aria-checked={choice === o.id}
+            aria-label={o.title}
+            onPress={() => setChoice(o.id)}
+            style={[styles.option, choice === o.id && styles.on]}
+          >
+            <Text style={styles.title}>
+              {choice === o.id ? "● " : "○ "}
+              {o.title}
+            </Text>
             {o.cause ? <CauseRecordLine cause={o.cause} /> : null}
           </Pressable>
         ))}
       </View>
       <FieldError message={errors.causeId} />
       {choice === OTHER ? (
-        <TextField label="What it was" value={other} onChangeText={setOther} error={errors.causeText} placeholder="e.g. Ladle lip froze over" />
+        <TextField
+          label="What it was"
+          value={other}
+          onChangeText={setOther}
+          error={errors.causeText}
+          placeholder="e.g. Ladle lip froze over"
+        />
       ) : null}
-      <TextField label="Note (optional)" value={note} onChangeText={setNote} error={errors.note} multiline style={styles.multi}
-        placeholder="What you saw that settles it" />
+      <TextField
+        label="Note (optional)"
+        value={note}
+        onChangeText={setNote}
+        error={errors.note}
+        multiline
+        style={styles.multi}
+        placeholder="What you saw that settles it"
+      />
       {confirm.error && !Object.keys(errors).length ? <Notice tone="error">{confirm.error.message}</Notice> : null}
       <Button label="Confirm the cause" onPress={submit} busy={confirm.isPending} testID="confirm-cause" />
     </View>
@@ -59,10 +94,24 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
 }
 
 const styles = StyleSheet.create({
-  wrap: { gap: space.sm, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  wrap: {
+    gap: space.sm,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
   label: { fontSize: 14, fontWeight: "600", color: colors.ink },
   list: { gap: space.xs },
-  option: { gap: 2, padding: space.sm, borderRadius: radius.sm, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.background },
+  option: {
+    gap: 2,
+    padding: space.sm,
+    borderRadius: radius.sm,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.background,
+  },
   on: { borderColor: colors.steel, backgroundColor: "#E7EFEF" },
   title: { fontSize: 15, color: colors.ink },
   multi: { minHeight: 64, paddingVertical: space.sm, textAlignVertical: "top" },

@@ -32,24 +32,42 @@ export function ReviewPanel({ castingId, causes }: { castingId: number; causes: 
       {current ? (
         <View style={styles.box} testID="confirmed-cause">
           <Text style={styles.strong}>Confirmed: {current.causeTitle}</Text>
-          <Text style={styles.meta}>{current.createdBy?.name ?? "A mentor"}, {formatMoment(current.createdAt)}</Text>
+          <Text style={styles.meta}>
+            {current.createdBy?.name ?? "A mentor"}, {formatMoment(current.createdAt)}
+          </Text>
           {current.note ? <Text style={styles.text}>{current.note}</Text> : null}
         </View>
       ) : null}
       {waiting ? (
         <Notice>{`Waiting for a mentor since ${formatMoment(waiting.createdAt)}, asked by ${waiting.createdBy?.name ?? "someone"}.${waiting.note ? ` “${waiting.note}”` : ""}`}</Notice>
-      ) : !current ? <Text style={styles.meta}>No mentor has looked at this casting yet.</Text> : null}
+      ) : !current ? (
+        <Text style={styles.meta}>No mentor has looked at this casting yet.</Text>
+      ) : null}
       {/* Mentors confirm directly; asking is for those who may not. */}
       {mayAsk && !mayConfirm && !waiting ? (
         <View style={styles.ask}>
-          <TextField label="Note for the mentor (optional)" value={note} onChangeText={setNote} placeholder="What puzzles you about it" />
-          <Button label={current ? "Ask for another look" : "Ask a mentor to review"} busy={ask.isPending}
-            onPress={() => ask.mutate(note, { onSuccess: () => setNote("") })} testID="ask-review" />
+          <TextField
+            label="Note for the mentor (optional)"
+            value={note}
+            onChangeText={setNote}
+            placeholder="What puzzles you about it"
+          />
+          <Button
+            label={current ? "Ask for another look" : "Ask a mentor to review"}
+            busy={ask.isPending}
+            onPress={() => ask.mutate(note, { onSuccess: () => setNote("") })}
+            testID="ask-review"
+          />
           {ask.error ? <Notice tone="error">{ask.error.message}</Notice> : null}
         </View>
       ) : null}
       {mayConfirm && (!current || correcting) ? (
-        <ReviewConfirmForm castingId={castingId} causes={causes} title={current ? "Correct the cause" : "Confirm the cause"} onDone={() => setCorrecting(false)} />
+        <ReviewConfirmForm
+          castingId={castingId}
+          causes={causes}
+          title={current ? "Correct the cause" : "Confirm the cause"}
+          onDone={() => setCorrecting(false)}
+        />
       ) : mayConfirm ? (
         <Button kind="plain" label="Correct the cause" onPress={() => setCorrecting(true)} />
       ) : null}
@@ -57,7 +75,9 @@ export function ReviewPanel({ castingId, causes }: { castingId: number; causes: 
         <View style={styles.earlier}>
           <Text style={styles.meta}>Earlier:</Text>
           {confirmations.slice(1).map((c) => (
-            <Text key={c.id} style={styles.meta}>• {c.causeTitle} ({c.createdBy?.name ?? "a mentor"}, {formatMoment(c.createdAt)})</Text>
+            <Text key={c.id} style={styles.meta}>
+              • {c.causeTitle} ({c.createdBy?.name ?? "a mentor"}, {formatMoment(c.createdAt)})
+            </Text>
           ))}
         </View>
       ) : null}
@@ -67,7 +87,14 @@ export function ReviewPanel({ castingId, causes }: { castingId: number; causes: 
 
 const styles = StyleSheet.create({
   wrap: { gap: space.md },
-  box: { gap: 2, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.steel, backgroundColor: colors.surface },
+  box: {
+    gap: 2,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.steel,
+    backgroundColor: colors.surface,
+  },
   strong: { fontSize: 16, fontWeight: "700", color: colors.ink },
   text: { fontSize: 15, lineHeight: 22, color: colors.ink },
   meta: { fontSize: 14, color: colors.muted },

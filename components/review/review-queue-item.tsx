@@ -14,17 +14,30 @@ export function ReviewQueueItem({ item }: { item: QueueItem }) {
     <Link href={`/melts/${item.meltId}/castings/${item.castingId}`} asChild>
       <Pressable role="link" style={styles.row} testID="review-item">
         <Text style={styles.part}>{item.partName}</Text>
-        <Text style={styles.meta}>{item.alloy}, {PROCESS_LABELS[item.process]}, poured {formatDay(item.pouredOn)} · {defects}</Text>
-        <Text style={styles.meta}>Asked by {item.askedBy?.name ?? "someone"}, {formatMoment(item.askedAt)}</Text>
+        <Text style={styles.meta}>
+          {item.alloy}, {PROCESS_LABELS[item.process]}, poured {formatDay(item.pouredOn)} · {defects}
+        </Text>
+        <Text style={styles.meta}>
+          Asked by {item.askedBy?.name ?? "someone"}, {formatMoment(item.askedAt)}
+        </Text>
         {item.note ? <Text style={styles.note}>“{item.note}”</Text> : null}
-        <Text style={styles.top}>{item.topCause ? `Rules said: ${item.topCause.title}` : "No diagnosis worked out yet"}</Text>
+        <Text style={styles.top}>
+          {item.topCause ? `Rules said: ${item.topCause.title}` : "No diagnosis worked out yet"}
+        </Text>
       </Pressable>
     </Link>
   );
 }
 
 const styles = StyleSheet.create({
-  row: { gap: 2, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  row: {
+    gap: 2,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
   part: { fontSize: 16, fontWeight: "700", color: colors.accent },
   meta: { fontSize: 14, color: colors.muted },
   note: { fontSize: 15, lineHeight: 22, color: colors.ink, fontStyle: "italic" },

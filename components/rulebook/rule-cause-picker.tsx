@@ -23,31 +23,67 @@ export function RuleCausePicker({ state, causes, errors, set }: Props) {
   const matches = causes.filter((c) => words.every((w) => c.title.toLowerCase().includes(w)));
   return (
     <View style={styles.wrap}>
-      <ChoiceChips label="Cause" value={state.causeKind} onChange={(v) => set("causeKind", v as "existing" | "new")}
-        options={[{ value: "existing", label: "one in the rulebook" }, { value: "new", label: "a new one" }]} />
+      <ChoiceChips
+        label="Cause"
+        value={state.causeKind}
+        onChange={(v) => set("causeKind", v as "existing" | "new")}
+        options={[
+          { value: "existing", label: "one in the rulebook" },
+          { value: "new", label: "a new one" },
+        ]}
+      />
       {state.causeKind === "existing" ? (
         <>
-          {chosen ? <Text style={styles.chosen} testID="chosen-cause">✓ {chosen.title}</Text> : null}
-          <TextInput aria-label="Find a cause" placeholder="Type to find a cause: cold, gas, sand…" placeholderTextColor={colors.muted}
-            value={query} onChangeText={setQuery} style={styles.search} />
+          {chosen ? (
+            <Text style={styles.chosen} testID="chosen-cause">
+              ✓ {chosen.title}
+            </Text>
+          ) : null}
+          <TextInput
+            aria-label="Find a cause"
+            placeholder="Type to find a cause: cold, gas, sand…"
+            placeholderTextColor={colors.muted}
+            value={query}
+            onChangeText={setQuery}
+            style={styles.search}
+          />
           <View style={styles.list}>
             {matches.slice(0, SHOWN).map((c) => (
-              <Pressable key={c.id} role="radio" aria-checked={c.id === state.causeId} onPress={() => set("causeId", c.id)}
-                style={[styles.option, c.id === state.causeId && styles.on]}>
+              <Pressable
+                key={c.id}
+                role="radio"
+                aria-checked={c.id === state.causeId}
+                onPress={() => set("causeId", c.id)}
+                style={[styles.option, c.id === state.causeId && styles.on]}
+              >
                 <Text style={styles.optionText}>{c.title}</Text>
                 {c.shop ? <Text style={styles.tag}>written here</Text> : null}
               </Pressable>
             ))}
-            {matches.length > SHOWN ? <Text style={styles.more}>{matches.length - SHOWN} more: type more of the name</Text> : null}
+            {matches.length > SHOWN ? (
+              <Text style={styles.more}>{matches.length - SHOWN} more: type more of the name</Text>
+            ) : null}
           </View>
           <FieldError message={errors["cause.id"] ?? errors.cause} />
         </>
       ) : (
         <>
-          <TextField label="Name of the cause" value={state.newTitle} onChangeText={(t) => set("newTitle", t)}
-            error={errors["cause.title"] ?? errors.cause} placeholder="e.g. Ladle lip froze over" />
-          <TextField label="Fixes to try, one per line" value={state.newFixes} onChangeText={(t) => set("newFixes", t)}
-            multiline numberOfLines={3} style={styles.multi} error={errors["cause.fixes"] ?? errors["cause.fixes.0"]} />
+          <TextField
+            label="Name of the cause"
+            value={state.newTitle}
+            onChangeText={(t) => set("newTitle", t)}
+            error={errors["cause.title"] ?? errors.cause}
+            placeholder="e.g. Ladle lip froze over"
+          />
+          <TextField
+            label="Fixes to try, one per line"
+            value={state.newFixes}
+            onChangeText={(t) => set("newFixes", t)}
+            multiline
+            numberOfLines={3}
+            style={styles.multi}
+            error={errors["cause.fixes"] ?? errors["cause.fixes.0"]}
+          />
         </>
       )}
     </View>
@@ -57,9 +93,27 @@ export function RuleCausePicker({ state, causes, errors, set }: Props) {
 const styles = StyleSheet.create({
   wrap: { gap: space.sm },
   chosen: { fontSize: 15, fontWeight: "600", color: colors.steel },
-  search: { minHeight: 44, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, paddingHorizontal: space.md, fontSize: 16, backgroundColor: colors.surface, color: colors.ink },
+  search: {
+    minHeight: 44,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.sm,
+    paddingHorizontal: space.md,
+    fontSize: 16,
+    backgroundColor: colors.surface,
+    color: colors.ink,
+  },
   list: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, backgroundColor: colors.surface },
-  option: { flexDirection: "row", gap: space.sm, alignItems: "center", paddingHorizontal: space.md, paddingVertical: space.sm, minHeight: 40, borderBottomWidth: 1, borderBottomColor: colors.line },
+  option: {
+    flexDirection: "row",
+    gap: space.sm,
+    alignItems: "center",
+    paddingHorizontal: space.md,
+    paddingVertical: space.sm,
+    minHeight: 40,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+  },
   on: { backgroundColor: "#E7EFEF" },
   optionText: { flex: 1, fontSize: 15, color: colors.ink },
   tag: { fontSize: 12, color: colors.steel, fontWeight: "700" },

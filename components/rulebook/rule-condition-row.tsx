@@ -36,16 +36,40 @@ export function RuleConditionRow({ index, row, units, errors, onChange, onRemove
           </Pressable>
         ) : null}
       </View>
-      <RuleFactPicker fact={row.fact} units={units} error={errors.fact}
-        onPick={(fact) => onChange({ fact, comparison: fact === row.fact ? row.comparison : "", low: "", high: "", values: [], yes: null })} />
+      <RuleFactPicker
+        fact={row.fact}
+        units={units}
+        error={errors.fact}
+        onPick={(fact) =>
+          onChange({
+            fact,
+            comparison: fact === row.fact ? row.comparison : "",
+            low: "",
+            high: "",
+            values: [],
+            yes: null,
+          })
+        }
+      />
       {spec ? (
         <>
-          <ChoiceChips label="Comparison" options={comparisons} value={row.comparison || null} onChange={(c) => onChange({ comparison: c as Comparison })} />
+          <ChoiceChips
+            label="Comparison"
+            options={comparisons}
+            value={row.comparison || null}
+            onChange={(c) => onChange({ comparison: c as Comparison })}
+          />
           <FieldError message={errors.comparison} />
         </>
       ) : null}
       {spec && (row.comparison === "below" || row.comparison === "above") ? (
-        <NumberField label="Value" unit={unit} value={row.low} onChangeText={(low) => onChange({ low })} error={errors.value} />
+        <NumberField
+          label="Value"
+          unit={unit}
+          value={row.low}
+          onChangeText={(low) => onChange({ low })}
+          error={errors.value}
+        />
       ) : null}
       {spec && row.comparison === "between" ? (
         <>
@@ -58,25 +82,45 @@ export function RuleConditionRow({ index, row, units, errors, onChange, onRemove
       ) : null}
       {spec?.kind === "enum" && (row.comparison === "one-of" || row.comparison === "not-one-of") ? (
         <>
-          <MultiChips label="Values" options={spec.values.map((v) => ({ value: v, label: valueWord(v) }))} values={row.values}
-            onChange={(values) => onChange({ values })} />
+          <MultiChips
+            label="Values"
+            options={spec.values.map((v) => ({ value: v, label: valueWord(v) }))}
+            values={row.values}
+            onChange={(values) => onChange({ values })}
+          />
           <FieldError message={errors.value} />
         </>
       ) : null}
       {spec?.kind === "boolean" && row.comparison === "is" ? (
         <>
-          <ChoiceChips label="Value" options={[{ value: "yes", label: "yes" }, { value: "no", label: "no" }]}
-            value={row.yes === null ? null : row.yes ? "yes" : "no"} onChange={(v) => onChange({ yes: v === "yes" })} />
+          <ChoiceChips
+            label="Value"
+            options={[
+              { value: "yes", label: "yes" },
+              { value: "no", label: "no" },
+            ]}
+            value={row.yes === null ? null : row.yes ? "yes" : "no"}
+            onChange={(v) => onChange({ yes: v === "yes" })}
+          />
           <FieldError message={errors.value} />
         </>
       ) : null}
-      {row.comparison === "missing" ? <Text style={styles.note}>Holds when nobody logged this value for the casting.</Text> : null}
+      {row.comparison === "missing" ? (
+        <Text style={styles.note}>Holds when nobody logged this value for the casting.</Text>
+      ) : null}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  card: { gap: space.sm, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.background },
+  card: {
+    gap: space.sm,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.background,
+  },
   head: { flexDirection: "row", justifyContent: "space-between", alignItems: "center" },
   title: { fontSize: 14, fontWeight: "700", color: colors.muted },
   remove: { fontSize: 14, fontWeight: "600", color: colors.danger, paddingVertical: space.xs },

@@ -10,7 +10,13 @@ export function RuleConditions({ conditions, units }: { conditions: Condition; u
   const words = describeCondition(conditions, unitsFormat(units));
   // The top level is nearly always "all of these": the heading above already says so.
   const parts = typeof words !== "string" && words.join === "all" ? words.parts : [words];
-  return <View style={styles.list}>{parts.map((p, i) => <Part key={i} words={p} />)}</View>;
+  return (
+    <View style={styles.list}>
+      {parts.map((p, i) => (
+        <Part key={i} words={p} />
+      ))}
+    </View>
+  );
 }
 
 function Part({ words }: { words: ConditionWords }) {
@@ -18,7 +24,9 @@ function Part({ words }: { words: ConditionWords }) {
   return (
     <View style={styles.group}>
       <Text style={styles.join}>{JOIN_WORDS[words.join]}:</Text>
-      {words.parts.map((p, i) => <Part key={i} words={p} />)}
+      {words.parts.map((p, i) => (
+        <Part key={i} words={p} />
+      ))}
     </View>
   );
 }

@@ -10,13 +10,28 @@ import { factLabel } from "@/lib/rule-units";
 const SHOWN = 8;
 
 /** What a condition looks at: type a few letters, tap one of the matching facts. */
-export function RuleFactPicker({ fact, units, error, onPick }: { fact: string; units: Units; error?: string; onPick: (name: string) => void }) {
+export function RuleFactPicker({
+  fact,
+  units,
+  error,
+  onPick,
+}: {
+  fact: string;
+  units: Units;
+  error?: string;
+  onPick: (name: string) => void;
+}) {
   const spec = factSpec(fact);
   const [open, setOpen] = useState(!spec);
   const [query, setQuery] = useState("");
   if (spec && !open) {
     return (
-      <Pressable role="button" aria-label={`Looks at ${spec.label}: change`} onPress={() => setOpen(true)} style={styles.chosen}>
+      <Pressable
+        role="button"
+        aria-label={`Looks at ${spec.label}: change`}
+        onPress={() => setOpen(true)}
+        style={styles.chosen}
+      >
         <Text style={styles.chosenText}>{factLabel(spec, units)}</Text>
         <Text style={styles.change}>change</Text>
       </Pressable>
@@ -26,18 +41,38 @@ export function RuleFactPicker({ fact, units, error, onPick }: { fact: string; u
   const matches = PICKABLE_FACTS.filter((f) => words.every((w) => f.label.toLowerCase().includes(w)));
   return (
     <View style={styles.wrap}>
-      <TextInput aria-label="Find what to look at" placeholder="Type to find: pour, sprue, humidity…" placeholderTextColor={colors.muted}
-        value={query} onChangeText={setQuery} style={styles.search} autoCapitalize="none" />
+      <TextInput
+        aria-label="Find what to look at"
+        placeholder="Type to find: pour, sprue, humidity…"
+        placeholderTextColor={colors.muted}
+        value={query}
+        onChangeText={setQuery}
+        style={styles.search}
+        autoCapitalize="none"
+      />
       <View style={styles.list}>
         {matches.slice(0, SHOWN).map((f) => (
-          <Pressable key={f.name} role="button" aria-label={`Look at ${f.label}`} style={styles.option}
-            onPress={() => { onPick(f.name); setOpen(false); setQuery(""); }}>
+          <Pressable
+            key={f.name}
+            role="button"
+            aria-label={`Look at ${f.label}`}
+            style={styles.option}
+            onPress={() => {
+              onPick(f.name);
+              setOpen(false);
+              setQuery("");
+            }}
+          >
             <Text style={styles.optionText}>{factLabel(f, units)}</Text>
             <Text style={styles.kind}>{f.derived ? "worked out" : "logged"}</Text>
           </Pressable>
         ))}
-        {matches.length > SHOWN ? <Text style={styles.more}>{matches.length - SHOWN} more: type more of the name</Text> : null}
-        {matches.length === 0 ? <Text style={styles.more}>Nothing the rulebook knows about matches “{query}”.</Text> : null}
+        {matches.length > SHOWN ? (
+          <Text style={styles.more}>{matches.length - SHOWN} more: type more of the name</Text>
+        ) : null}
+        {matches.length === 0 ? (
+          <Text style={styles.more}>Nothing the rulebook knows about matches “{query}”.</Text>
+        ) : null}
       </View>
       <FieldError message={error} />
     </View>
@@ -46,12 +81,42 @@ export function RuleFactPicker({ fact, units, error, onPick }: { fact: string; u
 
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
-  chosen: { flexDirection: "row", alignItems: "center", justifyContent: "space-between", gap: space.sm, minHeight: 44, paddingHorizontal: space.md, borderRadius: radius.sm, borderWidth: 1, borderColor: colors.steel, backgroundColor: colors.surface },
+  chosen: {
+    flexDirection: "row",
+    alignItems: "center",
+    justifyContent: "space-between",
+    gap: space.sm,
+    minHeight: 44,
+    paddingHorizontal: space.md,
+    borderRadius: radius.sm,
+    borderWidth: 1,
+    borderColor: colors.steel,
+    backgroundColor: colors.surface,
+  },
   chosenText: { flex: 1, fontSize: 16, fontWeight: "600", color: colors.ink },
   change: { fontSize: 14, color: colors.accent, fontWeight: "600" },
-  search: { minHeight: 44, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, paddingHorizontal: space.md, fontSize: 16, backgroundColor: colors.surface, color: colors.ink },
+  search: {
+    minHeight: 44,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.sm,
+    paddingHorizontal: space.md,
+    fontSize: 16,
+    backgroundColor: colors.surface,
+    color: colors.ink,
+  },
   list: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, backgroundColor: colors.surface },
-  option: { flexDirection: "row", justifyContent: "space-between", gap: space.sm, paddingHorizontal: space.md, paddingVertical: space.sm, minHeight: 40, alignItems: "center", borderBottomWidth: 1, borderBottomColor: colors.line },
+  option: {
+    flexDirection: "row",
+    justifyContent: "space-between",
+    gap: space.sm,
+    paddingHorizontal: space.md,
+    paddingVertical: space.sm,
+    minHeight: 40,
+    alignItems: "center",
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+  },
   optionText: { flex: 1, fontSize: 15, color: colors.ink },
   kind: { fontSize: 12, color: colors.muted },
   more: { padding: space.sm, fontSize: 13, color: colors.muted },

@@ -17,11 +17,18 @@ export function RuleListItem({ rule, units }: { rule: RuleRow; units: Units }) {
     <Link href={`/rulebook/${rule.id}`} asChild>
       <Pressable role="link" style={styles.row} testID={`rule-${rule.id}`}>
         <View style={styles.top}>
-          <Text style={styles.title} numberOfLines={2}>{rule.effect === "weakens" ? "Against: " : ""}{rule.cause.title}</Text>
+          <Text style={styles.title} numberOfLines={2}>
+            {rule.effect === "weakens" ? "Against: " : ""}
+            {rule.cause.title}
+          </Text>
           <Text style={[styles.state, !rule.inUse && styles.off]}>{stateWords(rule)}</Text>
         </View>
-        <Text style={styles.when} numberOfLines={2}>When {conditionLines(rule.conditions, unitsFormat(units)).join("; ")}</Text>
-        <Text style={styles.meta} numberOfLines={1}>{defects} · {rule.source === "shop" ? "written here" : rule.family.toLowerCase()}</Text>
+        <Text style={styles.when} numberOfLines={2}>
+          When {conditionLines(rule.conditions, unitsFormat(units)).join("; ")}
+        </Text>
+        <Text style={styles.meta} numberOfLines={1}>
+          {defects} · {rule.source === "shop" ? "written here" : rule.family.toLowerCase()}
+        </Text>
         <RuleRecordLine record={rule.record} />
       </Pressable>
     </Link>
@@ -29,7 +36,14 @@ export function RuleListItem({ rule, units }: { rule: RuleRow; units: Units }) {
 }
 
 const styles = StyleSheet.create({
-  row: { gap: 2, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  row: {
+    gap: 2,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
   top: { flexDirection: "row", gap: space.sm, alignItems: "flex-start" },
   title: { flex: 1, fontSize: 15, fontWeight: "700", color: colors.ink },
   state: { fontSize: 12, fontWeight: "700", color: colors.steel, textTransform: "uppercase" },

@@ -2,7 +2,14 @@ import { Pressable, StyleSheet, Text, View } from "react-native";
 import { colors } from "@/constants/theme";
 import { chipStyles, type Choice } from "@/components/ui/choice-chips";
 
-type Props = { label: string; hint?: string; options: readonly Choice[]; values: readonly string[]; onChange: (v: string[]) => void; disabled?: boolean };
+type Props = {
+  label: string;
+  hint?: string;
+  options: readonly Choice[];
+  values: readonly string[];
+  onChange: (v: string[]) => void;
+  disabled?: boolean;
+};
 
 /** Pick any number of a short list by tapping; tapping again takes one off. */
 export function MultiChips({ label, hint, options, values, onChange, disabled }: Props) {
@@ -15,9 +22,19 @@ export function MultiChips({ label, hint, options, values, onChange, disabled }:
         {options.map((o) => {
           const on = values.includes(o.value);
           return (
-            <Pressable key={o.value} role="checkbox" aria-checked={on} aria-label={o.label} disabled={disabled}
-              onPress={() => toggle(o.value)} style={[styles.chip, on && styles.on]}>
-              <Text style={[styles.text, on && styles.textOn]}>{on ? "✓ " : ""}{o.label}</Text>
+            <Pressable
+              key={o.value}
+              role="checkbox"
+              aria-checked={on}
+              aria-label={o.label}
+              disabled={disabled}
+              onPress={() => toggle(o.value)}
+              style={[styles.chip, on && styles.on]}
+            >
+              <Text style={[styles.text, on && styles.textOn]}>
+                {on ? "✓ " : ""}
+                {o.label}
+              </Text>
             </Pressable>
           );
         })}

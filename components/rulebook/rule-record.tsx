@@ -18,7 +18,11 @@ export function RuleRecordLine({ record }: { record: RuleRecord | null }) {
  */
 export function CauseRecordLine({ cause }: { cause: { record?: CauseRecord | null } }) {
   const words = recordWords(cause.record);
-  return words ? <Text style={styles.text} testID="cause-record">{words[0].toUpperCase() + words.slice(1)}</Text> : null;
+  return words ? (
+    <Text style={styles.text} testID="cause-record">
+      {words[0].toUpperCase() + words.slice(1)}
+    </Text>
+  ) : null;
 }
 
 const styles = StyleSheet.create({ text: { fontSize: 13, color: colors.steel, fontWeight: "600" } });

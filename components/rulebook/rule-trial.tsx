@@ -31,18 +31,32 @@ export function RuleTrial({ trial }: { trial: Trial }) {
       </Text>
       {t.confirmedCases > 0 ? (
         <Text style={styles.line}>
-          Top cause matches the confirmed one in {t.topRightBefore} of {t.confirmedCases} confirmed cases now, {t.topRightAfter} with this rule.
+          Top cause matches the confirmed one in {t.topRightBefore} of {t.confirmedCases} confirmed cases now,{" "}
+          {t.topRightAfter} with this rule.
         </Text>
       ) : null}
-      {t.contradictions.map((c) => <Notice key={c.message} tone="caution">{`Never true: ${c.message}.`}</Notice>)}
-      <Text style={styles.sub}>{t.changed.length ? `Top cause would change for ${plural(t.changed.length, "case")}` : "No case would get a different top cause."}</Text>
+      {t.contradictions.map((c) => (
+        <Notice key={c.message} tone="caution">{`Never true: ${c.message}.`}</Notice>
+      ))}
+      <Text style={styles.sub}>
+        {t.changed.length
+          ? `Top cause would change for ${plural(t.changed.length, "case")}`
+          : "No case would get a different top cause."}
+      </Text>
       {t.changed.map((c) => (
         <Link key={c.castingId} href={`/melts/${c.meltId}/castings/${c.castingId}`} asChild>
           <Pressable role="link" style={styles.case} testID="trial-case">
-            <Text style={styles.part}>{c.partName} · {formatDay(c.pouredOn)}</Text>
-            <Text style={styles.change}>{c.before?.title ?? "no cause"} → {c.after?.title ?? "no cause"}</Text>
+            <Text style={styles.part}>
+              {c.partName} · {formatDay(c.pouredOn)}
+            </Text>
+            <Text style={styles.change}>
+              {c.before?.title ?? "no cause"} → {c.after?.title ?? "no cause"}
+            </Text>
             {c.confirmed ? (
-              <Text style={styles.confirmed}>Confirmed: {c.confirmed.id ? t.causeTitles[c.confirmed.id] ?? c.confirmed.id : "a cause not in the rulebook"}</Text>
+              <Text style={styles.confirmed}>
+                Confirmed:{" "}
+                {c.confirmed.id ? (t.causeTitles[c.confirmed.id] ?? c.confirmed.id) : "a cause not in the rulebook"}
+              </Text>
             ) : null}
             <Text style={[styles.verdict, { color: VERDICT[c.verdict].colour }]}>{VERDICT[c.verdict].text}</Text>
           </Pressable>
@@ -53,10 +67,24 @@ export function RuleTrial({ trial }: { trial: Trial }) {
 }
 
 const styles = StyleSheet.create({
-  wrap: { gap: space.sm, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.steel, backgroundColor: colors.surface },
+  wrap: {
+    gap: space.sm,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.steel,
+    backgroundColor: colors.surface,
+  },
   line: { fontSize: 15, lineHeight: 22, color: colors.ink },
   sub: { fontSize: 14, fontWeight: "700", color: colors.muted, marginTop: space.xs },
-  case: { gap: 2, padding: space.sm, borderRadius: radius.sm, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.background },
+  case: {
+    gap: 2,
+    padding: space.sm,
+    borderRadius: radius.sm,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.background,
+  },
   part: { fontSize: 15, fontWeight: "700", color: colors.accent },
   change: { fontSize: 14, lineHeight: 20, color: colors.ink },
   confirmed: { fontSize: 13, color: colors.muted },

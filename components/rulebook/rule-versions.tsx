@@ -9,7 +9,15 @@ import type { DefectLocation, DefectType } from "@/rules/case";
 import { ruleChanges } from "@/rules/rule-diff";
 
 /** Every version of a shop rule, newest first, each with who, when and what changed from the one before. */
-export function RuleVersions({ versions, causes, units }: { versions: RuleVersion[]; causes: CauseOption[]; units: Units }) {
+export function RuleVersions({
+  versions,
+  causes,
+  units,
+}: {
+  versions: RuleVersion[];
+  causes: CauseOption[];
+  units: Units;
+}) {
   const words = {
     fmt: unitsFormat(units),
     causeTitle: (id: string) => causes.find((c) => c.id === id)?.title ?? id,
@@ -23,7 +31,11 @@ export function RuleVersions({ versions, causes, units }: { versions: RuleVersio
           <Text style={styles.head}>
             Version {v.version} · {v.status} · {v.createdBy?.name ?? "someone"}, {formatMoment(v.createdAt)}
           </Text>
-          {ruleChanges(versions[i + 1] ?? null, v, words).map((line) => <Text key={line} style={styles.change}>• {line}</Text>)}
+          {ruleChanges(versions[i + 1] ?? null, v, words).map((line) => (
+            <Text key={line} style={styles.change}>
+              • {line}
+            </Text>
+          ))}
         </View>
       ))}
     </View>
@@ -32,7 +44,14 @@ export function RuleVersions({ versions, causes, units }: { versions: RuleVersio
 
 const styles = StyleSheet.create({
   list: { gap: space.sm },
-  item: { gap: 2, padding: space.sm, borderRadius: radius.sm, borderLeftWidth: 3, borderLeftColor: colors.steel, backgroundColor: colors.surface },
+  item: {
+    gap: 2,
+    padding: space.sm,
+    borderRadius: radius.sm,
+    borderLeftWidth: 3,
+    borderLeftColor: colors.steel,
+    backgroundColor: colors.surface,
+  },
   head: { fontSize: 14, fontWeight: "700", color: colors.ink },
   change: { fontSize: 14, lineHeight: 20, color: colors.ink },
 });

@@ -15,13 +15,23 @@ export function CasebookEmptyState({ query, filtered, onClearFilters, onClearWor
       <Text style={styles.title}>{emptyText(query)}</Text>
       {nothingLogged ? (
         <>
-          <Text style={styles.hint}>Each casting logged under Melts shows up here, with its defects, conditions and causes.</Text>
+          <Text style={styles.hint}>
+            Each casting logged under Melts shows up here, with its defects, conditions and causes.
+          </Text>
           <Button label="Log a melt" onPress={() => router.push("/melts/new")} />
         </>
       ) : (
         <>
-          {query.q ? <Text style={styles.hint}>Small slips in spelling are forgiven; try fewer words, or a different word for the same defect.</Text> : null}
-          {filtered ? <Text style={styles.hint}>Each filter narrows the search: removing one may find the case you remember.</Text> : null}
+          {query.q ? (
+            <Text style={styles.hint}>
+              Small slips in spelling are forgiven; try fewer words, or a different word for the same defect.
+            </Text>
+          ) : null}
+          {filtered ? (
+            <Text style={styles.hint}>
+              Each filter narrows the search: removing one may find the case you remember.
+            </Text>
+          ) : null}
           <View style={styles.row}>
             {filtered ? <Button kind="plain" label="Clear the filters" onPress={onClearFilters} /> : null}
             {query.q ? <Button kind="plain" label="Clear the words" onPress={onClearWords} /> : null}
@@ -33,7 +43,14 @@ export function CasebookEmptyState({ query, filtered, onClearFilters, onClearWor
 }
 
 const styles = StyleSheet.create({
-  box: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, backgroundColor: colors.surface, padding: space.lg, gap: space.sm },
+  box: {
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.md,
+    backgroundColor: colors.surface,
+    padding: space.lg,
+    gap: space.sm,
+  },
   title: { fontSize: 17, fontWeight: "600", color: colors.ink },
   hint: { fontSize: 15, lineHeight: 22, color: colors.muted },
   row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm, marginTop: space.xs },

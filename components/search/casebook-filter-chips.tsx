@@ -10,7 +10,10 @@ import type { DefectType, Process } from "@/rules/case";
 
 type Option = { value: string; label: string; count?: number };
 type Props = {
-  filters: CasebookFilters; onChange: (f: CasebookFilters) => void; facets?: SearchFacets; people: { userId: string; name: string }[];
+  filters: CasebookFilters;
+  onChange: (f: CasebookFilters) => void;
+  facets?: SearchFacets;
+  people: { userId: string; name: string }[];
   /** A side panel is narrow: the two dates go one under the other. */
   narrow?: boolean;
 };
@@ -21,9 +24,15 @@ export function CasebookFilterChips({ filters, onChange, facets, people, narrow 
     const on = filters[key].includes(value);
     onChange({ ...filters, [key]: on ? filters[key].filter((v) => v !== value) : [...filters[key], value] });
   };
-  const counted = (counts: Record<string, number | undefined> | undefined, label: (v: string) => string, selected: string[]): Option[] => {
+  const counted = (
+    counts: Record<string, number | undefined> | undefined,
+    label: (v: string) => string,
+    selected: string[],
+  ): Option[] => {
     const values = new Set([...Object.keys(counts ?? {}), ...selected]);
-    return [...values].map((value) => ({ value, label: label(value), count: counts?.[value] ?? 0 })).sort((a, b) => b.count - a.count);
+    return [...values]
+      .map((value) => ({ value, label: label(value), count: counts?.[value] ?? 0 }))
+      .sort((a, b) => b.count - a.count);
   };
   const causeCounts = Object.fromEntries(Object.entries(facets?.cause ?? {}).map(([id, c]) => [id, c.count]));
   const causeTitle = (id: string) => facets?.cause[id]?.title ?? id;
@@ -32,18 +41,43 @@ export function CasebookFilterChips({ filters, onChange, facets, people, narrow 
   );
   return (
     <View style={styles.wrap}>
-      {group("defect", "Defect", counted(facets?.defect, (v) => DEFECTS[v as DefectType]?.label ?? v, filters.defect))}
-      {group("alloy", "Alloy", counted(facets?.alloy, (v) => v, filters.alloy))}
-      {group("process", "Process", counted(facets?.process, (v) => PROCESS_LABELS[v as Process] ?? v, filters.process))}
-      {group("outcome", "Outcome", counted(facets?.outcome, (v) => OUTCOME_LABELS[v as keyof typeof OUTCOME_LABELS] ?? v, filters.outcome))}
+      {group(
+        "defect",
+        "Defect",
+        counted(facets?.defect, (v) => DEFECTS[v as DefectType]?.label ?? v, filters.defect),
+      )}
+      {group(
+        "alloy",
+        "Alloy",
+        counted(facets?.alloy, (v) => v, filters.alloy),
+      )}
+      {group(
+        "process",
+        "Process",
+        counted(facets?.process, (v) => PROCESS_LABELS[v as Process] ?? v, filters.process),
+      )}
+      {group(
+        "outcome",
+        "Outcome",
+        counted(facets?.outcome, (v) => OUTCOME_LABELS[v as keyof typeof OUTCOME_LABELS] ?? v, filters.outcome),
+      )}
       {group("cause", "Cause (confirmed or likely)", counted(causeCounts, causeTitle, filters.cause))}
-      {group("by", "Logged by", people.map((p) => ({ value: p.userId, label: p.name })))}
+      {group(
+        "by",
+        "Logged by",
+        people.map((p) => ({ value: p.userId, label: p.name })),
+      )}
       <View style={[styles.dates, narrow && styles.stacked]}>
         {(["from", "to"] as const).map((k) => (
           <View key={k} style={styles.date}>
-            <TextField label={k === "from" ? "Poured from" : "Poured until"} placeholder="YYYY-MM-DD" value={filters[k]} maxLength={10}
+            <TextField
+              label={k === "from" ? "Poured from" : "Poured until"}
+              placeholder="YYYY-MM-DD"
+              value={filters[k]}
+              maxLength={10}
               onChangeText={(t) => onChange({ ...filters, [k]: t.trim() })}
-              error={filters[k] && !isDay(filters[k]) && filters[k].length >= 10 ? "a day as YYYY-MM-DD" : undefined} />
+              error={filters[k] && !isDay(filters[k]) && filters[k].length >= 10 ? "a day as YYYY-MM-DD" : undefined}
+            />
           </View>
         ))}
       </View>
@@ -52,7 +86,17 @@ export function CasebookFilterChips({ filters, onChange, facets, people, narrow 
 }
 
 const SHOWN = 8;
-function ChipGroup({ label, options, selected, onToggle }: { label: string; options: Option[]; selected: string[]; onToggle: (v: string) => void }) {
+function ChipGroup({
+  label,
+  options,
+  selected,
+  onToggle,
+}: {
+  label: string;
+  options: Option[];
+  selected: string[];
+  onToggle: (v: string) => void;
+}) {
   const [all, setAll] = useState(false);
   if (!options.length) return null;
   const shown = all ? options : options.slice(0, SHOWN);
@@ -63,7 +107,13 @@ function ChipGroup({ label, options, selected, onToggle }: { label: string; opti
         {shown.map((o) => {
           const on = selected.includes(o.value);
           return (
-            <Pressable key={o.value} role="checkbox" aria-checked={on} onPress={() => onToggle(o.value)} style={[styles.chip, on && styles.on]}>
+            <Pressable
+              key={o.value}
+              role="checkbox"
+              aria-checked={on}
+              onPress={() => onToggle(o.value)}
+              style={[styles.chip, on && styles.on]}
+            >
               <Text style={[styles.text, on && styles.textOn]}>
                 {o.label}
                 {o.count !== undefined ? <Text style={[styles.count, on && styles.textOn]}> {o.count}</Text> : null}
@@ -87,8 +137,15 @@ const styles = StyleSheet.create({
   label: { fontSize: 13, fontWeight: "700", color: colors.muted },
   row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
   chip: {
-    borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: 6,
-    backgroundColor: colors.surface, minHeight: 36, justifyContent: "center", maxWidth: "100%",
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.md,
+    paddingHorizontal: space.md,
+    paddingVertical: 6,
+    backgroundColor: colors.surface,
+    minHeight: 36,
+    justifyContent: "center",
+    maxWidth: "100%",
   },
   on: { backgroundColor: colors.steel, borderColor: colors.steel },
   text: { color: colors.ink, fontSize: 14, flexShrink: 1 },

@@ -11,7 +11,11 @@ const OUTCOME_COLOURS = { good: colors.steel, rework: "#8A6D1F", scrap: colors.d
 
 export function OutcomeTag({ outcome }: { outcome: CaseSummary["outcome"] }) {
   if (!outcome) return <Text style={styles.muted}>not judged</Text>;
-  return <Text style={[styles.tag, { color: OUTCOME_COLOURS[outcome], borderColor: OUTCOME_COLOURS[outcome] }]}>{OUTCOME_LABELS[outcome]}</Text>;
+  return (
+    <Text style={[styles.tag, { color: OUTCOME_COLOURS[outcome], borderColor: OUTCOME_COLOURS[outcome] }]}>
+      {OUTCOME_LABELS[outcome]}
+    </Text>
+  );
 }
 
 /** One case on a phone: what it was, when and how it was poured, what went wrong and why. */
@@ -33,7 +37,9 @@ export function CasebookResultCard({ hit }: { hit: CaseHit }) {
             {hit.cause?.confirmed ? "Confirmed" : "Cause, fixes"}: <MarkedText runs={hit.marked.causes} plain="" />
           </Text>
         ) : hit.cause ? (
-          <Text style={styles.cause} numberOfLines={2}>{causeLine(hit)}</Text>
+          <Text style={styles.cause} numberOfLines={2}>
+            {causeLine(hit)}
+          </Text>
         ) : null}
         {words ? <MarkedText style={styles.words} runs={words} plain="" numberOfLines={3} /> : null}
       </Pressable>
@@ -42,12 +48,26 @@ export function CasebookResultCard({ hit }: { hit: CaseHit }) {
 }
 
 const styles = StyleSheet.create({
-  card: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, padding: space.md, gap: 4 },
+  card: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.md,
+    padding: space.md,
+    gap: 4,
+  },
   top: { flexDirection: "row", justifyContent: "space-between", alignItems: "center", gap: space.sm },
   part: { flex: 1, fontSize: 17, fontWeight: "600", color: colors.ink },
   line: { fontSize: 15, color: colors.ink },
   cause: { fontSize: 14, color: colors.steel },
   words: { fontSize: 14, color: colors.muted, fontStyle: "italic" },
   muted: { fontSize: 14, color: colors.muted },
-  tag: { fontSize: 13, fontWeight: "700", borderWidth: 1, borderRadius: radius.sm, paddingHorizontal: 6, paddingVertical: 1 },
+  tag: {
+    fontSize: 13,
+    fontWeight: "700",
+    borderWidth: 1,
+    borderRadius: radius.sm,
+    paddingHorizontal: 6,
+    paddingVertical: 1,
+  },
 });

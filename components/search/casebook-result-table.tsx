@@ -9,30 +9,73 @@ import { formatDay } from "@/lib/dates";
 import { PROCESS_LABELS } from "@/lib/labels";
 import type { CaseHit, SearchSort } from "@/lib/search-schemas";
 
-const DATE_SORTS = [{ value: "date-desc", dir: "descending" }, { value: "date-asc", dir: "ascending" }] as const;
+const DATE_SORTS = [
+  { value: "date-desc", dir: "descending" },
+  { value: "date-asc", dir: "ascending" },
+] as const;
 
 /** The results on a wide screen: a row per case, the matched words marked in each column. */
-export function CasebookResultTable({ hits, sort, onSort }: { hits: CaseHit[]; sort: SearchSort; onSort: (s: SearchSort) => void }) {
+export function CasebookResultTable({
+  hits,
+  sort,
+  onSort,
+}: {
+  hits: CaseHit[];
+  sort: SearchSort;
+  onSort: (s: SearchSort) => void;
+}) {
   const router = useRouter();
   const columns: Column<CaseHit>[] = [
-    { key: "part", label: "Part", flex: 1.9, render: (h) => <MarkedText style={styles.strong} runs={h.marked.part} plain={h.partName} numberOfLines={2} /> },
-    { key: "poured", label: "Poured", flex: 1.7, sorts: DATE_SORTS, render: (h) => formatDay(h.pouredOn) },
-    { key: "how", label: "Alloy, process", flex: 1.5, render: (h) => <MarkedText style={styles.text} runs={h.marked.conditions} plain={`${h.alloy} · ${PROCESS_LABELS[h.process]}`} numberOfLines={2} /> },
     {
-      key: "defects", label: "Defects and notes", flex: 2.6,
+      key: "part",
+      label: "Part",
+      flex: 1.9,
+      render: (h) => <MarkedText style={styles.strong} runs={h.marked.part} plain={h.partName} numberOfLines={2} />,
+    },
+    { key: "poured", label: "Poured", flex: 1.7, sorts: DATE_SORTS, render: (h) => formatDay(h.pouredOn) },
+    {
+      key: "how",
+      label: "Alloy, process",
+      flex: 1.5,
+      render: (h) => (
+        <MarkedText
+          style={styles.text}
+          runs={h.marked.conditions}
+          plain={`${h.alloy} · ${PROCESS_LABELS[h.process]}`}
+          numberOfLines={2}
+        />
+      ),
+    },
+    {
+      key: "defects",
+      label: "Defects and notes",
+      flex: 2.6,
       render: (h) => (
         <View>
           <MarkedText style={styles.text} runs={h.marked.defects} plain={defectsLine(h)} numberOfLines={3} />
-          {h.marked.notes ?? h.marked.comments ? <MarkedText style={styles.words} runs={h.marked.notes ?? h.marked.comments} plain="" numberOfLines={2} /> : null}
+          {(h.marked.notes ?? h.marked.comments) ? (
+            <MarkedText style={styles.words} runs={h.marked.notes ?? h.marked.comments} plain="" numberOfLines={2} />
+          ) : null}
         </View>
       ),
     },
-    { key: "cause", label: "Cause", flex: 2.1, render: (h) => <MarkedText style={styles.cause} runs={h.marked.causes} plain={causeLine(h)} numberOfLines={3} /> },
+    {
+      key: "cause",
+      label: "Cause",
+      flex: 2.1,
+      render: (h) => <MarkedText style={styles.cause} runs={h.marked.causes} plain={causeLine(h)} numberOfLines={3} />,
+    },
     { key: "outcome", label: "Outcome", flex: 1.3, render: (h) => <OutcomeTag outcome={h.outcome} /> },
   ];
   return (
-    <ListTable columns={columns} rows={hits} rowKey={(h) => h.id} sort={sort} onSort={(s) => onSort(s as SearchSort)}
-      onOpen={(h) => router.push(castingHref(h))} />
+    <ListTable
+      columns={columns}
+      rows={hits}
+      rowKey={(h) => h.id}
+      sort={sort}
+      onSort={(s) => onSort(s as SearchSort)}
+      onOpen={(h) => router.push(castingHref(h))}
+    />
   );
 }
 

@@ -25,7 +25,12 @@ export function CasebookSearchBox({ value, onChange, busy }: Props) {
       <View style={styles.end} pointerEvents="box-none">
         {busy ? <ActivityIndicator color={colors.accent} /> : null}
         {value ? (
-          <Pressable role="button" aria-label="Clear the search words" onPress={() => onChange("")} style={styles.clear}>
+          <Pressable
+            role="button"
+            aria-label="Clear the search words"
+            onPress={() => onChange("")}
+            style={styles.clear}
+          >
             <Text style={styles.clearText}>×</Text>
           </Pressable>
         ) : null}
@@ -37,8 +42,15 @@ export function CasebookSearchBox({ value, onChange, busy }: Props) {
 const styles = StyleSheet.create({
   wrap: { justifyContent: "center" },
   input: {
-    minHeight: 48, fontSize: 17, color: colors.ink, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.steel,
-    borderRadius: radius.md, paddingLeft: space.md, paddingRight: 88,
+    minHeight: 48,
+    fontSize: 17,
+    color: colors.ink,
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.steel,
+    borderRadius: radius.md,
+    paddingLeft: space.md,
+    paddingRight: 88,
   },
   end: { position: "absolute", right: space.xs, flexDirection: "row", alignItems: "center", gap: space.xs },
   clear: { width: 40, height: 40, alignItems: "center", justifyContent: "center" },

@@ -24,16 +24,22 @@ export function SimilarCases({ castingId }: { castingId: number }) {
       {similar.isPending ? <Loading /> : null}
       {similar.error ? <Notice tone="error">{similar.error.message}</Notice> : null}
       {similar.data && !similar.data.items.length ? (
-        <Text style={styles.muted}>No other case shares these defects yet. Mark the defects to compare this casting with past ones.</Text>
+        <Text style={styles.muted}>
+          No other case shares these defects yet. Mark the defects to compare this casting with past ones.
+        </Text>
       ) : null}
       {similar.data?.items.map((c) => (
         <Link key={c.id} href={castingHref(c)} asChild>
           <Pressable role="link" style={styles.item}>
             <View style={styles.top}>
-              <Text style={styles.part} numberOfLines={1}>{c.partName}</Text>
+              <Text style={styles.part} numberOfLines={1}>
+                {c.partName}
+              </Text>
               <OutcomeTag outcome={c.outcome} />
             </View>
-            <Text style={styles.muted}>{formatDay(c.pouredOn)} · {c.alloy}</Text>
+            <Text style={styles.muted}>
+              {formatDay(c.pouredOn)} · {c.alloy}
+            </Text>
             <Text style={styles.reason}>{reasonText(c.parts, units)}</Text>
             {c.cause ? <Text style={styles.cause}>{causeLine(c)}</Text> : null}
           </Pressable>
@@ -45,7 +51,14 @@ export function SimilarCases({ castingId }: { castingId: number }) {
 
 const styles = StyleSheet.create({
   wrap: { gap: space.sm },
-  item: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, padding: space.md, gap: 2 },
+  item: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.md,
+    padding: space.md,
+    gap: 2,
+  },
   top: { flexDirection: "row", justifyContent: "space-between", alignItems: "center", gap: space.sm },
   part: { flex: 1, fontSize: 16, fontWeight: "600", color: colors.ink },
   reason: { fontSize: 15, color: colors.ink },

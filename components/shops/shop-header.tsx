@@ -25,9 +25,14 @@ export function ShopHeader({ me }: { me: Me }) {
     <View style={styles.bar}>
       <View style={styles.row}>
         <View style={styles.who}>
-          <Text style={styles.shop} numberOfLines={1} testID="active-shop">{active?.name ?? "No shop"}</Text>
+          <Text style={styles.shop} numberOfLines={1} testID="active-shop">
+            {active?.name ?? "No shop"}
+          </Text>
           <Text style={styles.person} numberOfLines={1}>
-            {me.user.name} · <Text testID="active-role" style={styles.role}>{active?.role ?? "-"}</Text>
+            {me.user.name} ·{" "}
+            <Text testID="active-role" style={styles.role}>
+              {active?.role ?? "-"}
+            </Text>
           </Text>
         </View>
         {me.shops.length > 1 ? (
@@ -55,13 +60,25 @@ export function ShopHeader({ me }: { me: Me }) {
 }
 
 const styles = StyleSheet.create({
-  bar: { backgroundColor: colors.surface, borderBottomWidth: 1, borderBottomColor: colors.line, paddingHorizontal: space.lg, paddingVertical: space.sm },
+  bar: {
+    backgroundColor: colors.surface,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+    paddingHorizontal: space.lg,
+    paddingVertical: space.sm,
+  },
   row: { flexDirection: "row", alignItems: "center", gap: space.sm },
   who: { flex: 1, minWidth: 0 },
   shop: { fontFamily: fonts.heading, fontSize: 17, color: colors.ink },
   person: { fontSize: 13, color: colors.muted },
   role: { color: colors.steel, fontWeight: "700" },
-  action: { paddingHorizontal: space.sm, paddingVertical: space.sm, borderRadius: radius.sm, borderWidth: 1, borderColor: colors.line },
+  action: {
+    paddingHorizontal: space.sm,
+    paddingVertical: space.sm,
+    borderRadius: radius.sm,
+    borderWidth: 1,
+    borderColor: colors.line,
+  },
   actionText: { color: colors.accent, fontWeight: "600", fontSize: 14 },
   menu: { marginTop: space.sm, gap: space.xs },
   menuItem: { paddingVertical: space.sm },

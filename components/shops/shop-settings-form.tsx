@@ -26,12 +26,21 @@ export function ShopSettingsForm({ shop }: { shop: Shop }) {
     <>
       {!mayEdit ? <Notice>Only the shop's owner changes these.</Notice> : null}
       <ChoiceChips label="Default alloy" options={ALLOYS} value={alloy} onChange={setAlloy} disabled={!mayEdit} />
-      <ChoiceChips label="Default process" options={PROCESS_CHOICES} value={process} onChange={(p) => setProcess(p as Process)} disabled={!mayEdit} />
+      <ChoiceChips
+        label="Default process"
+        options={PROCESS_CHOICES}
+        value={process}
+        onChange={(p) => setProcess(p as Process)}
+        disabled={!mayEdit}
+      />
       {save.error ? <Notice tone="error">{save.error.message}</Notice> : null}
       {save.isSuccess ? <Notice>Saved.</Notice> : null}
       {mayEdit ? (
-        <Button label="Save defaults" busy={save.isPending}
-          onPress={() => save.mutate({ defaultAlloy: alloy, defaultProcess: process })} />
+        <Button
+          label="Save defaults"
+          busy={save.isPending}
+          onPress={() => save.mutate({ defaultAlloy: alloy, defaultProcess: process })}
+        />
       ) : null}
     </>
   );

@@ -23,7 +23,13 @@ export function Button({ label, onPress, busy, kind = "primary", testID }: Props
 }
 
 const styles = StyleSheet.create({
-  base: { minHeight: 44, borderRadius: radius.sm, paddingHorizontal: space.lg, justifyContent: "center", alignItems: "center" },
+  base: {
+    minHeight: 44,
+    borderRadius: radius.sm,
+    paddingHorizontal: space.lg,
+    justifyContent: "center",
+    alignItems: "center",
+  },
   primary: { backgroundColor: colors.accent },
   plain: { backgroundColor: "transparent", borderWidth: 1, borderColor: colors.line },
   pressed: { opacity: 0.75 },

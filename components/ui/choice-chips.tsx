@@ -2,7 +2,13 @@ import { Pressable, StyleSheet, Text, View } from "react-native";
 import { colors, radius, space } from "@/constants/theme";
 
 export type Choice = { value: string; label: string };
-type Props = { label: string; options: readonly Choice[]; value: string | null; onChange: (v: string) => void; disabled?: boolean };
+type Props = {
+  label: string;
+  options: readonly Choice[];
+  value: string | null;
+  onChange: (v: string) => void;
+  disabled?: boolean;
+};
 
 /** Pick one of a short list by tapping: quicker than a drop-down on a phone. */
 export function ChoiceChips({ label, options, value, onChange, disabled }: Props) {
@@ -11,8 +17,14 @@ export function ChoiceChips({ label, options, value, onChange, disabled }: Props
       <Text style={chipStyles.label}>{label}</Text>
       <View style={chipStyles.row}>
         {options.map((o) => (
-          <Pressable key={o.value} role="radio" aria-checked={o.value === value} disabled={disabled}
-            onPress={() => onChange(o.value)} style={[chipStyles.chip, o.value === value && chipStyles.on]}>
+          <Pressable
+            key={o.value}
+            role="radio"
+            aria-checked={o.value === value}
+            disabled={disabled}
+            onPress={() => onChange(o.value)}
+            style={[chipStyles.chip, o.value === value && chipStyles.on]}
+          >
             <Text style={[chipStyles.text, o.value === value && chipStyles.textOn]}>{o.label}</Text>
           </Pressable>
         ))}
@@ -26,7 +38,14 @@ export const chipStyles = StyleSheet.create({
   wrap: { gap: space.xs },
   label: { fontSize: 14, fontWeight: "600", color: colors.ink },
   row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
-  chip: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.surface },
+  chip: {
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.md,
+    paddingHorizontal: space.md,
+    paddingVertical: space.sm,
+    backgroundColor: colors.surface,
+  },
   on: { backgroundColor: colors.steel, borderColor: colors.steel },
   text: { color: colors.ink, fontSize: 14 },
   textOn: { color: "#FFFFFF", fontWeight: "600" },

@@ -3,7 +3,11 @@ import { colors } from "@/constants/theme";
 
 /** The error line under a field that is not a text box (chips, photo area). */
 export function FieldError({ message }: { message?: string }) {
-  return message ? <Text role="alert" style={styles.error}>{message}</Text> : null;
+  return message ? (
+    <Text role="alert" style={styles.error}>
+      {message}
+    </Text>
+  ) : null;
 }
 
 const styles = StyleSheet.create({ error: { color: colors.danger, fontSize: 14 } });

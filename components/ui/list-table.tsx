@@ -33,25 +33,40 @@ export function ListTable<Row>({ columns, rows, rowKey, sort, onSort, onOpen }: 
           const next = c.sorts?.[(at + 1) % c.sorts.length]?.value;
           const arrow = active ? (active.dir === "ascending" ? " ↑" : " ↓") : "";
           return (
-            <Pressable key={c.key} role="columnheader" disabled={!next || (active && c.sorts!.length === 1)}
+            <Pressable
+              key={c.key}
+              role="columnheader"
+              disabled={!next || (active && c.sorts!.length === 1)}
               onPress={() => next && onSort(next)}
               aria-sort={active?.dir}
-              style={[styles.cell, { flex: c.flex }]}>
-              <Text style={[styles.headText, c.sorts && styles.sortable, c.align === "right" && styles.right]}>{c.label}{arrow}</Text>
+              style={[styles.cell, { flex: c.flex }]}
+            >
+              <Text style={[styles.headText, c.sorts && styles.sortable, c.align === "right" && styles.right]}>
+                {c.label}
+                {arrow}
+              </Text>
             </Pressable>
           );
         })}
       </View>
       {rows.map((r) => (
-        <Pressable key={rowKey(r)} role="row" onPress={() => onOpen(r)}
-          style={({ pressed }) => [styles.row, pressed && styles.hover]}>
+        <Pressable
+          key={rowKey(r)}
+          role="row"
+          onPress={() => onOpen(r)}
+          style={({ pressed }) => [styles.row, pressed && styles.hover]}
+        >
           {columns.map((c) => {
             const content = c.render(r);
             return (
               <View key={c.key} role="cell" style={[styles.cell, { flex: c.flex }]}>
                 {typeof content === "string" || typeof content === "number" ? (
-                  <Text style={[styles.text, c.align === "right" && styles.right]} numberOfLines={1}>{content}</Text>
-                ) : content}
+                  <Text style={[styles.text, c.align === "right" && styles.right]} numberOfLines={1}>
+                    {content}
+                  </Text>
+                ) : (
+                  content
+                )}
               </View>
             );
           })}
@@ -62,8 +77,20 @@ export function ListTable<Row>({ columns, rows, rowKey, sort, onSort, onOpen }: 
 }
 
 const styles = StyleSheet.create({
-  table: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.md, backgroundColor: colors.surface, overflow: "hidden" },
-  row: { flexDirection: "row", borderBottomWidth: 1, borderBottomColor: colors.line, minHeight: 44, alignItems: "center" },
+  table: {
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.md,
+    backgroundColor: colors.surface,
+    overflow: "hidden",
+  },
+  row: {
+    flexDirection: "row",
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+    minHeight: 44,
+    alignItems: "center",
+  },
   head: { backgroundColor: colors.background },
   hover: { backgroundColor: "#FBF8F3" },
   cell: { paddingHorizontal: space.md, paddingVertical: space.sm, justifyContent: "center" },

@@ -20,7 +20,14 @@ export const NavButton = forwardRef<View, Props>(function NavButton({ label, isF
 });
 
 const styles = StyleSheet.create({
-  bar: { flex: 1, minHeight: 56, alignItems: "center", justifyContent: "center", borderTopWidth: 3, borderTopColor: "transparent" },
+  bar: {
+    flex: 1,
+    minHeight: 56,
+    alignItems: "center",
+    justifyContent: "center",
+    borderTopWidth: 3,
+    borderTopColor: "transparent",
+  },
   barOn: { borderTopColor: colors.accent },
   rail: { paddingVertical: space.md, paddingHorizontal: space.lg, borderLeftWidth: 4, borderLeftColor: "transparent" },
   railOn: { borderLeftColor: colors.accent, backgroundColor: colors.background },

@@ -20,13 +20,24 @@ export function NumberField({ label, unit, value, onChangeText, error, hint, who
     <View style={styles.wrap}>
       <Text style={styles.label}>{label}</Text>
       <View style={styles.row}>
-        <TextInput aria-label={name} aria-invalid={!!error} value={value} onChangeText={onChangeText}
-          inputMode={whole ? "numeric" : "decimal"} keyboardType={whole ? "number-pad" : "decimal-pad"}
-          placeholder={hint} placeholderTextColor={colors.muted}
-          style={[styles.input, error ? styles.inputError : null]} />
+        <TextInput
+          aria-label={name}
+          aria-invalid={!!error}
+          value={value}
+          onChangeText={onChangeText}
+          inputMode={whole ? "numeric" : "decimal"}
+          keyboardType={whole ? "number-pad" : "decimal-pad"}
+          placeholder={hint}
+          placeholderTextColor={colors.muted}
+          style={[styles.input, error ? styles.inputError : null]}
+        />
         {unit ? <Text style={styles.unit}>{unit}</Text> : null}
       </View>
-      {error ? <Text role="alert" style={styles.error}>{error}</Text> : null}
+      {error ? (
+        <Text role="alert" style={styles.error}>
+          {error}
+        </Text>
+      ) : null}
     </View>
   );
 }
@@ -37,8 +48,16 @@ const styles = StyleSheet.create({
   // A number is short: the box stays narrow on a wide screen.
   row: { flexDirection: "row", alignItems: "center", gap: space.sm, maxWidth: 280 },
   input: {
-    flex: 1, minWidth: 0, minHeight: 44, borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm,
-    paddingHorizontal: space.md, fontSize: 16, backgroundColor: colors.surface, color: colors.ink,
+    flex: 1,
+    minWidth: 0,
+    minHeight: 44,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: radius.sm,
+    paddingHorizontal: space.md,
+    fontSize: 16,
+    backgroundColor: colors.surface,
+    color: colors.ink,
   },
   inputError: { borderColor: colors.danger },
   unit: { fontSize: 15, color: colors.muted, minWidth: 36 },

@@ -12,9 +12,19 @@ export function Pager({ page, pageSize, total, onPage }: Props) {
   const last = Math.min(total, page * pageSize);
   return (
     <View style={styles.row}>
-      {page > 1 ? <Button kind="plain" label="Previous page" onPress={() => onPage(page - 1)} /> : <View style={styles.gap} />}
-      <Text style={styles.where}>{first}–{last} of {total}</Text>
-      {page < pages ? <Button kind="plain" label="Next page" onPress={() => onPage(page + 1)} /> : <View style={styles.gap} />}
+      {page > 1 ? (
+        <Button kind="plain" label="Previous page" onPress={() => onPage(page - 1)} />
+      ) : (
+        <View style={styles.gap} />
+      )}
+      <Text style={styles.where}>
+        {first}–{last} of {total}
+      </Text>
+      {page < pages ? (
+        <Button kind="plain" label="Next page" onPress={() => onPage(page + 1)} />
+      ) : (
+        <View style={styles.gap} />
+      )}
     </View>
   );
 }

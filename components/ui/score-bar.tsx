@@ -6,7 +6,14 @@ export function ScoreBar({ score }: { score: number }) {
   const pct = Math.round(Math.min(1, Math.max(0, score)) * 100);
   return (
     <View style={styles.row}>
-      <View style={styles.track} role="meter" aria-valuemin={0} aria-valuemax={100} aria-valuenow={pct} aria-label="Strength of the evidence">
+      <View
+        style={styles.track}
+        role="meter"
+        aria-valuemin={0}
+        aria-valuemax={100}
+        aria-valuenow={pct}
+        aria-label="Strength of the evidence"
+      >
         <View style={[styles.fill, { width: `${pct}%` }]} />
       </View>
       <Text style={styles.text}>{score.toFixed(2)}</Text>

@@ -6,8 +6,17 @@ export function UploadProgress({ fraction, label = "Uploading photo" }: { fracti
   const pct = Math.round(Math.min(1, Math.max(0, fraction)) * 100);
   return (
     <View style={styles.wrap}>
-      <Text style={styles.text}>{label}: {pct} %</Text>
-      <View style={styles.track} role="progressbar" aria-valuemin={0} aria-valuemax={100} aria-valuenow={pct} aria-label={label}>
+      <Text style={styles.text}>
+        {label}: {pct} %
+      </Text>
+      <View
+        style={styles.track}
+        role="progressbar"
+        aria-valuemin={0}
+        aria-valuemax={100}
+        aria-valuenow={pct}
+        aria-label={label}
+      >
         <View style={[styles.fill, { width: `${pct}%` }]} />
       </View>
     </View>

@@ -21,12 +21,21 @@ export function ensureBuiltInAlloys(): Promise<void> {
   builtInsReady ??= (async () => {
     for (const a of BUILT_IN_ALLOYS) {
       const values = {
-        designation: a.designation, designationKey: designationKey(a.designation), family: a.family,
-        solidusC: a.solidusC, liquidusC: a.liquidusC, densityKgM3: a.densityKgM3,
-        shrinkAllowancePct: a.shrinkAllowancePct, siliconPct: a.siliconPct ?? null, sources: a.sources,
+        designation: a.designation,
+        designationKey: designationKey(a.designation),
+        family: a.family,
+        solidusC: a.solidusC,
+        liquidusC: a.liquidusC,
+        densityKgM3: a.densityKgM3,
+        shrinkAllowancePct: a.shrinkAllowancePct,
+        siliconPct: a.siliconPct ?? null,
+        sources: a.sources,
       };
       const figures = omit(values, ["designation", "designationKey"]);
-      await db.insert(alloys).values(values).onConflictDoUpdate({ target: [alloys.shopId, alloys.designationKey], set: figures });
+      await db
+        .insert(alloys)
+        .values(values)
+        .onConflictDoUpdate({ target: [alloys.shopId, alloys.designationKey], set: figures });
     }
   })().catch((err) => {
     builtInsReady = undefined; // try again on the next request rather than failing forever
@@ -47,14 +56,29 @@ export async function alloyRowsFor(shopId: string) {
 }
 
 export const toAlloy = ({ a, byName }: { a: AlloyRow; byName: string | null }): Alloy => ({
-  id: a.id, designation: a.designation, family: a.family as AlloyFamily, solidusC: a.solidusC, liquidusC: a.liquidusC,
-  densityKgM3: a.densityKgM3, shrinkAllowancePct: a.shrinkAllowancePct, siliconPct: a.siliconPct, sources: a.sources,
-  builtIn: a.shopId === null, createdBy: a.createdBy ? personRef(a.createdBy, byName ?? "") : null, createdAt: iso(a.createdAt),
+  id: a.id,
+  designation: a.designation,
+  family: a.family as AlloyFamily,
+  solidusC: a.solidusC,
+  liquidusC: a.liquidusC,
+  densityKgM3: a.densityKgM3,
+  shrinkAllowancePct: a.shrinkAllowancePct,
+  siliconPct: a.siliconPct,
+  sources: a.sources,
+  builtIn: a.shopId === null,
+  createdBy: a.createdBy ? personRef(a.createdBy, byName ?? "") : null,
+  createdAt: iso(a.createdAt),
 });
 
 export const toAlloySpec = (a: AlloyRow): AlloySpec => ({
-  designation: a.designation, family: a.family as AlloyFamily, solidusC: a.solidusC, liquidusC: a.liquidusC,
-  densityKgM3: a.densityKgM3, shrinkAllowancePct: a.shrinkAllowancePct, siliconPct: a.siliconPct ?? undefined, sources: a.sources,
+  designation: a.designation,
+  family: a.family as AlloyFamily,
+  solidusC: a.solidusC,
+  liquidusC: a.liquidusC,
+  densityKgM3: a.densityKgM3,
+  shrinkAllowancePct: a.shrinkAllowancePct,
+  siliconPct: a.siliconPct ?? undefined,
+  sources: a.sources,
 });
 
 /**
@@ -66,7 +90,10 @@ export async function findAlloy(shopId: string, designation: string) {
   const wanted = designationKey(designation);
   const match = (key: string) =>
     rows.find((a) => a.designationKey === key && a.shopId !== null) ?? rows.find((a) => a.designationKey === key);
-  return { alloy: wanted ? match(wanted) ?? match(`${wanted}.0`) : undefined, accepted: rows.map((a) => a.designation) };
+  return {
+    alloy: wanted ? (match(wanted) ?? match(`${wanted}.0`)) : undefined,
+    accepted: rows.map((a) => a.designation),
+  };
 }
 
 /** The alloy row or a 400 on `field` that lists what the shop may choose. */
@@ -89,7 +116,8 @@ export async function addAlloy(shopId: string, userId: string, input: AlloyInput
     .returning()
     .catch((err) => {
       // Two people adding the same alloy at once: the unique index answers for the slower one.
-      if (isUniqueViolation(err)) throw new HttpError(400, "Some values need fixing.", { designation: "already in the alloy table" });
+      if (isUniqueViolation(err))
+        throw new HttpError(400, "Some values need fixing.", { designation: "already in the alloy table" });
       throw err;
     });
   const [who] = await db.select({ name: user.name }).from(user).where(eq(user.id, userId));

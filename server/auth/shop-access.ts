@@ -32,7 +32,11 @@ export const requireShopMember: RequestHandler = async (req, _res, next) => {
   const rows = await db
     .select({ shopId: member.organizationId, role: member.role })
     .from(member)
-    .where(activeShopId ? and(eq(member.userId, userId), eq(member.organizationId, activeShopId)) : eq(member.userId, userId))
+    .where(
+      activeShopId
+        ? and(eq(member.userId, userId), eq(member.organizationId, activeShopId))
+        : eq(member.userId, userId),
+    )
     .orderBy(asc(member.createdAt))
     .limit(1);
   const row = rows[0];

@@ -10,14 +10,20 @@ type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 
 /** The casting if it belongs to this shop; any other id, including another shop's, is a 404. */
 export async function castingInShop(shopId: string, id: number, tx: Tx | typeof db = db): Promise<CastingRow> {
-  const [row] = await tx.select().from(castings).where(and(eq(castings.shopId, shopId), eq(castings.id, id)));
+  const [row] = await tx
+    .select()
+    .from(castings)
+    .where(and(eq(castings.shopId, shopId), eq(castings.id, id)));
   if (!row) throw notFound("No such casting");
   return row;
 }
 
 export function toCasting(c: CastingRow, byName: string): Casting {
   return {
-    ...omit(c, ["shopId", "createdBy", "createdAt", "updatedAt"]), outcome: c.outcome as Outcome | null,
-    createdBy: personRef(c.createdBy, byName), createdAt: iso(c.createdAt), updatedAt: iso(c.updatedAt),
+    ...omit(c, ["shopId", "createdBy", "createdAt", "updatedAt"]),
+    outcome: c.outcome as Outcome | null,
+    createdBy: personRef(c.createdBy, byName),
+    createdAt: iso(c.createdAt),
+    updatedAt: iso(c.updatedAt),
   };
 }

@@ -2,7 +2,12 @@ import { and, asc, count, desc, eq, inArray, sql, type SQL } from "drizzle-orm";
 import { db } from "../../db/client";
 import { alloys, castings, melts, photos, user } from "../../db/schema";
 import {
-  castingFields, castingInput, type Casting, type CastingInput, type CastingSummary, type Page,
+  castingFields,
+  castingInput,
+  type Casting,
+  type CastingInput,
+  type CastingSummary,
+  type Page,
 } from "../../lib/notebook-schemas";
 import type { DefectType, Process } from "../../rules/case";
 import type { ShopMember } from "../auth/shop-access";
@@ -14,16 +19,29 @@ import { castingInShop, toCasting } from "./lookup";
 
 const CASTING_COLUMNS = Object.keys(castingFields.shape) as (keyof typeof castingFields.shape)[];
 const castingValues = (input: CastingInput) =>
-  Object.fromEntries(CASTING_COLUMNS.map((k) => [k, input[k] ?? null])) as unknown as Omit<typeof castings.$inferInsert, "shopId" | "meltId" | "createdBy">;
+  Object.fromEntries(CASTING_COLUMNS.map((k) => [k, input[k] ?? null])) as unknown as Omit<
+    typeof castings.$inferInsert,
+    "shopId" | "meltId" | "createdBy"
+  >;
 
 /** The casting and the marks it came with are stored in one transaction: both or neither. */
 export async function createCasting(m: ShopMember, meltId: number, input: CastingInput): Promise<Casting> {
   return db.transaction(async (tx) => {
-    const [melt] = await tx.select({ id: melts.id }).from(melts).where(and(eq(melts.shopId, m.shopId), eq(melts.id, meltId)));
+    const [melt] = await tx
+      .select({ id: melts.id })
+      .from(melts)
+      .where(and(eq(melts.shopId, m.shopId), eq(melts.id, meltId)));
     if (!melt) throw notFound("No such melt");
-    const [row] = await tx.insert(castings)
-      .values({ ...castingValues(input), shopId: m.shopId, meltId, createdBy: m.userId }).returning();
-    await insertMarks(tx, m, row.id, (input.marks ?? []).map((mk) => ({ ...mk, photoId: null, x: null, y: null })));
+    const [row] = await tx
+      .insert(castings)
+      .values({ ...castingValues(input), shopId: m.shopId, meltId, createdBy: m.userId })
+      .returning();
+    await insertMarks(
+      tx,
+      m,
+      row.id,
+      (input.marks ?? []).map((mk) => ({ ...mk, photoId: null, x: null, y: null })),
+    );
     return toCasting(row, m.userName);
   });
 }
@@ -31,8 +49,11 @@ export async function createCasting(m: ShopMember, meltId: number, input: Castin
 export async function patchCasting(m: ShopMember, id: number, patch: Partial<CastingInput>): Promise<Casting> {
   const current = await castingInShop(m.shopId, id);
   const merged = parseOr400(castingInput, { ...withoutNulls(current), ...patch });
-  const [row] = await db.update(castings).set({ ...castingValues(merged), updatedAt: new Date() })
-    .where(and(eq(castings.shopId, m.shopId), eq(castings.id, id))).returning();
+  const [row] = await db
+    .update(castings)
+    .set({ ...castingValues(merged), updatedAt: new Date() })
+    .where(and(eq(castings.shopId, m.shopId), eq(castings.id, id)))
+    .returning();
   const [who] = await db.select({ name: user.name }).from(user).where(eq(user.id, row.createdBy));
   return toCasting(row, who.name);
 }
@@ -47,11 +68,20 @@ const CASTING_ORDER = {
 export type CastingSort = keyof typeof CASTING_ORDER;
 
 /** Cards and table rows: the casting with its melt's date, alloy and process, its marks' defect types and a thumbnail. */
-export async function castingSummaries(shopId: string, opts: { meltId?: number; sort: CastingSort; limit?: number; offset?: number }) {
+export async function castingSummaries(
+  shopId: string,
+  opts: { meltId?: number; sort: CastingSort; limit?: number; offset?: number },
+) {
   const where: SQL[] = [eq(castings.shopId, shopId)];
   if (opts.meltId) where.push(eq(castings.meltId, opts.meltId));
   let query = db
-    .select({ c: castings, pouredOn: melts.pouredOn, process: melts.process, alloy: alloys.designation, byName: user.name })
+    .select({
+      c: castings,
+      pouredOn: melts.pouredOn,
+      process: melts.process,
+      alloy: alloys.designation,
+      byName: user.name,
+    })
     .from(castings)
     .innerJoin(melts, eq(melts.id, castings.meltId))
     .innerJoin(alloys, eq(alloys.id, melts.alloyId))
@@ -63,23 +93,42 @@ export async function castingSummaries(shopId: string, opts: { meltId?: number; 
   const rows = await query;
   const ids = rows.map((r) => r.c.id);
   const marks = groupBy(await marksOf(ids), (mk) => mk.castingId);
-  const pics = groupBy(ids.length
-    ? await db.select({ id: photos.id, castingId: photos.castingId }).from(photos).where(inArray(photos.castingId, ids)).orderBy(asc(photos.id))
-    : [], (p) => p.castingId);
+  const pics = groupBy(
+    ids.length
+      ? await db
+          .select({ id: photos.id, castingId: photos.castingId })
+          .from(photos)
+          .where(inArray(photos.castingId, ids))
+          .orderBy(asc(photos.id))
+      : [],
+    (p) => p.castingId,
+  );
   return rows.map(({ c, pouredOn, process, alloy, byName }): CastingSummary => {
     const own = marks.get(c.id) ?? [];
     const ownPics = pics.get(c.id) ?? [];
     return {
-      id: c.id, meltId: c.meltId, partName: c.partName, pattern: c.pattern, outcome: c.outcome as CastingSummary["outcome"],
-      pouredOn, alloy, process: process as Process, markCount: own.length, photoCount: ownPics.length,
+      id: c.id,
+      meltId: c.meltId,
+      partName: c.partName,
+      pattern: c.pattern,
+      outcome: c.outcome as CastingSummary["outcome"],
+      pouredOn,
+      alloy,
+      process: process as Process,
+      markCount: own.length,
+      photoCount: ownPics.length,
       defectTypes: [...new Set(own.map((mk) => mk.type as DefectType))],
       thumbUrl: ownPics[0] ? photoUrls(ownPics[0].id).thumbUrl : null,
-      createdBy: personRef(c.createdBy, byName), createdAt: iso(c.createdAt),
+      createdBy: personRef(c.createdBy, byName),
+      createdAt: iso(c.createdAt),
     };
   });
 }
 
-export async function listCastings(shopId: string, q: { page: number; pageSize: number; sort: CastingSort }): Promise<Page<CastingSummary>> {
+export async function listCastings(
+  shopId: string,
+  q: { page: number; pageSize: number; sort: CastingSort },
+): Promise<Page<CastingSummary>> {
   const items = await castingSummaries(shopId, { sort: q.sort, limit: q.pageSize, offset: offsetOf(q) });
   const [{ total }] = await db.select({ total: count() }).from(castings).where(eq(castings.shopId, shopId));
   return { items, total, page: q.page, pageSize: q.pageSize };

@@ -25,13 +25,18 @@ export async function diagnoseCase(shopId: string, body: unknown): Promise<Diagn
   const c = parseOr400(caseSchema, body);
   const alloy = await requireAlloy(shopId, c.alloy);
   const shop = await shopDiagnosis(shopId);
-  return shop.withRecords(await diagnose(c, { alloy: toAlloySpec(alloy), ruleSet: shop.ruleSet, weightFactor: shop.weightFactor }));
+  return shop.withRecords(
+    await diagnose(c, { alloy: toAlloySpec(alloy), ruleSet: shop.ruleSet, weightFactor: shop.weightFactor }),
+  );
 }
 
 type SnapshotRow = typeof diagnosisSnapshots.$inferSelect;
 const toSnapshot = (s: SnapshotRow, byName: string): DiagnosisSnapshot => ({
-  id: s.id, createdAt: iso(s.createdAt), createdBy: personRef(s.createdBy, byName),
-  ruleSetVersion: s.ruleSetVersion, result: s.result as DiagnosisResult,
+  id: s.id,
+  createdAt: iso(s.createdAt),
+  createdBy: personRef(s.createdBy, byName),
+  ruleSetVersion: s.ruleSetVersion,
+  result: s.result as DiagnosisResult,
 });
 
 /** Runs the stored casting and keeps what it said, so the answer can be read again after the rules change. */
@@ -40,21 +45,37 @@ export async function diagnoseCasting(m: ShopMember, castingId: number): Promise
   const melt = await getMelt(m.shopId, casting.meltId);
   const c = caseFromCasting(casting, melt, await marksOf([castingId]));
   // The melt points at its alloy row: use it, not the name, so a shop alloy is read exactly.
-  const [{ alloy }] = await db.select({ alloy: alloys }).from(melts)
-    .innerJoin(alloys, eq(alloys.id, melts.alloyId)).where(eq(melts.id, casting.meltId));
+  const [{ alloy }] = await db
+    .select({ alloy: alloys })
+    .from(melts)
+    .innerJoin(alloys, eq(alloys.id, melts.alloyId))
+    .where(eq(melts.id, casting.meltId));
   const shop = await shopDiagnosis(m.shopId);
   const rs = shop.ruleSet;
-  const result = shop.withRecords(await diagnose(c, { alloy: toAlloySpec(alloy), ruleSet: rs, weightFactor: shop.weightFactor }));
-  const [row] = await db.insert(diagnosisSnapshots).values({
-    shopId: m.shopId, castingId, ruleSetVersion: rs.version, input: c, result, createdBy: m.userId,
-  }).returning();
+  const result = shop.withRecords(
+    await diagnose(c, { alloy: toAlloySpec(alloy), ruleSet: rs, weightFactor: shop.weightFactor }),
+  );
+  const [row] = await db
+    .insert(diagnosisSnapshots)
+    .values({
+      shopId: m.shopId,
+      castingId,
+      ruleSetVersion: rs.version,
+      input: c,
+      result,
+      createdBy: m.userId,
+    })
+    .returning();
   return toSnapshot(row, m.userName);
 }
 
 export async function latestSnapshot(shopId: string, castingId: number): Promise<DiagnosisSnapshot | null> {
-  const [row] = await db.select({ s: diagnosisSnapshots, byName: user.name }).from(diagnosisSnapshots)
+  const [row] = await db
+    .select({ s: diagnosisSnapshots, byName: user.name })
+    .from(diagnosisSnapshots)
     .innerJoin(user, eq(user.id, diagnosisSnapshots.createdBy))
     .where(and(eq(diagnosisSnapshots.shopId, shopId), eq(diagnosisSnapshots.castingId, castingId)))
-    .orderBy(desc(diagnosisSnapshots.createdAt), desc(diagnosisSnapshots.id)).limit(1);
+    .orderBy(desc(diagnosisSnapshots.createdAt), desc(diagnosisSnapshots.id))
+    .limit(1);
   return row ? toSnapshot(row.s, row.byName) : null;
 }

@@ -17,13 +17,27 @@ export function caseFromCasting(casting: CastingRow, melt: Melt, marks: Mark[]):
   const coating = withoutNulls({ applied: melt.coatingApplied, dried: melt.coatingDried, coats: melt.coatingCoats });
   const raw = {
     defects: marks.map((mk) => ({ type: mk.type, location: mk.location, severity: mk.severity })),
-    alloy: melt.alloy, process: melt.process,
-    pourTempC: m.pourTempC, meltTempC: m.meltTempC, degassing: m.degassing, degasMinutes: m.degasMinutes,
-    fluxed: m.fluxed, skimmed: m.skimmed, charge: m.charge, ambientTempC: m.ambientTempC, humidityPct: m.humidityPct,
-    sandMoisturePct: m.sandMoisturePct, coating: Object.keys(coating).length ? coating : undefined,
+    alloy: melt.alloy,
+    process: melt.process,
+    pourTempC: m.pourTempC,
+    meltTempC: m.meltTempC,
+    degassing: m.degassing,
+    degasMinutes: m.degasMinutes,
+    fluxed: m.fluxed,
+    skimmed: m.skimmed,
+    charge: m.charge,
+    ambientTempC: m.ambientTempC,
+    humidityPct: m.humidityPct,
+    sandMoisturePct: m.sandMoisturePct,
+    coating: Object.keys(coating).length ? coating : undefined,
     foamDensityKgM3: m.foamDensityKgM3,
-    minSectionMm: c.minSectionMm, maxSectionMm: c.maxSectionMm, sprueHeightMm: c.sprueHeightMm, pourTimeS: c.pourTimeS,
-    hasRiser: c.hasRiser, hasOverflow: c.hasOverflow, hasVents: c.hasVents,
+    minSectionMm: c.minSectionMm,
+    maxSectionMm: c.maxSectionMm,
+    sprueHeightMm: c.sprueHeightMm,
+    pourTimeS: c.pourTimeS,
+    hasRiser: c.hasRiser,
+    hasOverflow: c.hasOverflow,
+    hasVents: c.hasVents,
   };
   const parsed = caseSchema.safeParse(raw);
   if (!parsed.success) {

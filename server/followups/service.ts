@@ -18,42 +18,82 @@ const samePart = (a: string, b: string) => a.trim().toLowerCase() === b.trim().t
 
 async function refs(ids: number[]): Promise<Map<number, CastingRef & { meltOrder: [string, number] }>> {
   if (!ids.length) return new Map();
-  const rows = await db.select({ id: castings.id, meltId: castings.meltId, partName: castings.partName, outcome: castings.outcome, pouredOn: melts.pouredOn })
-    .from(castings).innerJoin(melts, eq(melts.id, castings.meltId)).where(inArray(castings.id, ids));
-  return new Map(rows.map((r) => [r.id, { ...r, outcome: r.outcome as Outcome | null, meltOrder: [r.pouredOn, r.meltId] }]));
+  const rows = await db
+    .select({
+      id: castings.id,
+      meltId: castings.meltId,
+      partName: castings.partName,
+      outcome: castings.outcome,
+      pouredOn: melts.pouredOn,
+    })
+    .from(castings)
+    .innerJoin(melts, eq(melts.id, castings.meltId))
+    .where(inArray(castings.id, ids));
+  return new Map(
+    rows.map((r) => [r.id, { ...r, outcome: r.outcome as Outcome | null, meltOrder: [r.pouredOn, r.meltId] }]),
+  );
 }
-const bare = (r: CastingRef & { meltOrder?: unknown }): CastingRef => ({ id: r.id, meltId: r.meltId, partName: r.partName, pouredOn: r.pouredOn, outcome: r.outcome });
+const bare = (r: CastingRef & { meltOrder?: unknown }): CastingRef => ({
+  id: r.id,
+  meltId: r.meltId,
+  partName: r.partName,
+  pouredOn: r.pouredOn,
+  outcome: r.outcome,
+});
 
 async function toFixes(rows: FixRow[]): Promise<FixTried[]> {
   const next = await refs(rows.flatMap((r) => (r.nextCastingId ? [r.nextCastingId] : [])));
   const ids = [...new Set(rows.map((r) => r.createdBy))];
-  const people = ids.length ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, ids)) : [];
+  const people = ids.length
+    ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, ids))
+    : [];
   return rows.map((r) => {
     const n = r.nextCastingId ? next.get(r.nextCastingId) : undefined;
     return {
-      id: r.id, castingId: r.castingId, fix: r.fix, next: n ? bare(n) : null, worked: r.worked as Worked | null,
-      createdBy: personRef(r.createdBy, people.find((p) => p.id === r.createdBy)?.name ?? ""), createdAt: iso(r.createdAt), updatedAt: iso(r.updatedAt),
+      id: r.id,
+      castingId: r.castingId,
+      fix: r.fix,
+      next: n ? bare(n) : null,
+      worked: r.worked as Worked | null,
+      createdBy: personRef(r.createdBy, people.find((p) => p.id === r.createdBy)?.name ?? ""),
+      createdAt: iso(r.createdAt),
+      updatedAt: iso(r.updatedAt),
     };
   });
 }
 
 const fixesOf = (shopId: string, castingIds: number[]) =>
   castingIds.length
-    ? db.select().from(fixesTried).where(and(eq(fixesTried.shopId, shopId), inArray(fixesTried.castingId, castingIds))).orderBy(asc(fixesTried.id))
+    ? db
+        .select()
+        .from(fixesTried)
+        .where(and(eq(fixesTried.shopId, shopId), inArray(fixesTried.castingId, castingIds)))
+        .orderBy(asc(fixesTried.id))
     : Promise.resolve([] as FixRow[]);
 
 /** Castings of the same part from later melts: what a fix can be linked to. */
 async function laterOfPart(shopId: string, castingId: number): Promise<CastingRef[]> {
   const c = await castingInShop(shopId, castingId);
   const [m] = await db.select({ pouredOn: melts.pouredOn }).from(melts).where(eq(melts.id, c.meltId));
-  const rows = await db.select({ id: castings.id, meltId: castings.meltId, partName: castings.partName, outcome: castings.outcome, pouredOn: melts.pouredOn })
-    .from(castings).innerJoin(melts, eq(melts.id, castings.meltId))
-    .where(and(
-      eq(castings.shopId, shopId),
-      sql`lower(trim(${castings.partName})) = ${c.partName.trim().toLowerCase()}`,
-      or(gt(melts.pouredOn, m.pouredOn), and(eq(melts.pouredOn, m.pouredOn), gt(melts.id, c.meltId))),
-    ))
-    .orderBy(asc(melts.pouredOn), asc(melts.id), asc(castings.id)).limit(50);
+  const rows = await db
+    .select({
+      id: castings.id,
+      meltId: castings.meltId,
+      partName: castings.partName,
+      outcome: castings.outcome,
+      pouredOn: melts.pouredOn,
+    })
+    .from(castings)
+    .innerJoin(melts, eq(melts.id, castings.meltId))
+    .where(
+      and(
+        eq(castings.shopId, shopId),
+        sql`lower(trim(${castings.partName})) = ${c.partName.trim().toLowerCase()}`,
+        or(gt(melts.pouredOn, m.pouredOn), and(eq(melts.pouredOn, m.pouredOn), gt(melts.id, c.meltId))),
+      ),
+    )
+    .orderBy(asc(melts.pouredOn), asc(melts.id), asc(castings.id))
+    .limit(50);
   return rows.map((r) => ({ ...r, outcome: r.outcome as Outcome | null }));
 }
 
@@ -61,18 +101,27 @@ async function laterOfPart(shopId: string, castingId: number): Promise<CastingRe
 async function chainOf(shopId: string, castingId: number): Promise<ChainLink[]> {
   const seen = new Set([castingId]);
   const back: number[] = [];
-  for (let at = castingId; back.length < CHAIN_MAX; ) {
-    const [prev] = await db.select({ id: fixesTried.castingId }).from(fixesTried)
-      .where(and(eq(fixesTried.shopId, shopId), eq(fixesTried.nextCastingId, at))).orderBy(asc(fixesTried.id)).limit(1);
+  for (let at = castingId; back.length < CHAIN_MAX;) {
+    const [prev] = await db
+      .select({ id: fixesTried.castingId })
+      .from(fixesTried)
+      .where(and(eq(fixesTried.shopId, shopId), eq(fixesTried.nextCastingId, at)))
+      .orderBy(asc(fixesTried.id))
+      .limit(1);
     if (!prev || seen.has(prev.id)) break;
     seen.add(prev.id);
     back.unshift((at = prev.id));
   }
   const forward: number[] = [];
-  for (let at = castingId; forward.length < CHAIN_MAX; ) {
-    const [next] = await db.select({ id: fixesTried.nextCastingId }).from(fixesTried)
-      .where(and(eq(fixesTried.shopId, shopId), eq(fixesTried.castingId, at), sql`${fixesTried.nextCastingId} is not null`))
-      .orderBy(asc(fixesTried.id)).limit(1);
+  for (let at = castingId; forward.length < CHAIN_MAX;) {
+    const [next] = await db
+      .select({ id: fixesTried.nextCastingId })
+      .from(fixesTried)
+      .where(
+        and(eq(fixesTried.shopId, shopId), eq(fixesTried.castingId, at), sql`${fixesTried.nextCastingId} is not null`),
+      )
+      .orderBy(asc(fixesTried.id))
+      .limit(1);
     if (!next?.id || seen.has(next.id)) break;
     seen.add(next.id);
     forward.push((at = next.id));
@@ -80,7 +129,11 @@ async function chainOf(shopId: string, castingId: number): Promise<ChainLink[]> 
   const ids = [...back, castingId, ...forward];
   if (ids.length === 1) return [];
   const [casts, fixes] = await Promise.all([refs(ids), fixesOf(shopId, ids).then(toFixes)]);
-  return ids.map((id) => ({ casting: bare(casts.get(id)!), fixes: fixes.filter((f) => f.castingId === id), current: id === castingId }));
+  return ids.map((id) => ({
+    casting: bare(casts.get(id)!),
+    fixes: fixes.filter((f) => f.castingId === id),
+    current: id === castingId,
+  }));
 }
 
 export async function followups(shopId: string, castingId: number): Promise<Followups> {
@@ -94,30 +147,57 @@ async function checkNext(shopId: string, castingId: number, nextId: number | nul
   if (nextId == null) return;
   const later = await laterOfPart(shopId, castingId);
   if (later.some((c) => c.id === nextId)) return;
-  const [n] = await db.select({ partName: castings.partName }).from(castings).where(and(eq(castings.shopId, shopId), eq(castings.id, nextId)));
+  const [n] = await db
+    .select({ partName: castings.partName })
+    .from(castings)
+    .where(and(eq(castings.shopId, shopId), eq(castings.id, nextId)));
   const [c] = await db.select({ partName: castings.partName }).from(castings).where(eq(castings.id, castingId));
-  const message = !n ? "no such casting in this shop" : !samePart(n.partName, c.partName) ? "not a casting of the same part" : "not from a later melt";
+  const message = !n
+    ? "no such casting in this shop"
+    : !samePart(n.partName, c.partName)
+      ? "not a casting of the same part"
+      : "not from a later melt";
   throw new HttpError(400, "Some values need fixing.", { nextCastingId: message });
 }
 
 export async function addFix(m: ShopMember, castingId: number, input: FixInput): Promise<FixTried> {
   await castingInShop(m.shopId, castingId);
   await checkNext(m.shopId, castingId, input.nextCastingId);
-  const [row] = await db.insert(fixesTried).values({
-    shopId: m.shopId, castingId, fix: input.fix, nextCastingId: input.nextCastingId ?? null, worked: input.worked ?? null,
-    createdBy: m.userId, updatedBy: m.userId,
-  }).returning();
+  const [row] = await db
+    .insert(fixesTried)
+    .values({
+      shopId: m.shopId,
+      castingId,
+      fix: input.fix,
+      nextCastingId: input.nextCastingId ?? null,
+      worked: input.worked ?? null,
+      createdBy: m.userId,
+      updatedBy: m.userId,
+    })
+    .returning();
   return (await toFixes([row]))[0];
 }
 
 export async function patchFix(m: ShopMember, id: number, patch: FixPatch): Promise<FixTried> {
-  const [row] = await db.select().from(fixesTried).where(and(eq(fixesTried.shopId, m.shopId), eq(fixesTried.id, id)));
+  const [row] = await db
+    .select()
+    .from(fixesTried)
+    .where(and(eq(fixesTried.shopId, m.shopId), eq(fixesTried.id, id)));
   if (!row) throw notFound("No such fix");
   const merged = { ...row, ...Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)) } as FixRow;
   if (patch.nextCastingId !== undefined) await checkNext(m.shopId, row.castingId, patch.nextCastingId);
-  if (merged.worked && !merged.nextCastingId) throw new HttpError(400, "Some values need fixing.", { worked: "link the next casting first" });
-  const [saved] = await db.update(fixesTried)
-    .set({ fix: merged.fix, nextCastingId: merged.nextCastingId, worked: merged.worked, updatedAt: new Date(), updatedBy: m.userId })
-    .where(eq(fixesTried.id, id)).returning();
+  if (merged.worked && !merged.nextCastingId)
+    throw new HttpError(400, "Some values need fixing.", { worked: "link the next casting first" });
+  const [saved] = await db
+    .update(fixesTried)
+    .set({
+      fix: merged.fix,
+      nextCastingId: merged.nextCastingId,
+      worked: merged.worked,
+      updatedAt: new Date(),
+      updatedBy: m.userId,
+    })
+    .where(eq(fixesTried.id, id))
+    .returning();
   return (await toFixes([saved]))[0];
 }

@@ -13,9 +13,17 @@ type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 
 export function toMark(r: MarkRow, byName: string): Mark {
   return {
-    id: r.id, castingId: r.castingId, photoId: r.photoId, x: r.x, y: r.y, type: r.type as DefectType,
-    location: r.location as DefectLocation, severity: r.severity, note: r.note,
-    createdBy: personRef(r.createdBy, byName), createdAt: iso(r.createdAt),
+    id: r.id,
+    castingId: r.castingId,
+    photoId: r.photoId,
+    x: r.x,
+    y: r.y,
+    type: r.type as DefectType,
+    location: r.location as DefectLocation,
+    severity: r.severity,
+    note: r.note,
+    createdBy: personRef(r.createdBy, byName),
+    createdAt: iso(r.createdAt),
   };
 }
 
@@ -32,21 +40,30 @@ export async function marksOf(castingIds: number[]): Promise<Mark[]> {
 }
 
 const markValues = (input: MarkInput) => ({
-  type: input.type, location: input.location, severity: input.severity,
-  photoId: input.photoId ?? null, x: input.x ?? null, y: input.y ?? null, note: input.note ?? null,
+  type: input.type,
+  location: input.location,
+  severity: input.severity,
+  photoId: input.photoId ?? null,
+  x: input.x ?? null,
+  y: input.y ?? null,
+  note: input.note ?? null,
 });
 
 /** A pin may only sit on a photo of the same casting. */
 async function checkPhoto(tx: Tx | typeof db, castingId: number, photoId: number | null | undefined) {
   if (photoId == null) return;
-  const [p] = await tx.select({ id: photos.id }).from(photos).where(and(eq(photos.id, photoId), eq(photos.castingId, castingId)));
+  const [p] = await tx
+    .select({ id: photos.id })
+    .from(photos)
+    .where(and(eq(photos.id, photoId), eq(photos.castingId, castingId)));
   if (!p) throw new HttpError(400, "Some values need fixing.", { photoId: "not a photo of this casting" });
 }
 
 /** Inside the caller's transaction, so a casting and its marks are stored together or not at all. */
 export async function insertMarks(tx: Tx, m: ShopMember, castingId: number, inputs: MarkInput[]) {
   if (!inputs.length) return [];
-  return tx.insert(defectMarks)
+  return tx
+    .insert(defectMarks)
     .values(inputs.map((i) => ({ ...markValues(i), shopId: m.shopId, castingId, createdBy: m.userId })))
     .returning();
 }
@@ -61,7 +78,10 @@ export async function addMark(m: ShopMember, castingId: number, input: MarkInput
 }
 
 async function markInShop(shopId: string, id: number) {
-  const [row] = await db.select().from(defectMarks).where(and(eq(defectMarks.shopId, shopId), eq(defectMarks.id, id)));
+  const [row] = await db
+    .select()
+    .from(defectMarks)
+    .where(and(eq(defectMarks.shopId, shopId), eq(defectMarks.id, id)));
   if (!row) throw notFound("No such mark");
   return row;
 }
@@ -77,8 +97,11 @@ export async function patchMark(m: ShopMember, id: number, patch: Partial<MarkIn
   }
   const merged = parseOr400(markInput, { ...base, ...patch });
   await checkPhoto(db, current.castingId, merged.photoId);
-  const [row] = await db.update(defectMarks).set({ ...markValues(merged), updatedAt: new Date() })
-    .where(and(eq(defectMarks.shopId, m.shopId), eq(defectMarks.id, id))).returning();
+  const [row] = await db
+    .update(defectMarks)
+    .set({ ...markValues(merged), updatedAt: new Date() })
+    .where(and(eq(defectMarks.shopId, m.shopId), eq(defectMarks.id, id)))
+    .returning();
   const [who] = await db.select({ name: user.name }).from(user).where(eq(user.id, row.createdBy));
   return toMark(row, who.name);
 }

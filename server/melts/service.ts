@@ -2,7 +2,13 @@ import { asc, count, desc, eq, and, sql } from "drizzle-orm";
 import { db } from "../../db/client";
 import { alloys, castings, melts, shopSettings, user } from "../../db/schema";
 import {
-  alloyConflicts, meltFields, meltInput, type Melt, type MeltInput, type MeltSummary, type Page,
+  alloyConflicts,
+  meltFields,
+  meltInput,
+  type Melt,
+  type MeltInput,
+  type MeltSummary,
+  type Page,
 } from "../../lib/notebook-schemas";
 import type { Charge, DegassingMethod, Process } from "../../rules/case";
 import type { ShopMember } from "../auth/shop-access";
@@ -16,13 +22,22 @@ const MELT_COLUMNS = Object.keys(meltFields.shape).filter((k) => k !== "alloy") 
 
 const meltSelect = { m: melts, alloy: alloys.designation, byName: user.name };
 const meltQuery = () =>
-  db.select(meltSelect).from(melts).innerJoin(alloys, eq(alloys.id, melts.alloyId)).innerJoin(user, eq(user.id, melts.createdBy));
+  db
+    .select(meltSelect)
+    .from(melts)
+    .innerJoin(alloys, eq(alloys.id, melts.alloyId))
+    .innerJoin(user, eq(user.id, melts.createdBy));
 
 export function toMelt({ m, alloy, byName }: { m: MeltRow; alloy: string; byName: string }): Melt {
   return {
-    ...omit(m, ["shopId", "alloyId", "createdBy", "createdAt", "updatedAt"]), alloy, process: m.process as Process, charge: m.charge as Charge | null,
+    ...omit(m, ["shopId", "alloyId", "createdBy", "createdAt", "updatedAt"]),
+    alloy,
+    process: m.process as Process,
+    charge: m.charge as Charge | null,
     degassing: m.degassing as DegassingMethod | null,
-    createdBy: personRef(m.createdBy, byName), createdAt: iso(m.createdAt), updatedAt: iso(m.updatedAt),
+    createdBy: personRef(m.createdBy, byName),
+    createdAt: iso(m.createdAt),
+    updatedAt: iso(m.updatedAt),
   };
 }
 
@@ -36,13 +51,18 @@ export async function getMelt(shopId: string, id: number): Promise<Melt> {
 async function meltValues(shopId: string, input: MeltInput) {
   const alloy = await requireAlloy(shopId, input.alloy);
   refuseIfAny(alloyConflicts(input, alloy));
-  return { ...Object.fromEntries(MELT_COLUMNS.map((k) => [k, input[k] ?? null])), alloyId: alloy.id } as
-    Omit<typeof melts.$inferInsert, "shopId" | "createdBy">;
+  return { ...Object.fromEntries(MELT_COLUMNS.map((k) => [k, input[k] ?? null])), alloyId: alloy.id } as Omit<
+    typeof melts.$inferInsert,
+    "shopId" | "createdBy"
+  >;
 }
 
 export async function createMelt(m: ShopMember, input: MeltInput): Promise<Melt> {
   const values = await meltValues(m.shopId, input);
-  const [row] = await db.insert(melts).values({ ...values, shopId: m.shopId, createdBy: m.userId }).returning();
+  const [row] = await db
+    .insert(melts)
+    .values({ ...values, shopId: m.shopId, createdBy: m.userId })
+    .returning();
   return getMelt(m.shopId, row.id);
 }
 
@@ -51,7 +71,10 @@ export async function patchMelt(m: ShopMember, id: number, patch: Partial<MeltIn
   const current = await getMelt(m.shopId, id);
   const merged = parseOr400(meltInput, { ...withoutNulls(current), ...patch });
   const values = await meltValues(m.shopId, merged);
-  await db.update(melts).set({ ...values, updatedAt: new Date() }).where(and(eq(melts.shopId, m.shopId), eq(melts.id, id)));
+  await db
+    .update(melts)
+    .set({ ...values, updatedAt: new Date() })
+    .where(and(eq(melts.shopId, m.shopId), eq(melts.id, id)));
   return getMelt(m.shopId, id);
 }
 
@@ -64,7 +87,10 @@ const MELT_ORDER = {
   castings: [desc(castingCount), desc(melts.pouredOn), desc(melts.id)],
 };
 
-export async function listMelts(shopId: string, q: { page: number; pageSize: number; sort: keyof typeof MELT_ORDER }): Promise<Page<MeltSummary>> {
+export async function listMelts(
+  shopId: string,
+  q: { page: number; pageSize: number; sort: keyof typeof MELT_ORDER },
+): Promise<Page<MeltSummary>> {
   const rows = await db
     .select({ ...meltSelect, castingCount, scrapCount })
     .from(melts)
@@ -76,8 +102,16 @@ export async function listMelts(shopId: string, q: { page: number; pageSize: num
     .offset(offsetOf(q));
   const [{ total }] = await db.select({ total: count() }).from(melts).where(eq(melts.shopId, shopId));
   const items = rows.map(({ m, alloy, byName, castingCount, scrapCount }) => ({
-    id: m.id, pouredOn: m.pouredOn, alloy, process: m.process as Process, furnace: m.furnace, pourTempC: m.pourTempC,
-    castingCount, scrapCount, createdBy: personRef(m.createdBy, byName), createdAt: iso(m.createdAt),
+    id: m.id,
+    pouredOn: m.pouredOn,
+    alloy,
+    process: m.process as Process,
+    furnace: m.furnace,
+    pourTempC: m.pourTempC,
+    castingCount,
+    scrapCount,
+    createdBy: personRef(m.createdBy, byName),
+    createdAt: iso(m.createdAt),
   }));
   return { items, total, page: q.page, pageSize: q.pageSize };
 }
@@ -85,7 +119,10 @@ export async function listMelts(shopId: string, q: { page: number; pageSize: num
 /** What a new melt starts from: the last melt's furnace and alloy, else the shop's defaults. */
 export async function meltDefaults(shopId: string): Promise<Partial<MeltInput>> {
   const [settings] = await db.select().from(shopSettings).where(eq(shopSettings.shopId, shopId));
-  const [last] = await meltQuery().where(eq(melts.shopId, shopId)).orderBy(desc(melts.createdAt), desc(melts.id)).limit(1);
+  const [last] = await meltQuery()
+    .where(eq(melts.shopId, shopId))
+    .orderBy(desc(melts.createdAt), desc(melts.id))
+    .limit(1);
   const out: Partial<MeltInput> = {};
   const alloy = last?.alloy ?? settings?.defaultAlloy;
   const process = (settings?.defaultProcess ?? last?.m.process) as Process | undefined;

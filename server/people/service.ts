@@ -13,6 +13,9 @@ export async function unitsOf(userId: string): Promise<Units> {
 
 export async function saveUnits(userId: string, units: Units): Promise<Units> {
   const values = { ...units, updatedAt: new Date() };
-  await db.insert(personUnits).values({ userId, ...values }).onConflictDoUpdate({ target: personUnits.userId, set: values });
+  await db
+    .insert(personUnits)
+    .values({ userId, ...values })
+    .onConflictDoUpdate({ target: personUnits.userId, set: values });
   return units;
 }

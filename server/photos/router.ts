@@ -44,13 +44,19 @@ photosRouter.post(
   },
 );
 
-const serve = (which: "fileName" | "thumbName"): RequestHandler => async (req, res) => {
-  const row = await photoInShop(currentMember(req).shopId, idParam(req.params.id, "No such photo"));
-  res.sendFile(row[which], {
-    root: uploadDir(),
-    headers: { "Content-Type": "image/jpeg", "Cache-Control": "private, max-age=86400", "X-Content-Type-Options": "nosniff" },
-  });
-};
+const serve =
+  (which: "fileName" | "thumbName"): RequestHandler =>
+  async (req, res) => {
+    const row = await photoInShop(currentMember(req).shopId, idParam(req.params.id, "No such photo"));
+    res.sendFile(row[which], {
+      root: uploadDir(),
+      headers: {
+        "Content-Type": "image/jpeg",
+        "Cache-Control": "private, max-age=86400",
+        "X-Content-Type-Options": "nosniff",
+      },
+    });
+  };
 photosRouter.get("/photos/:id/image", requireShopMember, allow({ casebook: ["read"] }), serve("fileName"));
 photosRouter.get("/photos/:id/thumb", requireShopMember, allow({ casebook: ["read"] }), serve("thumbName"));
 

@@ -24,13 +24,22 @@ export const uploadDir = () => resolve(env.UPLOAD_DIR);
 type PhotoRow = typeof photos.$inferSelect;
 
 export const toPhoto = (p: PhotoRow, byName: string): Photo => ({
-  id: p.id, castingId: p.castingId, width: p.width, height: p.height, ...photoUrls(p.id),
-  createdBy: personRef(p.createdBy, byName), createdAt: iso(p.createdAt),
+  id: p.id,
+  castingId: p.castingId,
+  width: p.width,
+  height: p.height,
+  ...photoUrls(p.id),
+  createdBy: personRef(p.createdBy, byName),
+  createdAt: iso(p.createdAt),
 });
 
 export async function photosOf(castingId: number): Promise<Photo[]> {
-  const rows = await db.select({ p: photos, byName: user.name }).from(photos)
-    .innerJoin(user, eq(user.id, photos.createdBy)).where(eq(photos.castingId, castingId)).orderBy(asc(photos.id));
+  const rows = await db
+    .select({ p: photos, byName: user.name })
+    .from(photos)
+    .innerJoin(user, eq(user.id, photos.createdBy))
+    .where(eq(photos.castingId, castingId))
+    .orderBy(asc(photos.id));
   return rows.map(({ p, byName }) => toPhoto(p, byName));
 }
 
@@ -40,19 +49,25 @@ export async function photosOf(castingId: number): Promise<Photo[]> {
  */
 async function encode(input: Buffer) {
   const upright = sharp(input, { failOn: "error" }).rotate();
-  const image = await upright.clone()
+  const image = await upright
+    .clone()
     .resize({ width: LONG_EDGE_PX, height: LONG_EDGE_PX, fit: "inside", withoutEnlargement: true })
-    .jpeg({ quality: 85, mozjpeg: true }).toBuffer({ resolveWithObject: true });
-  const thumb = await upright.clone()
+    .jpeg({ quality: 85, mozjpeg: true })
+    .toBuffer({ resolveWithObject: true });
+  const thumb = await upright
+    .clone()
     .resize({ width: THUMB_PX, height: THUMB_PX, fit: "inside", withoutEnlargement: true })
-    .jpeg({ quality: 75 }).toBuffer();
+    .jpeg({ quality: 75 })
+    .toBuffer();
   return { image: image.data, width: image.info.width, height: image.info.height, thumb };
 }
 
 async function readableImage(buffer: Buffer) {
   const kind = await fileTypeFromBuffer(buffer);
   if (!kind || !ACCEPTED.has(kind.mime)) {
-    throw new HttpError(415, "That file is not a JPEG, PNG, WebP or HEIC photo.", { photo: "choose a photo (JPEG, PNG, WebP or HEIC)" });
+    throw new HttpError(415, "That file is not a JPEG, PNG, WebP or HEIC photo.", {
+      photo: "choose a photo (JPEG, PNG, WebP or HEIC)",
+    });
   }
   try {
     return { mime: kind.mime, ...(await encode(buffer)) };
@@ -69,7 +84,12 @@ async function readableImage(buffer: Buffer) {
  * Files are written under temporary names first and renamed inside the row's transaction: a failure
  * anywhere removes both files and leaves no row, so the folder never holds a photo nobody can reach.
  */
-export async function storePhoto(m: ShopMember, castingId: number, upload: Buffer, clientGone = () => false): Promise<Photo> {
+export async function storePhoto(
+  m: ShopMember,
+  castingId: number,
+  upload: Buffer,
+  clientGone = () => false,
+): Promise<Photo> {
   const img = await readableImage(upload);
   const dir = uploadDir();
   await mkdir(dir, { recursive: true });
@@ -82,10 +102,20 @@ export async function storePhoto(m: ShopMember, castingId: number, upload: Buffe
     await writeFile(join(dir, `${thumbName}.part`), img.thumb, { flag: "wx" });
     const row = await db.transaction(async (tx) => {
       await castingInShop(m.shopId, castingId, tx);
-      const [inserted] = await tx.insert(photos).values({
-        shopId: m.shopId, castingId, fileName, thumbName, width: img.width, height: img.height,
-        bytes: img.image.length, uploadedType: img.mime, createdBy: m.userId,
-      }).returning();
+      const [inserted] = await tx
+        .insert(photos)
+        .values({
+          shopId: m.shopId,
+          castingId,
+          fileName,
+          thumbName,
+          width: img.width,
+          height: img.height,
+          bytes: img.image.length,
+          uploadedType: img.mime,
+          createdBy: m.userId,
+        })
+        .returning();
       await rename(join(dir, `${fileName}.part`), join(dir, fileName));
       await rename(join(dir, `${thumbName}.part`), join(dir, thumbName));
       // Cut off while we were encoding: nobody will see this answer, so keep nothing (the phone retries).
@@ -100,7 +130,10 @@ export async function storePhoto(m: ShopMember, castingId: number, upload: Buffe
 }
 
 export async function photoInShop(shopId: string, id: number) {
-  const [row] = await db.select().from(photos).where(and(eq(photos.shopId, shopId), eq(photos.id, id)));
+  const [row] = await db
+    .select()
+    .from(photos)
+    .where(and(eq(photos.shopId, shopId), eq(photos.id, id)));
   if (!row) throw notFound("No such photo");
   return row;
 }
@@ -109,7 +142,10 @@ export async function photoInShop(shopId: string, id: number) {
 export async function deletePhoto(m: ShopMember, id: number) {
   const row = await photoInShop(m.shopId, id);
   await db.transaction(async (tx) => {
-    await tx.update(defectMarks).set({ photoId: null, x: null, y: null, updatedAt: new Date() }).where(eq(defectMarks.photoId, id));
+    await tx
+      .update(defectMarks)
+      .set({ photoId: null, x: null, y: null, updatedAt: new Date() })
+      .where(eq(defectMarks.photoId, id));
     await tx.delete(photos).where(eq(photos.id, id));
   });
   const dir = uploadDir();

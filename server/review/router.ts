@@ -13,17 +13,27 @@ reviewRouter.get("/castings/:id/review", requireShopMember, allow({ casebook: ["
   res.json(await caseReview(currentMember(req).shopId, castingId(req.params.id)));
 });
 
-reviewRouter.post("/castings/:id/review-requests", requireShopMember, allow({ casebook: ["request-review"] }), async (req, res) => {
-  const { note } = parseOr400(reviewRequestInput, req.body ?? {});
-  const { created, review } = await requestReview(currentMember(req), castingId(req.params.id), note);
-  res.status(created ? 201 : 200).json(review);
-});
+reviewRouter.post(
+  "/castings/:id/review-requests",
+  requireShopMember,
+  allow({ casebook: ["request-review"] }),
+  async (req, res) => {
+    const { note } = parseOr400(reviewRequestInput, req.body ?? {});
+    const { created, review } = await requestReview(currentMember(req), castingId(req.params.id), note);
+    res.status(created ? 201 : 200).json(review);
+  },
+);
 
-reviewRouter.post("/castings/:id/confirmations", requireShopMember, allow({ review: ["confirm"] }), async (req, res) => {
-  const id = castingId(req.params.id);
-  const input = parseOr400(confirmationInput, req.body);
-  res.status(201).json(await confirmCause(currentMember(req), id, input));
-});
+reviewRouter.post(
+  "/castings/:id/confirmations",
+  requireShopMember,
+  allow({ review: ["confirm"] }),
+  async (req, res) => {
+    const id = castingId(req.params.id);
+    const input = parseOr400(confirmationInput, req.body);
+    res.status(201).json(await confirmCause(currentMember(req), id, input));
+  },
+);
 
 reviewRouter.get("/review/queue", requireShopMember, allow({ review: ["confirm"] }), async (req, res) => {
   res.json({ items: await reviewQueue(currentMember(req).shopId) });

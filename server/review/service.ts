@@ -1,6 +1,15 @@
 import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
 import { db } from "../../db/client";
-import { alloys, castings, confirmations, defectMarks, diagnosisSnapshots, melts, reviewRequests, user } from "../../db/schema";
+import {
+  alloys,
+  castings,
+  confirmations,
+  defectMarks,
+  diagnosisSnapshots,
+  melts,
+  reviewRequests,
+  user,
+} from "../../db/schema";
 import type { CaseReview, Confirmation, ConfirmationInput, QueueItem, ReviewRequest } from "../../lib/review-schemas";
 import type { DefectType, Process } from "../../rules/case";
 import type { DiagnosisResult } from "../../rules/engine";
@@ -17,7 +26,9 @@ type ConfirmationRow = typeof confirmations.$inferSelect;
 
 async function nameOf(ids: (string | null)[]) {
   const wanted = [...new Set(ids.filter((x): x is string => !!x))];
-  const rows = wanted.length ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, wanted)) : [];
+  const rows = wanted.length
+    ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, wanted))
+    : [];
   return (id: string | null) => (id ? personRef(id, rows.find((r) => r.id === id)?.name ?? "") : null);
 }
 
@@ -29,30 +40,59 @@ async function causeTitles(shopId: string) {
 export async function caseReview(shopId: string, castingId: number): Promise<CaseReview> {
   await castingInShop(shopId, castingId);
   const [reqs, confs, titles] = await Promise.all([
-    db.select().from(reviewRequests).where(and(eq(reviewRequests.shopId, shopId), eq(reviewRequests.castingId, castingId))).orderBy(desc(reviewRequests.id)),
-    db.select().from(confirmations).where(and(eq(confirmations.shopId, shopId), eq(confirmations.castingId, castingId))).orderBy(desc(confirmations.id)),
+    db
+      .select()
+      .from(reviewRequests)
+      .where(and(eq(reviewRequests.shopId, shopId), eq(reviewRequests.castingId, castingId)))
+      .orderBy(desc(reviewRequests.id)),
+    db
+      .select()
+      .from(confirmations)
+      .where(and(eq(confirmations.shopId, shopId), eq(confirmations.castingId, castingId)))
+      .orderBy(desc(confirmations.id)),
     causeTitles(shopId),
   ]);
   const who = await nameOf([...reqs.map((r) => r.createdBy), ...confs.map((c) => c.createdBy)]);
   const toRequest = (r: RequestRow): ReviewRequest => ({
-    id: r.id, castingId: r.castingId, note: r.note, createdBy: who(r.createdBy), createdAt: iso(r.createdAt),
+    id: r.id,
+    castingId: r.castingId,
+    note: r.note,
+    createdBy: who(r.createdBy),
+    createdAt: iso(r.createdAt),
     answeredAt: r.answeredAt ? iso(r.answeredAt) : null,
   });
   const toConfirmation = (c: ConfirmationRow): Confirmation => ({
-    id: c.id, castingId: c.castingId, causeId: c.causeId, note: c.note, createdBy: who(c.createdBy), createdAt: iso(c.createdAt),
-    causeTitle: c.causeId ? titles.get(c.causeId) ?? c.causeId : c.causeText ?? "",
+    id: c.id,
+    castingId: c.castingId,
+    causeId: c.causeId,
+    note: c.note,
+    createdBy: who(c.createdBy),
+    createdAt: iso(c.createdAt),
+    causeTitle: c.causeId ? (titles.get(c.causeId) ?? c.causeId) : (c.causeText ?? ""),
   });
   const requests = reqs.map(toRequest);
   const list = confs.map(toConfirmation);
-  return { waiting: requests.find((r) => !r.answeredAt) ?? null, requests, current: list[0] ?? null, confirmations: list };
+  return {
+    waiting: requests.find((r) => !r.answeredAt) ?? null,
+    requests,
+    current: list[0] ?? null,
+    confirmations: list,
+  };
 }
 
 /** Asking twice while a request is open keeps the first: the queue holds each casting once. */
-export async function requestReview(m: ShopMember, castingId: number, note?: string): Promise<{ created: boolean; review: CaseReview }> {
+export async function requestReview(
+  m: ShopMember,
+  castingId: number,
+  note?: string,
+): Promise<{ created: boolean; review: CaseReview }> {
   await castingInShop(m.shopId, castingId);
   const created = await db.transaction(async (tx) => {
-    const open = await tx.select({ id: reviewRequests.id }).from(reviewRequests)
-      .where(and(eq(reviewRequests.castingId, castingId), isNull(reviewRequests.answeredAt))).for("update");
+    const open = await tx
+      .select({ id: reviewRequests.id })
+      .from(reviewRequests)
+      .where(and(eq(reviewRequests.castingId, castingId), isNull(reviewRequests.answeredAt)))
+      .for("update");
     if (open.length) return false;
     await tx.insert(reviewRequests).values({ shopId: m.shopId, castingId, note: note || null, createdBy: m.userId });
     return true;
@@ -63,14 +103,28 @@ export async function requestReview(m: ShopMember, castingId: number, note?: str
 export async function confirmCause(m: ShopMember, castingId: number, input: ConfirmationInput): Promise<CaseReview> {
   await castingInShop(m.shopId, castingId);
   if (input.causeId && !(await causeTitles(m.shopId)).has(input.causeId))
-    throw new HttpError(400, "Some values need fixing.", { causeId: "not a cause in this rulebook: choose one, or name another" });
+    throw new HttpError(400, "Some values need fixing.", {
+      causeId: "not a cause in this rulebook: choose one, or name another",
+    });
   await db.transaction(async (tx) => {
     await tx.insert(confirmations).values({
-      shopId: m.shopId, castingId, causeId: input.causeId ?? null, causeText: input.causeId ? null : input.causeText ?? null,
-      note: input.note || null, createdBy: m.userId,
+      shopId: m.shopId,
+      castingId,
+      causeId: input.causeId ?? null,
+      causeText: input.causeId ? null : (input.causeText ?? null),
+      note: input.note || null,
+      createdBy: m.userId,
     });
-    await tx.update(reviewRequests).set({ answeredAt: new Date(), answeredBy: m.userId })
-      .where(and(eq(reviewRequests.shopId, m.shopId), eq(reviewRequests.castingId, castingId), isNull(reviewRequests.answeredAt)));
+    await tx
+      .update(reviewRequests)
+      .set({ answeredAt: new Date(), answeredBy: m.userId })
+      .where(
+        and(
+          eq(reviewRequests.shopId, m.shopId),
+          eq(reviewRequests.castingId, castingId),
+          isNull(reviewRequests.answeredAt),
+        ),
+      );
   });
   return caseReview(m.shopId, castingId);
 }
@@ -78,7 +132,14 @@ export async function confirmCause(m: ShopMember, castingId: number, input: Conf
 /** Cases waiting for a mentor, oldest request first, each with its defects and the top cause last diagnosed. */
 export async function reviewQueue(shopId: string): Promise<QueueItem[]> {
   const rows = await db
-    .select({ r: reviewRequests, partName: castings.partName, meltId: castings.meltId, pouredOn: melts.pouredOn, process: melts.process, alloy: alloys.designation })
+    .select({
+      r: reviewRequests,
+      partName: castings.partName,
+      meltId: castings.meltId,
+      pouredOn: melts.pouredOn,
+      process: melts.process,
+      alloy: alloys.designation,
+    })
     .from(reviewRequests)
     .innerJoin(castings, eq(castings.id, reviewRequests.castingId))
     .innerJoin(melts, eq(melts.id, castings.meltId))
@@ -88,10 +149,20 @@ export async function reviewQueue(shopId: string): Promise<QueueItem[]> {
     .limit(200);
   const ids = rows.map((r) => r.r.castingId);
   const [marks, snaps, who] = await Promise.all([
-    ids.length ? db.select({ castingId: defectMarks.castingId, type: defectMarks.type }).from(defectMarks).where(inArray(defectMarks.castingId, ids)) : [],
     ids.length
-      ? db.selectDistinctOn([diagnosisSnapshots.castingId], { castingId: diagnosisSnapshots.castingId, result: diagnosisSnapshots.result })
-          .from(diagnosisSnapshots).where(inArray(diagnosisSnapshots.castingId, ids))
+      ? db
+          .select({ castingId: defectMarks.castingId, type: defectMarks.type })
+          .from(defectMarks)
+          .where(inArray(defectMarks.castingId, ids))
+      : [],
+    ids.length
+      ? db
+          .selectDistinctOn([diagnosisSnapshots.castingId], {
+            castingId: diagnosisSnapshots.castingId,
+            result: diagnosisSnapshots.result,
+          })
+          .from(diagnosisSnapshots)
+          .where(inArray(diagnosisSnapshots.castingId, ids))
           .orderBy(diagnosisSnapshots.castingId, desc(diagnosisSnapshots.createdAt), desc(diagnosisSnapshots.id))
       : [],
     nameOf(rows.map((r) => r.r.createdBy)),
@@ -99,9 +170,17 @@ export async function reviewQueue(shopId: string): Promise<QueueItem[]> {
   return rows.map(({ r, partName, meltId, pouredOn, process, alloy }) => {
     const top = (snaps.find((s) => s.castingId === r.castingId)?.result as DiagnosisResult | undefined)?.causes[0];
     return {
-      requestId: r.id, castingId: r.castingId, meltId, partName, pouredOn, alloy, process: process as Process,
+      requestId: r.id,
+      castingId: r.castingId,
+      meltId,
+      partName,
+      pouredOn,
+      alloy,
+      process: process as Process,
       defectTypes: [...new Set(marks.filter((mk) => mk.castingId === r.castingId).map((mk) => mk.type as DefectType))],
-      note: r.note, askedBy: who(r.createdBy), askedAt: iso(r.createdAt),
+      note: r.note,
+      askedBy: who(r.createdBy),
+      askedAt: iso(r.createdAt),
       topCause: top ? { id: top.id, title: top.title, score: top.score } : null,
     };
   });

@@ -26,8 +26,18 @@ export async function latestConfirmations(shopId: string, castingIds?: number[])
  * A casting whose stored values the contract cannot read is left out, as it could not be diagnosed either.
  */
 export async function storedCases(shopId: string, opts: { confirmedOnly?: boolean } = {}): Promise<StoredCase[]> {
-  const marked = exists(db.select({ one: sql`1` }).from(defectMarks).where(eq(defectMarks.castingId, castings.id)));
-  const confirmed = exists(db.select({ one: sql`1` }).from(confirmations).where(eq(confirmations.castingId, castings.id)));
+  const marked = exists(
+    db
+      .select({ one: sql`1` })
+      .from(defectMarks)
+      .where(eq(defectMarks.castingId, castings.id)),
+  );
+  const confirmed = exists(
+    db
+      .select({ one: sql`1` })
+      .from(confirmations)
+      .where(eq(confirmations.castingId, castings.id)),
+  );
   const rows = await db
     .select({ c: castings, m: melts, a: alloys })
     .from(castings)
@@ -51,7 +61,12 @@ export async function storedCases(shopId: string, opts: { confirmedOnly?: boolea
     }
     const conf = confirmedBy.get(c.id);
     out.push({
-      castingId: c.id, meltId: c.meltId, partName: c.partName, pouredOn: m.pouredOn, case: kase, alloy: toAlloySpec(a),
+      castingId: c.id,
+      meltId: c.meltId,
+      partName: c.partName,
+      pouredOn: m.pouredOn,
+      case: kase,
+      alloy: toAlloySpec(a),
       confirmed: conf ? { causeId: conf.causeId } : null,
     });
   }

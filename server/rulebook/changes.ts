@@ -18,12 +18,20 @@ const BUILT_IN_IDS = new Set(BUILT_IN_RULE_SET.rules.map((r) => r.id));
 
 type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 async function addVersion(tx: Tx, m: ShopMember, shopRuleId: number, status: RuleStatus, rule: KbRule) {
-  const [last] = await tx.select({ version: shopRuleVersions.version }).from(shopRuleVersions)
-    .where(eq(shopRuleVersions.shopRuleId, shopRuleId)).orderBy(desc(shopRuleVersions.version)).limit(1);
-  await tx.insert(shopRuleVersions).values({ shopId: m.shopId, shopRuleId, version: (last?.version ?? 0) + 1, status, rule, createdBy: m.userId });
+  const [last] = await tx
+    .select({ version: shopRuleVersions.version })
+    .from(shopRuleVersions)
+    .where(eq(shopRuleVersions.shopRuleId, shopRuleId))
+    .orderBy(desc(shopRuleVersions.version))
+    .limit(1);
+  await tx
+    .insert(shopRuleVersions)
+    .values({ shopId: m.shopId, shopRuleId, version: (last?.version ?? 0) + 1, status, rule, createdBy: m.userId });
 }
 const saveCause = (tx: Tx, m: ShopMember, c: KbCause) =>
-  tx.insert(shopCauses).values({ shopId: m.shopId, causeId: c.id, title: c.title, fixes: c.fixes, createdBy: m.userId });
+  tx
+    .insert(shopCauses)
+    .values({ shopId: m.shopId, causeId: c.id, title: c.title, fixes: c.fixes, createdBy: m.userId });
 
 async function saved(shopId: string, ruleId: string): Promise<SavedRule> {
   const d = await ruleDetail(shopId, ruleId);
@@ -57,7 +65,9 @@ export async function publishRule(m: ShopMember, ruleId: string): Promise<SavedR
   if (last.status === "published") throw new HttpError(409, "This version is already published.");
   const impossible = contradictions(last.rule.conditions);
   if (impossible.length)
-    throw bad({ conditions: `These conditions can never all be true, so the rule would never fire: ${impossible.map((c) => c.message).join("; ")}` });
+    throw bad({
+      conditions: `These conditions can never all be true, so the rule would never fire: ${impossible.map((c) => c.message).join("; ")}`,
+    });
   // The whole set must still build with it (ids unique, causes known) before anyone's diagnosis depends on it.
   const l = await shopRules(m.shopId);
   ruleSetFor(l.base, [...l.inUse.filter((r) => r.id !== ruleId), last.rule], l.off);
@@ -79,4 +89,3 @@ export async function switchBuiltIn(m: ShopMember, ruleId: string, off: boolean)
   await db.insert(ruleSwitches).values({ shopId: m.shopId, ruleId, off, createdBy: m.userId });
   return ruleDetail(m.shopId, ruleId);
 }
-

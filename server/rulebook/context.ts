@@ -1,7 +1,15 @@
 import { and, asc, desc, eq, sql } from "drizzle-orm";
 import { db } from "../../db/client";
 import { ruleSwitches, shopCauses, shopRuleVersions } from "../../db/schema";
-import { causeRecords, confirmedFirings, ruleRecords, weightFactors, type CauseRecord, type Firing, type RuleRecord } from "../../rules/calibration";
+import {
+  causeRecords,
+  confirmedFirings,
+  ruleRecords,
+  weightFactors,
+  type CauseRecord,
+  type Firing,
+  type RuleRecord,
+} from "../../rules/calibration";
 import { ruleSetFor, type DiagnosisResult } from "../../rules/engine";
 import type { CauseWithRecord } from "../../lib/review-schemas";
 import { checkRule, type KbCause, type KbRule, type RuleSet } from "../../rules/kb-schema";
@@ -27,7 +35,11 @@ export function versionInUse(versions: VersionRow[]): VersionRow | undefined {
 }
 
 export async function causesOf(shopId: string): Promise<KbCause[]> {
-  const rows = await db.select().from(shopCauses).where(eq(shopCauses.shopId, shopId)).orderBy(asc(shopCauses.createdAt));
+  const rows = await db
+    .select()
+    .from(shopCauses)
+    .where(eq(shopCauses.shopId, shopId))
+    .orderBy(asc(shopCauses.createdAt));
   return rows.map((r) => ({ id: r.causeId, title: r.title, fixes: r.fixes }));
 }
 
@@ -35,7 +47,9 @@ export async function versionsOf(shopId: string, shopRuleId?: number): Promise<M
   const rows = await db
     .select()
     .from(shopRuleVersions)
-    .where(and(eq(shopRuleVersions.shopId, shopId), shopRuleId ? eq(shopRuleVersions.shopRuleId, shopRuleId) : undefined))
+    .where(
+      and(eq(shopRuleVersions.shopId, shopId), shopRuleId ? eq(shopRuleVersions.shopRuleId, shopRuleId) : undefined),
+    )
     .orderBy(asc(shopRuleVersions.shopRuleId), asc(shopRuleVersions.version));
   const out = new Map<number, VersionRow[]>();
   for (const r of rows) out.set(r.shopRuleId, [...(out.get(r.shopRuleId) ?? []), r]);
@@ -67,11 +81,18 @@ export type ShopRules = {
 export async function shopRules(shopId: string): Promise<ShopRules> {
   const [causes, versions, off] = await Promise.all([causesOf(shopId), versionsOf(shopId), switchedOff(shopId)]);
   const allCauses = [...BUILT_IN_RULE_SET.causes, ...causes];
-  const base = { version: ruleSetVersion(allCauses, BUILT_IN_RULE_SET.rules), causes: allCauses, rules: BUILT_IN_RULE_SET.rules };
+  const base = {
+    version: ruleSetVersion(allCauses, BUILT_IN_RULE_SET.rules),
+    causes: allCauses,
+    rules: BUILT_IN_RULE_SET.rules,
+  };
   // A stored rule that no longer passes the knowledge base's checks (a fact renamed in a later
   // release, say) is left out rather than failing every diagnosis in the shop.
   const causeIds = new Set(allCauses.map((c) => c.id));
-  const inUse = [...versions.values()].map(versionInUse).filter((v) => v !== undefined).map((v) => v.rule)
+  const inUse = [...versions.values()]
+    .map(versionInUse)
+    .filter((v) => v !== undefined)
+    .map((v) => v.rule)
     .filter((r) => checkRule(r, causeIds).length === 0);
   return { base, inUse, off, versions, ruleSet: ruleSetFor(base, inUse, off), everyRule: ruleSetFor(base, inUse) };
 }

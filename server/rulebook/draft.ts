@@ -24,7 +24,13 @@ export async function ownVersions(shopId: string, ruleId: string): Promise<{ n: 
   return { n: n!, vs };
 }
 
-const slug = (s: string) => s.toLowerCase().normalize("NFKD").replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 40) || "cause";
+const slug = (s: string) =>
+  s
+    .toLowerCase()
+    .normalize("NFKD")
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-|-$/g, "")
+    .slice(0, 40) || "cause";
 
 /** The cause a draft names: a known one, or a new one with an id of its own ("shop-<words>"). */
 async function causeFor(shopId: string, d: RuleDraftParsed): Promise<KbCause> {
@@ -51,7 +57,13 @@ function checkedRule(d: RuleDraftParsed, ruleId: string, cause: KbCause, causeId
     const fields: Record<string, string> = {};
     for (const p of problems) {
       const at = /conditions\.all\[(\d+)\]/.exec(p);
-      const key = at ? `conditions.${at[1]}.value` : p.includes(" cause:") ? "cause.id" : p.includes(" because:") ? "because" : "conditions";
+      const key = at
+        ? `conditions.${at[1]}.value`
+        : p.includes(" cause:")
+          ? "cause.id"
+          : p.includes(" because:")
+            ? "because"
+            : "conditions";
       fields[key] ??= p.replace(/^rule "[^"]*" /, "");
     }
     throw bad(fields);
@@ -65,4 +77,3 @@ export async function prepare(shopId: string, body: unknown, ruleId: string) {
   const causeIds = new Set([...BUILT_IN_RULE_SET.causes, ...(await causesOf(shopId))].map((c) => c.id));
   return { rule: checkedRule(d, ruleId, cause, causeIds), cause, isNew: !causeIds.has(cause.id) };
 }
-

@@ -27,19 +27,34 @@ rulebookRouter.put("/rulebook/rules/:ruleId", ...write, async (req, res) => {
   res.json(await updateRule(currentMember(req), ruleId(req.params.ruleId), req.body));
 });
 
-rulebookRouter.post("/rulebook/rules/:ruleId/publish", requireShopMember, allow({ rule: ["publish"] }), async (req, res) => {
-  res.json(await publishRule(currentMember(req), ruleId(req.params.ruleId)));
-});
+rulebookRouter.post(
+  "/rulebook/rules/:ruleId/publish",
+  requireShopMember,
+  allow({ rule: ["publish"] }),
+  async (req, res) => {
+    res.json(await publishRule(currentMember(req), ruleId(req.params.ruleId)));
+  },
+);
 
-rulebookRouter.post("/rulebook/rules/:ruleId/retire", requireShopMember, allow({ rule: ["retire"] }), async (req, res) => {
-  res.json(await retireRule(currentMember(req), ruleId(req.params.ruleId)));
-});
+rulebookRouter.post(
+  "/rulebook/rules/:ruleId/retire",
+  requireShopMember,
+  allow({ rule: ["retire"] }),
+  async (req, res) => {
+    res.json(await retireRule(currentMember(req), ruleId(req.params.ruleId)));
+  },
+);
 
 /** Switching a built-in rule off for this shop takes it out of diagnoses as retiring does. */
-rulebookRouter.put("/rulebook/rules/:ruleId/switch", requireShopMember, allow({ rule: ["retire"] }), async (req, res) => {
-  const { off } = parseOr400(switchInput, req.body);
-  res.json(await switchBuiltIn(currentMember(req), ruleId(req.params.ruleId), off));
-});
+rulebookRouter.put(
+  "/rulebook/rules/:ruleId/switch",
+  requireShopMember,
+  allow({ rule: ["retire"] }),
+  async (req, res) => {
+    const { off } = parseOr400(switchInput, req.body);
+    res.json(await switchBuiltIn(currentMember(req), ruleId(req.params.ruleId), off));
+  },
+);
 
 rulebookRouter.post("/rulebook/try", ...write, async (req, res) => {
   const body = parseOr400(trialInput, req.body);

@@ -27,10 +27,20 @@ function row(l: ShopLearning, rule: KbRule, status: RuleRow["status"], inUse: bo
   const record = l.ruleRecords.get(rule.id) ?? null;
   const cause = l.base.causes.find((c) => c.id === rule.cause);
   return {
-    id: rule.id, source: status === "built-in" ? "built-in" : "shop", family: FAMILY_OF.get(rule.id) ?? "Written here",
-    explains: rule.explains.map((e) => e.type), locations: [...new Set(rule.explains.flatMap((e) => e.locations ?? []))],
-    cause: { id: rule.cause, title: cause?.title ?? rule.cause }, effect: rule.effect, weight: rule.weight, conditions: rule.conditions,
-    status, inUse, switchedOff: l.off.has(rule.id), record, factor: weightFactorOf(record ?? undefined),
+    id: rule.id,
+    source: status === "built-in" ? "built-in" : "shop",
+    family: FAMILY_OF.get(rule.id) ?? "Written here",
+    explains: rule.explains.map((e) => e.type),
+    locations: [...new Set(rule.explains.flatMap((e) => e.locations ?? []))],
+    cause: { id: rule.cause, title: cause?.title ?? rule.cause },
+    effect: rule.effect,
+    weight: rule.weight,
+    conditions: rule.conditions,
+    status,
+    inUse,
+    switchedOff: l.off.has(rule.id),
+    record,
+    factor: weightFactorOf(record ?? undefined),
   };
 }
 
@@ -38,17 +48,26 @@ export const latest = (vs: VersionRow[]) => vs[vs.length - 1];
 
 export async function rulebook(shopId: string): Promise<Rulebook> {
   const l = await shopLearning(shopId);
-  const shopRows = [...l.versions.values()].map((vs) => row(l, latest(vs).rule, latest(vs).status as RuleStatus, !!versionInUse(vs)));
+  const shopRows = [...l.versions.values()].map((vs) =>
+    row(l, latest(vs).rule, latest(vs).status as RuleStatus, !!versionInUse(vs)),
+  );
   const builtIn = BUILT_IN_RULE_SET.rules.map((r) => row(l, r, "built-in", !l.off.has(r.id)));
   return {
     rules: [...shopRows.reverse(), ...builtIn],
-    causes: l.base.causes.map((c) => ({ id: c.id, title: c.title, fixes: c.fixes, shop: !BUILT_IN_CAUSE_IDS.has(c.id) })),
+    causes: l.base.causes.map((c) => ({
+      id: c.id,
+      title: c.title,
+      fixes: c.fixes,
+      shop: !BUILT_IN_CAUSE_IDS.has(c.id),
+    })),
     confirmedCases: l.confirmedCases,
   };
 }
 
 async function names(ids: string[]) {
-  const rows = ids.length ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, ids)) : [];
+  const rows = ids.length
+    ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, ids))
+    : [];
   return (id: string) => personRef(id, rows.find((r) => r.id === id)?.name ?? "");
 }
 
@@ -58,15 +77,33 @@ export async function ruleDetail(shopId: string, ruleId: string): Promise<RuleDe
   const vs = n !== undefined ? l.versions.get(n) : undefined;
   const rule = vs ? latest(vs).rule : BUILT_IN_RULE_SET.rules.find((r) => r.id === ruleId);
   if (!rule) throw notFound("No such rule");
-  const switches = await db.select().from(ruleSwitches)
-    .where(and(eq(ruleSwitches.shopId, shopId), eq(ruleSwitches.ruleId, ruleId))).orderBy(desc(ruleSwitches.id));
+  const switches = await db
+    .select()
+    .from(ruleSwitches)
+    .where(and(eq(ruleSwitches.shopId, shopId), eq(ruleSwitches.ruleId, ruleId)))
+    .orderBy(desc(ruleSwitches.id));
   const who = await names([...(vs ?? []).map((v) => v.createdBy), ...switches.map((s) => s.createdBy)]);
-  const versions: RuleVersion[] = (vs ?? []).map((v) => ({
-    version: v.version, status: v.status as RuleStatus, rule: v.rule, createdBy: who(v.createdBy), createdAt: iso(v.createdAt),
-  })).reverse();
-  const base = row(l, rule, vs ? (latest(vs).status as RuleStatus) : "built-in", vs ? !!versionInUse(vs) : !l.off.has(rule.id));
+  const versions: RuleVersion[] = (vs ?? [])
+    .map((v) => ({
+      version: v.version,
+      status: v.status as RuleStatus,
+      rule: v.rule,
+      createdBy: who(v.createdBy),
+      createdAt: iso(v.createdAt),
+    }))
+    .reverse();
+  const base = row(
+    l,
+    rule,
+    vs ? (latest(vs).status as RuleStatus) : "built-in",
+    vs ? !!versionInUse(vs) : !l.off.has(rule.id),
+  );
   return {
-    ...base, rule, causeFixes: l.base.causes.find((c) => c.id === rule.cause)?.fixes ?? [], sources: rule.sources, versions,
+    ...base,
+    rule,
+    causeFixes: l.base.causes.find((c) => c.id === rule.cause)?.fixes ?? [],
+    sources: rule.sources,
+    versions,
     switches: switches.map((s) => ({ off: s.off, createdBy: who(s.createdBy), createdAt: iso(s.createdAt) })),
     contradictions: contradictions(rule.conditions),
   };
@@ -78,8 +115,16 @@ export async function tryRule(shopId: string, body: { draft: unknown; ruleId?: s
   if (body.ruleId) await ownVersions(shopId, body.ruleId);
   const draft = await prepare(shopId, body.draft, ruleId);
   const [l, cases] = await Promise.all([shopLearning(shopId), storedCases(shopId)]);
-  const result = await backtest({ cases, base: l.ruleSet, rule: draft.rule, cause: draft.cause, weightFactor: l.weightFactor });
+  const result = await backtest({
+    cases,
+    base: l.ruleSet,
+    rule: draft.rule,
+    cause: draft.cause,
+    weightFactor: l.weightFactor,
+  });
   const wanted = new Set(result.changed.map((c) => c.confirmed?.id));
-  const titles = Object.fromEntries([...l.base.causes, draft.cause].filter((c) => wanted.has(c.id)).map((c) => [c.id, c.title]));
+  const titles = Object.fromEntries(
+    [...l.base.causes, draft.cause].filter((c) => wanted.has(c.id)).map((c) => [c.id, c.title]),
+  );
   return { ...result, contradictions: contradictions(draft.rule.conditions), causeTitles: titles };
 }

@@ -25,7 +25,8 @@ const flags = (names: Names, wanted: string[]) => {
   f[0] = 0; // a case with none never matches a value asked for
   return f;
 };
-const bitsOf = <T>(values: T[] | undefined, all: readonly T[]) => (values ?? []).reduce((m, v) => m | (1 << all.indexOf(v)), 0);
+const bitsOf = <T>(values: T[] | undefined, all: readonly T[]) =>
+  (values ?? []).reduce((m, v) => m | (1 << all.indexOf(v)), 0);
 
 export function slotFilter(index: ShopIndex, p: SearchParams): SlotFilter {
   const defects = (p.defect ?? []).reduce((m, t) => m | defectBit(t), 0);
@@ -49,13 +50,18 @@ export function slotFilter(index: ShopIndex, p: SearchParams): SlotFilter {
 }
 
 const unknown = (field: string, values: string[], what: string) =>
-  new HttpError(400, "Some filter values are not known here.", { [field]: `${values.map((v) => `"${v}"`).join(", ")} ${values.length > 1 ? "are" : "is"} not ${what} of this shop` });
+  new HttpError(400, "Some filter values are not known here.", {
+    [field]: `${values.map((v) => `"${v}"`).join(", ")} ${values.length > 1 ? "are" : "is"} not ${what} of this shop`,
+  });
 
 /** Alloys, causes and people must be ones this shop knows; a stranger's id is refused like a typo. */
 export async function checkNames(shopId: string, index: ShopIndex, p: SearchParams) {
   if (p.alloy?.length) {
     // Every melt names a row of the alloy table, so the table lists every alloy a case can have.
-    const rows = await db.select({ d: alloys.designation }).from(alloys).where(or(isNull(alloys.shopId), eq(alloys.shopId, shopId)));
+    const rows = await db
+      .select({ d: alloys.designation })
+      .from(alloys)
+      .where(or(isNull(alloys.shopId), eq(alloys.shopId, shopId)));
     const known = new Set(rows.map((r) => alloyKey(r.d)));
     const bad = p.alloy.filter((a) => !known.has(alloyKey(a)));
     if (bad.length) throw unknown("alloy", bad, "an alloy");
@@ -77,6 +83,8 @@ export async function checkNames(shopId: string, index: ShopIndex, p: SearchPara
 /** Names for the people on a page of results. */
 export async function namesOf(ids: string[]): Promise<Map<string, string>> {
   const wanted = [...new Set(ids)];
-  const rows = wanted.length ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, wanted)) : [];
+  const rows = wanted.length
+    ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, wanted))
+    : [];
   return new Map(rows.map((r) => [r.id, r.name]));
 }

@@ -18,11 +18,23 @@ export type SearchKey = (typeof SEARCH_KEYS)[number];
 export type SearchFields = Partial<Record<SearchKey, string>>;
 
 /** What a case is (part, defect, cause) outranks how it was poured, which outranks what was written. */
-const KEY_WEIGHTS: Record<SearchKey, number> = { part: 3, defects: 3, causes: 2, conditions: 1.5, notes: 1, comments: 1 };
+const KEY_WEIGHTS: Record<SearchKey, number> = {
+  part: 3,
+  defects: 3,
+  causes: 2,
+  conditions: 1.5,
+  notes: 1,
+  comments: 1,
+};
 /** Fuse's word separators (its field-length norm counts words between these). */
 const SEPARATORS = /[\t\n\v\f\r \u00a0]+/;
 const UNIT_BORDERS: Record<SearchKey, RegExp | null> = {
-  part: null, conditions: null, defects: /; /, causes: /; /, notes: SEPARATORS, comments: SEPARATORS,
+  part: null,
+  conditions: null,
+  defects: /; /,
+  causes: /; /,
+  notes: SEPARATORS,
+  comments: SEPARATORS,
 };
 const WORDS_AND_GAPS = /([\t\n\v\f\r \u00a0]+)/;
 
@@ -59,8 +71,11 @@ const WEIGHT = SEARCH_KEYS.map((k) => KEY_WEIGHTS[k] / totalWeight);
 const normOf = (words: number) => Math.round(1000 / Math.pow(words, 0.5)) / 1000;
 /** Each field's exponent in Fuse's score (key weight x norm), by word count: no Map in the hot loop. */
 const EXPONENT_TABLE = 1024;
-const EXPONENTS = WEIGHT.map((w) => Float64Array.from({ length: EXPONENT_TABLE }, (_, n) => w * normOf(Math.max(1, n))));
-const exponent = (k: number, words: number) => (words < EXPONENT_TABLE ? EXPONENTS[k][words] : WEIGHT[k] * normOf(words));
+const EXPONENTS = WEIGHT.map((w) =>
+  Float64Array.from({ length: EXPONENT_TABLE }, (_, n) => w * normOf(Math.max(1, n))),
+);
+const exponent = (k: number, words: number) =>
+  words < EXPONENT_TABLE ? EXPONENTS[k][words] : WEIGHT[k] * normOf(words);
 const wordCount = (text: string) => text.split(SEPARATORS).filter(Boolean).length || 1;
 /** The most slips Fuse allows a term of length m: errors / m must stay within the threshold. */
 const maxErrors = (m: number) => {
@@ -132,7 +147,8 @@ export class FuzzyIndex {
   prepare(query: string): PreparedQuery | null {
     const terms = searchWords(query);
     if (!terms.length) return null;
-    if (terms.length > SEARCH_MAX_WORDS || terms.some((t) => t.length > MAX_TERM_LENGTH)) throw new Error("query too long");
+    if (terms.length > SEARCH_MAX_WORDS || terms.some((t) => t.length > MAX_TERM_LENGTH))
+      throw new Error("query too long");
     const idf = terms.map((t) => {
       const d = this.df.get(t) ?? 0;
       return Math.log(1 + (this.fieldCount - d + 0.5) / (d + 0.5));
@@ -156,7 +172,15 @@ export class FuzzyIndex {
       }
       return scores;
     });
-    return { terms, idf, maxPossible, full: 2 ** terms.length - 1, unitMask, unitScores, best: new Float64Array(terms.length) };
+    return {
+      terms,
+      idf,
+      maxPossible,
+      full: 2 ** terms.length - 1,
+      unitMask,
+      unitScores,
+      best: new Float64Array(terms.length),
+    };
   }
 
   /**
@@ -187,7 +211,8 @@ export class FuzzyIndex {
       // A unit equal to the term scores 0 only when it is the field's whole text, as in Fuse.
       const floor = (c[at] >> k) & 1 ? 0 : 0.001;
       let weighted = 0;
-      for (let i = 0; i < idf.length; i++) if (fieldMask & (1 << i)) weighted += idf[i] * (1 - Math.max(floor, best[i]));
+      for (let i = 0; i < idf.length; i++)
+        if (fieldMask & (1 << i)) weighted += idf[i] * (1 - Math.max(floor, best[i]));
       const normalized = p.maxPossible > 0 ? 1 - weighted / p.maxPossible : 0;
       total *= Math.pow(Math.max(0.001, normalized), exponent(k, words));
       covered |= fieldMask;

@@ -29,10 +29,12 @@ class Entry {
       return this.running;
     }
     // The running refresh may have looked before this request's own writes: wait for a fresh look.
-    this.queued ??= this.running.catch(() => undefined).then(() => {
-      this.queued = null;
-      return this.current();
-    });
+    this.queued ??= this.running
+      .catch(() => undefined)
+      .then(() => {
+        this.queued = null;
+        return this.current();
+      });
     return this.queued;
   }
 

@@ -2,7 +2,15 @@ import { and, asc, desc, eq, inArray, lt, sql, type SQL } from "drizzle-orm";
 import type { PgColumn } from "drizzle-orm/pg-core";
 import { db } from "../../db/client";
 import {
-  alloys, castings, comments, confirmations, defectMarks, diagnosisSnapshots, fixesTried, melts, searchChanges,
+  alloys,
+  castings,
+  comments,
+  confirmations,
+  defectMarks,
+  diagnosisSnapshots,
+  fixesTried,
+  melts,
+  searchChanges,
 } from "../../db/schema";
 import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
 import { causesOf } from "../rulebook/context";
@@ -27,21 +35,43 @@ export async function loadCases(shopId: string, ids?: number[]): Promise<Loaded>
       const [{ xmin }] = await tx.select({ xmin: xminOf }).from(sql`(select 1) as one`);
       const castingRows = await tx
         .select({
-          id: castings.id, meltId: castings.meltId, partName: castings.partName, pattern: castings.pattern,
-          outcome: castings.outcome, notes: castings.notes, createdBy: castings.createdBy, minSectionMm: castings.minSectionMm,
-          pouredOn: melts.pouredOn, process: melts.process, degassing: melts.degassing, pourTempC: melts.pourTempC,
-          meltNotes: melts.notes, alloy: alloys.designation, alloyFamily: alloys.family, liquidusC: alloys.liquidusC,
+          id: castings.id,
+          meltId: castings.meltId,
+          partName: castings.partName,
+          pattern: castings.pattern,
+          outcome: castings.outcome,
+          notes: castings.notes,
+          createdBy: castings.createdBy,
+          minSectionMm: castings.minSectionMm,
+          pouredOn: melts.pouredOn,
+          process: melts.process,
+          degassing: melts.degassing,
+          pourTempC: melts.pourTempC,
+          meltNotes: melts.notes,
+          alloy: alloys.designation,
+          alloyFamily: alloys.family,
+          liquidusC: alloys.liquidusC,
         })
         .from(castings)
         .innerJoin(melts, eq(melts.id, castings.meltId))
         .innerJoin(alloys, eq(alloys.id, melts.alloyId))
         .where(and(eq(castings.shopId, shopId), only(castings.id)));
       const marks = await tx
-        .select({ castingId: defectMarks.castingId, type: defectMarks.type, location: defectMarks.location, severity: defectMarks.severity, note: defectMarks.note })
-        .from(defectMarks).where(and(eq(defectMarks.shopId, shopId), only(defectMarks.castingId))).orderBy(asc(defectMarks.id));
+        .select({
+          castingId: defectMarks.castingId,
+          type: defectMarks.type,
+          location: defectMarks.location,
+          severity: defectMarks.severity,
+          note: defectMarks.note,
+        })
+        .from(defectMarks)
+        .where(and(eq(defectMarks.shopId, shopId), only(defectMarks.castingId)))
+        .orderBy(asc(defectMarks.id));
       const commentRows = await tx
         .select({ castingId: comments.castingId, body: comments.body })
-        .from(comments).where(and(eq(comments.shopId, shopId), only(comments.castingId))).orderBy(asc(comments.createdAt), asc(comments.id));
+        .from(comments)
+        .where(and(eq(comments.shopId, shopId), only(comments.castingId)))
+        .orderBy(asc(comments.createdAt), asc(comments.id));
       const r = diagnosisSnapshots.result;
       const diagnoses = await tx
         .selectDistinctOn([diagnosisSnapshots.castingId], {
@@ -56,15 +86,32 @@ export async function loadCases(shopId: string, ids?: number[]): Promise<Loaded>
         .orderBy(diagnosisSnapshots.castingId, desc(diagnosisSnapshots.createdAt), desc(diagnosisSnapshots.id));
       // The newest confirmation counts (mentor-schema.ts).
       const confirmationRows = await tx
-        .selectDistinctOn([confirmations.castingId], { castingId: confirmations.castingId, causeId: confirmations.causeId, causeText: confirmations.causeText })
-        .from(confirmations).where(and(eq(confirmations.shopId, shopId), only(confirmations.castingId)))
+        .selectDistinctOn([confirmations.castingId], {
+          castingId: confirmations.castingId,
+          causeId: confirmations.causeId,
+          causeText: confirmations.causeText,
+        })
+        .from(confirmations)
+        .where(and(eq(confirmations.shopId, shopId), only(confirmations.castingId)))
         .orderBy(confirmations.castingId, desc(confirmations.id));
       const fixes = await tx
         .select({ castingId: fixesTried.castingId, fix: fixesTried.fix, worked: fixesTried.worked })
-        .from(fixesTried).where(and(eq(fixesTried.shopId, shopId), only(fixesTried.castingId))).orderBy(asc(fixesTried.id));
-      const seen = await tx.select({ id: searchChanges.id }).from(searchChanges)
+        .from(fixesTried)
+        .where(and(eq(fixesTried.shopId, shopId), only(fixesTried.castingId)))
+        .orderBy(asc(fixesTried.id));
+      const seen = await tx
+        .select({ id: searchChanges.id })
+        .from(searchChanges)
         .where(and(eq(searchChanges.shopId, shopId), sql`${searchChanges.xid} >= ${xmin}::bigint`));
-      const docs = caseDocs({ castings: castingRows, marks, comments: commentRows, diagnoses, confirmations: confirmationRows, fixes, causeTitles });
+      const docs = caseDocs({
+        castings: castingRows,
+        marks,
+        comments: commentRows,
+        diagnoses,
+        confirmations: confirmationRows,
+        fixes,
+        causeTitles,
+      });
       return { docs, xmin: Number(xmin), seen: seen.map((s) => s.id) };
     },
     { isolationLevel: "repeatable read", accessMode: "read only" },
@@ -77,7 +124,9 @@ export async function changesSince(shopId: string, watermark: number): Promise<C
     .select({ xmin: xminOf, id: searchChanges.id, castingId: searchChanges.castingId })
     .from(sql`(select 1) as one`)
     .leftJoin(searchChanges, and(eq(searchChanges.shopId, shopId), sql`${searchChanges.xid} >= ${watermark}::bigint`));
-  const changes = rows.flatMap((r) => (r.id === null || r.castingId === null ? [] : [{ id: r.id, castingId: r.castingId }]));
+  const changes = rows.flatMap((r) =>
+    r.id === null || r.castingId === null ? [] : [{ id: r.id, castingId: r.castingId }],
+  );
   return { xmin: Number(rows[0].xmin), changes };
 }
 

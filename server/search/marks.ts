@@ -51,7 +51,9 @@ export function snippet(text: string, ranges: readonly Range[]): Marked {
   let start = Math.max(0, first - 50);
   if (start > 0) start = text.lastIndexOf(" ", start) + 1;
   const end = Math.min(text.length, start + SNIPPET_CHARS);
-  const inside = ranges.filter(([s]) => s >= start && s < end).map(([s, e]) => [s - start, Math.min(e, end - 1) - start] as const);
+  const inside = ranges
+    .filter(([s]) => s >= start && s < end)
+    .map(([s, e]) => [s - start, Math.min(e, end - 1) - start] as const);
   const runs = markRuns(text.slice(start, end), inside);
   if (start > 0) runs.unshift({ text: "…", hit: false });
   if (end < text.length) runs.push({ text: "…", hit: false });

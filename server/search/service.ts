@@ -1,4 +1,12 @@
-import type { CaseHit, CaseSummary, SearchAnswer, SearchFacets, SearchParams, SearchSort, SimilarAnswer } from "../../lib/search-schemas";
+import type {
+  CaseHit,
+  CaseSummary,
+  SearchAnswer,
+  SearchFacets,
+  SearchParams,
+  SearchSort,
+  SimilarAnswer,
+} from "../../lib/search-schemas";
 import { reasonText } from "../../lib/search-schemas";
 import { DEFECT_TYPES, PROCESSES } from "../../rules/case";
 import { notFound } from "../http/errors";
@@ -49,12 +57,17 @@ export async function searchCases(shopId: string, p: SearchParams): Promise<Sear
   if (sort === "relevance" && scores) {
     slice = bestFirst(scores.subarray(0, total), upto).slice(from);
   } else {
-    slice = Array.from({ length: Math.max(0, upto - from) }, (_, k) => (sort === "date-asc" ? total - 1 - from - k : from + k));
+    slice = Array.from({ length: Math.max(0, upto - from) }, (_, k) =>
+      sort === "date-asc" ? total - 1 - from - k : from + k,
+    );
   }
   const page = slice.map((i) => index.slots[order[found[i]]]!);
   const pageScores = slice.map((i) => (scores && sort === "relevance" ? scores[i] : null)); // before the work arrays are reused
   const names = await namesOf(page.map((c) => c.createdBy));
-  const marked = markPage(page.map((c) => c.fields), prepared ? p.q : "");
+  const marked = markPage(
+    page.map((c) => c.fields),
+    prepared ? p.q : "",
+  );
   const items: CaseHit[] = page.map((c, i) => ({ ...summary(c, names), score: pageScores[i], marked: marked[i] }));
   return { items, total, page: p.page, pageSize: p.pageSize, sort, facets: counts.facets() };
 }
@@ -104,14 +117,27 @@ class Counts {
       alloy: named(this.alloy, (i) => this.index.alloys.labels[i]),
       process: named(this.process, (i) => PROCESSES[i]),
       outcome: named(this.outcome, (i) => OUTCOME_CODES[i]),
-      cause: Object.fromEntries(Object.entries(causes).map(([id, count]) => [id, { title: this.index.causes.labels[this.index.causes.find(id)!], count }])),
+      cause: Object.fromEntries(
+        Object.entries(causes).map(([id, count]) => [
+          id,
+          { title: this.index.causes.labels[this.index.causes.find(id)!], count },
+        ]),
+      ),
     };
   }
 }
 
 const summary = (c: IndexedCase, names: Map<string, string>): CaseSummary => ({
-  id: c.id, meltId: c.meltId, partName: c.partName, pouredOn: c.pouredOn, alloy: c.alloy, process: c.process,
-  outcome: c.outcome, defects: c.defects, cause: c.cause, fixWorked: c.fixWorked,
+  id: c.id,
+  meltId: c.meltId,
+  partName: c.partName,
+  pouredOn: c.pouredOn,
+  alloy: c.alloy,
+  process: c.process,
+  outcome: c.outcome,
+  defects: c.defects,
+  cause: c.cause,
+  fixWorked: c.fixWorked,
   createdBy: { id: c.createdBy, name: names.get(c.createdBy) ?? "" },
 });
 
@@ -122,6 +148,11 @@ export async function similarTo(shopId: string, castingId: number): Promise<Simi
   const found = similarInIndex(index, target);
   const names = await namesOf(found.map((s) => s.doc.createdBy));
   return {
-    items: found.map((s) => ({ ...summary(s.doc, names), similarity: s.similarity, reason: reasonText(s.parts), parts: s.parts })),
+    items: found.map((s) => ({
+      ...summary(s.doc, names),
+      similarity: s.similarity,
+      reason: reasonText(s.parts),
+      parts: s.parts,
+    })),
   };
 }

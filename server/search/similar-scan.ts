@@ -1,6 +1,15 @@
 import type { ShopIndex, IndexedCase } from "./shop-index";
 import {
-  ALIKE_MIN, conditionShare, defectShare, keepBest, likenessOf, placesOf, ratioOf, withReasons, type Ranked, type Similar,
+  ALIKE_MIN,
+  conditionShare,
+  defectShare,
+  keepBest,
+  likenessOf,
+  placesOf,
+  ratioOf,
+  withReasons,
+  type Ranked,
+  type Similar,
 } from "./similarity";
 
 /**
@@ -20,10 +29,15 @@ export function similarInIndex(index: ShopIndex, target: IndexedCase, limit = 5)
     const dm = defects[s];
     if (s === t || (mask && !(dm & mask))) continue;
     let same = 0;
-    if (mask & dm) for (const code of slots[s]!.markCodes) if ((places[code >> 4] >> (code & 15)) & 1) same |= 1 << (code >> 4);
+    if (mask & dm)
+      for (const code of slots[s]!.markCodes) if ((places[code >> 4] >> (code & 15)) & 1) same |= 1 << (code >> 4);
     const conditions = conditionShare(
-      process[s] === process[t], alloy[s] === alloy[t], family[s] === family[t], superheat[s] - superheat[t],
-      degassing[t] !== 0 && degassing[s] === degassing[t], ratioOf(section[t], section[s]),
+      process[s] === process[t],
+      alloy[s] === alloy[t],
+      family[s] === family[t],
+      superheat[s] - superheat[t],
+      degassing[t] !== 0 && degassing[s] === degassing[t],
+      ratioOf(section[t], section[s]),
     );
     probe.doc = slots[s]!;
     probe.similarity = likenessOf(defectShare(mask, dm, same), conditions);

@@ -10,7 +10,20 @@ import type { CaseDoc } from "./case-doc";
  */
 export type SimilarInput = Pick<
   CaseDoc,
-  "id" | "pouredOn" | "defects" | "defectMask" | "markCodes" | "process" | "alloyKey" | "alloy" | "alloyFamily" | "superheatC" | "degassing" | "minSectionMm" | "cause" | "fixWorked"
+  | "id"
+  | "pouredOn"
+  | "defects"
+  | "defectMask"
+  | "markCodes"
+  | "process"
+  | "alloyKey"
+  | "alloy"
+  | "alloyFamily"
+  | "superheatC"
+  | "degassing"
+  | "minSectionMm"
+  | "cause"
+  | "fixWorked"
 >;
 export type Similar<T> = { doc: T; similarity: number; parts: ReasonPart[] };
 
@@ -21,7 +34,8 @@ export const ALIKE_MIN = 0.35;
 const SUPERHEAT_SPAN_C = 60;
 
 /** How much a case teaches: 2 = confirmed cause and a fix that worked, 1 = either, 0 = neither. */
-export const teaches = (c: Pick<SimilarInput, "cause" | "fixWorked">) => (c.cause?.confirmed ? 1 : 0) + (c.fixWorked === "yes" ? 1 : 0);
+export const teaches = (c: Pick<SimilarInput, "cause" | "fixWorked">) =>
+  (c.cause?.confirmed ? 1 : 0) + (c.fixWorked === "yes" ? 1 : 0);
 const bits = (m: number) => {
   let n = 0;
   for (; m; m &= m - 1) n++;
@@ -46,10 +60,18 @@ export function defectShare(targetMask: number, otherMask: number, samePlace: nu
   return union ? (WEIGHTS.defects * (bits(samePlace) + 0.6 * bits(targetMask & otherMask & ~samePlace))) / union : 0;
 }
 /** The conditions' share; unknown numbers are NaN and count nothing. */
-export function conditionShare(sameProcess: boolean, sameAlloy: boolean, sameFamily: boolean, superheatDelta: number, sameDegassing: boolean, sectionRatio: number): number {
+export function conditionShare(
+  sameProcess: boolean,
+  sameAlloy: boolean,
+  sameFamily: boolean,
+  superheatDelta: number,
+  sameDegassing: boolean,
+  sectionRatio: number,
+): number {
   let s = sameProcess ? WEIGHTS.process : 0;
   if (sameAlloy || sameFamily) s += WEIGHTS.alloy * (sameAlloy ? 1 : 0.5);
-  if (!Number.isNaN(superheatDelta)) s += WEIGHTS.superheat * Math.max(0, 1 - Math.abs(superheatDelta) / SUPERHEAT_SPAN_C);
+  if (!Number.isNaN(superheatDelta))
+    s += WEIGHTS.superheat * Math.max(0, 1 - Math.abs(superheatDelta) / SUPERHEAT_SPAN_C);
   if (sameDegassing) s += WEIGHTS.degassing;
   if (!Number.isNaN(sectionRatio)) s += WEIGHTS.section * (sectionRatio <= 1.25 ? 1 : sectionRatio <= 2 ? 0.5 : 0);
   return s;
@@ -70,29 +92,47 @@ export function likeness(t: SimilarInput, other: SimilarInput, parts?: ReasonPar
     if (shared) {
       const pick = same || shared;
       const type = DEFECT_TYPES[31 - Math.clz32(pick & -pick)];
-      const place = same ? other.defects.find((d) => d.type === type && (places[DEFECT_TYPES.indexOf(type)] >> DEFECT_LOCATIONS.indexOf(d.location)) & 1) : undefined;
+      const place = same
+        ? other.defects.find(
+            (d) => d.type === type && (places[DEFECT_TYPES.indexOf(type)] >> DEFECT_LOCATIONS.indexOf(d.location)) & 1,
+          )
+        : undefined;
       parts.push({ kind: "defect", type, location: place?.location ?? null });
     }
     if (t.process === other.process) parts.push({ kind: "process", process: other.process });
-    if (sameAlloy || t.alloyFamily === other.alloyFamily) parts.push({ kind: "alloy", alloy: other.alloy, sameFamily: !sameAlloy });
+    if (sameAlloy || t.alloyFamily === other.alloyFamily)
+      parts.push({ kind: "alloy", alloy: other.alloy, sameFamily: !sameAlloy });
     if (!Number.isNaN(delta)) parts.push({ kind: "superheat", deltaC: Math.round(delta) });
     if (sameDegassing) parts.push({ kind: "degassing", method: other.degassing! });
     if (ratio <= 1.25) parts.push({ kind: "section", minSectionMm: other.minSectionMm! });
   }
   return likenessOf(
     defectShare(t.defectMask, other.defectMask, same),
-    conditionShare(t.process === other.process, sameAlloy, t.alloyFamily === other.alloyFamily, delta, sameDegassing, ratio),
+    conditionShare(
+      t.process === other.process,
+      sameAlloy,
+      t.alloyFamily === other.alloyFamily,
+      delta,
+      sameDegassing,
+      ratio,
+    ),
   );
 }
 
 export type Ranked<T> = { doc: T; similarity: number; alike: number; teaches: number };
 /** Alike enough first; among those, what teaches most; then the closest; then the newest. */
 export const before = <T extends Pick<SimilarInput, "pouredOn" | "id">>(a: Ranked<T>, b: Ranked<T>) =>
-  b.alike - a.alike || a.alike * (b.teaches - a.teaches) || b.similarity - a.similarity ||
+  b.alike - a.alike ||
+  a.alike * (b.teaches - a.teaches) ||
+  b.similarity - a.similarity ||
   (a.doc.pouredOn < b.doc.pouredOn ? 1 : a.doc.pouredOn > b.doc.pouredOn ? -1 : b.doc.id - a.doc.id);
 
 /** Keeps the best `limit` seen so far, in order; copies `probe` only when it makes the list. */
-export function keepBest<T extends Pick<SimilarInput, "pouredOn" | "id">>(top: Ranked<T>[], probe: Ranked<T>, limit: number) {
+export function keepBest<T extends Pick<SimilarInput, "pouredOn" | "id">>(
+  top: Ranked<T>[],
+  probe: Ranked<T>,
+  limit: number,
+) {
   if (top.length === limit && before(probe, top[limit - 1]) >= 0) return;
   let at = Math.min(top.length, limit - 1);
   while (at > 0 && before(probe, top[at - 1]) < 0) at--;
@@ -105,7 +145,11 @@ export function keepBest<T extends Pick<SimilarInput, "pouredOn" | "id">>(top: R
  * them qualify (the point is the same defect coming back); without marks, conditions alone rank.
  * The shop index runs the same rule over its columns (shop-index.ts, `similarTo`).
  */
-export function similarCases<T extends SimilarInput>(target: SimilarInput, cases: readonly T[], limit = 5): Similar<T>[] {
+export function similarCases<T extends SimilarInput>(
+  target: SimilarInput,
+  cases: readonly T[],
+  limit = 5,
+): Similar<T>[] {
   const top: Ranked<T>[] = [];
   const probe: Ranked<T> = { doc: target as T, similarity: 0, alike: 0, teaches: 0 };
   for (const c of cases) {

@@ -28,15 +28,22 @@ const OUTLINES: Record<PartShape, string> = {
 
 /** Surface details that make each shape read as a part: ribs, bolt holes, spokes. */
 const DETAILS: Record<PartShape, string> = {
-  plate: [200, 320, 440, 560].map((x) => `<rect x="${x}" y="150" width="22" height="300" rx="6" fill="#9aa0a6"/>`).join(""),
-  flange: [0, 60, 120, 180, 240, 300].map((a) => {
-    const r = (a * Math.PI) / 180;
-    return `<circle cx="${400 + 170 * Math.cos(r)}" cy="${300 + 170 * Math.sin(r)}" r="18" fill="#c8b48a"/>`;
-  }).join("") + `<circle cx="400" cy="300" r="70" fill="#c8b48a"/>`,
+  plate: [200, 320, 440, 560]
+    .map((x) => `<rect x="${x}" y="150" width="22" height="300" rx="6" fill="#9aa0a6"/>`)
+    .join(""),
+  flange:
+    [0, 60, 120, 180, 240, 300]
+      .map((a) => {
+        const r = (a * Math.PI) / 180;
+        return `<circle cx="${400 + 170 * Math.cos(r)}" cy="${300 + 170 * Math.sin(r)}" r="18" fill="#c8b48a"/>`;
+      })
+      .join("") + `<circle cx="400" cy="300" r="70" fill="#c8b48a"/>`,
   block: `<rect x="300" y="190" width="200" height="40" rx="6" fill="#9aa0a6"/>`,
   bracket: `<circle cx="230" cy="200" r="26" fill="#c8b48a"/><circle cx="560" cy="420" r="22" fill="#c8b48a"/>`,
-  wheel: [0, 72, 144, 216, 288].map((a) => `<rect x="390" y="110" width="20" height="190" fill="#9aa0a6" transform="rotate(${a} 400 300)"/>`).join("") +
-    `<circle cx="400" cy="300" r="45" fill="#9aa0a6"/><circle cx="400" cy="300" r="16" fill="#c8b48a"/>`,
+  wheel:
+    [0, 72, 144, 216, 288]
+      .map((a) => `<rect x="390" y="110" width="20" height="190" fill="#9aa0a6" transform="rotate(${a} 400 300)"/>`)
+      .join("") + `<circle cx="400" cy="300" r="45" fill="#9aa0a6"/><circle cx="400" cy="300" r="16" fill="#c8b48a"/>`,
   bar: `<rect x="110" y="285" width="580" height="10" fill="#9aa0a6"/>`,
 };
 
@@ -46,9 +53,12 @@ function defectSvg(d: DrawnDefect, rnd: () => number): string {
   const jitter = (r: number) => (rnd() - 0.5) * 2 * r;
   switch (d.kind) {
     case "spots": // gas porosity: round, smooth-walled holes in a cluster
-      return Array.from({ length: 28 }, () =>
-        `<circle cx="${cx + jitter(60)}" cy="${cy + jitter(45)}" r="${2 + rnd() * 6}" fill="#2b2d30"/>`).join("");
-    case "cavity": { // shrinkage: a jagged, dendritic hollow
+      return Array.from(
+        { length: 28 },
+        () => `<circle cx="${cx + jitter(60)}" cy="${cy + jitter(45)}" r="${2 + rnd() * 6}" fill="#2b2d30"/>`,
+      ).join("");
+    case "cavity": {
+      // shrinkage: a jagged, dendritic hollow
       const pts = Array.from({ length: 14 }, (_, i) => {
         const a = (i / 14) * 2 * Math.PI;
         const r = 25 + rnd() * 35;
@@ -58,7 +68,8 @@ function defectSvg(d: DrawnDefect, rnd: () => number): string {
     }
     case "unfilled": // misrun: the metal stopped short (clipped to the part), sand shows through behind a rounded front
       return `<ellipse cx="${cx}" cy="${cy}" rx="95" ry="70" fill="#c8b48a"/><ellipse cx="${cx}" cy="${cy}" rx="95" ry="70" fill="none" stroke="#6d7278" stroke-width="5"/>`;
-    case "line": { // cold shut, fold, hot tear: a dark seam
+    case "line": {
+      // cold shut, fold, hot tear: a dark seam
       const pts = Array.from({ length: 9 }, (_, i) => `${cx - 90 + i * 22},${cy + jitter(10)}`);
       return `<polyline points="${pts.join(" ")}" fill="none" stroke="#25272a" stroke-width="4"/>`;
     }

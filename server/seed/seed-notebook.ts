@@ -26,9 +26,14 @@ export async function seedDemoNotebook(shopId: string, crew: Crew) {
       const plain = marks.map(({ draw: _d, ...mark }) => mark);
       const { id } = await createCasting(who, meltId, { ...casting, marks: photo ? [] : plain });
       if (photo) {
-        const image = await drawCasting(photo, marks.map((m) => m.draw), ++picture);
+        const image = await drawCasting(
+          photo,
+          marks.map((m) => m.draw),
+          ++picture,
+        );
         const { id: photoId } = await storePhoto(who, id, image);
-        for (const [i, mark] of plain.entries()) await addMark(who, id, { ...mark, photoId, x: marks[i].draw.x, y: marks[i].draw.y });
+        for (const [i, mark] of plain.entries())
+          await addMark(who, id, { ...mark, photoId, x: marks[i].draw.x, y: marks[i].draw.y });
       }
       for (const c of comments) await addComment(as(c.by), id, c.body);
       if (diagnose) await diagnoseCasting(who, id);

@@ -38,7 +38,10 @@ describe("sign-in", () => {
   it("signs in with the right password and the session reaches /api/me", async () => {
     const p = await signUp("signin");
     const agent = request.agent(app);
-    const res = await agent.post("/api/auth/sign-in/email").set("Origin", ORIGIN).send({ email: p.email, password: p.password });
+    const res = await agent
+      .post("/api/auth/sign-in/email")
+      .set("Origin", ORIGIN)
+      .send({ email: p.email, password: p.password });
     expect(res.status).toBe(200);
     const me = await agent.get("/api/me");
     expect(me.status).toBe(200);
@@ -48,7 +51,10 @@ describe("sign-in", () => {
   it("answers a wrong password and an unknown e-mail alike", async () => {
     const p = await signUp("wrongpw");
     const wrong = await post("/api/auth/sign-in/email", { email: p.email, password: "not-the-password" });
-    const unknown = await post("/api/auth/sign-in/email", { email: uniqueEmail("nobody"), password: "not-the-password" });
+    const unknown = await post("/api/auth/sign-in/email", {
+      email: uniqueEmail("nobody"),
+      password: "not-the-password",
+    });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(wrong.status);
     expect(unknown.body.message).toBe(wrong.body.message);

@@ -12,7 +12,10 @@ beforeAll(migrateOnce);
 /** A misrun poured at 660 °C in green sand: below the usual 700-760 °C window ([mem], foundry-facts.md). */
 const coldGreenSand = {
   defects: [{ type: "misrun", location: "far-from-gate", severity: 2 }],
-  alloy: "A356", process: "green-sand", pourTempC: 660, minSectionMm: 5,
+  alloy: "A356",
+  process: "green-sand",
+  pourTempC: 660,
+  minSectionMm: 5,
 };
 
 describe("POST /api/diagnose", () => {
@@ -27,21 +30,30 @@ describe("POST /api/diagnose", () => {
 
   it("answers 400 with the accepted values for unknown defect types, processes and alloys", async () => {
     const { caster, mentor } = await shopWithCrew("Diagnose Bad Shop");
-    const bad = await caster.agent.post("/api/diagnose").send({ ...coldGreenSand, defects: [{ type: "spaghetti" }], process: "3d-print", humidityPct: 130 });
+    const bad = await caster.agent
+      .post("/api/diagnose")
+      .send({ ...coldGreenSand, defects: [{ type: "spaghetti" }], process: "3d-print", humidityPct: 130 });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields["defects.0.type"]).toMatch(/misrun/);
     expect(bad.body.error.fields.process).toMatch(/lost-foam/);
     expect(bad.body.error.fields.humidityPct).toBeDefined();
     await mentor.agent.post("/api/alloys").send({
-      designation: "Shop Bronze 7", family: "copper-base", solidusC: 880, liquidusC: 1000, densityKgM3: 8700,
-      shrinkAllowancePct: 1.56, sources: "shop experience",
+      designation: "Shop Bronze 7",
+      family: "copper-base",
+      solidusC: 880,
+      liquidusC: 1000,
+      densityKgM3: 8700,
+      shrinkAllowancePct: 1.56,
+      sources: "shop experience",
     });
     const alloy = await caster.agent.post("/api/diagnose").send({ ...coldGreenSand, alloy: "Unobtainium" });
     expect(alloy.status).toBe(400);
     expect(alloy.body.error.fields.alloy).toMatch(/A356\.0/);
     expect(alloy.body.error.fields.alloy).toMatch(/Shop Bronze 7/);
     // The shop's own alloy is read from the table: its liquidus makes the superheat.
-    const own = await caster.agent.post("/api/diagnose").send({ ...coldGreenSand, alloy: "shop bronze 7", pourTempC: 1050 });
+    const own = await caster.agent
+      .post("/api/diagnose")
+      .send({ ...coldGreenSand, alloy: "shop bronze 7", pourTempC: 1050 });
     expect(own.status).toBe(200);
     expect(own.body.facts.superheatC).toBe(50);
   });
@@ -57,7 +69,9 @@ describe("POST /api/castings/:id/diagnosis", () => {
   it("diagnoses a stored cold lost-foam misrun, keeps the snapshot and shows it on the casting", async () => {
     const { caster, mentor } = await shopWithCrew("Snapshot Shop");
     const melt = await newMelt(caster);
-    const casting = await newCasting(caster, melt.id, { marks: [{ type: "misrun", location: "far-from-gate", severity: 3 }] });
+    const casting = await newCasting(caster, melt.id, {
+      marks: [{ type: "misrun", location: "far-from-gate", severity: 3 }],
+    });
     const res = await caster.agent.post(`/api/castings/${casting.id}/diagnosis`);
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ ruleSetVersion: BUILT_IN_RULE_SET.version, createdBy: { id: caster.userId } });
@@ -75,7 +89,9 @@ describe("POST /api/castings/:id/diagnosis", () => {
     const none = await a.caster.agent.post(`/api/castings/${bare.id}/diagnosis`);
     expect(none.status).toBe(400);
     expect(none.body.error.message).toMatch(/mark at least one defect first/i);
-    const marked = await newCasting(b.caster, (await newMelt(b.caster)).id, { marks: [{ type: "misrun", location: "top", severity: 2 }] });
+    const marked = await newCasting(b.caster, (await newMelt(b.caster)).id, {
+      marks: [{ type: "misrun", location: "top", severity: 2 }],
+    });
     expect((await a.owner.agent.post(`/api/castings/${marked.id}/diagnosis`)).status).toBe(404);
     expect((await request(app).post(`/api/castings/${marked.id}/diagnosis`)).status).toBe(401);
     const stored = await db.select().from(diagnosisSnapshots).where(eq(diagnosisSnapshots.shopId, a.shopId));

@@ -8,7 +8,8 @@ beforeAll(migrateOnce);
 /** RFC 4180 reading, enough for the test: quoted fields, doubled quotes, CRLF or LF. */
 function parseCsv(text: string): string[][] {
   const rows: string[][] = [[]];
-  let field = "", quoted = false;
+  let field = "",
+    quoted = false;
   for (let i = 0; i < text.length; i++) {
     const ch = text[i];
     if (quoted) {
@@ -40,7 +41,8 @@ describe("CSV export", () => {
     await newCasting(other.caster, (await newMelt(other.caster)).id, { partName: "Not ours" });
     const melt = await newMelt(caster);
     const plate = await newCasting(caster, melt.id, {
-      notes: "=HYPERLINK(\"http://example.invalid\")", marks: [{ type: "misrun", location: "far-from-gate", severity: 3 }],
+      notes: '=HYPERLINK("http://example.invalid")',
+      marks: [{ type: "misrun", location: "far-from-gate", severity: 3 }],
     });
     await newCasting(caster, melt.id, { partName: "Bracket, left", outcome: "good" });
     await caster.agent.post(`/api/castings/${plate.id}/diagnosis`);
@@ -54,9 +56,17 @@ describe("CSV export", () => {
     const row = rows.find((r) => r.casting_id === String(plate.id))!;
     // A356.0 liquidus 615 °C ([mem] ASM Vol. 2): 700 °C pour is 85 °C of superheat.
     expect(row).toMatchObject({
-      alloy: "A356.0", process: "lost-foam", pour_temp_c: "700", superheat_c: "85", humidity_pct: "45",
-      coating_dried: "yes", min_section_mm: "4", riser: "no", outcome: "scrap",
-      marks: "misrun at far-from-gate (severity 3)", photo_count: "0",
+      alloy: "A356.0",
+      process: "lost-foam",
+      pour_temp_c: "700",
+      superheat_c: "85",
+      humidity_pct: "45",
+      coating_dried: "yes",
+      min_section_mm: "4",
+      riser: "no",
+      outcome: "scrap",
+      marks: "misrun at far-from-gate (severity 3)",
+      photo_count: "0",
     });
     expect(row.likely_cause).not.toBe("");
     // A formula typed into a note stays text in a spreadsheet.

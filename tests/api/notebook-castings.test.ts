@@ -19,13 +19,28 @@ describe("castings of a melt", () => {
     const melt = await newMelt(caster);
     const res = await caster.agent.post(`/api/melts/${melt.id}/castings`).send({ ...thinPlate, marks: twoMarks });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ partName: "Ribbed cover plate", meltId: melt.id, minSectionMm: 4, outcome: "scrap" });
+    expect(res.body).toMatchObject({
+      partName: "Ribbed cover plate",
+      meltId: melt.id,
+      minSectionMm: 4,
+      outcome: "scrap",
+    });
     const detail = await mentor.agent.get(`/api/castings/${res.body.id}`);
     expect(detail.status).toBe(200);
-    expect(detail.body).toMatchObject({ melt: { id: melt.id, alloy: "A356.0" }, photos: [], comments: [], diagnosis: null });
+    expect(detail.body).toMatchObject({
+      melt: { id: melt.id, alloy: "A356.0" },
+      photos: [],
+      comments: [],
+      diagnosis: null,
+    });
     expect(detail.body.marks.map((m: { type: string }) => m.type)).toEqual(["misrun", "cold-shut"]);
     const meltPage = await caster.agent.get(`/api/melts/${melt.id}`);
-    expect(meltPage.body.castings[0]).toMatchObject({ id: res.body.id, markCount: 2, defectTypes: ["misrun", "cold-shut"], thumbUrl: null });
+    expect(meltPage.body.castings[0]).toMatchObject({
+      id: res.body.id,
+      markCount: 2,
+      defectTypes: ["misrun", "cold-shut"],
+      thumbUrl: null,
+    });
     await newCasting(caster, melt.id, { partName: "Bracket", outcome: "good" });
     const list = await caster.agent.get("/api/castings?sort=part&pageSize=1");
     expect(list.body).toMatchObject({ total: 2, page: 1, pageSize: 1 });
@@ -39,7 +54,10 @@ describe("castings of a melt", () => {
     const melt = await newMelt(caster);
     const before = await shopCounts(shopId);
     const res = await caster.agent.post(`/api/melts/${melt.id}/castings`).send({
-      ...thinPlate, minSectionMm: 20, maxSectionMm: 8, sprueHeightMm: -5,
+      ...thinPlate,
+      minSectionMm: 20,
+      maxSectionMm: 8,
+      sprueHeightMm: -5,
       marks: [twoMarks[0], { type: "spaghetti", location: "top", severity: 9 }],
     });
     expect(res.status).toBe(400);
@@ -56,7 +74,14 @@ describe("castings of a melt", () => {
     const melt = await newMelt(caster);
     const member = { shopId, userId: caster.userId, userName: "Rollback caster", role: "caster" as const };
     // Past the zod checks on purpose: the database's own severity check refuses the second mark.
-    const input = { ...thinPlate, partName: "Half-stored part", marks: [{ type: "misrun", location: "top", severity: 2 }, { type: "misrun", location: "top", severity: 7 }] };
+    const input = {
+      ...thinPlate,
+      partName: "Half-stored part",
+      marks: [
+        { type: "misrun", location: "top", severity: 2 },
+        { type: "misrun", location: "top", severity: 7 },
+      ],
+    };
     await expect(createCasting(member, melt.id, input as never)).rejects.toThrow();
     expect(await db.select().from(castings).where(eq(castings.partName, "Half-stored part"))).toHaveLength(0);
     expect((await shopCounts(shopId)).marks).toBe(0);
@@ -65,14 +90,19 @@ describe("castings of a melt", () => {
   it("patches a casting and refuses a thinnest section thicker than the stored thickest", async () => {
     const { caster } = await shopWithCrew("Patch Casting Shop");
     const c = await newCasting(caster, (await newMelt(caster)).id);
-    const ok = await caster.agent.patch(`/api/castings/${c.id}`).send({ outcome: "rework", hasRiser: true, notes: null });
+    const ok = await caster.agent
+      .patch(`/api/castings/${c.id}`)
+      .send({ outcome: "rework", hasRiser: true, notes: null });
     expect(ok.body).toMatchObject({ outcome: "rework", hasRiser: true, notes: null, partName: "Ribbed cover plate" });
     const bad = await caster.agent.patch(`/api/castings/${c.id}`).send({ minSectionMm: 30 });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields.minSectionMm).toMatch(/thicker/);
     const outcome = await caster.agent.patch(`/api/castings/${c.id}`).send({ outcome: "melted" });
     expect(outcome.body.error.fields.outcome).toBeDefined();
-    expect((await caster.agent.get(`/api/castings/${c.id}`)).body).toMatchObject({ minSectionMm: 4, outcome: "rework" });
+    expect((await caster.agent.get(`/api/castings/${c.id}`)).body).toMatchObject({
+      minSectionMm: 4,
+      outcome: "rework",
+    });
   });
 
   it("hides another shop's melts and castings (404) and their lists", async () => {
@@ -93,10 +123,14 @@ describe("marks and comments", () => {
   it("adds, moves, edits and removes a mark without a photo", async () => {
     const { caster, mentor } = await shopWithCrew("Mark Shop");
     const c = await newCasting(caster, (await newMelt(caster)).id);
-    const add = await caster.agent.post(`/api/castings/${c.id}/marks`).send({ type: "gas-porosity", location: "top", severity: 1 });
+    const add = await caster.agent
+      .post(`/api/castings/${c.id}/marks`)
+      .send({ type: "gas-porosity", location: "top", severity: 1 });
     expect(add.status).toBe(201);
     expect(add.body).toMatchObject({ castingId: c.id, photoId: null, x: null, severity: 1 });
-    const edit = await mentor.agent.patch(`/api/marks/${add.body.id}`).send({ severity: 3, note: "pinholes under the skin" });
+    const edit = await mentor.agent
+      .patch(`/api/marks/${add.body.id}`)
+      .send({ severity: 3, note: "pinholes under the skin" });
     expect(edit.body).toMatchObject({ severity: 3, note: "pinholes under the skin", type: "gas-porosity" });
     const bad = await caster.agent.patch(`/api/marks/${add.body.id}`).send({ x: 0.4, y: 0.5 });
     expect(bad.status).toBe(400);
@@ -110,13 +144,22 @@ describe("marks and comments", () => {
     const a = await shopWithCrew("Mark Shop A");
     const b = await shopWithCrew("Mark Shop B");
     const c = await newCasting(b.caster, (await newMelt(b.caster)).id);
-    const bad = await b.caster.agent.post(`/api/castings/${c.id}/marks`).send({ type: "misrun", location: "inside", severity: 0, photoId: 999999 });
+    const bad = await b.caster.agent
+      .post(`/api/castings/${c.id}/marks`)
+      .send({ type: "misrun", location: "inside", severity: 0, photoId: 999999 });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(["location", "severity", "x", "y"]));
-    const onStranger = await b.caster.agent.post(`/api/castings/${c.id}/marks`).send({ type: "misrun", location: "top", severity: 2, photoId: 999999, x: 0.5, y: 0.5 });
+    const onStranger = await b.caster.agent
+      .post(`/api/castings/${c.id}/marks`)
+      .send({ type: "misrun", location: "top", severity: 2, photoId: 999999, x: 0.5, y: 0.5 });
     expect(onStranger.body.error.fields.photoId).toMatch(/not a photo/);
-    const mark = await b.caster.agent.post(`/api/castings/${c.id}/marks`).send({ type: "misrun", location: "top", severity: 2 });
-    expect((await a.caster.agent.post(`/api/castings/${c.id}/marks`).send({ type: "misrun", location: "top", severity: 2 })).status).toBe(404);
+    const mark = await b.caster.agent
+      .post(`/api/castings/${c.id}/marks`)
+      .send({ type: "misrun", location: "top", severity: 2 });
+    expect(
+      (await a.caster.agent.post(`/api/castings/${c.id}/marks`).send({ type: "misrun", location: "top", severity: 2 }))
+        .status,
+    ).toBe(404);
     expect((await a.caster.agent.patch(`/api/marks/${mark.body.id}`).send({ severity: 1 })).status).toBe(404);
     expect((await a.owner.agent.delete(`/api/marks/${mark.body.id}`)).status).toBe(404);
     expect((await shopCounts(b.shopId)).marks).toBe(1);
@@ -126,14 +169,21 @@ describe("marks and comments", () => {
     const a = await shopWithCrew("Comment Shop");
     const b = await shopWithCrew("Comment Shop B");
     const c = await newCasting(a.caster, (await newMelt(a.caster)).id);
-    const one = await a.caster.agent.post(`/api/castings/${c.id}/comments`).send({ body: "Pot sat 3 minutes before the pour." });
+    const one = await a.caster.agent
+      .post(`/api/castings/${c.id}/comments`)
+      .send({ body: "Pot sat 3 minutes before the pour." });
     expect(one.status).toBe(201);
-    await a.mentor.agent.post(`/api/castings/${c.id}/comments`).send({ body: "Then the cold pour fits. Preheat the ladle." });
+    await a.mentor.agent
+      .post(`/api/castings/${c.id}/comments`)
+      .send({ body: "Then the cold pour fits. Preheat the ladle." });
     const empty = await a.caster.agent.post(`/api/castings/${c.id}/comments`).send({ body: "   " });
     expect(empty.status).toBe(400);
     expect(empty.body.error.fields.body).toBeDefined();
     expect((await b.owner.agent.post(`/api/castings/${c.id}/comments`).send({ body: "hello" })).status).toBe(404);
     const detail = await a.owner.agent.get(`/api/castings/${c.id}`);
-    expect(detail.body.comments.map((x: { createdBy: { id: string } }) => x.createdBy.id)).toEqual([a.caster.userId, a.mentor.userId]);
+    expect(detail.body.comments.map((x: { createdBy: { id: string } }) => x.createdBy.id)).toEqual([
+      a.caster.userId,
+      a.mentor.userId,
+    ]);
   });
 });

@@ -11,7 +11,11 @@ afterAll(() => rmSync(env.UPLOAD_DIR, { recursive: true, force: true }));
 describe("the demo notebook", () => {
   it("fills a shop with a dozen melts, about thirty castings, drawn photos, marks and diagnoses", async () => {
     const { shopId, owner, mentor, caster } = await shopWithCrew("Demo Notebook Shop");
-    const crew = { owner: { id: owner.userId, name: "Owner" }, mentor: { id: mentor.userId, name: "Mentor" }, caster: { id: caster.userId, name: "Caster" } };
+    const crew = {
+      owner: { id: owner.userId, name: "Owner" },
+      mentor: { id: mentor.userId, name: "Mentor" },
+      caster: { id: caster.userId, name: "Caster" },
+    };
     await seedDemoNotebook(shopId, crew);
 
     const melts = await caster.agent.get("/api/melts?pageSize=100");
@@ -25,12 +29,15 @@ describe("the demo notebook", () => {
     expect(withPhoto.length).toBeGreaterThanOrEqual(6);
     expect((await caster.agent.get(withPhoto[0].thumbUrl!)).headers["content-type"]).toBe("image/jpeg");
 
-    const details: CastingDetail[] = await Promise.all(list.items.map(async (c) => (await caster.agent.get(`/api/castings/${c.id}`)).body));
+    const details: CastingDetail[] = await Promise.all(
+      list.items.map(async (c) => (await caster.agent.get(`/api/castings/${c.id}`)).body),
+    );
     const diagnosed = details.filter((d) => d.diagnosis);
     expect(diagnosed.length).toBeGreaterThanOrEqual(4);
     // The demo's pour conditions point where foundry practice says they do.
     const topCause = (part: string, process: string) =>
-      details.find((d) => d.partName === part && d.melt.process === process && d.diagnosis)?.diagnosis?.result.causes[0].id;
+      details.find((d) => d.partName === part && d.melt.process === process && d.diagnosis)?.diagnosis?.result.causes[0]
+        .id;
     expect(topCause("Valve body", "green-sand")).toBe("hydrogen-pickup"); // humid day, mixed scrap, no degassing
     expect(topCause("Bench block", "no-bake-sand")).toBe("insufficient-feeding"); // 60 mm section, no riser
     const pinned = details.flatMap((d) => d.marks).filter((m) => m.photoId !== null);

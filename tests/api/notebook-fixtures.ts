@@ -10,15 +10,39 @@ import type { Person } from "./helpers";
  * below the roughly 730-790 °C lost foam usually needs [mem], into 4 mm walls.
  */
 export const coldLostFoamMelt: MeltInput = {
-  pouredOn: "2026-01-14", alloy: "A356.0", process: "lost-foam", charge: "ingot", furnace: "Propane pot #2",
-  meltTempC: 720, pourTempC: 700, degassing: "argon-lance", degasMinutes: 6, fluxed: true, skimmed: true,
-  ambientTempC: 4, humidityPct: 45, sandMoisturePct: 0, coatingApplied: true, coatingDried: true, coatingCoats: 1,
-  foamDensityKgM3: 20, notes: "Cold shop; pot cooled while the flask was carried over",
+  pouredOn: "2026-01-14",
+  alloy: "A356.0",
+  process: "lost-foam",
+  charge: "ingot",
+  furnace: "Propane pot #2",
+  meltTempC: 720,
+  pourTempC: 700,
+  degassing: "argon-lance",
+  degasMinutes: 6,
+  fluxed: true,
+  skimmed: true,
+  ambientTempC: 4,
+  humidityPct: 45,
+  sandMoisturePct: 0,
+  coatingApplied: true,
+  coatingDried: true,
+  coatingCoats: 1,
+  foamDensityKgM3: 20,
+  notes: "Cold shop; pot cooled while the flask was carried over",
 };
 
 export const thinPlate: CastingInput = {
-  partName: "Ribbed cover plate", pattern: "Foam P-12", minSectionMm: 4, maxSectionMm: 12, sprueHeightMm: 200,
-  pourTimeS: 6, hasRiser: false, hasOverflow: false, hasVents: false, orientation: "ribs up", outcome: "scrap",
+  partName: "Ribbed cover plate",
+  pattern: "Foam P-12",
+  minSectionMm: 4,
+  maxSectionMm: 12,
+  sprueHeightMm: 200,
+  pourTimeS: 6,
+  hasRiser: false,
+  hasOverflow: false,
+  hasVents: false,
+  orientation: "ribs up",
+  outcome: "scrap",
   notes: "Far corner of the ribs never filled",
 };
 
@@ -31,7 +55,11 @@ export async function newMelt(p: Person, input: Partial<MeltInput> = {}) {
 /** Marks as plain JSON (the tests also send values the API must refuse). */
 type LooseMark = { type: string; location: string; severity: number; note?: string };
 
-export async function newCasting(p: Person, meltId: number, input: Partial<Omit<CastingInput, "marks">> & { marks?: LooseMark[] } = {}) {
+export async function newCasting(
+  p: Person,
+  meltId: number,
+  input: Partial<Omit<CastingInput, "marks">> & { marks?: LooseMark[] } = {},
+) {
   const res = await p.agent.post(`/api/melts/${meltId}/castings`).send({ ...thinPlate, ...input });
   if (res.status !== 201) throw new Error(`casting: ${res.status} ${res.text}`);
   return res.body as { id: number };

@@ -27,7 +27,12 @@ describe("melts", () => {
   it("refuses impossible values field by field and stores nothing", async () => {
     const { shopId, caster } = await shopWithCrew("Bad Melt Shop");
     const bad = await caster.agent.post("/api/melts").send({
-      ...coldLostFoamMelt, pourTempC: 1450, humidityPct: 120, degasMinutes: -3, sandMoisturePct: -1, process: "sandcastle",
+      ...coldLostFoamMelt,
+      pourTempC: 1450,
+      humidityPct: 120,
+      degasMinutes: -3,
+      sandMoisturePct: -1,
+      process: "sandcastle",
     });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(
@@ -83,7 +88,11 @@ describe("melts", () => {
     await owner.agent.patch("/api/shop/settings").send({ defaultAlloy: "319.0", defaultProcess: "green-sand" });
     expect((await caster.agent.get("/api/melts/defaults")).body).toEqual({ alloy: "319.0", process: "green-sand" });
     await newMelt(caster, { alloy: "A356.0", furnace: "Crucible B" });
-    expect((await caster.agent.get("/api/melts/defaults")).body).toEqual({ alloy: "A356.0", process: "green-sand", furnace: "Crucible B" });
+    expect((await caster.agent.get("/api/melts/defaults")).body).toEqual({
+      alloy: "A356.0",
+      process: "green-sand",
+      furnace: "Crucible B",
+    });
   });
 
   it("hides another shop's melts and refuses strangers", async () => {

@@ -46,7 +46,12 @@ describe("photo uploads", () => {
     const res = await caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", original, "IMG_0042.jpg");
     expect(res.status).toBe(201);
     // EXIF orientation 6 means the camera was turned: stored upright, 400 wide and 600 high.
-    expect(res.body).toMatchObject({ castingId: casting.id, width: 400, height: 600, imageUrl: `/api/photos/${res.body.id}/image` });
+    expect(res.body).toMatchObject({
+      castingId: casting.id,
+      width: 400,
+      height: 600,
+      imageUrl: `/api/photos/${res.body.id}/image`,
+    });
     const image = await mentor.agent.get(res.body.imageUrl).buffer(true);
     expect(image.status).toBe(200);
     expect(image.headers["content-type"]).toBe("image/jpeg");
@@ -68,9 +73,16 @@ describe("photo uploads", () => {
   it("accepts PNG and WebP by their content and re-encodes them as JPEG", async () => {
     const { caster } = await shopWithCrew("Png Shop");
     const casting = await castingOf(caster);
-    const png = await sharp({ create: { width: 50, height: 40, channels: 4, background: "#c33" } }).png().toBuffer();
-    const webp = await sharp({ create: { width: 50, height: 40, channels: 3, background: "#3c3" } }).webp().toBuffer();
-    for (const [buf, name] of [[png, "scan.dat"], [webp, "shot.webp"]] as const) {
+    const png = await sharp({ create: { width: 50, height: 40, channels: 4, background: "#c33" } })
+      .png()
+      .toBuffer();
+    const webp = await sharp({ create: { width: 50, height: 40, channels: 3, background: "#3c3" } })
+      .webp()
+      .toBuffer();
+    for (const [buf, name] of [
+      [png, "scan.dat"],
+      [webp, "shot.webp"],
+    ] as const) {
       const res = await caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", buf, name);
       expect(res.status).toBe(201);
       const img = await caster.agent.get(res.body.imageUrl).buffer(true);
@@ -84,18 +96,30 @@ describe("photo uploads", () => {
     const { caster } = await shopWithCrew("Text Photo Shop");
     const casting = await castingOf(caster);
     const before = filesInUploads();
-    const res = await caster.agent.post(`/api/castings/${casting.id}/photos`)
-      .attach("photo", Buffer.from("pour log: 14 Jan, 700 C, misrun\n".repeat(50)), { filename: "casting.jpg", contentType: "image/jpeg" });
+    const res = await caster.agent
+      .post(`/api/castings/${casting.id}/photos`)
+      .attach("photo", Buffer.from("pour log: 14 Jan, 700 C, misrun\n".repeat(50)), {
+        filename: "casting.jpg",
+        contentType: "image/jpeg",
+      });
     expect(res.status).toBe(415);
     expect(res.body.error.message).toMatch(/JPEG/);
     // A damaged JPEG (right magic bytes, nothing after) is refused the same way.
-    const broken = await caster.agent.post(`/api/castings/${casting.id}/photos`)
+    const broken = await caster.agent
+      .post(`/api/castings/${casting.id}/photos`)
       .attach("photo", Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0, 16, 0x4a, 0x46, 0x49, 0x46, 0]), "broken.jpg");
     expect(broken.status).toBe(415);
     // HEIC is accepted by content, but sharp's prebuilt libvips has no HEVC decoder: 415 saying so.
-    const box = (type: string, body: Buffer) => Buffer.concat([Buffer.from([0, 0, 0, 8 + body.length]), Buffer.from(type, "latin1"), body]);
-    const heic = Buffer.concat([box("ftyp", Buffer.from("heic\0\0\0\0mif1heic", "latin1")), box("meta", Buffer.alloc(64)), Buffer.alloc(256, 1)]);
-    const heicRes = await caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", heic, "IMG_0001.HEIC");
+    const box = (type: string, body: Buffer) =>
+      Buffer.concat([Buffer.from([0, 0, 0, 8 + body.length]), Buffer.from(type, "latin1"), body]);
+    const heic = Buffer.concat([
+      box("ftyp", Buffer.from("heic\0\0\0\0mif1heic", "latin1")),
+      box("meta", Buffer.alloc(64)),
+      Buffer.alloc(256, 1),
+    ]);
+    const heicRes = await caster.agent
+      .post(`/api/castings/${casting.id}/photos`)
+      .attach("photo", heic, "IMG_0001.HEIC");
     expect(heicRes.status).toBe(415);
     expect(heicRes.body.error.message).toMatch(/HEIC/);
     const none = await caster.agent.post(`/api/castings/${casting.id}/photos`).field("note", "no file");
@@ -120,7 +144,9 @@ describe("photo uploads", () => {
   it("leaves nothing behind when the upload is cut off midway", async () => {
     const { caster } = await shopWithCrew("Aborted Photo Shop");
     const casting = await castingOf(caster);
-    const signIn = await request(app).post("/api/auth/sign-in/email").set("Origin", ORIGIN)
+    const signIn = await request(app)
+      .post("/api/auth/sign-in/email")
+      .set("Origin", ORIGIN)
       .send({ email: caster.email, password: caster.password });
     const cookie = (signIn.headers["set-cookie"] as unknown as string[]).map((c) => c.split(";")[0]).join("; ");
     const before = filesInUploads();
@@ -131,7 +157,10 @@ describe("photo uploads", () => {
     const head = `--${boundary}\r\nContent-Disposition: form-data; name="photo"; filename="a.jpg"\r\nContent-Type: image/jpeg\r\n\r\n`;
     const closed = new Promise<void>((resolve) => {
       const req = http.request({
-        host: "127.0.0.1", port, method: "POST", path: `/api/castings/${casting.id}/photos`,
+        host: "127.0.0.1",
+        port,
+        method: "POST",
+        path: `/api/castings/${casting.id}/photos`,
         headers: { cookie, "content-type": `multipart/form-data; boundary=${boundary}`, "content-length": 5_000_000 },
       });
       req.on("error", () => resolve());
@@ -164,13 +193,21 @@ describe("photos belong to their shop", () => {
     const b = await shopWithCrew("Pin Shop B");
     const casting = await castingOf(a.caster);
     const other = await castingOf(a.caster);
-    const photo = (await a.caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", await phoneJpeg(), "p.jpg")).body;
-    const pin = await a.caster.agent.post(`/api/castings/${casting.id}/marks`).send({ type: "misrun", location: "corner", severity: 3, photoId: photo.id, x: 0.8, y: 0.1 });
+    const photo = (
+      await a.caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", await phoneJpeg(), "p.jpg")
+    ).body;
+    const pin = await a.caster.agent
+      .post(`/api/castings/${casting.id}/marks`)
+      .send({ type: "misrun", location: "corner", severity: 3, photoId: photo.id, x: 0.8, y: 0.1 });
     expect(pin.status).toBe(201);
-    await a.caster.agent.post(`/api/castings/${casting.id}/marks`).send({ type: "cold-shut", location: "side", severity: 1, photoId: photo.id, x: 0.2, y: 0.5 });
+    await a.caster.agent
+      .post(`/api/castings/${casting.id}/marks`)
+      .send({ type: "cold-shut", location: "side", severity: 1, photoId: photo.id, x: 0.2, y: 0.5 });
     const moved = await a.caster.agent.patch(`/api/marks/${pin.body.id}`).send({ x: 0.75, y: 0.15 });
     expect(moved.body).toMatchObject({ x: 0.75, y: 0.15, photoId: photo.id });
-    const wrongPhoto = await a.caster.agent.post(`/api/castings/${other.id}/marks`).send({ type: "misrun", location: "top", severity: 2, photoId: photo.id, x: 0.5, y: 0.5 });
+    const wrongPhoto = await a.caster.agent
+      .post(`/api/castings/${other.id}/marks`)
+      .send({ type: "misrun", location: "top", severity: 2, photoId: photo.id, x: 0.5, y: 0.5 });
     expect(wrongPhoto.status).toBe(400);
     const outside = await a.caster.agent.patch(`/api/marks/${pin.body.id}`).send({ x: 1.4 });
     expect(outside.body.error.fields.x).toBeDefined();
@@ -178,10 +215,15 @@ describe("photos belong to their shop", () => {
     expect((await b.owner.agent.get(photo.imageUrl)).status).toBe(404);
     expect((await b.owner.agent.get(photo.thumbUrl)).status).toBe(404);
     expect((await request(app).get(photo.imageUrl)).status).toBe(401);
-    expect((await b.caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", await phoneJpeg(), "x.jpg")).status).toBe(404);
+    expect(
+      (await b.caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", await phoneJpeg(), "x.jpg"))
+        .status,
+    ).toBe(404);
     expect((await b.owner.agent.delete(`/api/photos/${photo.id}`)).status).toBe(404);
     const loner = await signUp("photo-loner");
-    expect((await loner.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", await phoneJpeg(), "x.jpg")).status).toBe(403);
+    expect(
+      (await loner.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", await phoneJpeg(), "x.jpg")).status,
+    ).toBe(403);
 
     const [row] = await photoRows(casting.id);
     expect(filesInUploads()).toEqual(expect.arrayContaining([row.fileName, row.thumbName]));
@@ -190,7 +232,10 @@ describe("photos belong to their shop", () => {
     expect(filesInUploads()).not.toContain(row.thumbName);
     const detail = await a.caster.agent.get(`/api/castings/${casting.id}`);
     expect(detail.body.photos).toHaveLength(0);
-    expect(detail.body.marks.map((m: { photoId: number | null; x: number | null }) => [m.photoId, m.x])).toEqual([[null, null], [null, null]]);
+    expect(detail.body.marks.map((m: { photoId: number | null; x: number | null }) => [m.photoId, m.x])).toEqual([
+      [null, null],
+      [null, null],
+    ]);
     expect((await a.caster.agent.get(photo.imageUrl)).status).toBe(404);
   });
 });

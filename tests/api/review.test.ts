@@ -18,9 +18,14 @@ describe("review: asking, the queue and confirming a cause", () => {
     const second = await newCasting(caster, melt.id, { partName: "Second plate", marks: misrun });
     await caster.agent.post(`/api/castings/${first.id}/diagnosis`);
 
-    const asked = await caster.agent.post(`/api/castings/${first.id}/review-requests`).send({ note: "Corner never filled" });
+    const asked = await caster.agent
+      .post(`/api/castings/${first.id}/review-requests`)
+      .send({ note: "Corner never filled" });
     expect(asked.status).toBe(201);
-    expect((asked.body as CaseReview).waiting).toMatchObject({ note: "Corner never filled", createdBy: { id: caster.userId } });
+    expect((asked.body as CaseReview).waiting).toMatchObject({
+      note: "Corner never filled",
+      createdBy: { id: caster.userId },
+    });
     // Asking again while it waits keeps one request.
     expect((await caster.agent.post(`/api/castings/${first.id}/review-requests`).send({})).status).toBe(200);
     expect((await mentor.agent.post(`/api/castings/${second.id}/review-requests`).send({})).status).toBe(201);
@@ -28,21 +33,36 @@ describe("review: asking, the queue and confirming a cause", () => {
     expect((await caster.agent.get("/api/review/queue")).status).toBe(403);
     const queue = (await mentor.agent.get("/api/review/queue")).body.items as QueueItem[];
     expect(queue.map((q) => q.castingId)).toEqual([first.id, second.id]);
-    expect(queue[0]).toMatchObject({ partName: "Ribbed cover plate", defectTypes: ["misrun"], askedBy: { id: caster.userId }, topCause: { id: "cold-pour" } });
+    expect(queue[0]).toMatchObject({
+      partName: "Ribbed cover plate",
+      defectTypes: ["misrun"],
+      askedBy: { id: caster.userId },
+      topCause: { id: "cold-pour" },
+    });
     expect(queue[1].topCause).toBeNull(); // never diagnosed
 
     const denied = await caster.agent.post(`/api/castings/${first.id}/confirmations`).send({ causeId: "cold-pour" });
     expect(denied.status).toBe(403);
-    const ok = await mentor.agent.post(`/api/castings/${first.id}/confirmations`).send({ causeId: "cold-pour", note: "Pot sat too long" });
+    const ok = await mentor.agent
+      .post(`/api/castings/${first.id}/confirmations`)
+      .send({ causeId: "cold-pour", note: "Pot sat too long" });
     expect(ok.status).toBe(201);
     const review = ok.body as CaseReview;
     expect(review.waiting).toBeNull();
-    expect(review.current).toMatchObject({ causeId: "cold-pour", note: "Pot sat too long", createdBy: { id: mentor.userId } });
+    expect(review.current).toMatchObject({
+      causeId: "cold-pour",
+      note: "Pot sat too long",
+      createdBy: { id: mentor.userId },
+    });
     expect(review.current?.causeTitle).toMatch(/cold/i);
-    expect(((await owner.agent.get("/api/review/queue")).body.items as QueueItem[]).map((q) => q.castingId)).toEqual([second.id]);
+    expect(((await owner.agent.get("/api/review/queue")).body.items as QueueItem[]).map((q) => q.castingId)).toEqual([
+      second.id,
+    ]);
 
     // A cause the rulebook lacks, in words; the newest confirmation is the one that counts.
-    const other = await owner.agent.post(`/api/castings/${first.id}/confirmations`).send({ causeText: "Ladle lip froze over", note: "Found a skull in the ladle" });
+    const other = await owner.agent
+      .post(`/api/castings/${first.id}/confirmations`)
+      .send({ causeText: "Ladle lip froze over", note: "Found a skull in the ladle" });
     expect(other.body.current).toMatchObject({ causeId: null, causeTitle: "Ladle lip froze over" });
     const read = (await caster.agent.get(`/api/castings/${first.id}/review`)).body as CaseReview;
     expect(read.confirmations.map((c) => c.causeTitle)).toEqual(["Ladle lip froze over", review.current!.causeTitle]);
@@ -55,7 +75,9 @@ describe("review: asking, the queue and confirming a cause", () => {
     const none = await mentor.agent.post(`/api/castings/${c.id}/confirmations`).send({ note: "hm" });
     expect(none.status).toBe(400);
     expect(none.body.error.fields.causeId).toMatch(/choose a cause/);
-    const both = await mentor.agent.post(`/api/castings/${c.id}/confirmations`).send({ causeId: "cold-pour", causeText: "also this" });
+    const both = await mentor.agent
+      .post(`/api/castings/${c.id}/confirmations`)
+      .send({ causeId: "cold-pour", causeText: "also this" });
     expect(both.body.error.fields.causeText).toBeDefined();
     const unknown = await mentor.agent.post(`/api/castings/${c.id}/confirmations`).send({ causeId: "gremlins" });
     expect(unknown.status).toBe(400);
@@ -83,7 +105,7 @@ describe("review: asking, the queue and confirming a cause", () => {
       a.mentor.agent.get("/api/castings/not-a-number/review"),
     ]))
       expect(res.status).toBe(404);
-    expect(((await a.mentor.agent.get("/api/review/queue")).body.items as QueueItem[])).toEqual([]);
+    expect((await a.mentor.agent.get("/api/review/queue")).body.items as QueueItem[]).toEqual([]);
   });
 });
 
@@ -123,14 +145,20 @@ describe("fixes tried and the next casting", () => {
 
     const first = await caster.agent.post(`/api/castings/${a.id}/fixes`).send({ fix: "Pour 60 °C hotter" });
     expect(first.status).toBe(201);
-    const linked = await caster.agent.patch(`/api/fixes/${first.body.id}`).send({ nextCastingId: b.id, worked: "partly" });
+    const linked = await caster.agent
+      .patch(`/api/fixes/${first.body.id}`)
+      .send({ nextCastingId: b.id, worked: "partly" });
     expect(linked.status).toBe(200);
     expect(linked.body).toMatchObject({ next: { id: b.id, outcome: "rework" }, worked: "partly" });
-    await caster.agent.post(`/api/castings/${b.id}/fixes`).send({ fix: "Add an overflow at the far corner", nextCastingId: c.id, worked: "yes" });
+    await caster.agent
+      .post(`/api/castings/${b.id}/fixes`)
+      .send({ fix: "Add an overflow at the far corner", nextCastingId: c.id, worked: "yes" });
 
     const mid = (await caster.agent.get(`/api/castings/${b.id}/followups`)).body as Followups;
     expect(mid.chain.map((l) => [l.casting.id, l.current, l.fixes.map((f) => f.worked)])).toEqual([
-      [a.id, false, ["partly"]], [b.id, true, ["yes"]], [c.id, false, []],
+      [a.id, false, ["partly"]],
+      [b.id, true, ["yes"]],
+      [c.id, false, []],
     ]);
     expect((await caster.agent.patch(`/api/fixes/${first.body.id}`).send({ nextCastingId: null })).status).toBe(400); // still marked
   });

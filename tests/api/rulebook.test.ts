@@ -11,16 +11,23 @@ beforeAll(migrateOnce);
 
 /** Flash on a part poured through a tall sprue: the metal's head lifts a cope that was not weighted. */
 const draft: RuleDraft = {
-  defectTypes: ["flash"], locations: [],
+  defectTypes: ["flash"],
+  locations: [],
   conditions: [{ fact: "sprueHeightMm", comparison: "above", value: 250 }],
   cause: { kind: "new", title: "Cope lifted by the metal's head", fixes: ["Weight or clamp the cope before pouring"] },
-  weight: 0.9, because: "A {sprueHeightMm} mm sprue pushes hard on the cope", sources: ["shop experience"],
+  weight: 0.9,
+  because: "A {sprueHeightMm} mm sprue pushes hard on the cope",
+  sources: ["shop experience"],
 };
 const greenSand = { process: "green-sand" as const, pourTempC: 720, meltTempC: 740 };
 
 async function flashCasting(p: Person, sprueHeightMm = 300, pouredOn = "2026-02-02") {
   const melt = await newMelt(p, { ...greenSand, pouredOn });
-  return newCasting(p, melt.id, { partName: "Gear blank", sprueHeightMm, marks: [{ type: "flash", location: "side", severity: 2 }] });
+  return newCasting(p, melt.id, {
+    partName: "Gear blank",
+    sprueHeightMm,
+    marks: [{ type: "flash", location: "side", severity: 2 }],
+  });
 }
 const causesOf = async (p: Person, castingId: number) => {
   const res = await p.agent.post(`/api/castings/${castingId}/diagnosis`);
@@ -35,7 +42,13 @@ describe("the rulebook's routes and roles", () => {
     const list = await caster.agent.get("/api/rulebook");
     expect(list.status).toBe(200);
     expect(list.body.rules.length).toBeGreaterThan(100);
-    expect(list.body.rules[0]).toMatchObject({ source: "built-in", status: "built-in", inUse: true, record: null, factor: 1 });
+    expect(list.body.rules[0]).toMatchObject({
+      source: "built-in",
+      status: "built-in",
+      inUse: true,
+      record: null,
+      factor: 1,
+    });
     expect((await caster.agent.get(`/api/rulebook/rules/${list.body.rules[0].id}`)).status).toBe(200);
 
     const made = await mentor.agent.post("/api/rulebook/rules").send(draft);
@@ -75,17 +88,34 @@ describe("the rulebook's routes and roles", () => {
     // Their new cause is theirs alone.
     const titles = (await a.mentor.agent.get("/api/rulebook")).body.causes.map((c: { title: string }) => c.title);
     expect(titles).not.toContain("Cope lifted by the metal's head");
-    expect((await b.caster.agent.get("/api/rulebook")).body.causes.map((c: { title: string }) => c.title)).toContain("Cope lifted by the metal's head");
+    expect((await b.caster.agent.get("/api/rulebook")).body.causes.map((c: { title: string }) => c.title)).toContain(
+      "Cope lifted by the metal's head",
+    );
   });
 
   it("refuses bad rules with a message per field and stores nothing", async () => {
     const { shopId, mentor } = await shopWithCrew("Rulebook Bad Input");
     const empty = await mentor.agent.post("/api/rulebook/rules").send({});
     expect(empty.status).toBe(400);
-    expect(Object.keys(empty.body.error.fields).sort()).toEqual(["because", "cause", "conditions", "defectTypes", "sources", "weight"]);
+    expect(Object.keys(empty.body.error.fields).sort()).toEqual([
+      "because",
+      "cause",
+      "conditions",
+      "defectTypes",
+      "sources",
+      "weight",
+    ]);
     const cases: [Partial<RuleDraft>, string, RegExp][] = [
-      [{ conditions: [{ fact: "pourTemp", comparison: "below", value: 700 }] }, "conditions.0.fact", /not something the rulebook knows/],
-      [{ conditions: [{ fact: "fluxed", comparison: "below", value: 3 }] }, "conditions.0.comparison", /does not fit flux used/],
+      [
+        { conditions: [{ fact: "pourTemp", comparison: "below", value: 700 }] },
+        "conditions.0.fact",
+        /not something the rulebook knows/,
+      ],
+      [
+        { conditions: [{ fact: "fluxed", comparison: "below", value: 3 }] },
+        "conditions.0.comparison",
+        /does not fit flux used/,
+      ],
       [{ cause: { kind: "existing", id: "" } }, "cause.id", /choose a cause/],
       [{ cause: { kind: "existing", id: "no-such-cause" } }, "cause.id", /not a cause in this rulebook/],
       [{ weight: 1.5 }, "weight", /at most 1/],
@@ -96,7 +126,10 @@ describe("the rulebook's routes and roles", () => {
       expect(res.status, field).toBe(400);
       expect(res.body.error.fields[field]).toMatch(message);
     }
-    const malformed = await mentor.agent.post("/api/rulebook/rules").set("Content-Type", "application/json").send("{oops");
+    const malformed = await mentor.agent
+      .post("/api/rulebook/rules")
+      .set("Content-Type", "application/json")
+      .send("{oops");
     expect(malformed.status).toBe(400);
     expect(await ruleCount(shopId)).toBe(0);
     expect(await db.$count(shopCauses, eq(shopCauses.shopId, shopId))).toBe(0);
@@ -106,7 +139,10 @@ describe("the rulebook's routes and roles", () => {
     const { mentor } = await shopWithCrew("Rulebook Impossible");
     const never = {
       ...draft,
-      conditions: [{ fact: "pourTempC", comparison: "below", value: 600 }, { fact: "pourTempC", comparison: "above", value: 700 }],
+      conditions: [
+        { fact: "pourTempC", comparison: "below", value: 600 },
+        { fact: "pourTempC", comparison: "above", value: 700 },
+      ],
     };
     const made = await mentor.agent.post("/api/rulebook/rules").send(never);
     expect(made.status).toBe(201);
@@ -128,7 +164,11 @@ describe("shop rules in diagnoses", () => {
 
     const made = await mentor.agent.post("/api/rulebook/rules").send(draft);
     const id = made.body.id;
-    expect(made.body).toMatchObject({ status: "draft", inUse: false, cause: { id: "shop-cope-lifted-by-the-metal-s-head" } });
+    expect(made.body).toMatchObject({
+      status: "draft",
+      inUse: false,
+      cause: { id: "shop-cope-lifted-by-the-metal-s-head" },
+    });
     expect((await causesOf(caster, casting.id)).map((c) => c.id)).toEqual(before.map((c) => c.id));
 
     const pub = await mentor.agent.post(`/api/rulebook/rules/${id}/publish`);
@@ -139,27 +179,54 @@ describe("shop rules in diagnoses", () => {
     expect((await mentor.agent.post(`/api/rulebook/rules/${id}/publish`)).status).toBe(409);
 
     // A changed draft on top of the published version changes nothing until it is published.
-    await mentor.agent.put(`/api/rulebook/rules/${id}`).send({ ...draft, conditions: [{ fact: "sprueHeightMm", comparison: "above", value: 400 }], cause: { kind: "existing", id: after[0].id } });
+    await mentor.agent
+      .put(`/api/rulebook/rules/${id}`)
+      .send({
+        ...draft,
+        conditions: [{ fact: "sprueHeightMm", comparison: "above", value: 400 }],
+        cause: { kind: "existing", id: after[0].id },
+      });
     expect((await causesOf(caster, casting.id))[0].id).toBe(after[0].id);
 
-    expect((await mentor.agent.post(`/api/rulebook/rules/${id}/retire`)).body).toMatchObject({ status: "retired", inUse: false });
+    expect((await mentor.agent.post(`/api/rulebook/rules/${id}/retire`)).body).toMatchObject({
+      status: "retired",
+      inUse: false,
+    });
     expect((await causesOf(caster, casting.id)).map((c) => c.id)).not.toContain(after[0].id);
     expect((await mentor.agent.post(`/api/rulebook/rules/${id}/retire`)).status).toBe(409);
 
-    const versions = await db.select().from(shopRuleVersions).where(and(eq(shopRuleVersions.shopId, shopId))).orderBy(shopRuleVersions.version);
-    expect(versions.map((v) => [v.version, v.status])).toEqual([[1, "draft"], [2, "published"], [3, "draft"], [4, "retired"]]);
+    const versions = await db
+      .select()
+      .from(shopRuleVersions)
+      .where(and(eq(shopRuleVersions.shopId, shopId)))
+      .orderBy(shopRuleVersions.version);
+    expect(versions.map((v) => [v.version, v.status])).toEqual([
+      [1, "draft"],
+      [2, "published"],
+      [3, "draft"],
+      [4, "retired"],
+    ]);
   });
 
   it("keeps every version with who and when, and the differences read plainly", async () => {
     const { caster, mentor, owner } = await shopWithCrew("Rulebook Versions");
     const id = (await mentor.agent.post("/api/rulebook/rules").send(draft)).body.id;
     const causeId = (await caster.agent.get(`/api/rulebook/rules/${id}`)).body.cause.id;
-    await owner.agent.put(`/api/rulebook/rules/${id}`).send({ ...draft, cause: { kind: "existing", id: causeId }, weight: 0.7, sources: ["shop experience", "Pattern shop notes"] });
+    await owner.agent
+      .put(`/api/rulebook/rules/${id}`)
+      .send({
+        ...draft,
+        cause: { kind: "existing", id: causeId },
+        weight: 0.7,
+        sources: ["shop experience", "Pattern shop notes"],
+      });
     await mentor.agent.post(`/api/rulebook/rules/${id}/publish`);
     const detail = await caster.agent.get(`/api/rulebook/rules/${id}`);
     const versions = detail.body.versions as RuleVersion[];
     expect(versions.map((v) => [v.version, v.status, v.createdBy?.id])).toEqual([
-      [3, "published", mentor.userId], [2, "draft", owner.userId], [1, "draft", mentor.userId],
+      [3, "published", mentor.userId],
+      [2, "draft", owner.userId],
+      [1, "draft", mentor.userId],
     ]);
     for (const v of versions) expect(Date.parse(v.createdAt)).toBeGreaterThan(Date.now() - 60_000);
     const [v3, v2, v1] = versions;
@@ -170,14 +237,27 @@ describe("shop rules in diagnoses", () => {
   it("switches a built-in rule off for this shop only, and back on", async () => {
     const a = await shopWithCrew("Switch Home");
     const b = await shopWithCrew("Switch Away");
-    const gas = { defects: [{ type: "gas-porosity" }], alloy: "A356.0", process: "green-sand", pourTempC: 720, degassing: "none" };
-    const reasons = async (p: Person) => (await p.agent.post("/api/diagnose").send(gas)).body.causes.flatMap((c: { because: string[] }) => c.because);
+    const gas = {
+      defects: [{ type: "gas-porosity" }],
+      alloy: "A356.0",
+      process: "green-sand",
+      pourTempC: 720,
+      degassing: "none",
+    };
+    const reasons = async (p: Person) =>
+      (await p.agent.post("/api/diagnose").send(gas)).body.causes.flatMap((c: { because: string[] }) => c.because);
     expect(await reasons(a.caster)).toContain("The melt was not degassed");
     const off = await a.mentor.agent.put("/api/rulebook/rules/h2-no-degassing/switch").send({ off: true });
-    expect(off.body).toMatchObject({ switchedOff: true, inUse: false, switches: [{ off: true, createdBy: { id: a.mentor.userId } }] });
+    expect(off.body).toMatchObject({
+      switchedOff: true,
+      inUse: false,
+      switches: [{ off: true, createdBy: { id: a.mentor.userId } }],
+    });
     expect(await reasons(a.caster)).not.toContain("The melt was not degassed");
     expect(await reasons(b.caster)).toContain("The melt was not degassed");
-    expect((await a.mentor.agent.put("/api/rulebook/rules/h2-no-degassing/switch").send({ off: "maybe" })).status).toBe(400);
+    expect((await a.mentor.agent.put("/api/rulebook/rules/h2-no-degassing/switch").send({ off: "maybe" })).status).toBe(
+      400,
+    );
     await a.owner.agent.put("/api/rulebook/rules/h2-no-degassing/switch").send({ off: false });
     expect(await reasons(a.caster)).toContain("The melt was not degassed");
   });
@@ -194,9 +274,27 @@ describe("trying a rule and learning from confirmed cases", () => {
     const res = await mentor.agent.post("/api/rulebook/try").send({ draft });
     expect(res.status).toBe(200);
     // Fires on the two tall sprues; the confirmed one was something else, so it does not agree.
-    expect(res.body).toMatchObject({ cases: 3, fired: 2, firedConfirmed: 1, agreed: 0, confirmedCases: 1, topRightBefore: 1, topRightAfter: 0 });
-    const changed = res.body.changed as { castingId: number; verdict: string; after: { title: string }; confirmed: { id: string } | null }[];
-    expect(changed.map((c) => [c.castingId, c.verdict]).sort()).toEqual([[confirmed.id, "now-wrong"], [tall.id, "unconfirmed"]].sort());
+    expect(res.body).toMatchObject({
+      cases: 3,
+      fired: 2,
+      firedConfirmed: 1,
+      agreed: 0,
+      confirmedCases: 1,
+      topRightBefore: 1,
+      topRightAfter: 0,
+    });
+    const changed = res.body.changed as {
+      castingId: number;
+      verdict: string;
+      after: { title: string };
+      confirmed: { id: string } | null;
+    }[];
+    expect(changed.map((c) => [c.castingId, c.verdict]).sort()).toEqual(
+      [
+        [confirmed.id, "now-wrong"],
+        [tall.id, "unconfirmed"],
+      ].sort(),
+    );
     expect(changed.every((c) => c.after.title === "Cope lifted by the metal's head")).toBe(true);
     expect(res.body.causeTitles[topBefore]).toBeDefined();
     expect(changed.map((c) => c.castingId)).not.toContain(short.id);
@@ -213,7 +311,9 @@ describe("trying a rule and learning from confirmed cases", () => {
       const top = (await causesOf(caster, c.id))[0] as unknown as { id: string; score: number; record: object };
       scores.push(top.score);
       expect(top.id).toBe(cause);
-      expect((await mentor.agent.post(`/api/castings/${c.id}/confirmations`).send({ causeId: cause })).status).toBe(201);
+      expect((await mentor.agent.post(`/api/castings/${c.id}/confirmations`).send({ causeId: cause })).status).toBe(
+        201,
+      );
     }
     const latest = await flashCasting(caster, 300, "2026-03-04");
     const [top] = await causesOf(caster, latest.id);

@@ -22,8 +22,11 @@ describe("GET /api/castings/:id/similar", () => {
     const { items } = await similar(book, book.ids.c1);
     expect(items.map((i) => i.id)).toEqual([book.ids.c5]);
     expect(items[0]).toMatchObject({
-      partName: "Ribbed cover plate", cause: { id: "cold-pour", confirmed: true }, fixWorked: "yes",
-      reason: "same misrun at the top, lost foam, A356.0, superheat 30 °C higher, argon lance degassing, similar 4 mm section",
+      partName: "Ribbed cover plate",
+      cause: { id: "cold-pour", confirmed: true },
+      fixWorked: "yes",
+      reason:
+        "same misrun at the top, lost foam, A356.0, superheat 30 °C higher, argon lance degassing, similar 4 mm section",
     });
   });
 

@@ -25,7 +25,11 @@ describe("words", () => {
     const { c1, c2, c3, c5, c7 } = book.ids;
     expect(sorted(ids(await search(book.caster, { q: "porosty" })))).toEqual(sorted([c2, c3, c7]));
     expect(sorted(ids(await search(book.caster, { q: "misrnu" })))).toEqual(sorted([c1, c5]));
-    expect(ids(await search(book.caster, { q: "mis-run" })).slice(0, 2).sort()).toEqual(sorted([c1, c5]));
+    expect(
+      ids(await search(book.caster, { q: "mis-run" }))
+        .slice(0, 2)
+        .sort(),
+    ).toEqual(sorted([c1, c5]));
   });
 
   it("ranks by relevance: the defect and the notes beat the defect alone, which beats a comment", async () => {
@@ -49,7 +53,12 @@ describe("words", () => {
     expect(hit.id).toBe(book.ids.c2);
     const runs = hit.marked.defects!;
     expect(runs.map((r) => r.text).join("")).toBe("Gas porosity (throughout)");
-    expect(runs.filter((r) => r.hit).map((r) => r.text).join("")).toMatch(/poros/i);
+    expect(
+      runs
+        .filter((r) => r.hit)
+        .map((r) => r.text)
+        .join(""),
+    ).toMatch(/poros/i);
   });
 });
 
@@ -93,7 +102,8 @@ describe("filters", () => {
     const { c7, c6, c5, c4, c3, c2, c1 } = book.ids;
     expect(ids(all)).toEqual([c6, c7, c5, c4, c3, c2, c1]);
     const pages = [];
-    for (let page = 1; page <= 4; page++) pages.push(await search(book.caster, { sort: "date-asc", pageSize: 2, page }));
+    for (let page = 1; page <= 4; page++)
+      pages.push(await search(book.caster, { sort: "date-asc", pageSize: 2, page }));
     expect(pages.map((p) => p.total)).toEqual([7, 7, 7, 7]);
     expect(pages.flatMap(ids)).toEqual([c1, c2, c3, c4, c5, c7, c6]);
     expect(pages[3].items).toHaveLength(1);
@@ -147,8 +157,17 @@ describe("stays current with every write", () => {
     await shop.caster.agent.post(`/api/castings/${c4}/comments`).send({ body: "surprising shrinkage inside the boss" });
     expect(ids(await search(shop.caster, { q: "shrinkage" }))).toEqual([c4]);
 
-    const m = await newMelt(shop.caster, { pouredOn: "2026-04-01", alloy: "319.0", process: "plaster", pourTempC: 700, meltTempC: 720 });
-    const fresh = await newCasting(shop.caster, m.id, { partName: "Gearbox lid", marks: [{ type: "cold-shut", location: "side", severity: 1 }] });
+    const m = await newMelt(shop.caster, {
+      pouredOn: "2026-04-01",
+      alloy: "319.0",
+      process: "plaster",
+      pourTempC: 700,
+      meltTempC: 720,
+    });
+    const fresh = await newCasting(shop.caster, m.id, {
+      partName: "Gearbox lid",
+      marks: [{ type: "cold-shut", location: "side", severity: 1 }],
+    });
     expect(ids(await search(shop.caster, { q: "gearbox" }))).toEqual([fresh.id]);
 
     await shop.caster.agent.patch(`/api/melts/${shop.melts.m1.id}`).send({ process: "investment" });

@@ -28,7 +28,9 @@ describe("shops and roles", () => {
       expect(res.status).toBe(403);
     }
     expect(await db.select().from(shopSettings).where(eq(shopSettings.shopId, shopId))).toHaveLength(0);
-    const ok = await owner.agent.patch("/api/shop/settings").send({ defaultProcess: "lost-foam", defaultAlloy: "A356.0" });
+    const ok = await owner.agent
+      .patch("/api/shop/settings")
+      .send({ defaultProcess: "lost-foam", defaultAlloy: "A356.0" });
     expect(ok.status).toBe(200);
     expect(ok.body).toMatchObject({ defaultProcess: "lost-foam", defaultAlloy: "A356.0" });
     const seen = await caster.agent.get("/api/shop");
@@ -42,7 +44,10 @@ describe("shops and roles", () => {
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields).length).toBeGreaterThan(0);
     expect((await owner.agent.get("/api/shop")).body.defaultProcess).toBe("investment");
-    const malformed = await owner.agent.patch("/api/shop/settings").set("Content-Type", "application/json").send("{oops");
+    const malformed = await owner.agent
+      .patch("/api/shop/settings")
+      .set("Content-Type", "application/json")
+      .send("{oops");
     expect(malformed.status).toBe(400);
   });
 

@@ -13,7 +13,10 @@ async function newPage(size: { width: number; height: number }): Promise<Page> {
   return context.newPage();
 }
 
-for (const [sizeName, size] of [["phone", PHONE], ["wide", WIDE]] as const) {
+for (const [sizeName, size] of [
+  ["phone", PHONE],
+  ["wide", WIDE],
+] as const) {
   describe(`at ${sizeName} size (${size.width} px)`, () => {
     it("signs up a new person with a shop they own, then signs out", async () => {
       const page = await newPage(size);
@@ -23,7 +26,9 @@ for (const [sizeName, size] of [["phone", PHONE], ["wide", WIDE]] as const) {
       await page.getByLabel("Password").fill("long-enough-pass");
       await page.getByLabel("Shop name").fill(`Bench Shop ${sizeName}`);
       await page.getByRole("button", { name: "Create account" }).click();
-      await expect.poll(() => page.getByTestId("active-shop").textContent(), { timeout: 15000 }).toBe(`Bench Shop ${sizeName}`);
+      await expect
+        .poll(() => page.getByTestId("active-shop").textContent(), { timeout: 15000 })
+        .toBe(`Bench Shop ${sizeName}`);
       expect(await page.getByTestId("active-role").textContent()).toBe("owner");
       await shot(page, `${sizeName}-after-sign-up`);
       await page.getByRole("button", { name: "Sign out" }).click();

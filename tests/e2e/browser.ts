@@ -10,8 +10,13 @@ export async function launchBrowser(): Promise<Browser> {
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
     headless: true,
     args: [
-      "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking",
-      "--disable-component-update", "--disable-sync",
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
     ],
   });
 }
@@ -47,7 +52,12 @@ export function useBrowser(): () => Browser {
 }
 
 /** A new window of the given size, signed in as the demo person with that role. */
-export async function signedInAs(browser: Browser, baseUrl: string, size: { width: number; height: number }, role: string) {
+export async function signedInAs(
+  browser: Browser,
+  baseUrl: string,
+  size: { width: number; height: number },
+  role: string,
+) {
   const person = DEMO_PEOPLE.find((p) => p.role === role)!;
   const page = await (await browser.newContext({ viewport: size })).newPage();
   await signIn(page, baseUrl, person.email, person.password);
@@ -65,7 +75,9 @@ export const seen = (page: Page, text: string | RegExp) =>
  */
 export async function longShot(page: Page, name: string) {
   const size = page.viewportSize()!;
-  const tallest = await page.evaluate(() => Math.max(...[...document.querySelectorAll("div")].map((d) => d.scrollHeight)));
+  const tallest = await page.evaluate(() =>
+    Math.max(...[...document.querySelectorAll("div")].map((d) => d.scrollHeight)),
+  );
   await page.setViewportSize({ width: size.width, height: Math.min(6000, Math.max(size.height, tallest + 140)) });
   await page.waitForTimeout(300);
   await shot(page, name);

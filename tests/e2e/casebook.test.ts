@@ -8,19 +8,27 @@ const baseUrl = inject("baseUrl");
 const browser = useBrowser();
 
 const caster = DEMO_PEOPLE.find((p) => p.role === "caster")!;
-const total = async (page: Page) => Number(((await page.getByTestId("casebook-total").textContent()) ?? "").replace(/\D/g, ""));
+const total = async (page: Page) =>
+  Number(((await page.getByTestId("casebook-total").textContent()) ?? "").replace(/\D/g, ""));
 
-for (const [sizeName, size] of [["phone", PHONE], ["wide", WIDE]] as const) {
+for (const [sizeName, size] of [
+  ["phone", PHONE],
+  ["wide", WIDE],
+] as const) {
   describe(`casebook at ${sizeName} size (${size.width} px)`, () => {
     it("finds misruns from a misspelling, marks the word, and narrows with a process chip", async () => {
       const page = await (await browser().newContext({ viewport: size })).newPage();
       await signIn(page, baseUrl, caster.email, caster.password);
-      await expect.poll(() => page.getByRole("searchbox", { name: "Search the casebook" }).count(), { timeout: 15000 }).toBe(1);
+      await expect
+        .poll(() => page.getByRole("searchbox", { name: "Search the casebook" }).count(), { timeout: 15000 })
+        .toBe(1);
       await expect.poll(() => total(page), { timeout: 10000 }).toBeGreaterThan(10);
       await shot(page, `${sizeName}-casebook-all`);
 
       await page.getByRole("searchbox", { name: "Search the casebook" }).fill("misrnu");
-      await expect.poll(async () => (await page.getByTestId("search-hit").allTextContents()).join(" "), { timeout: 10000 }).toMatch(/misr/i);
+      await expect
+        .poll(async () => (await page.getByTestId("search-hit").allTextContents()).join(" "), { timeout: 10000 })
+        .toMatch(/misr/i);
       const found = await total(page);
       expect(found).toBeGreaterThanOrEqual(3);
       const rows = sizeName === "phone" ? page.getByTestId("case-card") : page.getByRole("row");
@@ -37,7 +45,9 @@ for (const [sizeName, size] of [["phone", PHONE], ["wide", WIDE]] as const) {
       await shot(page, `${sizeName}-casebook-filtered`);
 
       await page.getByRole("searchbox", { name: "Search the casebook" }).fill("zzqx");
-      await expect.poll(() => page.getByTestId("casebook-empty").textContent(), { timeout: 10000 }).toMatch(/No cases matching “zzqx” poured in lost foam yet/);
+      await expect
+        .poll(() => page.getByTestId("casebook-empty").textContent(), { timeout: 10000 })
+        .toMatch(/No cases matching “zzqx” poured in lost foam yet/);
       await shot(page, `${sizeName}-casebook-empty`);
       await page.context().close();
     });

@@ -14,7 +14,12 @@ const root = fileURLToPath(new URL("../..", import.meta.url));
  */
 export default async function setup(project: TestProject) {
   const parent = mkdtempSync(join(tmpdir(), "casebook-e2e-"));
-  const pg = startLocalPostgres({ dataDir: join(parent, "pg"), port: await freePort(), database: "casebook_e2e", throwaway: true });
+  const pg = startLocalPostgres({
+    dataDir: join(parent, "pg"),
+    port: await freePort(),
+    database: "casebook_e2e",
+    throwaway: true,
+  });
   const port = await freePort();
   Object.assign(process.env, {
     DATABASE_URL: pg.url,

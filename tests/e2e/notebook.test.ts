@@ -20,7 +20,8 @@ beforeAll(async () => {
   photoPath = join(files, "casting.jpg");
   writeFileSync(photoPath, await sharp(plate).jpeg({ quality: 80 }).toBuffer());
 });
-const signedIn = (size: { width: number; height: number }, role = "caster") => signedInAs(browser(), baseUrl, size, role);
+const signedIn = (size: { width: number; height: number }, role = "caster") =>
+  signedInAs(browser(), baseUrl, size, role);
 
 /** Clicks the photo at fractions of its size, as a person taps a spot. */
 async function tapPhoto(page: Page, fx: number, fy: number) {
@@ -83,7 +84,11 @@ describe("the notebook at phone size (390 px)", () => {
     await page.getByLabel("Part").fill("Test bracket 1");
     await page.getByLabel("Thinnest section (mm)").fill("4");
     await page.getByLabel("Thickest section (mm)").fill("20");
-    for (const [n, outcome] of [[1, "scrap"], [2, "good"], [3, "needs rework"]] as const) {
+    for (const [n, outcome] of [
+      [1, "scrap"],
+      [2, "good"],
+      [3, "needs rework"],
+    ] as const) {
       await page.getByLabel("Part").fill(`Test bracket ${n}`);
       await page.getByRole("radio", { name: outcome }).click();
       await page.getByTestId("save-casting").click();
@@ -126,7 +131,10 @@ describe("the notebook at phone size (390 px)", () => {
 
     await page.getByTestId("find-causes").click();
     await expect.poll(() => page.getByTestId("cause-1").count(), { timeout: 20000 }).toBe(1);
-    await page.getByTestId("cause-1").getByRole("button", { name: /Why this cause/ }).click();
+    await page
+      .getByTestId("cause-1")
+      .getByRole("button", { name: /Why this cause/ })
+      .click();
     await longShot(page, "phone-casting-causes");
     expect(page.url()).toBe(castingUrl);
     await page.context().close();
@@ -141,14 +149,20 @@ describe("the notebook at wide size (1280 px)", () => {
     const firstAlloy = () => page.getByRole("row").nth(1).getByRole("cell").nth(1).textContent();
     await page.getByRole("columnheader", { name: /Alloy/ }).click();
     await expect.poll(() => page.getByRole("columnheader", { name: /Alloy ↑/ }).count()).toBe(1);
-    const alloys = await page.getByRole("row").evaluateAll((rows) => rows.slice(1).map((r) => r.children[1]?.textContent ?? ""));
+    const alloys = await page
+      .getByRole("row")
+      .evaluateAll((rows) => rows.slice(1).map((r) => r.children[1]?.textContent ?? ""));
     expect(alloys).toEqual([...alloys].sort());
     expect(await firstAlloy()).toBe(alloys[0]);
     await shot(page, "wide-melt-table");
 
     await page.getByRole("row").nth(1).click();
     await seen(page, "Castings from this melt");
-    await page.getByRole("link").filter({ hasText: /marks?:|nothing marked/ }).first().click();
+    await page
+      .getByRole("link")
+      .filter({ hasText: /marks?:|nothing marked/ })
+      .first()
+      .click();
     await seen(page, "Photos and marks");
     await seen(page, "Likely causes");
     await longShot(page, "wide-casting");
@@ -157,7 +171,9 @@ describe("the notebook at wide size (1280 px)", () => {
     const photos = await page.getByTestId("casting-photo").count();
     const dropped = await page.evaluateHandle((b64) => {
       const data = new DataTransfer();
-      data.items.add(new File([Uint8Array.from(atob(b64), (c) => c.charCodeAt(0))], "dropped.jpg", { type: "image/jpeg" }));
+      data.items.add(
+        new File([Uint8Array.from(atob(b64), (c) => c.charCodeAt(0))], "dropped.jpg", { type: "image/jpeg" }),
+      );
       return data;
     }, readFileSync(photoPath).toString("base64"));
     await page.getByTestId("photo-drop-zone").dispatchEvent("drop", { dataTransfer: dropped });
@@ -203,7 +219,11 @@ describe("the notebook at wide size (1280 px)", () => {
     while ((await whyButtons.count()) > 0) await whyButtons.first().click();
     // Only the reasons inside the cause cards; fixes and cautions are fixed texts written in SI.
     const reasons = () =>
-      page.locator('[data-testid^="cause-"]').getByText(/^• /).allTextContents().then((t) => t.join(" "));
+      page
+        .locator('[data-testid^="cause-"]')
+        .getByText(/^• /)
+        .allTextContents()
+        .then((t) => t.join(" "));
     await expect.poll(reasons, { timeout: 10000 }).toMatch(/\d °F/);
     expect(await reasons()).not.toMatch(/\d °C/);
     await page.getByRole("tab", { name: "More" }).click();

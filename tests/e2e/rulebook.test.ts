@@ -21,7 +21,10 @@ async function markedCasting(caster: Page, partName: string, defect: string) {
 }
 
 // Each size writes a rule for a defect of its own, so the other size's published rule does not hide this one's effect.
-for (const [sizeName, size, defect, defectLabel] of [["phone", PHONE, "flash", "Flash or fin"], ["wide", WIDE, "swell", "Swell"]] as const) {
+for (const [sizeName, size, defect, defectLabel] of [
+  ["phone", PHONE, "flash", "Flash or fin"],
+  ["wide", WIDE, "swell", "Swell"],
+] as const) {
   describe(`rulebook at ${sizeName} size (${size.width} px)`, () => {
     it("a mentor writes a rule, tries it, publishes it, and a caster's diagnosis shows it", async () => {
       const cause = `Cope lifted by the head (${sizeName})`;
@@ -59,7 +62,9 @@ for (const [sizeName, size, defect, defectLabel] of [["phone", PHONE, "flash", "
       await longShot(mentor, `${sizeName}-rule-form-tried`);
 
       await mentor.getByTestId("save-rule").click();
-      await expect.poll(() => mentor.getByTestId("rule-state").textContent(), { timeout: 15000 }).toMatch(/Written here · draft/);
+      await expect
+        .poll(() => mentor.getByTestId("rule-state").textContent(), { timeout: 15000 })
+        .toMatch(/Written here · draft/);
       await mentor.getByTestId("publish-rule").click();
       await expect.poll(() => mentor.getByTestId("rule-state").textContent(), { timeout: 15000 }).toMatch(/in use/);
       await seen(mentor, "Published: now used in every diagnosis here");

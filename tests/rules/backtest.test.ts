@@ -49,7 +49,13 @@ describe("trying a draft rule on past cases", () => {
   it("fires only for marks in the places the rule names", async () => {
     const atGate: KbRule = { ...draft, explains: [{ type: "misrun", locations: ["far-from-gate"] }] };
     const rs = withRule(base, atGate);
-    const c = (location: string) => caseSchema.parse({ alloy: "A356.0", process: "green-sand", sprueHeightMm: 300, defects: [{ type: "misrun", location }] });
+    const c = (location: string) =>
+      caseSchema.parse({
+        alloy: "A356.0",
+        process: "green-sand",
+        sprueHeightMm: 300,
+        defects: [{ type: "misrun", location }],
+      });
     expect((await firedRules(c("far-from-gate"), alloy, rs)).has(atGate.id)).toBe(true);
     expect((await firedRules(c("near-gate"), alloy, rs)).has(atGate.id)).toBe(false);
     // A mark "throughout" the part fits a rule for any place, as diagnose() reads it.

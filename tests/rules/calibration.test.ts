@@ -1,7 +1,14 @@
 import { describe, expect, it } from "vitest";
 import { findBuiltInAlloy } from "../../rules/alloys";
 import {
-  causeRecords, confirmedFirings, FACTOR_MAX, FACTOR_MIN, ruleRecords, smoothedAgreement, weightFactorOf, weightFactors,
+  causeRecords,
+  confirmedFirings,
+  FACTOR_MAX,
+  FACTOR_MIN,
+  ruleRecords,
+  smoothedAgreement,
+  weightFactorOf,
+  weightFactors,
 } from "../../rules/calibration";
 import { caseSchema } from "../../rules/case";
 import { diagnose } from "../../rules/engine";
@@ -56,9 +63,20 @@ describe("weight calibration from confirmed cases", () => {
   it("ranks a cause whose rule was often right above one whose rule was often wrong", async () => {
     // Equal weights: 0.6 each. Left to themselves the two tie; the shop's record breaks the tie.
     const even = withRule(base, { ...draft, weight: 0.6 });
-    const c = caseSchema.parse({ alloy: "A356.0", process: "green-sand", pourTempC: 660, sprueHeightMm: 300, defects: [{ type: "misrun" }] });
+    const c = caseSchema.parse({
+      alloy: "A356.0",
+      process: "green-sand",
+      pourTempC: 660,
+      sprueHeightMm: 300,
+      defects: [{ type: "misrun" }],
+    });
     const alloy = findBuiltInAlloy("A356.0")!;
-    const factor = weightFactors(new Map([["misrun-cold", { fired: 9, agreed: 1 }], ["shop-draft", { fired: 9, agreed: 8 }]]));
+    const factor = weightFactors(
+      new Map([
+        ["misrun-cold", { fired: 9, agreed: 1 }],
+        ["shop-draft", { fired: 9, agreed: 8 }],
+      ]),
+    );
     const plain = await diagnose(c, { alloy, ruleSet: even });
     expect(plain.causes[0].score).toBe(plain.causes[1].score);
     const learned = await diagnose(c, { alloy, ruleSet: even, weightFactor: factor });

@@ -14,19 +14,35 @@ export const causes: KbCause[] = [
   { id: "turbulent-fill", title: "Turbulent fill", fixes: ["Shorten the drop"] },
 ];
 export const coldRule: KbRule = {
-  id: "misrun-cold", explains: [{ type: "misrun" }], cause: "cold-pour", effect: "supports", weight: 0.6,
-  conditions: { all: [{ fact: "pourTempC", operator: "lessThan", value: 680 }] }, because: "Poured at {pourTempC} °C", sources: ["shop experience"],
+  id: "misrun-cold",
+  explains: [{ type: "misrun" }],
+  cause: "cold-pour",
+  effect: "supports",
+  weight: 0.6,
+  conditions: { all: [{ fact: "pourTempC", operator: "lessThan", value: 680 }] },
+  because: "Poured at {pourTempC} °C",
+  sources: ["shop experience"],
 };
 export const draft: KbRule = {
-  id: "shop-draft", explains: [{ type: "misrun" }], cause: "turbulent-fill", effect: "supports", weight: 0.8,
-  conditions: { all: [{ fact: "sprueHeightMm", operator: "greaterThan", value: 250 }] }, because: "A tall drop", sources: ["shop experience"],
+  id: "shop-draft",
+  explains: [{ type: "misrun" }],
+  cause: "turbulent-fill",
+  effect: "supports",
+  weight: 0.8,
+  conditions: { all: [{ fact: "sprueHeightMm", operator: "greaterThan", value: 250 }] },
+  because: "A tall drop",
+  sources: ["shop experience"],
 };
 export const base: RuleSet = { version: ruleSetVersion(causes, [coldRule]), causes, rules: [coldRule] };
 
 export const alloy = findBuiltInAlloy("A356.0")!;
 const stored = (castingId: number, c: Record<string, unknown>, confirmed?: string | null): StoredCase => ({
-  castingId, meltId: castingId, partName: `part ${castingId}`, pouredOn: "2026-01-0" + castingId,
-  case: caseSchema.parse({ alloy: "A356.0", process: "green-sand", ...c }), alloy,
+  castingId,
+  meltId: castingId,
+  partName: `part ${castingId}`,
+  pouredOn: "2026-01-0" + castingId,
+  case: caseSchema.parse({ alloy: "A356.0", process: "green-sand", ...c }),
+  alloy,
   confirmed: confirmed === undefined ? null : { causeId: confirmed },
 });
 const misrun = [{ type: "misrun", location: "throughout", severity: 2 }];

@@ -9,11 +9,21 @@ const run = (input: string) =>
 describe("npm run diagnose", () => {
   it("reads a case on stdin and prints only the result JSON", () => {
     // Misrun poured 40 °C below the green-sand window (about 700-760 °C [mem], foundry-facts.md): cold pour.
-    const out = run(JSON.stringify({ defects: [{ type: "misrun", location: "far-from-gate", severity: 2 }], alloy: "A356", process: "green-sand", pourTempC: 660 }));
+    const out = run(
+      JSON.stringify({
+        defects: [{ type: "misrun", location: "far-from-gate", severity: 2 }],
+        alloy: "A356",
+        process: "green-sand",
+        pourTempC: 660,
+      }),
+    );
     expect(out.status).toBe(0);
     const result = JSON.parse(out.stdout);
     expect(Object.keys(result).sort()).toEqual(["causes", "cautions", "facts", "missing"]);
-    expect(result.causes[0]).toMatchObject({ id: "cold-pour", because: ["Poured at 660 °C, 40 °C below the usual 700-760 °C for green sand"] });
+    expect(result.causes[0]).toMatchObject({
+      id: "cold-pour",
+      because: ["Poured at 660 °C, 40 °C below the usual 700-760 °C for green sand"],
+    });
     expect(result.facts.superheatC).toBe(45);
   }, 60_000);
 
@@ -23,7 +33,9 @@ describe("npm run diagnose", () => {
     expect(out.stdout).toBe("");
     const err = JSON.parse(out.stderr);
     expect(err.error).toMatch(/not valid/);
-    expect(err.issues.map((i: { path: string }) => i.path)).toEqual(expect.arrayContaining(["defects.0.type", "process"]));
+    expect(err.issues.map((i: { path: string }) => i.path)).toEqual(
+      expect.arrayContaining(["defects.0.type", "process"]),
+    );
   }, 60_000);
 
   it("refuses input that is not JSON, and an unknown alloy, the same way", () => {

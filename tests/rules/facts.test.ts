@@ -43,16 +43,37 @@ describe("deriveFacts", () => {
   it("leaves facts undefined when their inputs are missing, never 0", () => {
     const facts = factsOf({});
     for (const name of [
-      "pourTempC", "superheatC", "meltSuperheatC", "pourWindowPosition", "pourBelowWindowC", "pourAboveWindowC",
-      "hydrogenSolubilityCm3Per100g", "vapourPressureKPa", "moistureRisk", "frontVelocityMS", "frontVelocityRatio",
-      "sectionRatio", "freezeTimeRatio", "thickSectionModulusMm", "coatingApplied", "coatingCoats",
+      "pourTempC",
+      "superheatC",
+      "meltSuperheatC",
+      "pourWindowPosition",
+      "pourBelowWindowC",
+      "pourAboveWindowC",
+      "hydrogenSolubilityCm3Per100g",
+      "vapourPressureKPa",
+      "moistureRisk",
+      "frontVelocityMS",
+      "frontVelocityRatio",
+      "sectionRatio",
+      "freezeTimeRatio",
+      "thickSectionModulusMm",
+      "coatingApplied",
+      "coatingCoats",
     ]) {
       expect(facts[name], name).toBeUndefined();
     }
     // What the alloy and process alone decide is known.
     expect(facts).toMatchObject({
-      alloyFamily: "al-si", isAluminium: true, liquidusC: 615, solidusC: 555, freezingRangeC: 60, // A356.0 [mem] ASM Vol. 2
-      pourWindowLowC: 700, pourWindowHighC: 760, velocityGuideMS: 0.5, defectCount: 1, worstSeverity: 2,
+      alloyFamily: "al-si",
+      isAluminium: true,
+      liquidusC: 615,
+      solidusC: 555,
+      freezingRangeC: 60, // A356.0 [mem] ASM Vol. 2
+      pourWindowLowC: 700,
+      pourWindowHighC: 760,
+      velocityGuideMS: 0.5,
+      defectCount: 1,
+      worstSeverity: 2,
     });
   });
 
@@ -78,7 +99,9 @@ describe("deriveFacts", () => {
 
   it("rates moisture from sand, coating and charge", () => {
     // Thresholds are common practice (rules/compute/moisture-risk.ts); green sand 3-5 % is usual [mem].
-    expect(factsOf({ ambientTempC: 15, humidityPct: 40, sandMoisturePct: 4, charge: "ingot" }).moistureRisk).toBe("low");
+    expect(factsOf({ ambientTempC: 15, humidityPct: 40, sandMoisturePct: 4, charge: "ingot" }).moistureRisk).toBe(
+      "low",
+    );
     expect(factsOf({ ambientTempC: 15, humidityPct: 40, charge: "mixed-scrap" }).moistureRisk).toBe("moderate");
     expect(factsOf({ sandMoisturePct: 7 }).moistureRisk).toBe("high");
     expect(factsOf({ process: "lost-foam", coating: { applied: true, dried: false } }).moistureRisk).toBe("high");
@@ -87,7 +110,9 @@ describe("deriveFacts", () => {
 
   it("flattens the coating", () => {
     expect(factsOf({ coating: { applied: true, dried: false, coats: 2 } })).toMatchObject({
-      coatingApplied: true, coatingDried: false, coatingCoats: 2,
+      coatingApplied: true,
+      coatingDried: false,
+      coatingCoats: 2,
     });
   });
 
@@ -101,7 +126,12 @@ describe("deriveFacts", () => {
 
   it("gives a copper-base pour window from the liquidus", () => {
     const facts = factsOf({ pourTempC: 1050 }, "C83600"); // liquidus 1010 °C [web] CDA; +100-200 °C [mem]
-    expect(facts).toMatchObject({ isAluminium: false, pourWindowLowC: 1110, pourWindowPosition: "below", pourBelowWindowC: 60 });
+    expect(facts).toMatchObject({
+      isAluminium: false,
+      pourWindowLowC: 1110,
+      pourWindowPosition: "below",
+      pourBelowWindowC: 60,
+    });
   });
 
   it("gives the front velocity against the guide", () => {
@@ -120,7 +150,9 @@ describe("deriveFacts", () => {
   });
 
   it("counts defects and finds the worst severity", () => {
-    const c = makeCase({ defects: [{ type: "misrun", severity: 1 }, { type: "fold", severity: 3 }, { type: "blister" }] });
+    const c = makeCase({
+      defects: [{ type: "misrun", severity: 1 }, { type: "fold", severity: 3 }, { type: "blister" }],
+    });
     expect(deriveFacts(c, alloy("A356.0"))).toMatchObject({ defectCount: 3, worstSeverity: 3 });
   });
 

@@ -1,7 +1,15 @@
 import { describe, expect, it } from "vitest";
 import { factSpec, type Facts } from "../../rules/fact-catalog";
 import { firedRuleIds, ruleSetFor } from "../../rules/engine";
-import { evaluateLeaf, RuleFileError, ruleFileSchema, validateRuleFiles, type Condition, type KbRule, type Leaf } from "../../rules/kb-schema";
+import {
+  evaluateLeaf,
+  RuleFileError,
+  ruleFileSchema,
+  validateRuleFiles,
+  type Condition,
+  type KbRule,
+  type Leaf,
+} from "../../rules/kb-schema";
 import { BUILT_IN_RULE_FILES, BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
 import filling from "../../rules/kb/filling.json";
 import gas from "../../rules/kb/gas.json";
@@ -13,7 +21,7 @@ function* ways(c: Condition, want: boolean): Generator<{ leaf: Leaf; want: boole
   if ("not" in c) return yield* ways(c.not, !want);
   if (!("all" in c) && !("any" in c)) return yield [{ leaf: c, want }];
   const parts = "all" in c ? c.all : c.any;
-  if (("all" in c) === want) {
+  if ("all" in c === want) {
     // Every part must come out as `want`: combine one way of each part.
     const combine = function* (i: number): Generator<{ leaf: Leaf; want: boolean }[]> {
       if (i === parts.length) return yield [];
@@ -58,8 +66,19 @@ describe("rule files", () => {
   it("filling and gas together hold about 45 rules, each defect type with at least 4 causes", () => {
     const mine = [...filling.rules, ...gas.rules] as KbRule[];
     expect(mine.length).toBeGreaterThanOrEqual(40);
-    for (const type of ["misrun", "cold-shut", "rounded-edges", "fold", "carbon-residue", "gas-porosity", "blowhole", "blister"]) {
-      const causes = new Set(mine.filter((r) => r.effect !== "weakens" && r.explains.some((e) => e.type === type)).map((r) => r.cause));
+    for (const type of [
+      "misrun",
+      "cold-shut",
+      "rounded-edges",
+      "fold",
+      "carbon-residue",
+      "gas-porosity",
+      "blowhole",
+      "blister",
+    ]) {
+      const causes = new Set(
+        mine.filter((r) => r.effect !== "weakens" && r.explains.some((e) => e.type === type)).map((r) => r.cause),
+      );
       expect(causes.size, type).toBeGreaterThanOrEqual(4);
     }
     expect(mine.some((r) => r.effect === "weakens")).toBe(true);
@@ -74,7 +93,8 @@ describe("rule files", () => {
   it.each(rules.map((r) => [r.id, r] as const))("rule %s can fire", async (_id, rule) => {
     const facts = factsThatFire(rule);
     expect(facts, "no facts satisfy the conditions").toBeDefined();
-    for (const { type } of rule.explains) expect((await firedRuleIds(BUILT_IN_RULE_SET, type, facts!)).has(rule.id)).toBe(true);
+    for (const { type } of rule.explains)
+      expect((await firedRuleIds(BUILT_IN_RULE_SET, type, facts!)).has(rule.id)).toBe(true);
   });
 });
 
@@ -89,24 +109,51 @@ describe("the schema refuses bad rules", () => {
     }
     return "";
   };
-  const leaf = (fact: string, operator: string, value: unknown) => ({ conditions: { all: [{ fact, operator, value }] } });
+  const leaf = (fact: string, operator: string, value: unknown) => ({
+    conditions: { all: [{ fact, operator, value }] },
+  });
 
   it.each([
-    ["an unknown fact", leaf("pourTemp", "greaterThan", 1), /rule "bad-rule" conditions\.all\[0\]\.fact: "pourTemp" is not a known fact/],
-    ["greaterThan on an enum", leaf("process", "greaterThan", 1), /rule "bad-rule" conditions\.all\[0\]: operator "greaterThan" on enum fact "process" is not allowed/],
-    ["greaterThan on a boolean", leaf("hasVents", "greaterThan", 0), /operator "greaterThan" on boolean fact "hasVents" is not allowed/],
-    ["an enum value the fact never takes", leaf("degassing", "equal", "vacuum"), /value "vacuum" is not one of degassing's values/],
-    ["a word where a number belongs", leaf("pourTempC", "lessThan", "700"), /operator "lessThan" on number fact "pourTempC" needs a number/],
+    [
+      "an unknown fact",
+      leaf("pourTemp", "greaterThan", 1),
+      /rule "bad-rule" conditions\.all\[0\]\.fact: "pourTemp" is not a known fact/,
+    ],
+    [
+      "greaterThan on an enum",
+      leaf("process", "greaterThan", 1),
+      /rule "bad-rule" conditions\.all\[0\]: operator "greaterThan" on enum fact "process" is not allowed/,
+    ],
+    [
+      "greaterThan on a boolean",
+      leaf("hasVents", "greaterThan", 0),
+      /operator "greaterThan" on boolean fact "hasVents" is not allowed/,
+    ],
+    [
+      "an enum value the fact never takes",
+      leaf("degassing", "equal", "vacuum"),
+      /value "vacuum" is not one of degassing's values/,
+    ],
+    [
+      "a word where a number belongs",
+      leaf("pourTempC", "lessThan", "700"),
+      /operator "lessThan" on number fact "pourTempC" needs a number/,
+    ],
     ["between with the ends swapped", leaf("pourTempC", "between", [760, 700]), /needs \[low, high\]/],
     ["an unknown cause", { cause: "bad-luck" }, /rule "bad-rule" cause: "bad-luck" is not a defined cause id/],
     ["weight 0", { weight: 0 }, /rule "bad-rule" weight: weight must be above 0/],
     ["weight above 1", { weight: 1.5 }, /rule "bad-rule" weight: weight must be at most 1/],
-    ["a placeholder that is no fact", { because: "Poured at {pourTemp} °C" }, /rule "bad-rule" because: placeholder \{pourTemp\} is not a fact name/],
+    [
+      "a placeholder that is no fact",
+      { because: "Poured at {pourTemp} °C" },
+      /rule "bad-rule" because: placeholder \{pourTemp\} is not a fact name/,
+    ],
     ["no sources", { sources: [] }, /rule "bad-rule" sources: name at least one source/],
     ["an unknown defect type", { explains: [{ type: "bubble" }] }, /rule "bad-rule" explains\.0\.type/],
   ])("%s", (_what, rule, message) => expect(problems(rule)).toMatch(message));
 
-  it("a rule id used twice", () => expect(problems({ id: "fill-below-window" })).toMatch(/rule "fill-below-window" is defined twice/));
+  it("a rule id used twice", () =>
+    expect(problems({ id: "fill-below-window" })).toMatch(/rule "fill-below-window" is defined twice/));
 });
 
 describe("ruleSetFor", () => {
@@ -120,6 +167,8 @@ describe("ruleSetFor", () => {
   });
   it("refuses a shop rule that reuses an id or names an unknown cause", () => {
     expect(() => ruleSetFor(BUILT_IN_RULE_SET, [{ ...shopRule, id: "h2-no-degassing" }])).toThrow(/defined twice/);
-    expect(() => ruleSetFor(BUILT_IN_RULE_SET, [{ ...shopRule, cause: "gremlins" }])).toThrow(/"gremlins" is not a defined cause id/);
+    expect(() => ruleSetFor(BUILT_IN_RULE_SET, [{ ...shopRule, cause: "gremlins" }])).toThrow(
+      /"gremlins" is not a defined cause id/,
+    );
   });
 });

@@ -5,7 +5,6 @@ import { FUSE_OPTIONS, FuzzyIndex, type SearchFields } from "../../server/search
 import { bestFirst } from "../../server/search/best-first";
 import { rng } from "../../scripts/seeded-random";
 
-
 /** Textbook dynamic programme: the fewest edits from `term` to any substring of `text`. */
 function naiveDistance(term: string, text: string): number {
   let prev = Array.from({ length: text.length + 1 }, () => 0);
@@ -20,15 +19,48 @@ function naiveDistance(term: string, text: string): number {
 }
 
 const WORDS = [
-  "porosity", "gas", "misrun", "cold", "shut", "shrinkage", "bracket", "impeller", "housing", "lost", "foam",
-  "green", "sand", "a356.0", "319.0", "degassed", "rotary", "argon", "poured", "hotter", "sprue", "riser",
-  "top", "near", "gate", "thin", "section", "coating", "wet", "dross", "skimmed", "cover", "plate", "ésperé",
+  "porosity",
+  "gas",
+  "misrun",
+  "cold",
+  "shut",
+  "shrinkage",
+  "bracket",
+  "impeller",
+  "housing",
+  "lost",
+  "foam",
+  "green",
+  "sand",
+  "a356.0",
+  "319.0",
+  "degassed",
+  "rotary",
+  "argon",
+  "poured",
+  "hotter",
+  "sprue",
+  "riser",
+  "top",
+  "near",
+  "gate",
+  "thin",
+  "section",
+  "coating",
+  "wet",
+  "dross",
+  "skimmed",
+  "cover",
+  "plate",
+  "ésperé",
 ];
 
 function typo(word: string, r: () => number): string {
   if (word.length < 4 || r() < 0.5) return word;
   const i = 1 + Math.floor(r() * (word.length - 2));
-  return r() < 0.5 ? word.slice(0, i) + word.slice(i + 1) : word.slice(0, i) + word[i + 1] + word[i] + word.slice(i + 2);
+  return r() < 0.5
+    ? word.slice(0, i) + word.slice(i + 1)
+    : word.slice(0, i) + word[i + 1] + word[i] + word.slice(i + 2);
 }
 
 /**
@@ -77,7 +109,9 @@ describe("FuzzyIndex ranks as plain Fuse does", () => {
       const compiled = docs.map((d) => index.compile(d));
       const r = rng(seed * 100);
       for (let q = 0; q < 60; q++) {
-        const query = Array.from({ length: 1 + Math.floor(r() * 3) }, () => typo(WORDS[Math.floor(r() * WORDS.length)], r)).join(" ");
+        const query = Array.from({ length: 1 + Math.floor(r() * 3) }, () =>
+          typo(WORDS[Math.floor(r() * WORDS.length)], r),
+        ).join(" ");
         const expected = fuse.search(query).map((x) => [x.refIndex, x.score]);
         const prepared = index.prepare(query)!;
         const ours = compiled
@@ -97,7 +131,9 @@ describe("FuzzyIndex ranks as plain Fuse does", () => {
     const r = rng(400);
     let same = 0;
     for (let q = 0; q < 60; q++) {
-      const query = Array.from({ length: 1 + Math.floor(r() * 2) }, () => typo(WORDS[Math.floor(r() * WORDS.length)], r)).join(" ");
+      const query = Array.from({ length: 1 + Math.floor(r() * 2) }, () =>
+        typo(WORDS[Math.floor(r() * WORDS.length)], r),
+      ).join(" ");
       const fuseScore = new Map(fuse.search(query).map((x) => [x.refIndex, x.score!]));
       const prepared = index.prepare(query)!;
       compiled.forEach((c, i) => {
@@ -119,8 +155,13 @@ describe("FuzzyIndex ranks as plain Fuse does", () => {
     const fuse = new Fuse(docs.slice(0, 100), FUSE_OPTIONS);
     const query = "porosty bracket";
     const prepared = index.prepare(query)!;
-    const ours = compiled.slice(0, 100).map((c, i) => [i, index.score(prepared, c)]).filter(([, s]) => s >= 0);
-    expect(ours.sort((a, b) => a[1] - b[1] || a[0] - b[0])).toEqual(fuse.search(query).map((x) => [x.refIndex, x.score]));
+    const ours = compiled
+      .slice(0, 100)
+      .map((c, i) => [i, index.score(prepared, c)])
+      .filter(([, s]) => s >= 0);
+    expect(ours.sort((a, b) => a[1] - b[1] || a[0] - b[0])).toEqual(
+      fuse.search(query).map((x) => [x.refIndex, x.score]),
+    );
   });
 });
 
@@ -130,7 +171,9 @@ describe("the relevance page", () => {
     for (let n = 0; n < 300; n++) {
       const scores = Float64Array.from({ length: Math.floor(r() * 200) }, () => Math.floor(r() * 20) / 20);
       const k = Math.floor(r() * 60);
-      const full = Array.from(scores.keys()).sort((a, b) => scores[a] - scores[b] || a - b).slice(0, k);
+      const full = Array.from(scores.keys())
+        .sort((a, b) => scores[a] - scores[b] || a - b)
+        .slice(0, k);
       expect(bestFirst(scores, k)).toEqual(full);
     }
   });

@@ -8,24 +8,69 @@ import { similarCases, type SimilarInput } from "../../server/search/similarity"
 
 /** Hand-built cases around a cold lost-foam misrun at the top of a 4 mm wall (superheat 85 °C). */
 const base: SimilarInput = {
-  id: 0, pouredOn: "2026-01-10", defects: [{ type: "misrun", location: "top", severity: 2 }], defectMask: defectBit("misrun"), markCodes: [markCode("misrun", "top")], process: "lost-foam",
-  alloy: "A356.0", alloyKey: "A356.0", alloyFamily: "al-si", superheatC: 85, degassing: "argon-lance", minSectionMm: 4,
-  cause: null, fixWorked: null,
+  id: 0,
+  pouredOn: "2026-01-10",
+  defects: [{ type: "misrun", location: "top", severity: 2 }],
+  defectMask: defectBit("misrun"),
+  markCodes: [markCode("misrun", "top")],
+  process: "lost-foam",
+  alloy: "A356.0",
+  alloyKey: "A356.0",
+  alloyFamily: "al-si",
+  superheatC: 85,
+  degassing: "argon-lance",
+  minSectionMm: 4,
+  cause: null,
+  fixWorked: null,
 };
-const like = (id: number, over: Partial<SimilarInput>): SimilarInput => withMask({ ...base, id, pouredOn: `2026-02-${String(id).padStart(2, "0")}`, ...over });
+const like = (id: number, over: Partial<SimilarInput>): SimilarInput =>
+  withMask({ ...base, id, pouredOn: `2026-02-${String(id).padStart(2, "0")}`, ...over });
 function withMask(c: SimilarInput): SimilarInput {
-  return { ...c, defectMask: c.defects.reduce((m, d) => m | defectBit(d.type), 0), markCodes: c.defects.map((d) => markCode(d.type, d.location)) };
+  return {
+    ...c,
+    defectMask: c.defects.reduce((m, d) => m | defectBit(d.type), 0),
+    markCodes: c.defects.map((d) => markCode(d.type, d.location)),
+  };
 }
-const confirmedAndFixed = { cause: { id: "cold-pour", title: "Metal too cold", confirmed: true }, fixWorked: "yes" as const };
+const confirmedAndFixed = {
+  cause: { id: "cold-pour", title: "Metal too cold", confirmed: true },
+  fixWorked: "yes" as const,
+};
 
 const target = base;
 const twin = like(1, {});
 const taught = like(2, { superheatC: 115, ...confirmedAndFixed });
-const sideOnly = like(3, { defects: [{ type: "misrun", location: "side", severity: 1 }], alloy: "356.0", alloyKey: "356.0", superheatC: 90, degassing: null, minSectionMm: null });
-const greenSand = like(4, { process: "green-sand", alloy: "319.0", alloyKey: "319.0", alloyFamily: "al-si-cu", superheatC: null, degassing: null, minSectionMm: 10 });
+const sideOnly = like(3, {
+  defects: [{ type: "misrun", location: "side", severity: 1 }],
+  alloy: "356.0",
+  alloyKey: "356.0",
+  superheatC: 90,
+  degassing: null,
+  minSectionMm: null,
+});
+const greenSand = like(4, {
+  process: "green-sand",
+  alloy: "319.0",
+  alloyKey: "319.0",
+  alloyFamily: "al-si-cu",
+  superheatC: null,
+  degassing: null,
+  minSectionMm: 10,
+});
 const looselyTaught = like(5, {
-  defects: [{ type: "misrun", location: "bottom", severity: 1 }, { type: "gas-porosity", location: "top", severity: 1 }, { type: "shrinkage", location: "thick-section", severity: 2 }],
-  process: "green-sand", alloy: "319.0", alloyKey: "319.0", alloyFamily: "al-si-cu", superheatC: null, degassing: null, minSectionMm: null, ...confirmedAndFixed,
+  defects: [
+    { type: "misrun", location: "bottom", severity: 1 },
+    { type: "gas-porosity", location: "top", severity: 1 },
+    { type: "shrinkage", location: "thick-section", severity: 2 },
+  ],
+  process: "green-sand",
+  alloy: "319.0",
+  alloyKey: "319.0",
+  alloyFamily: "al-si-cu",
+  superheatC: null,
+  degassing: null,
+  minSectionMm: null,
+  ...confirmedAndFixed,
 });
 const otherDefect = like(6, { defects: [{ type: "cold-shut", location: "top", severity: 2 }] });
 
@@ -39,7 +84,9 @@ describe("cases like this one", () => {
   it("says why, in the person's units", () => {
     const [first] = similarCases(target, [taught]);
     expect(first.parts.map((p) => p.kind)).toEqual(["defect", "process", "alloy", "superheat", "degassing", "section"]);
-    expect(reasonText(first.parts)).toBe("same misrun at the top, lost foam, A356.0, superheat 30 °C higher, argon lance degassing, similar 4 mm section");
+    expect(reasonText(first.parts)).toBe(
+      "same misrun at the top, lost foam, A356.0, superheat 30 °C higher, argon lance degassing, similar 4 mm section",
+    );
     expect(reasonText(first.parts, { temperature: "F", length: "in", mass: "lb" })).toBe(
       "same misrun at the top, lost foam, A356.0, superheat 54 °F higher, argon lance degassing, similar 0.16 in section",
     );
@@ -59,21 +106,51 @@ describe("cases like this one", () => {
 describe("the shop index's scan", () => {
   it("finds exactly what the case-by-case rule finds", () => {
     let seed = 11;
-    const r = () => ((seed = (seed * 16807) % 2147483647) / 2147483647);
+    const r = () => (seed = (seed * 16807) % 2147483647) / 2147483647;
     const pick = <T>(xs: readonly T[]) => xs[Math.floor(r() * xs.length)];
     const castings: CastingRow[] = Array.from({ length: 400 }, (_, i) => ({
-      id: i + 1, meltId: 1 + (i >> 2), partName: "Part", pattern: null, outcome: pick(["good", "scrap", null]), notes: null, createdBy: "u1",
-      minSectionMm: r() < 0.8 ? pick([3, 4, 5, 8, 12]) : null, pouredOn: `2025-0${1 + (i % 9)}-1${i % 10}`, process: pick(PROCESSES),
-      degassing: pick([null, "none", "rotary", "argon-lance"]), pourTempC: r() < 0.8 ? 650 + Math.floor(r() * 150) : null, meltNotes: null,
-      alloy: pick(["A356.0", "319.0", "356.0"]), alloyFamily: "al-si", liquidusC: 615,
+      id: i + 1,
+      meltId: 1 + (i >> 2),
+      partName: "Part",
+      pattern: null,
+      outcome: pick(["good", "scrap", null]),
+      notes: null,
+      createdBy: "u1",
+      minSectionMm: r() < 0.8 ? pick([3, 4, 5, 8, 12]) : null,
+      pouredOn: `2025-0${1 + (i % 9)}-1${i % 10}`,
+      process: pick(PROCESSES),
+      degassing: pick([null, "none", "rotary", "argon-lance"]),
+      pourTempC: r() < 0.8 ? 650 + Math.floor(r() * 150) : null,
+      meltNotes: null,
+      alloy: pick(["A356.0", "319.0", "356.0"]),
+      alloyFamily: "al-si",
+      liquidusC: 615,
     }));
     castings.forEach((c) => (c.alloyFamily = c.alloy === "319.0" ? "al-si-cu" : "al-si"));
-    const marks = castings.flatMap((c) => Array.from({ length: Math.floor(r() * 3) }, () => ({
-      castingId: c.id, type: pick(DEFECT_TYPES.slice(0, 5)), location: pick(DEFECT_LOCATIONS.slice(0, 4)), severity: 2, note: null,
-    })));
-    const confirmations = castings.filter(() => r() < 0.1).map((c) => ({ castingId: c.id, causeId: "cold-pour", causeText: null }));
-    const fixes = confirmations.filter(() => r() < 0.5).map((c) => ({ castingId: c.castingId, fix: "hotter", worked: "yes" }));
-    const docs = caseDocs({ castings, marks, comments: [], diagnoses: [], confirmations, fixes, causeTitles: new Map() });
+    const marks = castings.flatMap((c) =>
+      Array.from({ length: Math.floor(r() * 3) }, () => ({
+        castingId: c.id,
+        type: pick(DEFECT_TYPES.slice(0, 5)),
+        location: pick(DEFECT_LOCATIONS.slice(0, 4)),
+        severity: 2,
+        note: null,
+      })),
+    );
+    const confirmations = castings
+      .filter(() => r() < 0.1)
+      .map((c) => ({ castingId: c.id, causeId: "cold-pour", causeText: null }));
+    const fixes = confirmations
+      .filter(() => r() < 0.5)
+      .map((c) => ({ castingId: c.castingId, fix: "hotter", worked: "yes" }));
+    const docs = caseDocs({
+      castings,
+      marks,
+      comments: [],
+      diagnoses: [],
+      confirmations,
+      fixes,
+      causeTitles: new Map(),
+    });
     const index = new ShopIndex(docs);
     const cases = index.live();
     for (const target of cases.slice(0, 60)) {

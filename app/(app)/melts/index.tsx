@@ -17,8 +17,10 @@ import { useUnits } from "@/hooks/use-units";
 
 const PAGE_SIZE = 20;
 const ORDER = [
-  { value: "date-desc", label: "newest" }, { value: "date-asc", label: "oldest" },
-  { value: "alloy", label: "alloy" }, { value: "castings", label: "most castings" },
+  { value: "date-desc", label: "newest" },
+  { value: "date-asc", label: "oldest" },
+  { value: "alloy", label: "alloy" },
+  { value: "castings", label: "most castings" },
 ];
 
 /** The pour log: cards on a phone, a sortable table on a wide screen. */
@@ -29,7 +31,10 @@ export default function MeltsScreen() {
   const [page, setPage] = useState(1);
   const [sort, setSort] = useState<MeltSort>("date-desc");
   const melts = useMelts({ page, pageSize: PAGE_SIZE, sort });
-  const resort = (s: MeltSort) => { setSort(s); setPage(1); };
+  const resort = (s: MeltSort) => {
+    setSort(s);
+    setPage(1);
+  };
 
   return (
     <Screen wide={wide}>
@@ -37,15 +42,20 @@ export default function MeltsScreen() {
         <Heading>Melts</Heading>
         <Button label="Log a melt" onPress={() => router.push("/melts/new")} testID="new-melt" />
       </View>
-      {!wide ? <ChoiceChips label="Order" options={ORDER} value={sort} onChange={(s) => resort(s as MeltSort)} /> : null}
+      {!wide ? (
+        <ChoiceChips label="Order" options={ORDER} value={sort} onChange={(s) => resort(s as MeltSort)} />
+      ) : null}
       {melts.isPending ? <Loading /> : null}
       {melts.error ? <Notice tone="error">{melts.error.message}</Notice> : null}
       {melts.data && melts.data.total === 0 ? (
         <Notice>No melts logged yet. Log the first one after your next pour.</Notice>
       ) : null}
       {melts.data && melts.data.items.length ? (
-        wide ? <MeltTable melts={melts.data.items} units={units} sort={sort} onSort={resort} />
-          : melts.data.items.map((m) => <MeltCard key={m.id} melt={m} units={units} />)
+        wide ? (
+          <MeltTable melts={melts.data.items} units={units} sort={sort} onSort={resort} />
+        ) : (
+          melts.data.items.map((m) => <MeltCard key={m.id} melt={m} units={units} />)
+        )
       ) : null}
       {melts.data ? <Pager page={page} pageSize={PAGE_SIZE} total={melts.data.total} onPage={setPage} /> : null}
     </Screen>

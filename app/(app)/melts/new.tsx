@@ -22,11 +22,15 @@ export default function NewMeltScreen() {
     <Screen>
       <BackLink href="/melts" label="All melts" />
       <Heading>Log a melt</Heading>
-      <MeltForm initial={defaults.data} units={units.data ?? SI_UNITS} submitLabel="Save the melt"
+      <MeltForm
+        initial={defaults.data}
+        units={units.data ?? SI_UNITS}
+        submitLabel="Save the melt"
         onSubmit={async (input) => {
           const melt = await create.mutateAsync(input);
           router.replace(`/melts/${melt.id}`);
-        }} />
+        }}
+      />
     </Screen>
   );
 }

@@ -18,13 +18,19 @@ import type { RuleRow } from "@/lib/rulebook-schemas";
 
 const PAGE = 40;
 const SHOW = [
-  { value: "all", label: "all" }, { value: "shop", label: "written here" },
-  { value: "built-in", label: "built in" }, { value: "off", label: "not in use" },
+  { value: "all", label: "all" },
+  { value: "shop", label: "written here" },
+  { value: "built-in", label: "built in" },
+  { value: "off", label: "not in use" },
 ];
 const shows: Record<string, (r: RuleRow) => boolean> = {
-  all: () => true, shop: (r) => r.source === "shop", "built-in": (r) => r.source === "built-in", off: (r) => !r.inUse,
+  all: () => true,
+  shop: (r) => r.source === "shop",
+  "built-in": (r) => r.source === "built-in",
+  off: (r) => !r.inUse,
 };
-const text = (r: RuleRow) => [r.cause.title, r.family, ...r.explains.map((t) => DEFECTS[t].label)].join(" ").toLowerCase();
+const text = (r: RuleRow) =>
+  [r.cause.title, r.family, ...r.explains.map((t) => DEFECTS[t].label)].join(" ").toLowerCase();
 
 /** Every rule behind the diagnoses: the shop's own first, then the built-in ones, each with its record here. */
 export default function RulebookScreen() {
@@ -55,21 +61,54 @@ export default function RulebookScreen() {
       </Text>
       {mayWrite || mayReview ? (
         <View style={styles.actions}>
-          {mayWrite ? <Button label="Write a rule" onPress={() => router.push("/rulebook/new")} testID="write-rule" /> : null}
+          {mayWrite ? (
+            <Button label="Write a rule" onPress={() => router.push("/rulebook/new")} testID="write-rule" />
+          ) : null}
           {mayReview ? (
-            <Button kind="plain" label={`Cases waiting for review (${waiting})`} onPress={() => router.push("/rulebook/review")} testID="open-review" />
+            <Button
+              kind="plain"
+              label={`Cases waiting for review (${waiting})`}
+              onPress={() => router.push("/rulebook/review")}
+              testID="open-review"
+            />
           ) : null}
         </View>
       ) : (
-        <Notice>Mentors and owners write and change rules. If a diagnosis looks wrong, ask for a review on the casting's page.</Notice>
+        <Notice>
+          Mentors and owners write and change rules. If a diagnosis looks wrong, ask for a review on the casting's page.
+        </Notice>
       )}
-      <TextField label="Find a rule" value={query} onChangeText={(t) => { setQuery(t); setLimit(PAGE); }} placeholder="a cause or a defect: cold, porosity…" />
-      <ChoiceChips label="Show" options={SHOW} value={show} onChange={(v) => { setShow(v); setLimit(PAGE); }} />
+      <TextField
+        label="Find a rule"
+        value={query}
+        onChangeText={(t) => {
+          setQuery(t);
+          setLimit(PAGE);
+        }}
+        placeholder="a cause or a defect: cold, porosity…"
+      />
+      <ChoiceChips
+        label="Show"
+        options={SHOW}
+        value={show}
+        onChange={(v) => {
+          setShow(v);
+          setLimit(PAGE);
+        }}
+      />
       {rules.length === 0 ? <Notice>No rule matches.</Notice> : null}
       <View style={styles.list}>
-        {rules.slice(0, limit).map((r) => <RuleListItem key={r.id} rule={r} units={units} />)}
+        {rules.slice(0, limit).map((r) => (
+          <RuleListItem key={r.id} rule={r} units={units} />
+        ))}
       </View>
-      {rules.length > limit ? <Button kind="plain" label={`Show more (${rules.length - limit} left)`} onPress={() => setLimit((l) => l + PAGE)} /> : null}
+      {rules.length > limit ? (
+        <Button
+          kind="plain"
+          label={`Show more (${rules.length - limit} left)`}
+          onPress={() => setLimit((l) => l + PAGE)}
+        />
+      ) : null}
     </Screen>
   );
 }

@@ -27,7 +27,12 @@ export default function NewRuleScreen() {
       <BackLink href="/rulebook" label="Rulebook" />
       <Heading>Write a rule</Heading>
       {mayWrite ? (
-        <RuleForm initial={initial} causes={book.data.causes} units={units} onSaved={(r) => router.replace(`/rulebook/${r.id}`)} />
+        <RuleForm
+          initial={initial}
+          causes={book.data.causes}
+          units={units}
+          onSaved={(r) => router.replace(`/rulebook/${r.id}`)}
+        />
       ) : (
         <Notice>Only mentors and owners write rules.</Notice>
       )}

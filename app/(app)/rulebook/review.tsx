@@ -29,7 +29,9 @@ export default function ReviewQueueScreen() {
       <Heading>Waiting for review</Heading>
       <Text style={styles.intro}>Oldest first. Open a casting to confirm its cause or name another.</Text>
       {queue.data.length === 0 ? <Notice>No casting is waiting for review.</Notice> : null}
-      {queue.data.map((item) => <ReviewQueueItem key={item.requestId} item={item} />)}
+      {queue.data.map((item) => (
+        <ReviewQueueItem key={item.requestId} item={item} />
+      ))}
     </Screen>
   );
 }

@@ -23,11 +23,15 @@ export default function EditMeltScreen() {
     <Screen>
       <BackLink href={`/melts/${id}`} label="Back to the melt" />
       <Heading>Change the melt of {formatDay(melt.data.pouredOn)}</Heading>
-      <MeltForm initial={melt.data} units={units.data ?? SI_UNITS} submitLabel="Save changes"
+      <MeltForm
+        initial={melt.data}
+        units={units.data ?? SI_UNITS}
+        submitLabel="Save changes"
         onSubmit={async (input) => {
           await update.mutateAsync(input);
           router.replace(`/melts/${id}`);
-        }} />
+        }}
+      />
     </Screen>
   );
 }

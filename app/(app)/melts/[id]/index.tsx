@@ -32,17 +32,26 @@ export default function MeltScreen() {
     <Screen>
       <BackLink href="/melts" label="All melts" />
       <View style={styles.head}>
-        <Heading style={styles.title}>{m.alloy} melt, {formatDay(m.pouredOn)}</Heading>
+        <Heading style={styles.title}>
+          {m.alloy} melt, {formatDay(m.pouredOn)}
+        </Heading>
         <Button kind="plain" label="Change" onPress={() => router.push(`/melts/${id}/edit`)} />
       </View>
       <MeltFacts melt={m} units={u} />
       {m.notes ? <Notice>{m.notes}</Notice> : null}
       <Heading level={2}>Castings from this melt</Heading>
       {m.castings.length === 0 ? <Notice>No castings logged from this melt yet.</Notice> : null}
-      {m.castings.map((c) => <CastingRow key={c.id} casting={c} />)}
+      {m.castings.map((c) => (
+        <CastingRow key={c.id} casting={c} />
+      ))}
       <View style={styles.add}>
         <Heading level={3}>Add a casting</Heading>
-        <CastingForm units={u} submitLabel="Save casting" keepOpen onSubmit={(input) => addCasting.mutateAsync(input)} />
+        <CastingForm
+          units={u}
+          submitLabel="Save casting"
+          keepOpen
+          onSubmit={(input) => addCasting.mutateAsync(input)}
+        />
       </View>
     </Screen>
   );
@@ -51,5 +60,12 @@ export default function MeltScreen() {
 const styles = StyleSheet.create({
   head: { flexDirection: "row", alignItems: "center", justifyContent: "space-between", gap: space.md },
   title: { flex: 1 },
-  add: { gap: space.md, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  add: {
+    gap: space.md,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
 });

@@ -28,10 +28,20 @@ export default function EditRuleScreen() {
     <Screen>
       <BackLink href={`/rulebook/${ruleId}`} label="The rule" />
       <Heading>Change the rule</Heading>
-      {rule.data.source !== "shop" ? <Notice>Built-in rules are not changed here; switch one off and write the shop's own instead.</Notice>
-        : !mayWrite ? <Notice>Only mentors and owners change rules.</Notice>
-        : <RuleForm key={rule.data.versions[0]?.version} initial={initial!} ruleId={ruleId} causes={book.data.causes} units={units}
-            onSaved={(r) => router.replace(`/rulebook/${r.id}`)} />}
+      {rule.data.source !== "shop" ? (
+        <Notice>Built-in rules are not changed here; switch one off and write the shop's own instead.</Notice>
+      ) : !mayWrite ? (
+        <Notice>Only mentors and owners change rules.</Notice>
+      ) : (
+        <RuleForm
+          key={rule.data.versions[0]?.version}
+          initial={initial!}
+          ruleId={ruleId}
+          causes={book.data.causes}
+          units={units}
+          onSaved={(r) => router.replace(`/rulebook/${r.id}`)}
+        />
+      )}
     </Screen>
   );
 }

@@ -30,30 +30,58 @@ export default function RuleScreen() {
   return (
     <Screen>
       <BackLink href="/rulebook" label="Rulebook" />
-      <Heading>{r.effect === "weakens" ? "Against: " : ""}{r.cause.title}</Heading>
-      <Text style={styles.meta} testID="rule-state">{r.source === "shop" ? "Written here" : `Built in · ${r.family}`} · {stateWords(r)}</Text>
-      {r.contradictions.map((c) => <Notice key={c.message} tone="caution">{`These conditions can never all be true, so it would never fire: ${c.message}.`}</Notice>)}
+      <Heading>
+        {r.effect === "weakens" ? "Against: " : ""}
+        {r.cause.title}
+      </Heading>
+      <Text style={styles.meta} testID="rule-state">
+        {r.source === "shop" ? "Written here" : `Built in · ${r.family}`} · {stateWords(r)}
+      </Text>
+      {r.contradictions.map((c) => (
+        <Notice
+          key={c.message}
+          tone="caution"
+        >{`These conditions can never all be true, so it would never fire: ${c.message}.`}</Notice>
+      ))}
       <RuleActions rule={r} />
       <Block title="Explains">
-        <Text style={styles.text}>{r.explains.map((t) => DEFECTS[t].label).join(", ")} · {places}</Text>
+        <Text style={styles.text}>
+          {r.explains.map((t) => DEFECTS[t].label).join(", ")} · {places}
+        </Text>
       </Block>
       <Block title="When all of these hold">
         <RuleConditions conditions={r.rule.conditions} units={units} />
       </Block>
       <Block title={r.effect === "weakens" ? "It speaks against" : "It points to"}>
         <Text style={styles.strong}>{r.cause.title}</Text>
-        {r.causeFixes.map((f) => <Text key={f} style={styles.text}>• {f}</Text>)}
+        {r.causeFixes.map((f) => (
+          <Text key={f} style={styles.text}>
+            • {f}
+          </Text>
+        ))}
         <Text style={styles.text}>Reason shown: “{r.rule.because}”</Text>
       </Block>
       <Block title="How much it counts here">
         <Text style={styles.text}>
-          Weight {r.weight}{r.factor !== 1 ? `, × ${r.factor.toFixed(2)} from its record here (counts as ${Math.min(1, r.weight * r.factor).toFixed(2)})` : ""}.
+          Weight {r.weight}
+          {r.factor !== 1
+            ? `, × ${r.factor.toFixed(2)} from its record here (counts as ${Math.min(1, r.weight * r.factor).toFixed(2)})`
+            : ""}
+          .
         </Text>
         <RuleRecordLine record={r.record} />
-        {r.record ? null : <Text style={styles.muted}>Until it fires on a case whose cause a mentor confirmed, it counts at its written weight.</Text>}
+        {r.record ? null : (
+          <Text style={styles.muted}>
+            Until it fires on a case whose cause a mentor confirmed, it counts at its written weight.
+          </Text>
+        )}
       </Block>
       <Block title="Sources">
-        {r.sources.map((s) => <Text key={s} style={styles.text}>• {s}</Text>)}
+        {r.sources.map((s) => (
+          <Text key={s} style={styles.text}>
+            • {s}
+          </Text>
+        ))}
       </Block>
       {r.source === "shop" ? (
         <Block title="Versions">
@@ -62,7 +90,9 @@ export default function RuleScreen() {
       ) : r.switches.length ? (
         <Block title="Switched here">
           {r.switches.map((s) => (
-            <Text key={s.createdAt} style={styles.text}>• {s.off ? "Off" : "Back on"}: {s.createdBy?.name ?? "someone"}, {formatMoment(s.createdAt)}</Text>
+            <Text key={s.createdAt} style={styles.text}>
+              • {s.off ? "Off" : "Back on"}: {s.createdBy?.name ?? "someone"}, {formatMoment(s.createdAt)}
+            </Text>
           ))}
         </Block>
       ) : null}
@@ -81,7 +111,14 @@ function Block({ title, children }: { title: string; children: ReactNode }) {
 
 const styles = StyleSheet.create({
   meta: { fontSize: 14, color: colors.muted, fontWeight: "600" },
-  block: { gap: space.xs, padding: space.md, borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.surface },
+  block: {
+    gap: space.xs,
+    padding: space.md,
+    borderRadius: radius.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
   text: { fontSize: 15, lineHeight: 22, color: colors.ink },
   strong: { fontSize: 15, lineHeight: 22, fontWeight: "700", color: colors.ink },
   muted: { fontSize: 14, lineHeight: 20, color: colors.muted },
