@@ -1,6 +1,6 @@
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { db } from "../../db/client";
+import { db } from "../../server/db";
 import { shopCauses, shopRules, shopRuleVersions } from "../../db/schema";
 import type { RuleDraft, RuleVersion } from "../../lib/rulebook-schemas";
 import { ruleChanges } from "../../rules/rule-diff";
@@ -179,13 +179,11 @@ describe("shop rules in diagnoses", () => {
     expect((await mentor.agent.post(`/api/rulebook/rules/${id}/publish`)).status).toBe(409);
 
     // A changed draft on top of the published version changes nothing until it is published.
-    await mentor.agent
-      .put(`/api/rulebook/rules/${id}`)
-      .send({
-        ...draft,
-        conditions: [{ fact: "sprueHeightMm", comparison: "above", value: 400 }],
-        cause: { kind: "existing", id: after[0].id },
-      });
+    await mentor.agent.put(`/api/rulebook/rules/${id}`).send({
+      ...draft,
+      conditions: [{ fact: "sprueHeightMm", comparison: "above", value: 400 }],
+      cause: { kind: "existing", id: after[0].id },
+    });
     expect((await causesOf(caster, casting.id))[0].id).toBe(after[0].id);
 
     expect((await mentor.agent.post(`/api/rulebook/rules/${id}/retire`)).body).toMatchObject({
@@ -212,14 +210,12 @@ describe("shop rules in diagnoses", () => {
     const { caster, mentor, owner } = await shopWithCrew("Rulebook Versions");
     const id = (await mentor.agent.post("/api/rulebook/rules").send(draft)).body.id;
     const causeId = (await caster.agent.get(`/api/rulebook/rules/${id}`)).body.cause.id;
-    await owner.agent
-      .put(`/api/rulebook/rules/${id}`)
-      .send({
-        ...draft,
-        cause: { kind: "existing", id: causeId },
-        weight: 0.7,
-        sources: ["shop experience", "Pattern shop notes"],
-      });
+    await owner.agent.put(`/api/rulebook/rules/${id}`).send({
+      ...draft,
+      cause: { kind: "existing", id: causeId },
+      weight: 0.7,
+      sources: ["shop experience", "Pattern shop notes"],
+    });
     await mentor.agent.post(`/api/rulebook/rules/${id}/publish`);
     const detail = await caster.agent.get(`/api/rulebook/rules/${id}`);
     const versions = detail.body.versions as RuleVersion[];
