@@ -30,7 +30,7 @@ async function flashCasting(p: Person, sprueHeightMm = 300, pouredOn = "2026-02-
   });
 }
 const causesOf = async (p: Person, castingId: number) => {
-  const res = await p.agent.post(`/api/castings/${castingId}/diagnosis`);
+  const res = await p.agent.post(`/api/diagnosis/castings/${castingId}`);
   expect(res.status).toBe(201);
   return res.body.result.causes as { id: string; because: string[]; record: { confirmed: number; right: number } }[];
 };
@@ -241,7 +241,7 @@ describe("shop rules in diagnoses", () => {
       degassing: "none",
     };
     const reasons = async (p: Person) =>
-      (await p.agent.post("/api/diagnose").send(gas)).body.causes.flatMap((c: { because: string[] }) => c.because);
+      (await p.agent.post("/api/diagnosis").send(gas)).body.causes.flatMap((c: { because: string[] }) => c.because);
     expect(await reasons(a.caster)).toContain("The melt was not degassed");
     const off = await a.mentor.agent.put("/api/rulebook/rules/h2-no-degassing/switch").send({ off: true });
     expect(off.body).toMatchObject({
@@ -266,7 +266,7 @@ describe("trying a rule and learning from confirmed cases", () => {
     const short = await flashCasting(caster, 120, "2026-02-02");
     const confirmed = await flashCasting(caster, 320, "2026-02-03");
     const topBefore = (await causesOf(caster, confirmed.id))[0].id;
-    await mentor.agent.post(`/api/castings/${confirmed.id}/confirmations`).send({ causeId: topBefore });
+    await mentor.agent.post(`/api/review/castings/${confirmed.id}/confirmations`).send({ causeId: topBefore });
     const res = await mentor.agent.post("/api/rulebook/try").send({ draft });
     expect(res.status).toBe(200);
     // Fires on the two tall sprues; the confirmed one was something else, so it does not agree.
@@ -307,9 +307,9 @@ describe("trying a rule and learning from confirmed cases", () => {
       const top = (await causesOf(caster, c.id))[0] as unknown as { id: string; score: number; record: object };
       scores.push(top.score);
       expect(top.id).toBe(cause);
-      expect((await mentor.agent.post(`/api/castings/${c.id}/confirmations`).send({ causeId: cause })).status).toBe(
-        201,
-      );
+      expect(
+        (await mentor.agent.post(`/api/review/castings/${c.id}/confirmations`).send({ causeId: cause })).status,
+      ).toBe(201);
     }
     const latest = await flashCasting(caster, 300, "2026-03-04");
     const [top] = await causesOf(caster, latest.id);
