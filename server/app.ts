@@ -4,7 +4,7 @@ import express from "express";
 import { env } from "./env";
 import { existsSync } from "node:fs";
 import { join } from "node:path";
-import { auth } from "./auth/auth";
+import { getAuth } from "./auth/auth";
 import { healthRouter } from "./health/router";
 import { apiNotFound, errorHandler } from "./http/errors";
 import { shopsRouter } from "./shops/router";
@@ -35,7 +35,7 @@ export function createApp(opts: { webDir?: string } = {}) {
   if (env.DEV_WEB_ORIGIN) app.use(cors({ origin: env.DEV_WEB_ORIGIN, credentials: true }));
 
   // better-auth reads the raw body itself: mount it before express.json().
-  app.all("/api/auth/{*any}", toNodeHandler(auth));
+  app.all("/api/auth/{*any}", toNodeHandler(getAuth()));
 
   const api = express.Router();
   api.use(express.json({ limit: "1mb" }));

@@ -1,5 +1,5 @@
 import { eq } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { user } from "../../db/schema";
 import type { CastingDetail } from "../../lib/notebook-schemas";
 import { commentsOf } from "../comments/service";

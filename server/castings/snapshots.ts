@@ -1,5 +1,5 @@
 import { and, desc, eq } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { diagnosisSnapshots, user } from "../../db/schema";
 import type { DiagnosisSnapshot } from "../../lib/notebook-schemas";
 import type { DiagnosisResult } from "../../rules/engine";

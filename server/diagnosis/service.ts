@@ -1,5 +1,5 @@
 import { eq } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { alloys, diagnosisSnapshots, melts } from "../../db/schema";
 import type { DiagnosisSnapshot } from "../../lib/notebook-schemas";
 import { caseSchema } from "../../rules/case";

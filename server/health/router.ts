@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
 import { Router } from "express";
-import { db } from "../../db/client";
+import { db } from "../db";
 
 export const healthRouter = Router();
 

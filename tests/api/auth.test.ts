@@ -1,7 +1,7 @@
 import { eq } from "drizzle-orm";
 import request from "supertest";
 import { beforeAll, describe, expect, it } from "vitest";
-import { db } from "../../db/client";
+import { db } from "../../server/db";
 import { user } from "../../db/schema";
 import { app, migrateOnce, ORIGIN, signUp, uniqueEmail } from "./helpers";
 

@@ -1,7 +1,7 @@
 import { eq } from "drizzle-orm";
 import request from "supertest";
 import { beforeAll, describe, expect, it } from "vitest";
-import { db } from "../../db/client";
+import { db } from "../../server/db";
 import { diagnosisSnapshots } from "../../db/schema";
 import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
 import { app, migrateOnce, shopWithCrew, signUp } from "./helpers";

@@ -1,7 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import request from "supertest";
 import { beforeAll, describe, expect, it } from "vitest";
-import { db } from "../../db/client";
+import { db } from "../../server/db";
 import { alloys } from "../../db/schema";
 import { BUILT_IN_ALLOYS } from "../../rules/alloys";
 import { app, migrateOnce, shopWithCrew } from "./helpers";

@@ -1,6 +1,6 @@
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { db } from "../../db/client";
+import { db } from "../../server/db";
 import { castings } from "../../db/schema";
 import { createCasting } from "../../server/castings/service";
 import { migrateOnce, shopWithCrew } from "./helpers";

@@ -1,5 +1,5 @@
 import { eq } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../../server/db";
 import { castings, defectMarks, melts } from "../../db/schema";
 import type { CastingInput, MeltInput } from "../../lib/notebook-schemas";
 import type { Person } from "./helpers";

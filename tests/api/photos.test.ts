@@ -5,7 +5,7 @@ import { eq } from "drizzle-orm";
 import sharp from "sharp";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { db } from "../../db/client";
+import { db } from "../../server/db";
 import { photos } from "../../db/schema";
 import { env } from "../../server/env";
 import { storePhoto } from "../../server/photos/service";

@@ -1,6 +1,6 @@
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { db } from "../../db/client";
+import { db } from "../../server/db";
 import { confirmations, fixesTried, reviewRequests } from "../../db/schema";
 import type { CaseReview, Followups, QueueItem } from "../../lib/review-schemas";
 import { migrateOnce, shopWithCrew } from "./helpers";

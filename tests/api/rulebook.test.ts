@@ -1,6 +1,6 @@
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { db } from "../../db/client";
+import { db } from "../../server/db";
 import { shopCauses, shopRules, shopRuleVersions } from "../../db/schema";
 import type { RuleDraft, RuleVersion } from "../../lib/rulebook-schemas";
 import { ruleChanges } from "../../rules/rule-diff";

@@ -1,6 +1,6 @@
 import { eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
-import { db } from "../../db/client";
+import { db } from "../../server/db";
 import { shopSettings } from "../../db/schema";
 import { createShop, migrateOnce, ORIGIN, shopWithCrew, signUp } from "./helpers";
 
