@@ -1,5 +1,6 @@
 import js from "@eslint/js";
 import tseslint from "typescript-eslint";
+import { layerRules } from "./eslint-layers.js";
 
 export default tseslint.config(
   { ignores: ["node_modules/", "dist/", ".expo/", ".data/", "uploads/", "drizzle/", "tests/e2e/screenshots/"] },
@@ -24,4 +25,5 @@ export default tseslint.config(
     files: ["server/env.ts", "lib/client-env.ts", "scripts/**", "tests/**", "*.config.ts", "*.config.js"],
     rules: { "no-restricted-properties": "off" },
   },
+  ...layerRules,
 );

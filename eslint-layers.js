@@ -1,0 +1,35 @@
+// The layers, top to bottom: app -> components -> hooks -> lib -> rules, and server -> db -> lib/rules.
+// Each layer may import only the ones below it; scripts and tests may import anything.
+const prefixes = ["@/", "../", "../../", "../../../", "../../../../"];
+const above = (...folders) => folders.flatMap((f) => prefixes.flatMap((p) => [`${p}${f}`, `${p}${f}/**`]));
+const layer = (files, folders, why) => ({
+  files,
+  rules: {
+    "no-restricted-imports": [
+      "error",
+      { patterns: [{ group: above(...folders), message: `${why} (see DEVELOPERS.md, "Layout").` }] },
+    ],
+  },
+});
+
+export const layerRules = [
+  layer(
+    ["rules/**"],
+    ["lib", "hooks", "components", "app", "server", "db", "scripts"],
+    "rules/ is the bottom layer: pure foundry knowledge",
+  ),
+  layer(
+    ["lib/**"],
+    ["hooks", "components", "app", "server", "scripts"],
+    "lib/ is shared by app and server and imports only rules/ (and table definitions)",
+  ),
+  layer(["hooks/**"], ["components", "app", "server", "db", "scripts"], "hooks/ sit below components and routes"),
+  layer(["components/**"], ["app", "server", "db", "scripts"], "components/ do not import routes or server code"),
+  layer(["app/**"], ["server", "db", "scripts"], "routes reach the server through the API, not by import"),
+  layer(
+    ["db/**"],
+    ["server", "app", "components", "hooks", "scripts"],
+    "db/ holds tables and the client; it takes its URL as a parameter",
+  ),
+  layer(["server/**"], ["app", "components", "hooks", "scripts"], "the server does not import the app"),
+];
