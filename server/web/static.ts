@@ -1,4 +1,5 @@
-import type { Express, Response } from "express";
+import type { Express } from "express";
+import type { ServerResponse } from "node:http";
 import expressStaticGzip from "express-static-gzip";
 import { existsSync } from "node:fs";
 import { basename, join } from "node:path";
@@ -7,7 +8,7 @@ import { basename, join } from "node:path";
 const CONTENT_HASH = /[.-][0-9a-f]{32}(@\dx)?\.[a-z0-9]+(\.(br|gz))?$/i;
 
 /** A hashed name changes with its content, so it may be kept for a year; anything else is checked each time. */
-function setCacheHeaders(res: Response, filePath: string) {
+function setCacheHeaders(res: ServerResponse, filePath: string) {
   const hashed = CONTENT_HASH.test(basename(filePath));
   res.setHeader("Cache-Control", hashed ? "public, max-age=31536000, immutable" : "no-cache");
 }
