@@ -21,7 +21,8 @@ const pg = startLocalPostgres({
   throwaway: true,
 });
 process.env.DATABASE_URL = pg.url;
-const { db, pool } = await import("../db/client");
+const { connection, closeDb } = await import("../server/db");
+const { db, pool } = connection();
 const { comments } = await import("../db/schema");
 const { applyMigrations } = await import("../db/migrate");
 const { ensureBuiltInAlloys } = await import("../server/alloys/service");
@@ -182,7 +183,7 @@ try {
   await bench(small);
   await bench(large);
 } finally {
-  await pool.end();
+  await closeDb();
   pg.stop();
   rmSync(parent, { recursive: true, force: true });
   rmSync(pg.dataDir, { recursive: true, force: true });

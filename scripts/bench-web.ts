@@ -22,7 +22,7 @@ const baseUrl = `http://127.0.0.1:${port}`;
 Object.assign(process.env, { DATABASE_URL: pg.url, PORT: String(port), NODE_ENV: "test", PUBLIC_URL: baseUrl });
 process.env.UPLOAD_DIR = join(parent, "uploads");
 
-const { db, pool } = await import("../db/client");
+const { closeDb, db } = await import("../server/db");
 const { applyMigrations } = await import("../db/migrate");
 const { seedDemoShop } = await import("../server/seed/seed");
 const { DEMO_PEOPLE } = await import("../server/seed/demo-people");
@@ -112,7 +112,7 @@ try {
   await browser.close();
   server.closeAllConnections();
   await new Promise((r) => server.close(r));
-  await pool.end();
+  await closeDb();
   pg.stop();
   rmSync(parent, { recursive: true, force: true });
   rmSync(pg.dataDir, { recursive: true, force: true });

@@ -3,6 +3,9 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
+import { applyMigrations } from "../db/migrate";
+import { closeDb, db } from "../server/db";
+import { seedDemoShop } from "../server/seed/seed";
 import { startLocalPostgres, type LocalPostgres } from "./local-postgres";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
@@ -24,12 +27,9 @@ const childEnv = {
   EXPO_PUBLIC_API_URL: `http://127.0.0.1:${apiPort}`,
 };
 
-const { db, pool } = await import("../db/client");
-const { applyMigrations } = await import("../db/migrate");
-const { seedDemoShop } = await import("../server/seed/seed");
 await applyMigrations(db);
 await seedDemoShop();
-await pool.end();
+await closeDb();
 
 const children: ChildProcess[] = [
   spawn("npx", ["tsx", "watch", "--clear-screen=false", "server/dev-server.ts"], {

@@ -9,7 +9,13 @@ import { join } from "node:path";
  * one under .data/, the tests make a throwaway one. As root, initdb refuses to run, so the
  * cluster belongs to the `postgres` user and its binaries run through runuser.
  */
-export type LocalPostgres = { url: string; dataDir: string; port: number; stop: () => void };
+/** `stop("immediate")` kills the server without a clean shutdown (the fault test's power cut). */
+export type LocalPostgres = {
+  url: string;
+  dataDir: string;
+  port: number;
+  stop: (mode?: "fast" | "immediate") => void;
+};
 
 const isRoot = process.getuid?.() === 0;
 
@@ -106,9 +112,9 @@ export function startLocalPostgres(opts: {
       `-k ${socketDir} -p ${opts.port} -c listen_addresses=127.0.0.1${opts.throwaway ? " -c fsync=off" : ""}`,
     ]);
   }
-  const stop = () => {
+  const stop = (mode: "fast" | "immediate" = "fast") => {
     try {
-      run(join(bin, "pg_ctl"), ["stop", "-D", dataDir, "-m", "fast", "-w"]);
+      run(join(bin, "pg_ctl"), ["stop", "-D", dataDir, "-m", mode, "-w"]);
     } catch {
       /* already stopped */
     }

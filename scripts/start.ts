@@ -3,6 +3,12 @@
 // an empty database, builds the web app when stale, and serves API and app from one process.
 import { fileURLToPath } from "node:url";
 import { join } from "node:path";
+import { applyMigrations } from "../db/migrate";
+import { closeDb, db } from "../server/db";
+import { env } from "../server/env";
+import { listen } from "../server/index";
+import { DEMO_PEOPLE } from "../server/seed/demo-people";
+import { seedDemoShop } from "../server/seed/seed";
 import { startLocalPostgres, type LocalPostgres } from "./local-postgres";
 import { ensureWebBuild } from "./web-build";
 
@@ -20,14 +26,6 @@ try {
   console.error((err as Error).message);
   process.exit(1);
 }
-
-// Imported only now: they read DATABASE_URL when loaded.
-const { env } = await import("../server/env");
-const { db, pool } = await import("../db/client");
-const { applyMigrations } = await import("../db/migrate");
-const { seedDemoShop } = await import("../server/seed/seed");
-const { DEMO_PEOPLE } = await import("../server/seed/demo-people");
-const { listen } = await import("../server/index");
 
 await applyMigrations(db);
 const seeded = await seedDemoShop();
@@ -49,7 +47,7 @@ async function stop() {
   console.log("\nStopping...");
   server.closeAllConnections?.();
   await new Promise((r) => server.close(r));
-  await pool.end();
+  await closeDb();
   localDb?.stop();
   process.exit(0);
 }

@@ -2,7 +2,7 @@ import { toNodeHandler } from "better-auth/node";
 import cors from "cors";
 import express from "express";
 import { env } from "./env";
-import { auth } from "./auth/auth";
+import { getAuth } from "./auth/auth";
 import { healthRouter } from "./health/router";
 import { apiNotFound, errorHandler } from "./http/errors";
 import { shopsRouter } from "./shops/router";
@@ -16,7 +16,6 @@ import { marksRouter } from "./marks/router";
 import { meltsRouter } from "./melts/router";
 import { peopleRouter } from "./people/router";
 import { photosRouter } from "./photos/router";
-// Mentors: review, follow-ups and the shop's rulebook.
 import { followupsRouter } from "./followups/router";
 import { reviewRouter } from "./review/router";
 import { rulebookRouter } from "./rulebook/router";
@@ -35,28 +34,31 @@ export function createApp(opts: { webDir?: string } = {}) {
   if (env.DEV_WEB_ORIGIN) app.use(cors({ origin: env.DEV_WEB_ORIGIN, credentials: true }));
 
   // better-auth reads the raw body itself: mount it before express.json().
-  app.all("/api/auth/{*any}", toNodeHandler(auth));
+  app.all("/api/auth/{*any}", toNodeHandler(getAuth()));
 
   const api = express.Router();
   api.use(express.json({ limit: "1mb" }));
-  api.use(healthRouter);
-  api.use(shopsRouter);
+  // Each router under its own prefix, so a URL names its file: /api/marks/... is server/marks/router.ts.
   // The notebook (docs/notebook-api.md); photos take multipart bodies through multer, not express.json.
-  for (const r of [
-    alloysRouter,
-    meltsRouter,
-    castingsRouter,
-    photosRouter,
-    marksRouter,
-    commentsRouter,
-    peopleRouter,
-    exportRouter,
-    diagnosisRouter,
-  ]) {
-    api.use(r);
-  }
-  api.use(reviewRouter, followupsRouter, rulebookRouter);
-  api.use(searchRouter); // the casebook search
+  const routers: [string, express.Router][] = [
+    ["/health", healthRouter],
+    ["/shops", shopsRouter],
+    ["/people", peopleRouter],
+    ["/alloys", alloysRouter],
+    ["/melts", meltsRouter],
+    ["/castings", castingsRouter],
+    ["/photos", photosRouter],
+    ["/marks", marksRouter],
+    ["/comments", commentsRouter],
+    ["/export", exportRouter],
+    ["/diagnosis", diagnosisRouter],
+    // Mentors (docs/mentor-api.md): review, follow-ups and the shop's rulebook; then the casebook search.
+    ["/review", reviewRouter],
+    ["/followups", followupsRouter],
+    ["/rulebook", rulebookRouter],
+    ["/search", searchRouter],
+  ];
+  for (const [prefix, router] of routers) api.use(prefix, router);
   api.use(apiNotFound);
   app.use("/api", api);
 

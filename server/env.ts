@@ -20,22 +20,36 @@ const schema = z.object({
   DEV_WEB_ORIGIN: z.string().url().optional(),
 });
 
-const parsed = schema.safeParse(process.env);
-if (!parsed.success) {
-  const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
-  throw new Error(`Invalid environment:\n${lines.join("\n")}`);
-}
-const raw = parsed.data;
+type Env = z.infer<typeof schema> & { BETTER_AUTH_SECRET: string; PUBLIC_URL: string };
+let cached: Env | undefined;
 
-if (raw.NODE_ENV === "production" && !raw.BETTER_AUTH_SECRET) {
-  throw new Error("BETTER_AUTH_SECRET must be set in production (32+ random characters).");
+/** Reads and checks process.env on first use, then keeps the answer for the life of the process. */
+export function loadEnv(): Env {
+  if (cached) return cached;
+  const parsed = schema.safeParse(process.env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`);
+    throw new Error(`Invalid environment:\n${lines.join("\n")}`);
+  }
+  const raw = parsed.data;
+  if (raw.NODE_ENV === "production" && !raw.BETTER_AUTH_SECRET) {
+    throw new Error("BETTER_AUTH_SECRET must be set in production (32+ random characters).");
+  }
+  cached = {
+    ...raw,
+    BETTER_AUTH_SECRET: raw.BETTER_AUTH_SECRET ?? randomBytes(32).toString("hex"),
+    PUBLIC_URL: raw.PUBLIC_URL ?? `http://${raw.HOST}:${raw.PORT}`,
+  };
+  return cached;
 }
 
-export const env = {
-  ...raw,
-  BETTER_AUTH_SECRET: raw.BETTER_AUTH_SECRET ?? randomBytes(32).toString("hex"),
-  PUBLIC_URL: raw.PUBLIC_URL ?? `http://${raw.HOST}:${raw.PORT}`,
-};
+/**
+ * `env.X` reads through loadEnv(), so nothing reads process.env at import time: a script can set
+ * DATABASE_URL (or PORT) and then use the server, whatever the order of its imports.
+ */
+export const env: Readonly<Env> = new Proxy({} as Env, {
+  get: (_target, key) => loadEnv()[key as keyof Env],
+});
 
 export function requireDatabaseUrl(): string {
   if (!env.DATABASE_URL) throw new Error("DATABASE_URL is not set (npm start sets it for its local database).");

@@ -1,5 +1,5 @@
 import { asc, eq, isNull, or, sql } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { alloys, user } from "../../db/schema";
 import type { Alloy, AlloyInput } from "../../lib/notebook-schemas";
 import { BUILT_IN_ALLOYS, type AlloySpec } from "../../rules/alloys";

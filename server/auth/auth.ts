@@ -1,7 +1,7 @@
 import { betterAuth } from "better-auth";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { organization } from "better-auth/plugins";
-import { db } from "../../db/client";
+import { db } from "../db";
 import * as schema from "../../db/schema";
 import { ac, roles } from "../../lib/permissions";
 import { env } from "../env";
@@ -10,21 +10,32 @@ import { env } from "../env";
  * Sign-in with e-mail and password; shops are better-auth organizations, with our three roles.
  * Whoever creates a shop owns it. The app and the API share one origin, so cookies just work.
  */
-export const auth = betterAuth({
-  baseURL: env.PUBLIC_URL,
-  secret: env.BETTER_AUTH_SECRET,
-  trustedOrigins: [env.PUBLIC_URL, ...(env.DEV_WEB_ORIGIN ? [env.DEV_WEB_ORIGIN] : [])],
-  database: drizzleAdapter(db, { provider: "pg", schema }),
-  emailAndPassword: { enabled: true, minPasswordLength: 8, maxPasswordLength: 128 },
-  telemetry: { enabled: false },
-  plugins: [
-    organization({
-      ac,
-      roles,
-      creatorRole: "owner",
-      // Invitations by e-mail arrive with the team-management issue; until then only demo data adds members.
-    }),
-  ],
-});
+function buildAuth() {
+  return betterAuth({
+    baseURL: env.PUBLIC_URL,
+    secret: env.BETTER_AUTH_SECRET,
+    trustedOrigins: [env.PUBLIC_URL, ...(env.DEV_WEB_ORIGIN ? [env.DEV_WEB_ORIGIN] : [])],
+    database: drizzleAdapter(db, { provider: "pg", schema }),
+    emailAndPassword: { enabled: true, minPasswordLength: 8, maxPasswordLength: 128 },
+    telemetry: { enabled: false },
+    plugins: [
+      organization({
+        ac,
+        roles,
+        creatorRole: "owner",
+        // Invitations by e-mail arrive with the team-management issue; until then only demo data adds members.
+      }),
+    ],
+  });
+}
 
-export type Session = typeof auth.$Infer.Session;
+type Auth = ReturnType<typeof buildAuth>;
+let built: Auth | undefined;
+
+/** Built on first use (it reads the environment), then shared by the whole process. */
+export function getAuth(): Auth {
+  built ??= buildAuth();
+  return built;
+}
+
+export type Session = Auth["$Infer"]["Session"];

@@ -1,11 +1,11 @@
 import { fromNodeHeaders } from "better-auth/node";
 import { and, asc, eq } from "drizzle-orm";
 import type { RequestHandler } from "express";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { member } from "../../db/schema";
 import { roleCan, type Permission, type ShopRole } from "../../lib/permissions";
 import { HttpError } from "../http/errors";
-import { auth } from "./auth";
+import { getAuth } from "./auth";
 
 /** Who is asking, in which shop, with which role: set on every shop-scoped request. */
 export type ShopMember = { userId: string; userName: string; shopId: string; role: ShopRole };
@@ -17,7 +17,7 @@ declare module "express-serve-static-core" {
 }
 
 export async function sessionOf(headers: Parameters<typeof fromNodeHeaders>[0]) {
-  return auth.api.getSession({ headers: fromNodeHeaders(headers) });
+  return getAuth().api.getSession({ headers: fromNodeHeaders(headers) });
 }
 
 /**

@@ -1,5 +1,5 @@
 import { and, eq } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { castings } from "../../db/schema";
 import type { Casting, Outcome } from "../../lib/notebook-schemas";
 import { notFound } from "../http/errors";

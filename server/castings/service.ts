@@ -1,5 +1,5 @@
 import { and, asc, count, desc, eq, inArray, sql, type SQL } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { alloys, castings, melts, photos, user } from "../../db/schema";
 import {
   castingFields,

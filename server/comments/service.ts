@@ -1,5 +1,5 @@
 import { asc, eq } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { comments, user } from "../../db/schema";
 import type { Comment } from "../../lib/notebook-schemas";
 import type { ShopMember } from "../auth/shop-access";

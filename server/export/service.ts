@@ -1,6 +1,6 @@
 import { stringify } from "csv-stringify/sync";
 import { asc, count, desc, eq } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { alloys, castings, diagnosisSnapshots, melts, photos, user } from "../../db/schema";
 import type { DiagnosisResult } from "../../rules/engine";
 import { marksOf } from "../marks/service";

@@ -1,5 +1,5 @@
 import { and, asc, eq, gt, inArray, or, sql } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { castings, fixesTried, melts, user } from "../../db/schema";
 import type { CastingRef, ChainLink, FixInput, FixPatch, FixTried, Followups, Worked } from "../../lib/review-schemas";
 import type { Outcome } from "../../lib/notebook-schemas";

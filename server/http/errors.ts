@@ -36,9 +36,44 @@ export function parseOr400<T extends z.ZodType>(schema: T, data: unknown): z.inf
 
 export const apiNotFound: RequestHandler = (_req, _res, next) => next(notFound("No such API route"));
 
+/** Connection-level codes: the database is down, restarting or unreachable (not a bad query). */
+const UNAVAILABLE_CODES = new Set([
+  "ECONNREFUSED",
+  "ECONNRESET",
+  "ENOTFOUND",
+  "ETIMEDOUT",
+  "EPIPE",
+  "57P01",
+  "57P02",
+  "57P03",
+]);
+const UNAVAILABLE_TEXT =
+  /timeout exceeded when trying to connect|Connection terminated|Client has encountered a connection error|the database system is (starting up|shutting down)/i;
+
+/** Drizzle wraps the driver's error in `cause`: look down the chain for a lost connection. */
+export function isDatabaseUnavailable(err: unknown): boolean {
+  for (
+    let e = err as { code?: unknown; message?: unknown; cause?: unknown } | undefined, depth = 0;
+    e && depth < 5;
+    e = e.cause as typeof e, depth++
+  ) {
+    const code = typeof e.code === "string" ? e.code : "";
+    if (UNAVAILABLE_CODES.has(code) || code.startsWith("08")) return true;
+    if (typeof e.message === "string" && UNAVAILABLE_TEXT.test(e.message)) return true;
+  }
+  return false;
+}
+
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (err instanceof HttpError) {
     res.status(err.status).json({ error: { message: err.message, fields: err.fields } });
+    return;
+  }
+  if (isDatabaseUnavailable(err)) {
+    res.set("Retry-After", "5");
+    res.status(503).json({
+      error: { message: "The database is not answering right now; nothing was saved. Try again in a moment." },
+    });
     return;
   }
   // Body parser errors (malformed JSON, too large) carry a status of their own.

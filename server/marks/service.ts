@@ -1,5 +1,5 @@
 import { and, asc, eq, inArray } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { defectMarks, photos, user } from "../../db/schema";
 import { markInput, type Mark, type MarkInput } from "../../lib/notebook-schemas";
 import type { DefectLocation, DefectType } from "../../rules/case";

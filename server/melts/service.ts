@@ -1,5 +1,5 @@
 import { asc, count, desc, eq, and, sql } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { alloys, castings, melts, shopSettings, user } from "../../db/schema";
 import {
   alloyConflicts,

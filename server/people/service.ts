@@ -1,5 +1,5 @@
 import { eq } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { personUnits } from "../../db/schema";
 import { DEFAULT_UNITS, unitsInput, type Units } from "../../lib/notebook-schemas";
 

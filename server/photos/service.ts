@@ -4,7 +4,7 @@ import { join, resolve } from "node:path";
 import { and, asc, eq } from "drizzle-orm";
 import { fileTypeFromBuffer } from "file-type";
 import sharp from "sharp";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { defectMarks, photos, user } from "../../db/schema";
 import type { Photo } from "../../lib/notebook-schemas";
 import type { ShopMember } from "../auth/shop-access";

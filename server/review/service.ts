@@ -1,5 +1,5 @@
 import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import {
   alloys,
   castings,

@@ -1,5 +1,5 @@
 import { and, desc, eq, exists, inArray, sql } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { alloys, castings, confirmations, defectMarks, melts } from "../../db/schema";
 import type { StoredCase } from "../../rules/backtest";
 import { toAlloySpec } from "../alloys/service";

@@ -1,5 +1,5 @@
 import { desc, eq } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { ruleSwitches, shopCauses, shopRules as shopRulesTable, shopRuleVersions } from "../../db/schema";
 import type { RuleDetail, SavedRule } from "../../lib/rulebook-schemas";
 import { ruleSetFor } from "../../rules/engine";

@@ -1,5 +1,5 @@
 import { and, asc, desc, eq, sql } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { ruleSwitches, shopCauses, shopRuleVersions } from "../../db/schema";
 import {
   causeRecords,

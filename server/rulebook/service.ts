@@ -1,5 +1,5 @@
 import { and, desc, eq, inArray } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { ruleSwitches, user } from "../../db/schema";
 import type { RuleDetail, RuleRow, Rulebook, RuleVersion, Trial } from "../../lib/rulebook-schemas";
 import { backtest } from "../../rules/backtest";

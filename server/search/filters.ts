@@ -1,5 +1,5 @@
 import { eq, inArray, isNull, or } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { alloys, member, user } from "../../db/schema";
 import type { SearchParams } from "../../lib/search-schemas";
 import { PROCESSES } from "../../rules/case";

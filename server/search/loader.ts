@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, inArray, lt, sql, type SQL } from "drizzle-orm";
 import type { PgColumn } from "drizzle-orm/pg-core";
-import { db } from "../../db/client";
+import { db } from "../db";
 import {
   alloys,
   castings,

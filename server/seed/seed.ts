@@ -1,7 +1,7 @@
 import { count } from "drizzle-orm";
-import { auth } from "../auth/auth";
+import { getAuth } from "../auth/auth";
 import { env } from "../env";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { DEMO_PEOPLE, DEMO_SHOP } from "./demo-people";
 import { seedDemoNotebook } from "./seed-notebook";
 import { shopSettings, user } from "../../db/schema";
@@ -19,14 +19,14 @@ export async function seedDemoShop(): Promise<boolean> {
   const ids: Record<string, string> = {};
   const crew = {} as Parameters<typeof seedDemoNotebook>[1];
   for (const p of DEMO_PEOPLE) {
-    const res = await auth.api.signUpEmail({ body: { name: p.name, email: p.email, password: p.password } });
+    const res = await getAuth().api.signUpEmail({ body: { name: p.name, email: p.email, password: p.password } });
     ids[p.role] = res.user.id;
     crew[p.role] = { id: res.user.id, name: p.name };
   }
-  const shop = await auth.api.createOrganization({ body: { ...DEMO_SHOP, userId: ids.owner } });
+  const shop = await getAuth().api.createOrganization({ body: { ...DEMO_SHOP, userId: ids.owner } });
   if (!shop) throw new Error("Could not create the demo shop");
   for (const role of ["mentor", "caster"] as const) {
-    await auth.api.addMember({ body: { userId: ids[role], role, organizationId: shop.id } });
+    await getAuth().api.addMember({ body: { userId: ids[role], role, organizationId: shop.id } });
   }
   await db.insert(shopSettings).values({ shopId: shop.id, defaultAlloy: "A356.0", defaultProcess: "green-sand" });
   // Melts, castings, illustrated photos, marks and a few diagnoses (server/seed/demo-notebook.ts).

@@ -1,5 +1,5 @@
 import { and, asc, eq } from "drizzle-orm";
-import { db } from "../../db/client";
+import { db } from "../db";
 import { member, organization, shopSettings, user } from "../../db/schema";
 import type { ShopSettingsInput } from "../../lib/shop-settings";
 

@@ -1,8 +1,8 @@
 import { randomUUID } from "node:crypto";
 import request from "supertest";
 import { createApp } from "../../server/app";
-import { auth } from "../../server/auth/auth";
-import { db } from "../../db/client";
+import { getAuth } from "../../server/auth/auth";
+import { db } from "../../server/db";
 import { applyMigrations } from "../../db/migrate";
 import type { ShopRole } from "../../lib/permissions";
 
@@ -41,7 +41,7 @@ export async function createShop(owner: Person, name: string): Promise<string> {
 
 /** Adds a member directly (invitations are a later feature) and makes that shop their active one. */
 export async function joinShop(person: Person, shopId: string, role: ShopRole) {
-  await auth.api.addMember({ body: { userId: person.userId, role, organizationId: shopId } });
+  await getAuth().api.addMember({ body: { userId: person.userId, role, organizationId: shopId } });
   const res = await person.agent
     .post("/api/auth/organization/set-active")
     .set("Origin", ORIGIN)

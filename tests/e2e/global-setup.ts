@@ -5,6 +5,10 @@ import { fileURLToPath } from "node:url";
 import type { TestProject } from "vitest/node";
 import { freePort, startLocalPostgres } from "../../scripts/local-postgres";
 import { ensureWebBuild } from "../../scripts/web-build";
+import { applyMigrations } from "../../db/migrate";
+import { closeDb, db } from "../../server/db";
+import { listen } from "../../server/index";
+import { seedDemoShop } from "../../server/seed/seed";
 
 const root = fileURLToPath(new URL("../..", import.meta.url));
 
@@ -29,10 +33,6 @@ export default async function setup(project: TestProject) {
     UPLOAD_DIR: join(parent, "uploads"), // demo and test photos go with the throwaway cluster
   });
 
-  const { db, pool } = await import("../../db/client");
-  const { applyMigrations } = await import("../../db/migrate");
-  const { seedDemoShop } = await import("../../server/seed/seed");
-  const { listen } = await import("../../server/index");
   await applyMigrations(db);
   await seedDemoShop();
   const webDir = ensureWebBuild(root);
@@ -42,7 +42,7 @@ export default async function setup(project: TestProject) {
   return async () => {
     server.closeAllConnections();
     await new Promise((r) => server.close(r));
-    await pool.end();
+    await closeDb();
     pg.stop();
     rmSync(parent, { recursive: true, force: true });
     rmSync(pg.dataDir, { recursive: true, force: true });
