@@ -1,6 +1,8 @@
 import { execFileSync } from "node:child_process";
 import { existsSync, readdirSync, statSync } from "node:fs";
 import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { compressWebExport } from "./web-compress";
 
 /** Source of the web app: a newer file here than dist/index.html means the export is stale. */
 const SOURCES = ["app", "components", "hooks", "lib", "constants", "assets", "rules", "app.json", "package.json"];
@@ -31,6 +33,18 @@ export function ensureWebBuild(root: string): string {
       stdio: ["ignore", "inherit", "inherit"],
       env: { ...process.env, CI: "1", EXPO_OFFLINE: "1", EXPO_NO_TELEMETRY: "1" },
     });
+    const c = compressWebExport(outDir);
+    console.log(`Compressed ${c.files} files: ${kb(c.bytes)} -> ${kb(c.brotliBytes)} with brotli.`);
   }
   return outDir;
+}
+
+const kb = (n: number) => `${(n / 1024).toFixed(0)} KB`;
+
+// `npm run build:web`: always export afresh, then compress.
+if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
+  const root = fileURLToPath(new URL("..", import.meta.url));
+  const { rmSync } = await import("node:fs");
+  rmSync(join(root, "dist"), { recursive: true, force: true });
+  ensureWebBuild(root);
 }

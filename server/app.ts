@@ -2,8 +2,6 @@ import { toNodeHandler } from "better-auth/node";
 import cors from "cors";
 import express from "express";
 import { env } from "./env";
-import { existsSync } from "node:fs";
-import { join } from "node:path";
 import { getAuth } from "./auth/auth";
 import { healthRouter } from "./health/router";
 import { apiNotFound, errorHandler } from "./http/errors";
@@ -21,6 +19,7 @@ import { photosRouter } from "./photos/router";
 import { followupsRouter } from "./followups/router";
 import { reviewRouter } from "./review/router";
 import { rulebookRouter } from "./rulebook/router";
+import { serveWebApp } from "./web/static";
 
 /**
  * The whole HTTP surface: better-auth under /api/auth, the API under /api, and the exported
@@ -63,11 +62,7 @@ export function createApp(opts: { webDir?: string } = {}) {
   api.use(apiNotFound);
   app.use("/api", api);
 
-  if (opts.webDir && existsSync(join(opts.webDir, "index.html"))) {
-    const webDir = opts.webDir;
-    app.use(express.static(webDir, { extensions: ["html"], index: "index.html" }));
-    app.get("/{*splat}", (_req, res) => res.sendFile(join(webDir, "index.html")));
-  }
+  if (opts.webDir) serveWebApp(app, opts.webDir);
   app.use(errorHandler);
   return app;
 }
