@@ -5,6 +5,7 @@ import { fileURLToPath } from "node:url";
 import type { TestProject } from "vitest/node";
 import { freePort, startLocalPostgres } from "../../scripts/local-postgres";
 import { ensureWebBuild } from "../../scripts/web-build";
+import { ensureChromium } from "../../scripts/debian-packages";
 
 const root = fileURLToPath(new URL("../..", import.meta.url));
 
@@ -13,6 +14,7 @@ const root = fileURLToPath(new URL("../..", import.meta.url));
  * export (built when stale), and the real server on a free port. The tests get its address.
  */
 export default async function setup(project: TestProject) {
+  ensureChromium(process.env.CHROMIUM_PATH);
   const parent = mkdtempSync(join(tmpdir(), "casebook-e2e-"));
   const pg = startLocalPostgres({
     dataDir: join(parent, "pg"),

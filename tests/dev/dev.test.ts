@@ -1,0 +1,83 @@
+import { spawn, type ChildProcess } from "node:child_process";
+import { mkdtempSync, rmSync } from "node:fs";
+import { createServer } from "node:net";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { fileURLToPath } from "node:url";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { ensureChromium } from "../../scripts/debian-packages";
+import { freePort } from "../../scripts/local-postgres";
+import { launchBrowser, signedInAs, PHONE } from "../e2e/browser";
+
+const root = fileURLToPath(new URL("../..", import.meta.url));
+
+/** Whether something on 127.0.0.1 still accepts on the port (a listen attempt fails then). */
+const portInUse = (port: number) =>
+  new Promise<boolean>((resolve) => {
+    const srv = createServer();
+    srv.once("error", () => resolve(true));
+    srv.listen(port, "127.0.0.1", () => srv.close(() => resolve(false)));
+  });
+
+// `npm run dev` as a developer runs it: on free ports, with a database folder of its own.
+describe("npm run dev", () => {
+  let dev: ChildProcess;
+  let ports: { web: number; metro: number; pg: number };
+  let dataParent: string;
+  let output = "";
+
+  beforeAll(async () => {
+    ensureChromium(process.env.CHROMIUM_PATH);
+    ports = { web: await freePort(), metro: await freePort(), pg: await freePort() };
+    dataParent = mkdtempSync(join(tmpdir(), "casebook-dev-"));
+    dev = spawn("npm", ["run", "dev"], {
+      cwd: root,
+      env: {
+        ...process.env,
+        DATABASE_URL: "",
+        PORT: String(ports.web),
+        METRO_PORT: String(ports.metro),
+        LOCAL_PG_PORT: String(ports.pg),
+        LOCAL_PG_DIR: join(dataParent, "pg"),
+        NODE_ENV: "development",
+      },
+      stdio: ["ignore", "pipe", "pipe"],
+    });
+    dev.stdout!.on("data", (d) => (output += d));
+    dev.stderr!.on("data", (d) => (output += d));
+    // The first page asks Metro for a cold bundle: allow it minutes on a busy machine.
+    await expect
+      .poll(
+        async () => {
+          const res = await fetch(`http://127.0.0.1:${ports.web}/sign-in`).catch(() => undefined);
+          return res?.status;
+        },
+        { timeout: 240000, interval: 1000 },
+      )
+      .toBe(200);
+  });
+
+  afterAll(() => {
+    if (dev.exitCode === null) dev.kill("SIGKILL");
+    rmSync(dataParent, { recursive: true, force: true });
+  });
+
+  it("signs the demo caster in on one origin, then Ctrl-C frees every port", async () => {
+    const browser = await launchBrowser();
+    try {
+      // signedInAs waits for the signed-in shell to show the caster's role.
+      const page = await signedInAs(browser, `http://127.0.0.1:${ports.web}`, PHONE, "caster");
+      const cookies = await page.context().cookies(`http://127.0.0.1:${ports.web}`);
+      expect(cookies.some((c) => c.name.includes("session"))).toBe(true);
+    } finally {
+      await browser.close();
+    }
+
+    const exited = new Promise<number | null>((r) => dev.once("exit", (code) => r(code)));
+    dev.kill("SIGINT");
+    expect(await exited, output.slice(-2000)).toBe(0);
+    for (const port of [ports.web, ports.metro, ports.pg]) {
+      await expect.poll(() => portInUse(port), { timeout: 10000 }).toBe(false);
+    }
+  });
+});
