@@ -28,7 +28,7 @@ export function useRefreshCasting() {
 export function useCreateCasting(meltId: number) {
   const refresh = useRefreshCasting();
   return useMutation({
-    mutationFn: (input: CastingInput) => api<Casting>(`/melts/${meltId}/castings`, { method: "POST", body: input }),
+    mutationFn: (input: CastingInput) => api<Casting>(`/castings/melts/${meltId}`, { method: "POST", body: input }),
     onSuccess: () => refresh(),
   });
 }

@@ -7,7 +7,7 @@ import { useRefreshCasting } from "./use-castings";
 export function useAddComment(castingId: number) {
   const refresh = useRefreshCasting();
   return useMutation({
-    mutationFn: (body: string) => api<Comment>(`/castings/${castingId}/comments`, { method: "POST", body: { body } }),
+    mutationFn: (body: string) => api<Comment>(`/comments/castings/${castingId}`, { method: "POST", body: { body } }),
     onSuccess: () => refresh(castingId),
   });
 }

@@ -10,7 +10,7 @@ import type { DiagnosisSnapshot } from "@/lib/notebook-schemas";
 export function useRunDiagnosis(castingId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => api<Omit<DiagnosisSnapshot, "createdBy">>(`/castings/${castingId}/diagnosis`, { method: "POST" }),
+    mutationFn: () => api<Omit<DiagnosisSnapshot, "createdBy">>(`/diagnosis/castings/${castingId}`, { method: "POST" }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: castingKeys.detail(castingId) }),
   });
 }

@@ -8,7 +8,7 @@ export const followupKeys = { all: ["followups"] as const, casting: (id: number)
 export function useFollowups(castingId: number) {
   return useQuery({
     queryKey: followupKeys.casting(castingId),
-    queryFn: () => api<Followups>(`/castings/${castingId}/followups`),
+    queryFn: () => api<Followups>(`/followups/castings/${castingId}`),
   });
 }
 
@@ -22,12 +22,12 @@ function useFixChange<T>(fn: (arg: T) => Promise<FixTried>) {
 
 export function useAddFix(castingId: number) {
   return useFixChange((input: FixInput) =>
-    api<FixTried>(`/castings/${castingId}/fixes`, { method: "POST", body: input }),
+    api<FixTried>(`/followups/castings/${castingId}/fixes`, { method: "POST", body: input }),
   );
 }
 
 export function usePatchFix() {
   return useFixChange(({ id, ...patch }: FixPatch & { id: number }) =>
-    api<FixTried>(`/fixes/${id}`, { method: "PATCH", body: patch }),
+    api<FixTried>(`/followups/fixes/${id}`, { method: "PATCH", body: patch }),
   );
 }

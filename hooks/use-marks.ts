@@ -6,7 +6,7 @@ import type { CastingDetail, Mark, MarkInput } from "@/lib/notebook-schemas";
 export function useCreateMark(castingId: number) {
   const refresh = useRefreshCasting();
   return useMutation({
-    mutationFn: (input: MarkInput) => api<Mark>(`/castings/${castingId}/marks`, { method: "POST", body: input }),
+    mutationFn: (input: MarkInput) => api<Mark>(`/marks/castings/${castingId}`, { method: "POST", body: input }),
     onSuccess: () => refresh(castingId),
   });
 }

@@ -43,7 +43,7 @@ export function sendPhoto(
   else form.append("photo", source as unknown as Blob);
   return new Promise((resolve, reject) => {
     const xhr = new XMLHttpRequest();
-    xhr.open("POST", `${apiBaseUrl}/api/castings/${castingId}/photos`);
+    xhr.open("POST", `${apiBaseUrl}/api/photos/castings/${castingId}`);
     xhr.withCredentials = true;
     xhr.upload.onprogress = (e) => e.lengthComputable && onProgress(e.loaded / e.total);
     xhr.onload = () => {

@@ -12,7 +12,7 @@ export const reviewKeys = {
 export function useCaseReview(castingId: number) {
   return useQuery({
     queryKey: reviewKeys.casting(castingId),
-    queryFn: () => api<CaseReview>(`/castings/${castingId}/review`),
+    queryFn: () => api<CaseReview>(`/review/castings/${castingId}`),
   });
 }
 
@@ -43,7 +43,7 @@ function useReviewChange<T>(
 
 export function useAskReview(castingId: number) {
   return useReviewChange(castingId, (note?: string) =>
-    api<CaseReview>(`/castings/${castingId}/review-requests`, { method: "POST", body: { note: note || undefined } }),
+    api<CaseReview>(`/review/castings/${castingId}/requests`, { method: "POST", body: { note: note || undefined } }),
   );
 }
 
@@ -52,7 +52,7 @@ export function useConfirmCause(castingId: number) {
   return useReviewChange(
     castingId,
     (input: ConfirmationInput) =>
-      api<CaseReview>(`/castings/${castingId}/confirmations`, { method: "POST", body: input }),
+      api<CaseReview>(`/review/castings/${castingId}/confirmations`, { method: "POST", body: input }),
     [rulebookKeys.all, castingKeys.detail(castingId)],
   );
 }

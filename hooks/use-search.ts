@@ -3,7 +3,7 @@ import { useEffect, useState } from "react";
 import { api } from "@/lib/api";
 import type { SearchAnswer, SearchRequest, SimilarAnswer } from "@/lib/search-schemas";
 
-/** The casebook: search (GET /api/search) and "cases like this one" (GET /api/castings/:id/similar). */
+/** The casebook: search (GET /api/search) and "cases like this one" (GET /api/search/castings/:id/similar). */
 export const searchKeys = {
   all: ["search"] as const,
   query: (q: SearchRequest) => ["search", q] as const,
@@ -46,7 +46,7 @@ export function useCaseSearch(query: SearchRequest) {
 export function useSimilarCases(castingId: number) {
   return useQuery({
     queryKey: searchKeys.similar(castingId),
-    queryFn: () => api<SimilarAnswer>(`/castings/${castingId}/similar`),
+    queryFn: () => api<SimilarAnswer>(`/search/castings/${castingId}/similar`),
     enabled: Number.isInteger(castingId),
     staleTime: 0,
   });

@@ -15,20 +15,20 @@ export type ShopMemberRow = { userId: string; name: string; email: string; role:
 export const shopKeys = { shop: ["shop"] as const, members: ["shop", "members"] as const };
 
 export function useShop() {
-  return useQuery({ queryKey: shopKeys.shop, queryFn: () => api<Shop>("/shop") });
+  return useQuery({ queryKey: shopKeys.shop, queryFn: () => api<Shop>("/shops/current") });
 }
 
 export function useShopMembers() {
   return useQuery({
     queryKey: shopKeys.members,
-    queryFn: () => api<{ members: ShopMemberRow[] }>("/shop/members").then((r) => r.members),
+    queryFn: () => api<{ members: ShopMemberRow[] }>("/shops/current/members").then((r) => r.members),
   });
 }
 
 export function useSaveShopSettings() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: ShopSettingsInput) => api<Shop>("/shop/settings", { method: "PATCH", body: input }),
+    mutationFn: (input: ShopSettingsInput) => api<Shop>("/shops/current/settings", { method: "PATCH", body: input }),
     onSuccess: (shop) => queryClient.setQueryData(shopKeys.shop, shop),
   });
 }

@@ -4,9 +4,9 @@ import { SI_UNITS, type Units } from "@/lib/units";
 
 export const unitsKey = ["me", "units"] as const;
 
-/** The person's units (GET /api/me/units). */
+/** The person's units (GET /api/people/me/units). */
 export function useUnitsQuery() {
-  return useQuery({ queryKey: unitsKey, queryFn: () => api<Units>("/me/units"), staleTime: 5 * 60_000 });
+  return useQuery({ queryKey: unitsKey, queryFn: () => api<Units>("/people/me/units"), staleTime: 5 * 60_000 });
 }
 
 /** The units to show values in: SI until the person's choice has loaded (values are stored SI). */
@@ -17,7 +17,7 @@ export function useUnits(): Units {
 export function useSaveUnits() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (units: Units) => api<Units>("/me/units", { method: "PUT", body: units }),
+    mutationFn: (units: Units) => api<Units>("/people/me/units", { method: "PUT", body: units }),
     onSuccess: (units) => queryClient.setQueryData(unitsKey, units),
   });
 }

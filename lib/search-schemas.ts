@@ -7,7 +7,7 @@ import type { Worked } from "./review-schemas";
 import { fromSi, SI_UNITS, unitLabel, type Units } from "./units";
 
 /**
- * The casebook search (GET /api/search) and "cases like this one" (GET /api/castings/:id/similar):
+ * The casebook search (GET /api/search) and "cases like this one" (GET /api/search/castings/:id/similar):
  * the query the screen sends and the answers it reads. Bundled into the web app: no server imports.
  */
 export const SEARCH_QUERY_MAX = 200;

@@ -1,7 +1,7 @@
 import { z } from "zod";
 
 /**
- * One case for diagnosis: the contract shared by POST /api/diagnose, the stored-casting diagnosis
+ * One case for diagnosis: the contract shared by POST /api/diagnosis, the stored-casting diagnosis
  * and `npm run diagnose`. All values SI (°C, mm, kg/m³, s, %). Everything but defects, alloy and
  * process is optional: a missing input stays missing and is never read as zero.
  */

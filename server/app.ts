@@ -18,7 +18,6 @@ import { marksRouter } from "./marks/router";
 import { meltsRouter } from "./melts/router";
 import { peopleRouter } from "./people/router";
 import { photosRouter } from "./photos/router";
-// Mentors: review, follow-ups and the shop's rulebook.
 import { followupsRouter } from "./followups/router";
 import { reviewRouter } from "./review/router";
 import { rulebookRouter } from "./rulebook/router";
@@ -40,24 +39,27 @@ export function createApp(opts: { webDir?: string } = {}) {
 
   const api = express.Router();
   api.use(express.json({ limit: "1mb" }));
-  api.use(healthRouter);
-  api.use(shopsRouter);
+  // Each router under its own prefix, so a URL names its file: /api/marks/... is server/marks/router.ts.
   // The notebook (docs/notebook-api.md); photos take multipart bodies through multer, not express.json.
-  for (const r of [
-    alloysRouter,
-    meltsRouter,
-    castingsRouter,
-    photosRouter,
-    marksRouter,
-    commentsRouter,
-    peopleRouter,
-    exportRouter,
-    diagnosisRouter,
-  ]) {
-    api.use(r);
-  }
-  api.use(reviewRouter, followupsRouter, rulebookRouter);
-  api.use(searchRouter); // the casebook search
+  const routers: [string, express.Router][] = [
+    ["/health", healthRouter],
+    ["/shops", shopsRouter],
+    ["/people", peopleRouter],
+    ["/alloys", alloysRouter],
+    ["/melts", meltsRouter],
+    ["/castings", castingsRouter],
+    ["/photos", photosRouter],
+    ["/marks", marksRouter],
+    ["/comments", commentsRouter],
+    ["/export", exportRouter],
+    ["/diagnosis", diagnosisRouter],
+    // Mentors (docs/mentor-api.md): review, follow-ups and the shop's rulebook; then the casebook search.
+    ["/review", reviewRouter],
+    ["/followups", followupsRouter],
+    ["/rulebook", rulebookRouter],
+    ["/search", searchRouter],
+  ];
+  for (const [prefix, router] of routers) api.use(prefix, router);
   api.use(apiNotFound);
   app.use("/api", api);
 

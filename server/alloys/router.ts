@@ -6,13 +6,13 @@ import { addAlloy, alloyRowsFor, toAlloy } from "./service";
 
 export const alloysRouter = Router();
 
-alloysRouter.get("/alloys", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
+alloysRouter.get("/", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
   const rows = await alloyRowsFor(currentMember(req).shopId);
   res.json({ alloys: rows.map(toAlloy) });
 });
 
 /** Alloy figures feed every diagnosis, so adding one is a mentor's call, like writing a rule. */
-alloysRouter.post("/alloys", requireShopMember, allow({ rule: ["write"] }), async (req, res) => {
+alloysRouter.post("/", requireShopMember, allow({ rule: ["write"] }), async (req, res) => {
   const m = currentMember(req);
   const input = parseOr400(alloyInput, req.body);
   res.status(201).json(await addAlloy(m.shopId, m.userId, input));

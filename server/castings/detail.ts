@@ -3,7 +3,7 @@ import { db } from "../../db/client";
 import { user } from "../../db/schema";
 import type { CastingDetail } from "../../lib/notebook-schemas";
 import { commentsOf } from "../comments/service";
-import { latestSnapshot } from "../diagnosis/service";
+import { latestSnapshot } from "./snapshots";
 import { marksOf } from "../marks/service";
 import { getMelt } from "../melts/service";
 import { photosOf } from "../photos/service";

@@ -10,21 +10,21 @@ export const castingsRouter = Router();
 const read = [requireShopMember, allow({ casebook: ["read"] })];
 const write = [requireShopMember, allow({ casebook: ["write"] })];
 
-castingsRouter.post("/melts/:id/castings", ...write, async (req, res) => {
+castingsRouter.post("/melts/:id", ...write, async (req, res) => {
   const meltId = idParam(req.params.id, "No such melt");
   const input = parseOr400(castingInput, req.body);
   res.status(201).json(await createCasting(currentMember(req), meltId, input));
 });
 
-castingsRouter.get("/castings", ...read, async (req, res) => {
+castingsRouter.get("/", ...read, async (req, res) => {
   res.json(await listCastings(currentMember(req).shopId, parseOr400(castingListQuery, req.query)));
 });
 
-castingsRouter.get("/castings/:id", ...read, async (req, res) => {
+castingsRouter.get("/:id", ...read, async (req, res) => {
   res.json(await castingDetail(currentMember(req).shopId, idParam(req.params.id, "No such casting")));
 });
 
-castingsRouter.patch("/castings/:id", ...write, async (req, res) => {
+castingsRouter.patch("/:id", ...write, async (req, res) => {
   const id = idParam(req.params.id, "No such casting");
   res.json(await patchCasting(currentMember(req), id, parseOr400(castingPatch, req.body)));
 });

@@ -7,7 +7,7 @@ import { addComment } from "./service";
 
 export const commentsRouter = Router();
 
-commentsRouter.post("/castings/:id/comments", requireShopMember, allow({ casebook: ["comment"] }), async (req, res) => {
+commentsRouter.post("/castings/:id", requireShopMember, allow({ casebook: ["comment"] }), async (req, res) => {
   const castingId = idParam(req.params.id, "No such casting");
   const { body } = parseOr400(commentInput, req.body);
   res.status(201).json(await addComment(currentMember(req), castingId, body));

@@ -6,11 +6,11 @@ import { diagnoseCase, diagnoseCasting } from "./service";
 export const diagnosisRouter = Router();
 
 /** A case typed or pasted in; nothing is stored. */
-diagnosisRouter.post("/diagnose", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
+diagnosisRouter.post("/", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
   res.json(await diagnoseCase(currentMember(req).shopId, req.body));
 });
 
-diagnosisRouter.post("/castings/:id/diagnosis", requireShopMember, allow({ casebook: ["write"] }), async (req, res) => {
+diagnosisRouter.post("/castings/:id", requireShopMember, allow({ casebook: ["write"] }), async (req, res) => {
   const castingId = idParam(req.params.id, "No such casting");
   res.status(201).json(await diagnoseCasting(currentMember(req), castingId));
 });

@@ -1,16 +1,16 @@
-import { and, desc, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import { db } from "../../db/client";
-import { alloys, diagnosisSnapshots, melts, user } from "../../db/schema";
+import { alloys, diagnosisSnapshots, melts } from "../../db/schema";
 import type { DiagnosisSnapshot } from "../../lib/notebook-schemas";
 import { caseSchema } from "../../rules/case";
 import { diagnose, type DiagnosisResult } from "../../rules/engine";
 import { requireAlloy, toAlloySpec } from "../alloys/service";
 import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
+import { toSnapshot } from "../castings/snapshots";
 import { parseOr400 } from "../http/errors";
 import { marksOf } from "../marks/service";
 import { getMelt } from "../melts/service";
-import { iso, personRef } from "../notebook/shared";
 import { caseFromCasting } from "./stored-case";
 import { shopDiagnosis } from "../rulebook/context";
 
@@ -29,15 +29,6 @@ export async function diagnoseCase(shopId: string, body: unknown): Promise<Diagn
     await diagnose(c, { alloy: toAlloySpec(alloy), ruleSet: shop.ruleSet, weightFactor: shop.weightFactor }),
   );
 }
-
-type SnapshotRow = typeof diagnosisSnapshots.$inferSelect;
-const toSnapshot = (s: SnapshotRow, byName: string): DiagnosisSnapshot => ({
-  id: s.id,
-  createdAt: iso(s.createdAt),
-  createdBy: personRef(s.createdBy, byName),
-  ruleSetVersion: s.ruleSetVersion,
-  result: s.result as DiagnosisResult,
-});
 
 /** Runs the stored casting and keeps what it said, so the answer can be read again after the rules change. */
 export async function diagnoseCasting(m: ShopMember, castingId: number): Promise<DiagnosisSnapshot> {
@@ -67,15 +58,4 @@ export async function diagnoseCasting(m: ShopMember, castingId: number): Promise
     })
     .returning();
   return toSnapshot(row, m.userName);
-}
-
-export async function latestSnapshot(shopId: string, castingId: number): Promise<DiagnosisSnapshot | null> {
-  const [row] = await db
-    .select({ s: diagnosisSnapshots, byName: user.name })
-    .from(diagnosisSnapshots)
-    .innerJoin(user, eq(user.id, diagnosisSnapshots.createdBy))
-    .where(and(eq(diagnosisSnapshots.shopId, shopId), eq(diagnosisSnapshots.castingId, castingId)))
-    .orderBy(desc(diagnosisSnapshots.createdAt), desc(diagnosisSnapshots.id))
-    .limit(1);
-  return row ? toSnapshot(row.s, row.byName) : null;
 }

@@ -5,7 +5,7 @@ import { castingsCsv } from "./service";
 export const exportRouter = Router();
 
 /** The whole shop's record leaves the building here, so only an owner may take it. */
-exportRouter.get("/export/castings.csv", requireShopMember, allow({ shop: ["export"] }), async (req, res) => {
+exportRouter.get("/castings.csv", requireShopMember, allow({ shop: ["export"] }), async (req, res) => {
   const csv = await castingsCsv(currentMember(req).shopId);
   const day = new Date().toISOString().slice(0, 10);
   res.set({

@@ -10,7 +10,7 @@ export const followupsRouter = Router();
 const read = [requireShopMember, allow({ casebook: ["read"] })];
 const write = [requireShopMember, allow({ casebook: ["write"] })];
 
-followupsRouter.get("/castings/:id/followups", ...read, async (req, res) => {
+followupsRouter.get("/castings/:id", ...read, async (req, res) => {
   res.json(await followups(currentMember(req).shopId, idParam(req.params.id, "No such casting")));
 });
 

@@ -5,7 +5,7 @@ import { db } from "../../db/client";
 export const healthRouter = Router();
 
 /** Says whether the database answers; 503 when it does not, so a load balancer can tell. */
-healthRouter.get("/health", async (_req, res) => {
+healthRouter.get("/", async (_req, res) => {
   try {
     await db.execute(sql`select 1`);
     res.json({ ok: true, database: "up" });

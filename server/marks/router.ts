@@ -8,18 +8,18 @@ import { addMark, deleteMark, patchMark } from "./service";
 export const marksRouter = Router();
 const write = [requireShopMember, allow({ casebook: ["write"] })];
 
-marksRouter.post("/castings/:id/marks", ...write, async (req, res) => {
+marksRouter.post("/castings/:id", ...write, async (req, res) => {
   const castingId = idParam(req.params.id, "No such casting");
   const input = parseOr400(markInput, req.body);
   res.status(201).json(await addMark(currentMember(req), castingId, input));
 });
 
-marksRouter.patch("/marks/:id", ...write, async (req, res) => {
+marksRouter.patch("/:id", ...write, async (req, res) => {
   const id = idParam(req.params.id, "No such mark");
   res.json(await patchMark(currentMember(req), id, parseOr400(markPatch, req.body)));
 });
 
-marksRouter.delete("/marks/:id", ...write, async (req, res) => {
+marksRouter.delete("/:id", ...write, async (req, res) => {
   await deleteMark(currentMember(req), idParam(req.params.id, "No such mark"));
   res.status(204).end();
 });

@@ -10,28 +10,28 @@ export const meltsRouter = Router();
 const read = [requireShopMember, allow({ casebook: ["read"] })];
 const write = [requireShopMember, allow({ casebook: ["write"] })];
 
-meltsRouter.get("/melts", ...read, async (req, res) => {
+meltsRouter.get("/", ...read, async (req, res) => {
   res.json(await listMelts(currentMember(req).shopId, parseOr400(meltListQuery, req.query)));
 });
 
 // Declared before /melts/:id so "defaults" is not read as an id.
-meltsRouter.get("/melts/defaults", ...read, async (req, res) => {
+meltsRouter.get("/defaults", ...read, async (req, res) => {
   res.json(await meltDefaults(currentMember(req).shopId));
 });
 
-meltsRouter.post("/melts", ...write, async (req, res) => {
+meltsRouter.post("/", ...write, async (req, res) => {
   res.status(201).json(await createMelt(currentMember(req), parseOr400(meltInput, req.body)));
 });
 
 /** A melt's page: the melt and its castings in the order they were poured. */
-meltsRouter.get("/melts/:id", ...read, async (req, res) => {
+meltsRouter.get("/:id", ...read, async (req, res) => {
   const shopId = currentMember(req).shopId;
   const melt = await getMelt(shopId, idParam(req.params.id, "No such melt"));
   const castings = await castingSummaries(shopId, { meltId: melt.id, sort: "date-asc" });
   res.json({ ...melt, castings } satisfies MeltDetail);
 });
 
-meltsRouter.patch("/melts/:id", ...write, async (req, res) => {
+meltsRouter.patch("/:id", ...write, async (req, res) => {
   const id = idParam(req.params.id, "No such melt");
   res.json(await patchMelt(currentMember(req), id, parseOr400(meltPatch, req.body)));
 });

@@ -26,7 +26,7 @@ const receivePhoto: RequestHandler = (req, res, next) =>
   });
 
 photosRouter.post(
-  "/castings/:id/photos",
+  "/castings/:id",
   requireShopMember,
   allow({ casebook: ["write"] }),
   // Before reading up to 15 MB: is there such a casting in this shop?
@@ -57,10 +57,10 @@ const serve =
       },
     });
   };
-photosRouter.get("/photos/:id/image", requireShopMember, allow({ casebook: ["read"] }), serve("fileName"));
-photosRouter.get("/photos/:id/thumb", requireShopMember, allow({ casebook: ["read"] }), serve("thumbName"));
+photosRouter.get("/:id/image", requireShopMember, allow({ casebook: ["read"] }), serve("fileName"));
+photosRouter.get("/:id/thumb", requireShopMember, allow({ casebook: ["read"] }), serve("thumbName"));
 
-photosRouter.delete("/photos/:id", requireShopMember, allow({ casebook: ["write"] }), async (req, res) => {
+photosRouter.delete("/:id", requireShopMember, allow({ casebook: ["write"] }), async (req, res) => {
   await deletePhoto(currentMember(req), idParam(req.params.id, "No such photo"));
   res.status(204).end();
 });

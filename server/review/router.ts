@@ -9,12 +9,12 @@ import { caseReview, confirmCause, requestReview, reviewQueue } from "./service"
 export const reviewRouter = Router();
 const castingId = (v: unknown) => idParam(v, "No such casting");
 
-reviewRouter.get("/castings/:id/review", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
+reviewRouter.get("/castings/:id", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
   res.json(await caseReview(currentMember(req).shopId, castingId(req.params.id)));
 });
 
 reviewRouter.post(
-  "/castings/:id/review-requests",
+  "/castings/:id/requests",
   requireShopMember,
   allow({ casebook: ["request-review"] }),
   async (req, res) => {
@@ -35,6 +35,6 @@ reviewRouter.post(
   },
 );
 
-reviewRouter.get("/review/queue", requireShopMember, allow({ review: ["confirm"] }), async (req, res) => {
+reviewRouter.get("/queue", requireShopMember, allow({ review: ["confirm"] }), async (req, res) => {
   res.json({ items: await reviewQueue(currentMember(req).shopId) });
 });

@@ -11,52 +11,37 @@ const read = [requireShopMember, allow({ rule: ["read"] })];
 const write = [requireShopMember, allow({ rule: ["write"] })];
 const ruleId = (v: unknown) => String(v).slice(0, 100);
 
-rulebookRouter.get("/rulebook", ...read, async (req, res) => {
+rulebookRouter.get("/", ...read, async (req, res) => {
   res.json(await rulebook(currentMember(req).shopId));
 });
 
-rulebookRouter.get("/rulebook/rules/:ruleId", ...read, async (req, res) => {
+rulebookRouter.get("/rules/:ruleId", ...read, async (req, res) => {
   res.json(await ruleDetail(currentMember(req).shopId, ruleId(req.params.ruleId)));
 });
 
-rulebookRouter.post("/rulebook/rules", ...write, async (req, res) => {
+rulebookRouter.post("/rules", ...write, async (req, res) => {
   res.status(201).json(await createRule(currentMember(req), req.body));
 });
 
-rulebookRouter.put("/rulebook/rules/:ruleId", ...write, async (req, res) => {
+rulebookRouter.put("/rules/:ruleId", ...write, async (req, res) => {
   res.json(await updateRule(currentMember(req), ruleId(req.params.ruleId), req.body));
 });
 
-rulebookRouter.post(
-  "/rulebook/rules/:ruleId/publish",
-  requireShopMember,
-  allow({ rule: ["publish"] }),
-  async (req, res) => {
-    res.json(await publishRule(currentMember(req), ruleId(req.params.ruleId)));
-  },
-);
+rulebookRouter.post("/rules/:ruleId/publish", requireShopMember, allow({ rule: ["publish"] }), async (req, res) => {
+  res.json(await publishRule(currentMember(req), ruleId(req.params.ruleId)));
+});
 
-rulebookRouter.post(
-  "/rulebook/rules/:ruleId/retire",
-  requireShopMember,
-  allow({ rule: ["retire"] }),
-  async (req, res) => {
-    res.json(await retireRule(currentMember(req), ruleId(req.params.ruleId)));
-  },
-);
+rulebookRouter.post("/rules/:ruleId/retire", requireShopMember, allow({ rule: ["retire"] }), async (req, res) => {
+  res.json(await retireRule(currentMember(req), ruleId(req.params.ruleId)));
+});
 
 /** Switching a built-in rule off for this shop takes it out of diagnoses as retiring does. */
-rulebookRouter.put(
-  "/rulebook/rules/:ruleId/switch",
-  requireShopMember,
-  allow({ rule: ["retire"] }),
-  async (req, res) => {
-    const { off } = parseOr400(switchInput, req.body);
-    res.json(await switchBuiltIn(currentMember(req), ruleId(req.params.ruleId), off));
-  },
-);
+rulebookRouter.put("/rules/:ruleId/switch", requireShopMember, allow({ rule: ["retire"] }), async (req, res) => {
+  const { off } = parseOr400(switchInput, req.body);
+  res.json(await switchBuiltIn(currentMember(req), ruleId(req.params.ruleId), off));
+});
 
-rulebookRouter.post("/rulebook/try", ...write, async (req, res) => {
+rulebookRouter.post("/try", ...write, async (req, res) => {
   const body = parseOr400(trialInput, req.body);
   res.json(await tryRule(currentMember(req).shopId, body));
 });

@@ -9,7 +9,7 @@ import { searchCases, similarTo } from "./service";
 export const searchRouter = Router();
 const read = [requireShopMember, allow({ casebook: ["read"] })];
 
-searchRouter.get("/search", ...read, async (req, res) => {
+searchRouter.get("/", ...read, async (req, res) => {
   res.json(await searchCases(currentMember(req).shopId, parseOr400(searchQuery, req.query)));
 });
 

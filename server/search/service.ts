@@ -19,7 +19,7 @@ import type { IndexedCase, ShopIndex } from "./shop-index";
 import { similarInIndex } from "./similar-scan";
 
 /**
- * GET /api/search and GET /api/castings/:id/similar over the shop's in-memory index. Words first
+ * GET /api/search and GET /api/search/castings/:id/similar over the shop's in-memory index. Words first
  * narrow to the cases holding a match for every word (the index's postings), then one pass in
  * date order applies the filters, scores the words as Fuse would and counts the chips; only the
  * page asked for is dressed (names, marked words) and sent.

@@ -19,16 +19,16 @@ shopsRouter.get("/me", async (req, res) => {
   });
 });
 
-shopsRouter.get("/shop", requireShopMember, async (req, res) => {
+shopsRouter.get("/current", requireShopMember, async (req, res) => {
   const m = currentMember(req);
   res.json(await shopForMember(m.shopId, m.userId));
 });
 
-shopsRouter.get("/shop/members", requireShopMember, async (req, res) => {
+shopsRouter.get("/current/members", requireShopMember, async (req, res) => {
   res.json({ members: await membersOf(currentMember(req).shopId) });
 });
 
-shopsRouter.patch("/shop/settings", requireShopMember, allow({ shop: ["settings"] }), async (req, res) => {
+shopsRouter.patch("/current/settings", requireShopMember, allow({ shop: ["settings"] }), async (req, res) => {
   const m = currentMember(req);
   const input = parseOr400(shopSettingsInput, req.body);
   await saveShopSettings(m.shopId, m.userId, input);
@@ -36,7 +36,7 @@ shopsRouter.patch("/shop/settings", requireShopMember, allow({ shop: ["settings"
 });
 
 /** Any shop by id answers only to its members; to everyone else it does not exist. */
-shopsRouter.get("/shops/:shopId", requireShopMember, async (req, res) => {
+shopsRouter.get("/:shopId", requireShopMember, async (req, res) => {
   const m = currentMember(req);
   const shop = await shopForMember(String(req.params.shopId), m.userId);
   if (!shop) throw notFound("No such shop");

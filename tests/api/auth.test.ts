@@ -35,7 +35,7 @@ describe("sign-up with bad input", () => {
 });
 
 describe("sign-in", () => {
-  it("signs in with the right password and the session reaches /api/me", async () => {
+  it("signs in with the right password and the session reaches /api/shops/me", async () => {
     const p = await signUp("signin");
     const agent = request.agent(app);
     const res = await agent
@@ -43,7 +43,7 @@ describe("sign-in", () => {
       .set("Origin", ORIGIN)
       .send({ email: p.email, password: p.password });
     expect(res.status).toBe(200);
-    const me = await agent.get("/api/me");
+    const me = await agent.get("/api/shops/me");
     expect(me.status).toBe(200);
     expect(me.body.user.email).toBe(p.email);
   });
@@ -62,14 +62,14 @@ describe("sign-in", () => {
 
   it("signs out: the session no longer reaches the API", async () => {
     const p = await signUp("signout");
-    expect((await p.agent.get("/api/me")).status).toBe(200);
+    expect((await p.agent.get("/api/shops/me")).status).toBe(200);
     const out = await p.agent.post("/api/auth/sign-out").set("Origin", ORIGIN).send({});
     expect(out.status).toBe(200);
-    expect((await p.agent.get("/api/me")).status).toBe(401);
+    expect((await p.agent.get("/api/shops/me")).status).toBe(401);
   });
 
   it("keeps shop routes closed to strangers", async () => {
-    for (const path of ["/api/me", "/api/shop", "/api/shop/members"]) {
+    for (const path of ["/api/shops/me", "/api/shops/current", "/api/shops/current/members"]) {
       const res = await request(app).get(path);
       expect(res.status).toBe(401);
       expect(res.body.error.message).toMatch(/sign in/i);

@@ -45,7 +45,7 @@ describe("CSV export", () => {
       marks: [{ type: "misrun", location: "far-from-gate", severity: 3 }],
     });
     await newCasting(caster, melt.id, { partName: "Bracket, left", outcome: "good" });
-    await caster.agent.post(`/api/castings/${plate.id}/diagnosis`);
+    await caster.agent.post(`/api/diagnosis/castings/${plate.id}`);
 
     const res = await owner.agent.get("/api/export/castings.csv");
     expect(res.status).toBe(200);

@@ -86,17 +86,25 @@ describe("the alloy table", () => {
 describe("a person's units", () => {
   it("starts in SI, saves a choice per person, and refuses anything else", async () => {
     const { caster, mentor } = await shopWithCrew("Units Shop");
-    expect((await caster.agent.get("/api/me/units")).body).toEqual({ temperature: "C", length: "mm", mass: "kg" });
-    const put = await caster.agent.put("/api/me/units").send({ temperature: "F", length: "in", mass: "lb" });
+    expect((await caster.agent.get("/api/people/me/units")).body).toEqual({
+      temperature: "C",
+      length: "mm",
+      mass: "kg",
+    });
+    const put = await caster.agent.put("/api/people/me/units").send({ temperature: "F", length: "in", mass: "lb" });
     expect(put.status).toBe(200);
-    expect((await caster.agent.get("/api/me/units")).body).toEqual({ temperature: "F", length: "in", mass: "lb" });
-    expect((await mentor.agent.get("/api/me/units")).body.temperature).toBe("C");
-    const bad = await caster.agent.put("/api/me/units").send({ temperature: "K", length: "cubit" });
+    expect((await caster.agent.get("/api/people/me/units")).body).toEqual({
+      temperature: "F",
+      length: "in",
+      mass: "lb",
+    });
+    expect((await mentor.agent.get("/api/people/me/units")).body.temperature).toBe("C");
+    const bad = await caster.agent.put("/api/people/me/units").send({ temperature: "K", length: "cubit" });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(["temperature", "length", "mass"]));
-    expect((await caster.agent.get("/api/me/units")).body.temperature).toBe("F");
-    expect((await request(app).put("/api/me/units").send({ temperature: "F", length: "in", mass: "lb" })).status).toBe(
-      401,
-    );
+    expect((await caster.agent.get("/api/people/me/units")).body.temperature).toBe("F");
+    expect(
+      (await request(app).put("/api/people/me/units").send({ temperature: "F", length: "in", mass: "lb" })).status,
+    ).toBe(401);
   });
 });

@@ -17,7 +17,7 @@ describe("castings of a melt", () => {
   it("stores a casting with its marks and shows it on the melt's page and in the list", async () => {
     const { caster, mentor } = await shopWithCrew("Casting Shop");
     const melt = await newMelt(caster);
-    const res = await caster.agent.post(`/api/melts/${melt.id}/castings`).send({ ...thinPlate, marks: twoMarks });
+    const res = await caster.agent.post(`/api/castings/melts/${melt.id}`).send({ ...thinPlate, marks: twoMarks });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({
       partName: "Ribbed cover plate",
@@ -53,7 +53,7 @@ describe("castings of a melt", () => {
     const { shopId, caster } = await shopWithCrew("Bad Casting Shop");
     const melt = await newMelt(caster);
     const before = await shopCounts(shopId);
-    const res = await caster.agent.post(`/api/melts/${melt.id}/castings`).send({
+    const res = await caster.agent.post(`/api/castings/melts/${melt.id}`).send({
       ...thinPlate,
       minSectionMm: 20,
       maxSectionMm: 8,
@@ -64,7 +64,7 @@ describe("castings of a melt", () => {
     expect(Object.keys(res.body.error.fields)).toEqual(
       expect.arrayContaining(["minSectionMm", "sprueHeightMm", "marks.1.type", "marks.1.severity"]),
     );
-    const noName = await caster.agent.post(`/api/melts/${melt.id}/castings`).send({ minSectionMm: -1 });
+    const noName = await caster.agent.post(`/api/castings/melts/${melt.id}`).send({ minSectionMm: -1 });
     expect(Object.keys(noName.body.error.fields)).toEqual(expect.arrayContaining(["partName", "minSectionMm"]));
     expect(await shopCounts(shopId)).toEqual(before);
   });
@@ -110,7 +110,7 @@ describe("castings of a melt", () => {
     const b = await shopWithCrew("Casting Shop B");
     const bMelt = await newMelt(b.caster);
     const bCasting = await newCasting(b.caster, bMelt.id);
-    expect((await a.caster.agent.post(`/api/melts/${bMelt.id}/castings`).send(thinPlate)).status).toBe(404);
+    expect((await a.caster.agent.post(`/api/castings/melts/${bMelt.id}`).send(thinPlate)).status).toBe(404);
     expect((await a.caster.agent.get(`/api/castings/${bCasting.id}`)).status).toBe(404);
     expect((await a.owner.agent.patch(`/api/castings/${bCasting.id}`).send({ outcome: "good" })).status).toBe(404);
     expect((await a.caster.agent.get("/api/castings")).body.total).toBe(0);
@@ -124,7 +124,7 @@ describe("marks and comments", () => {
     const { caster, mentor } = await shopWithCrew("Mark Shop");
     const c = await newCasting(caster, (await newMelt(caster)).id);
     const add = await caster.agent
-      .post(`/api/castings/${c.id}/marks`)
+      .post(`/api/marks/castings/${c.id}`)
       .send({ type: "gas-porosity", location: "top", severity: 1 });
     expect(add.status).toBe(201);
     expect(add.body).toMatchObject({ castingId: c.id, photoId: null, x: null, severity: 1 });
@@ -145,19 +145,19 @@ describe("marks and comments", () => {
     const b = await shopWithCrew("Mark Shop B");
     const c = await newCasting(b.caster, (await newMelt(b.caster)).id);
     const bad = await b.caster.agent
-      .post(`/api/castings/${c.id}/marks`)
+      .post(`/api/marks/castings/${c.id}`)
       .send({ type: "misrun", location: "inside", severity: 0, photoId: 999999 });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(expect.arrayContaining(["location", "severity", "x", "y"]));
     const onStranger = await b.caster.agent
-      .post(`/api/castings/${c.id}/marks`)
+      .post(`/api/marks/castings/${c.id}`)
       .send({ type: "misrun", location: "top", severity: 2, photoId: 999999, x: 0.5, y: 0.5 });
     expect(onStranger.body.error.fields.photoId).toMatch(/not a photo/);
     const mark = await b.caster.agent
-      .post(`/api/castings/${c.id}/marks`)
+      .post(`/api/marks/castings/${c.id}`)
       .send({ type: "misrun", location: "top", severity: 2 });
     expect(
-      (await a.caster.agent.post(`/api/castings/${c.id}/marks`).send({ type: "misrun", location: "top", severity: 2 }))
+      (await a.caster.agent.post(`/api/marks/castings/${c.id}`).send({ type: "misrun", location: "top", severity: 2 }))
         .status,
     ).toBe(404);
     expect((await a.caster.agent.patch(`/api/marks/${mark.body.id}`).send({ severity: 1 })).status).toBe(404);
@@ -170,16 +170,16 @@ describe("marks and comments", () => {
     const b = await shopWithCrew("Comment Shop B");
     const c = await newCasting(a.caster, (await newMelt(a.caster)).id);
     const one = await a.caster.agent
-      .post(`/api/castings/${c.id}/comments`)
+      .post(`/api/comments/castings/${c.id}`)
       .send({ body: "Pot sat 3 minutes before the pour." });
     expect(one.status).toBe(201);
     await a.mentor.agent
-      .post(`/api/castings/${c.id}/comments`)
+      .post(`/api/comments/castings/${c.id}`)
       .send({ body: "Then the cold pour fits. Preheat the ladle." });
-    const empty = await a.caster.agent.post(`/api/castings/${c.id}/comments`).send({ body: "   " });
+    const empty = await a.caster.agent.post(`/api/comments/castings/${c.id}`).send({ body: "   " });
     expect(empty.status).toBe(400);
     expect(empty.body.error.fields.body).toBeDefined();
-    expect((await b.owner.agent.post(`/api/castings/${c.id}/comments`).send({ body: "hello" })).status).toBe(404);
+    expect((await b.owner.agent.post(`/api/comments/castings/${c.id}`).send({ body: "hello" })).status).toBe(404);
     const detail = await a.owner.agent.get(`/api/castings/${c.id}`);
     expect(detail.body.comments.map((x: { createdBy: { id: string } }) => x.createdBy.id)).toEqual([
       a.caster.userId,

@@ -60,7 +60,7 @@ export async function newCasting(
   meltId: number,
   input: Partial<Omit<CastingInput, "marks">> & { marks?: LooseMark[] } = {},
 ) {
-  const res = await p.agent.post(`/api/melts/${meltId}/castings`).send({ ...thinPlate, ...input });
+  const res = await p.agent.post(`/api/castings/melts/${meltId}`).send({ ...thinPlate, ...input });
   if (res.status !== 201) throw new Error(`casting: ${res.status} ${res.text}`);
   return res.body as { id: number };
 }

@@ -85,7 +85,9 @@ describe("melts", () => {
 
   it("pre-fills a new melt from the shop's defaults and the last melt", async () => {
     const { owner, caster } = await shopWithCrew("Defaults Shop");
-    await owner.agent.patch("/api/shop/settings").send({ defaultAlloy: "319.0", defaultProcess: "green-sand" });
+    await owner.agent
+      .patch("/api/shops/current/settings")
+      .send({ defaultAlloy: "319.0", defaultProcess: "green-sand" });
     expect((await caster.agent.get("/api/melts/defaults")).body).toEqual({ alloy: "319.0", process: "green-sand" });
     await newMelt(caster, { alloy: "A356.0", furnace: "Crucible B" });
     expect((await caster.agent.get("/api/melts/defaults")).body).toEqual({

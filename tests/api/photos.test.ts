@@ -43,7 +43,7 @@ describe("photo uploads", () => {
     const before = await sharp(original).metadata();
     expect(before.orientation).toBe(6);
     expect(hasGpsBlock(before.exif)).toBe(true);
-    const res = await caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", original, "IMG_0042.jpg");
+    const res = await caster.agent.post(`/api/photos/castings/${casting.id}`).attach("photo", original, "IMG_0042.jpg");
     expect(res.status).toBe(201);
     // EXIF orientation 6 means the camera was turned: stored upright, 400 wide and 600 high.
     expect(res.body).toMatchObject({
@@ -83,7 +83,7 @@ describe("photo uploads", () => {
       [png, "scan.dat"],
       [webp, "shot.webp"],
     ] as const) {
-      const res = await caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", buf, name);
+      const res = await caster.agent.post(`/api/photos/castings/${casting.id}`).attach("photo", buf, name);
       expect(res.status).toBe(201);
       const img = await caster.agent.get(res.body.imageUrl).buffer(true);
       expect((await sharp(img.body).metadata()).format).toBe("jpeg");
@@ -97,7 +97,7 @@ describe("photo uploads", () => {
     const casting = await castingOf(caster);
     const before = filesInUploads();
     const res = await caster.agent
-      .post(`/api/castings/${casting.id}/photos`)
+      .post(`/api/photos/castings/${casting.id}`)
       .attach("photo", Buffer.from("pour log: 14 Jan, 700 C, misrun\n".repeat(50)), {
         filename: "casting.jpg",
         contentType: "image/jpeg",
@@ -106,7 +106,7 @@ describe("photo uploads", () => {
     expect(res.body.error.message).toMatch(/JPEG/);
     // A damaged JPEG (right magic bytes, nothing after) is refused the same way.
     const broken = await caster.agent
-      .post(`/api/castings/${casting.id}/photos`)
+      .post(`/api/photos/castings/${casting.id}`)
       .attach("photo", Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0, 16, 0x4a, 0x46, 0x49, 0x46, 0]), "broken.jpg");
     expect(broken.status).toBe(415);
     // HEIC is accepted by content, but sharp's prebuilt libvips has no HEVC decoder: 415 saying so.
@@ -118,11 +118,11 @@ describe("photo uploads", () => {
       Buffer.alloc(256, 1),
     ]);
     const heicRes = await caster.agent
-      .post(`/api/castings/${casting.id}/photos`)
+      .post(`/api/photos/castings/${casting.id}`)
       .attach("photo", heic, "IMG_0001.HEIC");
     expect(heicRes.status).toBe(415);
     expect(heicRes.body.error.message).toMatch(/HEIC/);
-    const none = await caster.agent.post(`/api/castings/${casting.id}/photos`).field("note", "no file");
+    const none = await caster.agent.post(`/api/photos/castings/${casting.id}`).field("note", "no file");
     expect(none.status).toBe(400);
     expect(none.body.error.fields.photo).toBeDefined();
     expect(await photoRows(casting.id)).toHaveLength(0);
@@ -134,7 +134,7 @@ describe("photo uploads", () => {
     const casting = await castingOf(caster);
     const before = filesInUploads();
     const big = Buffer.concat([await phoneJpeg(), Buffer.alloc(15 * 1024 * 1024 + 10)]);
-    const res = await caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", big, "huge.jpg");
+    const res = await caster.agent.post(`/api/photos/castings/${casting.id}`).attach("photo", big, "huge.jpg");
     expect(res.status).toBe(413);
     expect(res.body.error.message).toMatch(/15 MB/);
     expect(await photoRows(casting.id)).toHaveLength(0);
@@ -160,7 +160,7 @@ describe("photo uploads", () => {
         host: "127.0.0.1",
         port,
         method: "POST",
-        path: `/api/castings/${casting.id}/photos`,
+        path: `/api/photos/castings/${casting.id}`,
         headers: { cookie, "content-type": `multipart/form-data; boundary=${boundary}`, "content-length": 5_000_000 },
       });
       req.on("error", () => resolve());
@@ -194,19 +194,19 @@ describe("photos belong to their shop", () => {
     const casting = await castingOf(a.caster);
     const other = await castingOf(a.caster);
     const photo = (
-      await a.caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", await phoneJpeg(), "p.jpg")
+      await a.caster.agent.post(`/api/photos/castings/${casting.id}`).attach("photo", await phoneJpeg(), "p.jpg")
     ).body;
     const pin = await a.caster.agent
-      .post(`/api/castings/${casting.id}/marks`)
+      .post(`/api/marks/castings/${casting.id}`)
       .send({ type: "misrun", location: "corner", severity: 3, photoId: photo.id, x: 0.8, y: 0.1 });
     expect(pin.status).toBe(201);
     await a.caster.agent
-      .post(`/api/castings/${casting.id}/marks`)
+      .post(`/api/marks/castings/${casting.id}`)
       .send({ type: "cold-shut", location: "side", severity: 1, photoId: photo.id, x: 0.2, y: 0.5 });
     const moved = await a.caster.agent.patch(`/api/marks/${pin.body.id}`).send({ x: 0.75, y: 0.15 });
     expect(moved.body).toMatchObject({ x: 0.75, y: 0.15, photoId: photo.id });
     const wrongPhoto = await a.caster.agent
-      .post(`/api/castings/${other.id}/marks`)
+      .post(`/api/marks/castings/${other.id}`)
       .send({ type: "misrun", location: "top", severity: 2, photoId: photo.id, x: 0.5, y: 0.5 });
     expect(wrongPhoto.status).toBe(400);
     const outside = await a.caster.agent.patch(`/api/marks/${pin.body.id}`).send({ x: 1.4 });
@@ -216,13 +216,13 @@ describe("photos belong to their shop", () => {
     expect((await b.owner.agent.get(photo.thumbUrl)).status).toBe(404);
     expect((await request(app).get(photo.imageUrl)).status).toBe(401);
     expect(
-      (await b.caster.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", await phoneJpeg(), "x.jpg"))
+      (await b.caster.agent.post(`/api/photos/castings/${casting.id}`).attach("photo", await phoneJpeg(), "x.jpg"))
         .status,
     ).toBe(404);
     expect((await b.owner.agent.delete(`/api/photos/${photo.id}`)).status).toBe(404);
     const loner = await signUp("photo-loner");
     expect(
-      (await loner.agent.post(`/api/castings/${casting.id}/photos`).attach("photo", await phoneJpeg(), "x.jpg")).status,
+      (await loner.agent.post(`/api/photos/castings/${casting.id}`).attach("photo", await phoneJpeg(), "x.jpg")).status,
     ).toBe(403);
 
     const [row] = await photoRows(casting.id);

@@ -16,10 +16,10 @@ describe("review: asking, the queue and confirming a cause", () => {
     const melt = await newMelt(caster);
     const first = await newCasting(caster, melt.id, { marks: misrun });
     const second = await newCasting(caster, melt.id, { partName: "Second plate", marks: misrun });
-    await caster.agent.post(`/api/castings/${first.id}/diagnosis`);
+    await caster.agent.post(`/api/diagnosis/castings/${first.id}`);
 
     const asked = await caster.agent
-      .post(`/api/castings/${first.id}/review-requests`)
+      .post(`/api/review/castings/${first.id}/requests`)
       .send({ note: "Corner never filled" });
     expect(asked.status).toBe(201);
     expect((asked.body as CaseReview).waiting).toMatchObject({
@@ -27,8 +27,8 @@ describe("review: asking, the queue and confirming a cause", () => {
       createdBy: { id: caster.userId },
     });
     // Asking again while it waits keeps one request.
-    expect((await caster.agent.post(`/api/castings/${first.id}/review-requests`).send({})).status).toBe(200);
-    expect((await mentor.agent.post(`/api/castings/${second.id}/review-requests`).send({})).status).toBe(201);
+    expect((await caster.agent.post(`/api/review/castings/${first.id}/requests`).send({})).status).toBe(200);
+    expect((await mentor.agent.post(`/api/review/castings/${second.id}/requests`).send({})).status).toBe(201);
 
     expect((await caster.agent.get("/api/review/queue")).status).toBe(403);
     const queue = (await mentor.agent.get("/api/review/queue")).body.items as QueueItem[];
@@ -41,10 +41,12 @@ describe("review: asking, the queue and confirming a cause", () => {
     });
     expect(queue[1].topCause).toBeNull(); // never diagnosed
 
-    const denied = await caster.agent.post(`/api/castings/${first.id}/confirmations`).send({ causeId: "cold-pour" });
+    const denied = await caster.agent
+      .post(`/api/review/castings/${first.id}/confirmations`)
+      .send({ causeId: "cold-pour" });
     expect(denied.status).toBe(403);
     const ok = await mentor.agent
-      .post(`/api/castings/${first.id}/confirmations`)
+      .post(`/api/review/castings/${first.id}/confirmations`)
       .send({ causeId: "cold-pour", note: "Pot sat too long" });
     expect(ok.status).toBe(201);
     const review = ok.body as CaseReview;
@@ -61,10 +63,10 @@ describe("review: asking, the queue and confirming a cause", () => {
 
     // A cause the rulebook lacks, in words; the newest confirmation is the one that counts.
     const other = await owner.agent
-      .post(`/api/castings/${first.id}/confirmations`)
+      .post(`/api/review/castings/${first.id}/confirmations`)
       .send({ causeText: "Ladle lip froze over", note: "Found a skull in the ladle" });
     expect(other.body.current).toMatchObject({ causeId: null, causeTitle: "Ladle lip froze over" });
-    const read = (await caster.agent.get(`/api/castings/${first.id}/review`)).body as CaseReview;
+    const read = (await caster.agent.get(`/api/review/castings/${first.id}`)).body as CaseReview;
     expect(read.confirmations.map((c) => c.causeTitle)).toEqual(["Ladle lip froze over", review.current!.causeTitle]);
   });
 
@@ -72,17 +74,17 @@ describe("review: asking, the queue and confirming a cause", () => {
     const { shopId, caster, mentor } = await shopWithCrew("Review Bad Input");
     const melt = await newMelt(caster);
     const c = await newCasting(caster, melt.id, { marks: misrun });
-    const none = await mentor.agent.post(`/api/castings/${c.id}/confirmations`).send({ note: "hm" });
+    const none = await mentor.agent.post(`/api/review/castings/${c.id}/confirmations`).send({ note: "hm" });
     expect(none.status).toBe(400);
     expect(none.body.error.fields.causeId).toMatch(/choose a cause/);
     const both = await mentor.agent
-      .post(`/api/castings/${c.id}/confirmations`)
+      .post(`/api/review/castings/${c.id}/confirmations`)
       .send({ causeId: "cold-pour", causeText: "also this" });
     expect(both.body.error.fields.causeText).toBeDefined();
-    const unknown = await mentor.agent.post(`/api/castings/${c.id}/confirmations`).send({ causeId: "gremlins" });
+    const unknown = await mentor.agent.post(`/api/review/castings/${c.id}/confirmations`).send({ causeId: "gremlins" });
     expect(unknown.status).toBe(400);
     expect(unknown.body.error.fields.causeId).toMatch(/not a cause/);
-    const long = await caster.agent.post(`/api/castings/${c.id}/review-requests`).send({ note: "x".repeat(1001) });
+    const long = await caster.agent.post(`/api/review/castings/${c.id}/requests`).send({ note: "x".repeat(1001) });
     expect(long.status).toBe(400);
     expect(await db.$count(confirmations, eq(confirmations.shopId, shopId))).toBe(0);
     expect(await db.$count(reviewRequests, eq(reviewRequests.shopId, shopId))).toBe(0);
@@ -93,16 +95,16 @@ describe("review: asking, the queue and confirming a cause", () => {
     const b = await shopWithCrew("Review Away");
     const melt = await newMelt(b.caster);
     const theirs = await newCasting(b.caster, melt.id, { marks: misrun });
-    const fix = await b.caster.agent.post(`/api/castings/${theirs.id}/fixes`).send({ fix: "Pour hotter" });
+    const fix = await b.caster.agent.post(`/api/followups/castings/${theirs.id}/fixes`).send({ fix: "Pour hotter" });
     expect(fix.status).toBe(201);
     for (const res of await Promise.all([
-      a.mentor.agent.get(`/api/castings/${theirs.id}/review`),
-      a.caster.agent.post(`/api/castings/${theirs.id}/review-requests`).send({}),
-      a.mentor.agent.post(`/api/castings/${theirs.id}/confirmations`).send({ causeId: "cold-pour" }),
-      a.caster.agent.get(`/api/castings/${theirs.id}/followups`),
-      a.caster.agent.post(`/api/castings/${theirs.id}/fixes`).send({ fix: "Pour hotter" }),
-      a.owner.agent.patch(`/api/fixes/${fix.body.id}`).send({ worked: "no" }),
-      a.mentor.agent.get("/api/castings/not-a-number/review"),
+      a.mentor.agent.get(`/api/review/castings/${theirs.id}`),
+      a.caster.agent.post(`/api/review/castings/${theirs.id}/requests`).send({}),
+      a.mentor.agent.post(`/api/review/castings/${theirs.id}/confirmations`).send({ causeId: "cold-pour" }),
+      a.caster.agent.get(`/api/followups/castings/${theirs.id}`),
+      a.caster.agent.post(`/api/followups/castings/${theirs.id}/fixes`).send({ fix: "Pour hotter" }),
+      a.owner.agent.patch(`/api/followups/fixes/${fix.body.id}`).send({ worked: "no" }),
+      a.mentor.agent.get("/api/review/castings/not-a-number"),
     ]))
       expect(res.status).toBe(404);
     expect((await a.mentor.agent.get("/api/review/queue")).body.items as QueueItem[]).toEqual([]);
@@ -123,7 +125,7 @@ describe("fixes tried and the next casting", () => {
     const otherPart = await newCasting(caster, m2.id, { partName: "Bracket" });
     const before = await newCasting(caster, early.id, {});
 
-    const list = (await caster.agent.get(`/api/castings/${a.id}/followups`)).body as Followups;
+    const list = (await caster.agent.get(`/api/followups/castings/${a.id}`)).body as Followups;
     expect(list.candidates.map((x) => x.id)).toEqual([b.id, c.id]);
     expect(list.chain).toEqual([]);
 
@@ -137,29 +139,31 @@ describe("fixes tried and the next casting", () => {
       [{ fix: "Pour hotter", nextCastingId: b.id, worked: "mostly" }, "worked", /yes, partly or no/],
     ];
     for (const [body, field, message] of refused) {
-      const res = await caster.agent.post(`/api/castings/${a.id}/fixes`).send(body);
+      const res = await caster.agent.post(`/api/followups/castings/${a.id}/fixes`).send(body);
       expect(res.status, field).toBe(400);
       expect(res.body.error.fields[field]).toMatch(message);
     }
     expect(await db.$count(fixesTried, eq(fixesTried.shopId, shopId))).toBe(0);
 
-    const first = await caster.agent.post(`/api/castings/${a.id}/fixes`).send({ fix: "Pour 60 °C hotter" });
+    const first = await caster.agent.post(`/api/followups/castings/${a.id}/fixes`).send({ fix: "Pour 60 °C hotter" });
     expect(first.status).toBe(201);
     const linked = await caster.agent
-      .patch(`/api/fixes/${first.body.id}`)
+      .patch(`/api/followups/fixes/${first.body.id}`)
       .send({ nextCastingId: b.id, worked: "partly" });
     expect(linked.status).toBe(200);
     expect(linked.body).toMatchObject({ next: { id: b.id, outcome: "rework" }, worked: "partly" });
     await caster.agent
-      .post(`/api/castings/${b.id}/fixes`)
+      .post(`/api/followups/castings/${b.id}/fixes`)
       .send({ fix: "Add an overflow at the far corner", nextCastingId: c.id, worked: "yes" });
 
-    const mid = (await caster.agent.get(`/api/castings/${b.id}/followups`)).body as Followups;
+    const mid = (await caster.agent.get(`/api/followups/castings/${b.id}`)).body as Followups;
     expect(mid.chain.map((l) => [l.casting.id, l.current, l.fixes.map((f) => f.worked)])).toEqual([
       [a.id, false, ["partly"]],
       [b.id, true, ["yes"]],
       [c.id, false, []],
     ]);
-    expect((await caster.agent.patch(`/api/fixes/${first.body.id}`).send({ nextCastingId: null })).status).toBe(400); // still marked
+    expect(
+      (await caster.agent.patch(`/api/followups/fixes/${first.body.id}`).send({ nextCastingId: null })).status,
+    ).toBe(400); // still marked
   });
 });

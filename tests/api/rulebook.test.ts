@@ -30,7 +30,7 @@ async function flashCasting(p: Person, sprueHeightMm = 300, pouredOn = "2026-02-
   });
 }
 const causesOf = async (p: Person, castingId: number) => {
-  const res = await p.agent.post(`/api/castings/${castingId}/diagnosis`);
+  const res = await p.agent.post(`/api/diagnosis/castings/${castingId}`);
   expect(res.status).toBe(201);
   return res.body.result.causes as { id: string; because: string[]; record: { confirmed: number; right: number } }[];
 };
@@ -179,13 +179,11 @@ describe("shop rules in diagnoses", () => {
     expect((await mentor.agent.post(`/api/rulebook/rules/${id}/publish`)).status).toBe(409);
 
     // A changed draft on top of the published version changes nothing until it is published.
-    await mentor.agent
-      .put(`/api/rulebook/rules/${id}`)
-      .send({
-        ...draft,
-        conditions: [{ fact: "sprueHeightMm", comparison: "above", value: 400 }],
-        cause: { kind: "existing", id: after[0].id },
-      });
+    await mentor.agent.put(`/api/rulebook/rules/${id}`).send({
+      ...draft,
+      conditions: [{ fact: "sprueHeightMm", comparison: "above", value: 400 }],
+      cause: { kind: "existing", id: after[0].id },
+    });
     expect((await causesOf(caster, casting.id))[0].id).toBe(after[0].id);
 
     expect((await mentor.agent.post(`/api/rulebook/rules/${id}/retire`)).body).toMatchObject({
@@ -212,14 +210,12 @@ describe("shop rules in diagnoses", () => {
     const { caster, mentor, owner } = await shopWithCrew("Rulebook Versions");
     const id = (await mentor.agent.post("/api/rulebook/rules").send(draft)).body.id;
     const causeId = (await caster.agent.get(`/api/rulebook/rules/${id}`)).body.cause.id;
-    await owner.agent
-      .put(`/api/rulebook/rules/${id}`)
-      .send({
-        ...draft,
-        cause: { kind: "existing", id: causeId },
-        weight: 0.7,
-        sources: ["shop experience", "Pattern shop notes"],
-      });
+    await owner.agent.put(`/api/rulebook/rules/${id}`).send({
+      ...draft,
+      cause: { kind: "existing", id: causeId },
+      weight: 0.7,
+      sources: ["shop experience", "Pattern shop notes"],
+    });
     await mentor.agent.post(`/api/rulebook/rules/${id}/publish`);
     const detail = await caster.agent.get(`/api/rulebook/rules/${id}`);
     const versions = detail.body.versions as RuleVersion[];
@@ -245,7 +241,7 @@ describe("shop rules in diagnoses", () => {
       degassing: "none",
     };
     const reasons = async (p: Person) =>
-      (await p.agent.post("/api/diagnose").send(gas)).body.causes.flatMap((c: { because: string[] }) => c.because);
+      (await p.agent.post("/api/diagnosis").send(gas)).body.causes.flatMap((c: { because: string[] }) => c.because);
     expect(await reasons(a.caster)).toContain("The melt was not degassed");
     const off = await a.mentor.agent.put("/api/rulebook/rules/h2-no-degassing/switch").send({ off: true });
     expect(off.body).toMatchObject({
@@ -270,7 +266,7 @@ describe("trying a rule and learning from confirmed cases", () => {
     const short = await flashCasting(caster, 120, "2026-02-02");
     const confirmed = await flashCasting(caster, 320, "2026-02-03");
     const topBefore = (await causesOf(caster, confirmed.id))[0].id;
-    await mentor.agent.post(`/api/castings/${confirmed.id}/confirmations`).send({ causeId: topBefore });
+    await mentor.agent.post(`/api/review/castings/${confirmed.id}/confirmations`).send({ causeId: topBefore });
     const res = await mentor.agent.post("/api/rulebook/try").send({ draft });
     expect(res.status).toBe(200);
     // Fires on the two tall sprues; the confirmed one was something else, so it does not agree.
@@ -311,9 +307,9 @@ describe("trying a rule and learning from confirmed cases", () => {
       const top = (await causesOf(caster, c.id))[0] as unknown as { id: string; score: number; record: object };
       scores.push(top.score);
       expect(top.id).toBe(cause);
-      expect((await mentor.agent.post(`/api/castings/${c.id}/confirmations`).send({ causeId: cause })).status).toBe(
-        201,
-      );
+      expect(
+        (await mentor.agent.post(`/api/review/castings/${c.id}/confirmations`).send({ causeId: cause })).status,
+      ).toBe(201);
     }
     const latest = await flashCasting(caster, 300, "2026-03-04");
     const [top] = await causesOf(caster, latest.id);

@@ -93,14 +93,16 @@ export async function buildCasebook(name: string) {
     marks: [{ type: "gas-porosity", location: "top", severity: 3 }],
   });
   await ok(
-    caster.agent.post(`/api/castings/${c3.id}/comments`).send({ body: "No porosity seen when it was cut open" }),
+    caster.agent.post(`/api/comments/castings/${c3.id}`).send({ body: "No porosity seen when it was cut open" }),
   );
   await ok(
-    mentor.agent.post(`/api/castings/${c5.id}/confirmations`).send({ causeId: "cold-pour", note: "pot sat too long" }),
+    mentor.agent
+      .post(`/api/review/castings/${c5.id}/confirmations`)
+      .send({ causeId: "cold-pour", note: "pot sat too long" }),
   );
   await ok(
     caster.agent
-      .post(`/api/castings/${c5.id}/fixes`)
+      .post(`/api/followups/castings/${c5.id}/fixes`)
       .send({ fix: "Poured 40 °C hotter", nextCastingId: c6.id, worked: "yes" }),
   );
   return {

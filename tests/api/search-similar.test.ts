@@ -12,12 +12,12 @@ beforeAll(async () => {
 }, 120_000);
 
 const similar = async (b: Casebook, id: number) => {
-  const res = await b.caster.agent.get(`/api/castings/${id}/similar`);
+  const res = await b.caster.agent.get(`/api/search/castings/${id}/similar`);
   expect(res.status, res.text).toBe(200);
   return res.body as SimilarAnswer;
 };
 
-describe("GET /api/castings/:id/similar", () => {
+describe("GET /api/search/castings/:id/similar", () => {
   it("finds the confirmed misrun whose fix worked, and says why", async () => {
     const { items } = await similar(book, book.ids.c1);
     expect(items.map((i) => i.id)).toEqual([book.ids.c5]);
@@ -44,7 +44,7 @@ describe("GET /api/castings/:id/similar", () => {
   });
 
   it("answers 404 for another shop's casting and never lists its cases", async () => {
-    const res = await book.caster.agent.get(`/api/castings/${other.ids.c1}/similar`);
+    const res = await book.caster.agent.get(`/api/search/castings/${other.ids.c1}/similar`);
     expect(res.status).toBe(404);
     const mine = Object.values(book.ids);
     for (const id of mine) for (const item of (await similar(book, id)).items) expect(mine).toContain(item.id);

@@ -80,7 +80,7 @@ describe("filters", () => {
   it("filters by the latest diagnosis's first cause where no mentor confirmed one", async () => {
     // Casting 1 is the textbook cold lost-foam misrun: the diagnosis names a cause for it.
     const { c1 } = book.ids;
-    const res = await book.caster.agent.post(`/api/castings/${c1}/diagnosis`);
+    const res = await book.caster.agent.post(`/api/diagnosis/castings/${c1}`);
     expect(res.status, res.text).toBe(201);
     const top = res.body.result.causes[0].id as string;
     expect(ids(await search(book.caster, { cause: top }))).toContain(c1);
@@ -154,7 +154,7 @@ describe("stays current with every write", () => {
     const shop = await buildCasebook("Fresh Shop");
     const { c4, c2 } = shop.ids;
     await search(shop.caster, { q: "anything" }); // the index exists before the writes
-    await shop.caster.agent.post(`/api/castings/${c4}/comments`).send({ body: "surprising shrinkage inside the boss" });
+    await shop.caster.agent.post(`/api/comments/castings/${c4}`).send({ body: "surprising shrinkage inside the boss" });
     expect(ids(await search(shop.caster, { q: "shrinkage" }))).toEqual([c4]);
 
     const m = await newMelt(shop.caster, {

@@ -10,13 +10,13 @@ describe("shops and roles", () => {
   it("makes whoever creates a shop its owner", async () => {
     const p = await signUp("creator");
     const shopId = await createShop(p, "Creator Shop");
-    const me = await p.agent.get("/api/me");
+    const me = await p.agent.get("/api/shops/me");
     expect(me.body.activeShop).toMatchObject({ id: shopId, role: "owner" });
   });
 
   it("a signed-in person with no shop is told to start or join one", async () => {
     const p = await signUp("loner");
-    const res = await p.agent.get("/api/shop");
+    const res = await p.agent.get("/api/shops/current");
     expect(res.status).toBe(403);
     expect(res.body.error.message).toMatch(/shop/);
   });
@@ -24,28 +24,30 @@ describe("shops and roles", () => {
   it("lets only the owner change shop settings", async () => {
     const { shopId, owner, mentor, caster } = await shopWithCrew("Settings Shop");
     for (const p of [caster, mentor]) {
-      const res = await p.agent.patch("/api/shop/settings").send({ defaultProcess: "lost-foam" });
+      const res = await p.agent.patch("/api/shops/current/settings").send({ defaultProcess: "lost-foam" });
       expect(res.status).toBe(403);
     }
     expect(await db.select().from(shopSettings).where(eq(shopSettings.shopId, shopId))).toHaveLength(0);
     const ok = await owner.agent
-      .patch("/api/shop/settings")
+      .patch("/api/shops/current/settings")
       .send({ defaultProcess: "lost-foam", defaultAlloy: "A356.0" });
     expect(ok.status).toBe(200);
     expect(ok.body).toMatchObject({ defaultProcess: "lost-foam", defaultAlloy: "A356.0" });
-    const seen = await caster.agent.get("/api/shop");
+    const seen = await caster.agent.get("/api/shops/current");
     expect(seen.body.defaultProcess).toBe("lost-foam");
   });
 
   it("refuses bad settings field by field and keeps what was there", async () => {
     const { owner } = await shopWithCrew("Bad Settings Shop");
-    await owner.agent.patch("/api/shop/settings").send({ defaultProcess: "investment" });
-    const res = await owner.agent.patch("/api/shop/settings").send({ defaultProcess: "sandcastle", colour: "red" });
+    await owner.agent.patch("/api/shops/current/settings").send({ defaultProcess: "investment" });
+    const res = await owner.agent
+      .patch("/api/shops/current/settings")
+      .send({ defaultProcess: "sandcastle", colour: "red" });
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields).length).toBeGreaterThan(0);
-    expect((await owner.agent.get("/api/shop")).body.defaultProcess).toBe("investment");
+    expect((await owner.agent.get("/api/shops/current")).body.defaultProcess).toBe("investment");
     const malformed = await owner.agent
-      .patch("/api/shop/settings")
+      .patch("/api/shops/current/settings")
       .set("Content-Type", "application/json")
       .send("{oops");
     expect(malformed.status).toBe(400);
@@ -57,7 +59,7 @@ describe("shops and roles", () => {
     expect((await a.caster.agent.get(`/api/shops/${b.shopId}`)).status).toBe(404);
     expect((await a.owner.agent.get(`/api/shops/${b.shopId}`)).status).toBe(404);
     expect((await a.caster.agent.get(`/api/shops/${a.shopId}`)).status).toBe(200);
-    const members = await a.caster.agent.get("/api/shop/members");
+    const members = await a.caster.agent.get("/api/shops/current/members");
     const emails = members.body.members.map((m: { email: string }) => m.email);
     expect(emails).toContain(a.owner.email);
     expect(emails).not.toContain(b.owner.email);
@@ -71,7 +73,7 @@ describe("shops and roles", () => {
       .set("Origin", ORIGIN)
       .send({ organizationId: b.shopId });
     expect(res.status).toBeGreaterThanOrEqual(400);
-    expect((await a.caster.agent.get("/api/shop")).body.id).toBe(a.shopId);
+    expect((await a.caster.agent.get("/api/shops/current")).body.id).toBe(a.shopId);
   });
 
   it("a person in two shops works in the active one and switches", async () => {
@@ -79,9 +81,9 @@ describe("shops and roles", () => {
     const b = await shopWithCrew("Second Shop");
     const { joinShop } = await import("./helpers");
     await joinShop(a.caster, b.shopId, "mentor");
-    const me = await a.caster.agent.get("/api/me");
+    const me = await a.caster.agent.get("/api/shops/me");
     expect(me.body.shops).toHaveLength(2);
     expect(me.body.activeShop).toMatchObject({ id: b.shopId, role: "mentor" });
-    expect((await a.caster.agent.get("/api/shop")).body.id).toBe(b.shopId);
+    expect((await a.caster.agent.get("/api/shops/current")).body.id).toBe(b.shopId);
   });
 });

@@ -11,7 +11,7 @@ describe("a casting's review and thread", () => {
     // A demo casting with marks, diagnosed first through the API the page itself uses.
     const list = await (await caster.request.get(`${baseUrl}/api/castings?pageSize=50`)).json();
     const target = list.items.find((c: { markCount: number }) => c.markCount > 0);
-    expect((await caster.request.post(`${baseUrl}/api/castings/${target.id}/diagnosis`)).status()).toBe(201);
+    expect((await caster.request.post(`${baseUrl}/api/diagnosis/castings/${target.id}`)).status()).toBe(201);
     const url = `${baseUrl}/melts/${target.meltId}/castings/${target.id}`;
 
     await caster.goto(url);

@@ -206,7 +206,7 @@ describe("the notebook at wide size (1280 px)", () => {
     const list = await (await page.request.get(`${baseUrl}/api/castings?pageSize=100`)).json();
     let target: { id: number; meltId: number } | undefined;
     for (const c of list.items.filter((x: { markCount: number }) => x.markCount > 0)) {
-      const snapshot: Snapshot = await (await page.request.post(`${baseUrl}/api/castings/${c.id}/diagnosis`)).json();
+      const snapshot: Snapshot = await (await page.request.post(`${baseUrl}/api/diagnosis/castings/${c.id}`)).json();
       if (quotesTemperature(snapshot)) {
         target = c;
         break;

@@ -13,7 +13,7 @@ async function markedCasting(caster: Page, partName: string, defect: string) {
   });
   expect(melt.status()).toBe(201);
   const meltId = (await melt.json()).id;
-  const casting = await caster.request.post(`${baseUrl}/api/melts/${meltId}/castings`, {
+  const casting = await caster.request.post(`${baseUrl}/api/castings/melts/${meltId}`, {
     data: { partName, sprueHeightMm: 320, marks: [{ type: defect, location: "side", severity: 2 }] },
   });
   expect(casting.status()).toBe(201);
