@@ -102,29 +102,25 @@ export async function seedShop(db: Db, count: number, seed: number): Promise<See
     .insert(organization)
     .values({ id: shopId, name: `Bench shop ${count}`, slug: `bench-${shopId}`, createdAt: new Date() });
   const people = Array.from({ length: 5 }, () => randomUUID());
-  await db
-    .insert(user)
-    .values(
-      people.map((id, i) => ({
-        id,
-        name: `Bench person ${i + 1}`,
-        email: `${id}@bench.example`,
-        emailVerified: true,
-        createdAt: new Date(),
-        updatedAt: new Date(),
-      })),
-    );
-  await db
-    .insert(member)
-    .values(
-      people.map((userId, i) => ({
-        id: randomUUID(),
-        organizationId: shopId,
-        userId,
-        role: i ? "caster" : "owner",
-        createdAt: new Date(),
-      })),
-    );
+  await db.insert(user).values(
+    people.map((id, i) => ({
+      id,
+      name: `Bench person ${i + 1}`,
+      email: `${id}@bench.example`,
+      emailVerified: true,
+      createdAt: new Date(),
+      updatedAt: new Date(),
+    })),
+  );
+  await db.insert(member).values(
+    people.map((userId, i) => ({
+      id: randomUUID(),
+      organizationId: shopId,
+      userId,
+      role: i ? "caster" : "owner",
+      createdAt: new Date(),
+    })),
+  );
   const alloyRows = await db
     .select({ id: alloys.id, designation: alloys.designation, liquidusC: alloys.liquidusC })
     .from(alloys);
