@@ -42,6 +42,7 @@ describe("npm run dev", () => {
         NODE_ENV: "development",
       },
       stdio: ["ignore", "pipe", "pipe"],
+      detached: true, // its own process group, as a terminal's foreground job is
     });
     dev.stdout!.on("data", (d) => (output += d));
     dev.stderr!.on("data", (d) => (output += d));
@@ -49,7 +50,11 @@ describe("npm run dev", () => {
     const deadline = Date.now() + 240000;
     for (;;) {
       const res = await fetch(`http://127.0.0.1:${ports.web}/sign-in`).catch(() => undefined);
-      if (res?.status === 200) break;
+      if (res?.status === 200) {
+        // Ask for the page's script too, so the cold bundle is built before the browser waits on it.
+        const src = /<script[^>]+src="([^"]+)"/.exec(await res.text())?.[1];
+        if (!src || (await fetch(new URL(src, res.url)).catch(() => undefined))?.status === 200) break;
+      }
       if (dev.exitCode !== null || Date.now() > deadline) throw new Error(`npm run dev did not come up:\n${output}`);
       await new Promise((r) => setTimeout(r, 1000));
     }
@@ -58,7 +63,7 @@ describe("npm run dev", () => {
   afterAll(async () => {
     // A failed test still stops the whole dev session the way Ctrl-C would.
     if (dev.exitCode === null) {
-      dev.kill("SIGINT");
+      process.kill(-dev.pid!, "SIGINT");
       await new Promise((r) => dev.once("exit", r));
     }
     rmSync(dataParent, { recursive: true, force: true });
@@ -76,7 +81,8 @@ describe("npm run dev", () => {
     }
 
     const exited = new Promise<number | null>((r) => dev.once("exit", (code) => r(code)));
-    dev.kill("SIGINT");
+    // Ctrl-C in a terminal signals the whole foreground process group, not npm alone.
+    process.kill(-dev.pid!, "SIGINT");
     expect(await exited, output.slice(-2000)).toBe(0);
     for (const port of [ports.web, ports.metro, ports.pg]) {
       await expect.poll(() => portInUse(port), { timeout: 10000 }).toBe(false);
