@@ -65,6 +65,12 @@ describe("npm run dev", () => {
     if (dev.exitCode === null) {
       process.kill(-dev.pid!, "SIGINT");
       await new Promise((r) => dev.once("exit", r));
+    } else {
+      try {
+        process.kill(-dev.pid!, "SIGKILL"); // anything of the group still left over
+      } catch {
+        /* the group has gone, as it should */
+      }
     }
     rmSync(dataParent, { recursive: true, force: true });
   });
@@ -80,10 +86,10 @@ describe("npm run dev", () => {
       await browser.close();
     }
 
-    const exited = new Promise<number | null>((r) => dev.once("exit", (code) => r(code)));
+    const exited = new Promise<void>((r) => dev.once("exit", () => r()));
     // Ctrl-C in a terminal signals the whole foreground process group, not npm alone.
     process.kill(-dev.pid!, "SIGINT");
-    expect(await exited, output.slice(-2000)).toBe(0);
+    await exited; // npm itself ends by the signal; what matters is that nothing keeps a port
     for (const port of [ports.web, ports.metro, ports.pg]) {
       await expect.poll(() => portInUse(port), { timeout: 10000 }).toBe(false);
     }
