@@ -62,7 +62,7 @@ describe("npm run dev", () => {
 
   afterAll(async () => {
     // A failed test still stops the whole dev session the way Ctrl-C would.
-    if (dev.exitCode === null) {
+    if (dev.exitCode === null && dev.signalCode === null) {
       process.kill(-dev.pid!, "SIGINT");
       await new Promise((r) => dev.once("exit", r));
     } else {
