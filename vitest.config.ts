@@ -22,9 +22,29 @@ export default defineConfig({
           environment: "node",
           globalSetup: ["tests/api/global-setup.ts"],
           setupFiles: ["tests/api/setup.ts"],
-          fileParallelism: false,
           testTimeout: 20000,
           hookTimeout: 60000,
+        },
+      },
+      {
+        // `npm run dev` in a real browser: needs no web export, so no e2e global setup.
+        extends: true,
+        test: {
+          name: "dev",
+          include: ["tests/dev/**/*.test.ts"],
+          environment: "node",
+          testTimeout: 60000,
+          hookTimeout: 300000,
+        },
+      },
+      {
+        // The few components with logic, rendered through react-native-web in jsdom.
+        extends: true,
+        resolve: { alias: { "react-native": "react-native-web" } },
+        test: {
+          name: "components",
+          include: ["tests/components/**/*.test.tsx"],
+          environment: "jsdom",
         },
       },
       {

@@ -1,7 +1,8 @@
 /**
- * Where the API lives, seen from the app. The exported web app is served by the API's own
- * Express process, so the page's origin is right; the Expo dev server (port 8081) is told
- * the API's address through EXPO_PUBLIC_API_URL (npm run dev sets it).
+ * Where the API lives, seen from the app: always the page's own origin. `npm start` serves the
+ * exported app from the API's Express process, and `npm run dev` serves the API and passes the rest
+ * to the Expo dev server, so the session cookie is same-origin in both. EXPO_PUBLIC_API_URL is
+ * for a native build talking to a server elsewhere.
  */
 export const apiBaseUrl: string =
   process.env.EXPO_PUBLIC_API_URL ?? (typeof window !== "undefined" ? window.location.origin : "http://127.0.0.1:8080");

@@ -3,6 +3,7 @@ import { chownSync, existsSync, mkdirSync, readdirSync, realpathSync } from "nod
 import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
+import { installDebianPackages } from "./debian-packages";
 
 /**
  * A PostgreSQL cluster of our own on 127.0.0.1, from Debian's server binaries: `npm start` keeps
@@ -19,18 +20,24 @@ export type LocalPostgres = {
 
 const isRoot = process.getuid?.() === 0;
 
-export function findPgBin(): string {
+function lookForPgBin(): string | undefined {
   const onPath = spawnSync("sh", ["-c", "command -v initdb"], { encoding: "utf8" }).stdout.trim();
   // initdb on PATH may be a lone symlink; its real folder holds pg_ctl, psql and createdb too.
   if (onPath) return realpathSync(onPath).replace(/\/initdb$/, "");
   const base = "/usr/lib/postgresql";
   const versions = existsSync(base) ? readdirSync(base).sort((a, b) => Number(b) - Number(a)) : [];
   for (const v of versions) if (existsSync(join(base, v, "bin", "initdb"))) return join(base, v, "bin");
-  throw new Error(
-    "PostgreSQL's server programs (initdb, pg_ctl) were not found.\n" +
-      "Install them with:  sudo apt-get install -y postgresql\n" +
-      "or point DATABASE_URL at a PostgreSQL server you already run.",
-  );
+  return undefined;
+}
+
+/** The folder of initdb and pg_ctl; installs Debian's postgresql first when they are missing. */
+export function findPgBin(): string {
+  const found = lookForPgBin();
+  if (found) return found;
+  installDebianPackages(["postgresql"], "The local database (or set DATABASE_URL to a server you run)");
+  const installed = lookForPgBin();
+  if (!installed) throw new Error("PostgreSQL was installed but initdb was not found under /usr/lib/postgresql.");
+  return installed;
 }
 
 function run(bin: string, args: string[]) {

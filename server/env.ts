@@ -18,6 +18,8 @@ const schema = z.object({
   MAIL_FROM: z.string().default("Shakeout Casebook <casebook@localhost>"),
   /** Only for `npm run dev`: the Expo dev server's origin, allowed to call the API with cookies. */
   DEV_WEB_ORIGIN: z.string().url().optional(),
+  /** Only for `npm run dev`: the Expo dev server that server/dev-server.ts passes non-API requests to. */
+  METRO_URL: z.string().url().default("http://127.0.0.1:8081"),
 });
 
 type Env = z.infer<typeof schema> & { BETTER_AUTH_SECRET: string; PUBLIC_URL: string };

@@ -1,7 +1,28 @@
+import { randomUUID } from "node:crypto";
+import pg from "pg";
 import { inject } from "vitest";
 
-// Runs in each test worker before any test module loads the app: point it at the test cluster.
-process.env.DATABASE_URL = inject("databaseUrl");
+// Runs before each test file, before it loads the app: a database of the file's own, cloned from
+// the migrated template (CREATE DATABASE ... TEMPLATE copies it in well under a second), so test
+// files in parallel workers never see each other's rows. The cluster is removed after the run.
+const templateUrl = new URL(inject("templateUrl"));
+const name = `casebook_${randomUUID().replaceAll("-", "").slice(0, 12)}`;
+const admin = new pg.Client({ connectionString: new URL("/postgres", templateUrl).href });
+await admin.connect();
+for (let attempt = 1; ; attempt++) {
+  try {
+    await admin.query(`CREATE DATABASE ${name} TEMPLATE casebook_template`);
+    break;
+  } catch (err) {
+    // Two clones starting at the same instant can see each other on the template; try again.
+    if (attempt >= 5 || !/being accessed by other users/.test((err as Error).message)) throw err;
+    await new Promise((r) => setTimeout(r, 200 * attempt));
+  }
+}
+await admin.end();
+
+process.env.DATABASE_URL = new URL(`/${name}`, templateUrl).href;
 process.env.NODE_ENV = "test";
 process.env.PUBLIC_URL = "http://127.0.0.1:8080";
-process.env.UPLOAD_DIR = `${process.env.TMPDIR ?? "/tmp"}/casebook-test-uploads-${process.pid}`;
+// Each file its own uploads folder too: photo tests count the files in it.
+process.env.UPLOAD_DIR = `${process.env.TMPDIR ?? "/tmp"}/casebook-test-uploads-${name}`;

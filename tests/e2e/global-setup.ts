@@ -9,6 +9,7 @@ import { applyMigrations } from "../../db/migrate";
 import { closeDb, db } from "../../server/db";
 import { listen } from "../../server/index";
 import { seedDemoShop } from "../../server/seed/seed";
+import { ensureChromium } from "../../scripts/debian-packages";
 
 const root = fileURLToPath(new URL("../..", import.meta.url));
 
@@ -17,6 +18,7 @@ const root = fileURLToPath(new URL("../..", import.meta.url));
  * export (built when stale), and the real server on a free port. The tests get its address.
  */
 export default async function setup(project: TestProject) {
+  ensureChromium(process.env.CHROMIUM_PATH);
   const parent = mkdtempSync(join(tmpdir(), "casebook-e2e-"));
   const pg = startLocalPostgres({
     dataDir: join(parent, "pg"),

@@ -1,0 +1,45 @@
+import { cleanup, fireEvent, render, screen } from "@testing-library/react";
+import { useState } from "react";
+import { afterEach, describe, expect, it } from "vitest";
+import { NumberField } from "@/components/ui/number-field";
+
+afterEach(cleanup);
+
+function Controlled(props: { unit?: string; whole?: boolean; error?: string }) {
+  const [value, setValue] = useState("");
+  return (
+    <>
+      <NumberField label="Pour temperature" value={value} onChangeText={setValue} {...props} />
+      <p data-testid="echo">{value}</p>
+    </>
+  );
+}
+
+describe("NumberField", () => {
+  it("names the box with its unit, shows the unit beside it and hands typed text back", () => {
+    render(<Controlled unit="°C" />);
+    const box = screen.getByLabelText("Pour temperature (°C)");
+    expect(screen.getByText("°C")).toBeTruthy();
+    fireEvent.change(box, { target: { value: "1180" } });
+    expect(screen.getByTestId("echo").textContent).toBe("1180");
+    expect((box as HTMLInputElement).value).toBe("1180");
+  });
+
+  it("asks for a decimal keypad, or a whole-number one for counts", () => {
+    render(<Controlled unit="°C" />);
+    expect(screen.getByLabelText("Pour temperature (°C)").getAttribute("inputmode")).toBe("decimal");
+    cleanup();
+    render(<Controlled whole />);
+    expect(screen.getByLabelText("Pour temperature").getAttribute("inputmode")).toBe("numeric");
+  });
+
+  it("shows the error as an alert and marks the box invalid only when there is one", () => {
+    render(<Controlled unit="°F" />);
+    expect(screen.queryByRole("alert")).toBeNull();
+    expect(screen.getByLabelText("Pour temperature (°F)").getAttribute("aria-invalid")).toBe("false");
+    cleanup();
+    render(<Controlled unit="°F" error="Enter a temperature between 32 and 3600 °F" />);
+    expect(screen.getByRole("alert").textContent).toBe("Enter a temperature between 32 and 3600 °F");
+    expect(screen.getByLabelText("Pour temperature (°F)").getAttribute("aria-invalid")).toBe("true");
+  });
+});
