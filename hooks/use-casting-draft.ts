@@ -1,5 +1,6 @@
 import { useState } from "react";
-import { issuesToFields, numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
+import { fieldErrors } from "@/lib/field-errors";
+import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { castingInput, type CastingInput, type Outcome } from "@/lib/notebook-schemas";
 import type { Units } from "@/lib/units";
 
@@ -58,7 +59,7 @@ export function useCastingDraft(initial: CastingInitial, units: Units) {
       hasVents: draft.hasVents ?? null,
     };
     const parsed = castingInput.safeParse(input);
-    const found = { ...(parsed.success ? {} : issuesToFields(parsed.error.issues)), ...numbers.errors };
+    const found = { ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true })), ...numbers.errors };
     setErrors(found);
     return parsed.success && Object.keys(found).length === 0 ? parsed.data : undefined;
   }

@@ -1,5 +1,6 @@
 import { useState } from "react";
 import type { z } from "zod";
+import { fieldErrors } from "@/lib/field-errors";
 
 /** Runs a zod schema over form values and keeps one message per field for the form to show. */
 export function useFormErrors<T extends z.ZodType>(schema: T) {
@@ -10,9 +11,7 @@ export function useFormErrors<T extends z.ZodType>(schema: T) {
       setErrors({});
       return result.data;
     }
-    const next: Record<string, string> = {};
-    for (const issue of result.error.issues) next[String(issue.path[0] ?? "_")] ??= issue.message;
-    setErrors(next);
+    setErrors(fieldErrors(result.error, { topLevel: true }));
     return undefined;
   }
   return { errors, setErrors, check };

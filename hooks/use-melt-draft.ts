@@ -1,5 +1,6 @@
 import { useState } from "react";
-import { numbersToText, textToNumbers, issuesToFields, type NumberSpec } from "@/lib/form-numbers";
+import { fieldErrors } from "@/lib/field-errors";
+import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { alloyConflicts, meltInput, type Alloy, type MeltInput } from "@/lib/notebook-schemas";
 import type { Units } from "@/lib/units";
 import type { Charge, DegassingMethod, Process } from "@/rules/case";
@@ -94,7 +95,7 @@ export function useMeltDraft(initial: Initial, units: Units) {
     const parsed = meltInput.safeParse(input);
     const alloy = alloys.find((a) => a.designation === draft.alloy);
     const found = {
-      ...(parsed.success ? {} : issuesToFields(parsed.error.issues)),
+      ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true })),
       ...(alloy ? alloyConflicts(input as Initial as MeltInput, alloy) : {}),
       ...numbers.errors,
       ...(draft.process ? {} : { process: "choose a process" }),

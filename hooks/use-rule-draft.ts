@@ -7,6 +7,7 @@ import {
   type Comparison,
   type RuleDraft,
 } from "@/lib/rulebook-schemas";
+import { fieldErrors } from "@/lib/field-errors";
 import { siToText, textToSi, unitsFormat } from "@/lib/rule-units";
 import type { Units } from "@/lib/units";
 import type { DefectLocation, DefectType } from "@/rules/case";
@@ -144,9 +145,7 @@ export function formToDraft(s: RuleFormState, u: Units): RuleDraft {
 /** Field paths as the server names them ("conditions.0.fact", "cause.title"). */
 function problems(draft: RuleDraft): Record<string, string> {
   const r = ruleDraftInput.safeParse(draft);
-  const out: Record<string, string> = {};
-  if (!r.success) for (const i of r.error.issues) out[i.path.join(".") || "_"] ??= i.message;
-  return out;
+  return r.success ? {} : fieldErrors(r.error);
 }
 
 /** Which of the draft's fields a piece of the form feeds. */

@@ -38,10 +38,3 @@ export function textToNumbers<S extends NumberSpec<string>>(
   }
   return { values, errors };
 }
-
-/** zod's issues as one message per top-level field, like hooks/use-form-errors.ts. */
-export function issuesToFields(issues: readonly { path: readonly PropertyKey[]; message: string }[]) {
-  const out: Record<string, string> = {};
-  for (const i of issues) out[String(i.path[0] ?? "_")] ??= i.message;
-  return out;
-}

@@ -1,11 +1,10 @@
-import convert from "convert-units";
 import { DEFAULT_UNITS, type Units } from "./notebook-schemas";
 
 /**
  * A person's units and the conversions between them and the SI values the API keeps.
- * Temperatures go through convert-units (its °F anchor is the exact C × 9/5 + 32). Its inch
- * (from a foot of 1/3.28084 m) and pound (453.592 g) are rounded, so length and mass use the
- * exact 1959 international yard and pound definitions instead: 1 in = 25.4 mm, 1 lb = 0.45359237 kg.
+ * Every factor is an exact definition: °F = °C × 9/5 + 32 (the Fahrenheit scale as defined on the
+ * Celsius one), 1 in = 25.4 mm and 1 lb = 0.45359237 kg (the 1959 international yard and pound).
+ * tests/rules/units.test.ts checks them against convert-units, a general reference library.
  */
 export type { Units };
 export const SI_UNITS: Units = DEFAULT_UNITS;
@@ -22,7 +21,7 @@ export type Quantity = "temperature" | "temperature-difference" | "length" | "ma
 export function fromSi(q: Quantity, si: number, u: Units): number {
   switch (q) {
     case "temperature":
-      return u.temperature === "F" ? convert(si).from("C").to("F") : si;
+      return u.temperature === "F" ? (si * 9) / 5 + 32 : si;
     case "temperature-difference":
       return u.temperature === "F" ? (si * 9) / 5 : si;
     case "length":
@@ -37,7 +36,7 @@ export function fromSi(q: Quantity, si: number, u: Units): number {
 export function toSi(q: Quantity, value: number, u: Units): number {
   switch (q) {
     case "temperature":
-      return u.temperature === "F" ? convert(value).from("F").to("C") : value;
+      return u.temperature === "F" ? ((value - 32) * 5) / 9 : value;
     case "temperature-difference":
       return u.temperature === "F" ? (value * 5) / 9 : value;
     case "length":

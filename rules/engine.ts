@@ -1,3 +1,4 @@
+import { LRUCache } from "lru-cache";
 import { Engine, Operator } from "json-rules-engine";
 import { BUILT_IN_ALLOYS, findBuiltInAlloy, type AlloySpec } from "./alloys";
 import type { DefectLocation, DefectType, DiagnosisCase } from "./case";
@@ -58,7 +59,7 @@ type Slot = { engine: Engine; rules: KbRule[]; factNames: string[]; queue: Promi
 export type CompiledRuleSet = { version: string; byType: Map<DefectType, Slot>; causes: Map<string, KbCause> };
 
 const CACHE_LIMIT = 32;
-const cache = new Map<string, CompiledRuleSet>();
+const cache = new LRUCache<string, CompiledRuleSet>({ max: CACHE_LIMIT });
 let builds = 0;
 /** How many engines have been built since start (tests and the bench check reuse with it). */
 export const engineBuilds = () => builds;
@@ -78,7 +79,6 @@ export function compiledRuleSet(rs: RuleSet): CompiledRuleSet {
     builds++;
   }
   const compiled = { version: rs.version, byType, causes: new Map(rs.causes.map((c) => [c.id, c])) };
-  if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value!);
   cache.set(rs.version, compiled);
   return compiled;
 }

@@ -7,7 +7,7 @@ import { FieldError } from "@/components/ui/field-error";
 import { Heading } from "@/components/ui/heading";
 import { TextField } from "@/components/ui/text-field";
 import { colors, radius, space } from "@/constants/theme";
-import { issuesToFields } from "@/lib/form-numbers";
+import { fieldErrors } from "@/lib/field-errors";
 import { LOCATION_LABELS, SEVERITY_LABELS } from "@/lib/defects";
 import { markFields, type Mark, type MarkDescription } from "@/lib/notebook-schemas";
 import { DEFECT_LOCATIONS, type DefectLocation, type DefectType } from "@/rules/case";
@@ -40,7 +40,7 @@ export function MarkEditor({ title, mark, busy, failure, onSave, onCancel, onMov
 
   function save() {
     const parsed = describe.safeParse({ type, location, severity, note: note.trim() || null });
-    const found = parsed.success ? {} : issuesToFields(parsed.error.issues);
+    const found = parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true });
     if (!type) found.type = "choose what the defect is";
     if (!location) found.location = "choose where on the part it is";
     setErrors(found);

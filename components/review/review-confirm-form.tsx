@@ -9,6 +9,7 @@ import { TextField } from "@/components/ui/text-field";
 import { colors, radius, space } from "@/constants/theme";
 import { useConfirmCause } from "@/hooks/use-review";
 import { ApiError } from "@/lib/api";
+import { fieldErrors } from "@/lib/field-errors";
 import { confirmationInput, type CauseWithRecord } from "@/lib/review-schemas";
 
 const OTHER = "__other";
@@ -29,8 +30,7 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
       note: note || undefined,
     };
     const parsed = confirmationInput.safeParse(input);
-    if (!parsed.success)
-      return setErrors(Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0]), i.message])));
+    if (!parsed.success) return setErrors(fieldErrors(parsed.error, { topLevel: true }));
     setErrors({});
     confirm.mutate(parsed.data, {
       onSuccess: () => {

@@ -1,7 +1,7 @@
 import type { Mark, Melt } from "../../lib/notebook-schemas";
 import { caseSchema, type DiagnosisCase } from "../../rules/case";
 import type { CastingRow } from "../castings/lookup";
-import { HttpError } from "../http/errors";
+import { fieldErrors, HttpError } from "../http/errors";
 import { withoutNulls } from "../notebook/shared";
 
 /**
@@ -42,8 +42,11 @@ export function caseFromCasting(casting: CastingRow, melt: Melt, marks: Mark[]):
   const parsed = caseSchema.safeParse(raw);
   if (!parsed.success) {
     // The notebook's own checks are at least as strict, so this means a stored value predates them.
-    const fields = Object.fromEntries(parsed.error.issues.map((i) => [i.path.join("."), i.message]));
-    throw new HttpError(400, "This casting holds values the diagnosis cannot read; correct them first.", fields);
+    throw new HttpError(
+      400,
+      "This casting holds values the diagnosis cannot read; correct them first.",
+      fieldErrors(parsed.error),
+    );
   }
   return parsed.data;
 }

@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from "express";
+import { fieldErrors } from "../../lib/field-errors";
 import { z } from "zod";
 
 /**
@@ -18,14 +19,7 @@ export class HttpError extends Error {
 export const notFound = (what = "Not found") => new HttpError(404, what);
 export const forbidden = (message: string) => new HttpError(403, message);
 
-export function fieldErrors(error: z.ZodError): Record<string, string> {
-  const fields: Record<string, string> = {};
-  for (const issue of error.issues) {
-    const key = issue.path.join(".") || "_";
-    fields[key] ??= issue.message;
-  }
-  return fields;
-}
+export { fieldErrors };
 
 /** Parses with a zod schema or throws a 400 that lists each field's problem. */
 export function parseOr400<T extends z.ZodType>(schema: T, data: unknown): z.infer<T> {

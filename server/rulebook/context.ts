@@ -1,3 +1,4 @@
+import { LRUCache } from "lru-cache";
 import { and, asc, desc, eq, sql } from "drizzle-orm";
 import { db } from "../db";
 import { ruleSwitches, shopCauses, shopRuleVersions } from "../../db/schema";
@@ -118,15 +119,13 @@ async function casesStamp(shopId: string): Promise<string> {
   return JSON.stringify(rows[0]);
 }
 const FIRINGS_KEPT = 64;
-const firingsKept = new Map<string, { key: string; firings: Firing[] }>();
+const firingsKept = new LRUCache<string, { key: string; firings: Firing[] }>({ max: FIRINGS_KEPT });
 
 async function firingsOf(shopId: string, everyRule: RuleSet): Promise<Firing[]> {
   const key = `${everyRule.version}|${await casesStamp(shopId)}`;
   const kept = firingsKept.get(shopId);
   if (kept?.key === key) return kept.firings;
   const firings = await confirmedFirings(await storedCases(shopId, { confirmedOnly: true }), everyRule);
-  firingsKept.delete(shopId);
-  if (firingsKept.size >= FIRINGS_KEPT) firingsKept.delete(firingsKept.keys().next().value!);
   firingsKept.set(shopId, { key, firings });
   return firings;
 }

@@ -1,3 +1,4 @@
+import { LRUCache } from "lru-cache";
 import { CHANGE_LOG_KEEP_MS, changesSince, loadCases, pruneChangeLog } from "./loader";
 import { ShopIndex } from "./shop-index";
 
@@ -63,16 +64,13 @@ class Entry {
   }
 }
 
-const entries = new Map<string, Entry>();
+const entries = new LRUCache<string, Entry>({ max: SHOPS_MAX });
 let prunedAt = 0;
 
 /** The shop's index, brought up to date with every write committed before this call. */
 export function shopIndex(shopId: string): Promise<ShopIndex> {
   let entry = entries.get(shopId);
-  if (entry) entries.delete(shopId); // re-inserted below: Map order is least recently used first
-  entry ??= new Entry(shopId);
-  entries.set(shopId, entry);
-  if (entries.size > SHOPS_MAX) entries.delete(entries.keys().next().value!);
+  if (!entry) entries.set(shopId, (entry = new Entry(shopId)));
   if (Date.now() - prunedAt > 3600_000) {
     prunedAt = Date.now();
     pruneChangeLog().catch((err) => console.error("search change log prune failed", err));

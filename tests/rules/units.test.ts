@@ -54,6 +54,13 @@ describe("temperature", () => {
     expect(toSi("temperature", 1220.5814, US)).toBeCloseTo(660.323, 9);
   });
 
+  it("agrees with convert-units on temperatures across the foundry's range", () => {
+    // convert-units 2.3.4 (a general reference library) anchors °F on the same exact definition.
+    for (const c of [-40, 0, 20, 660.323, 1084.62, 1538]) {
+      expect(fromSi("temperature", c, US)).toBeCloseTo(convert(c).from("C").to("F"), 9);
+    }
+  });
+
   it("converts a temperature difference without the 32° offset", () => {
     // A kelvin (or °C step) is 9/5 of a °F step: same definition, no offset for differences.
     expect(fromSi("temperature-difference", 100, US)).toBe(180);
