@@ -22,6 +22,18 @@ export default tseslint.config(
     },
   },
   {
+    files: ["app/**/*.tsx", "components/**/*.tsx"],
+    rules: {
+      "no-restricted-syntax": [
+        "error",
+        {
+          selector: "Property[key.name='fontSize'][value.type='Literal']",
+          message: "Use a size of the type scale: fontSize.body, fontSize.detail... (constants/theme.ts).",
+        },
+      ],
+    },
+  },
+  {
     files: ["server/env.ts", "lib/client-env.ts", "scripts/**", "tests/**", "*.config.ts", "*.config.js"],
     rules: { "no-restricted-properties": "off" },
   },

@@ -2,7 +2,7 @@ import { Link, Stack, usePathname } from "expo-router";
 import { StyleSheet, Text } from "react-native";
 import { Heading } from "@/components/ui/heading";
 import { Screen } from "@/components/ui/screen";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 
 /** An address the app does not have: say so plainly and offer the way back, not a list of routes. */
 export default function NotFound() {
@@ -23,7 +23,7 @@ export default function NotFound() {
 }
 
 const styles = StyleSheet.create({
-  body: { fontSize: 16, lineHeight: 24, color: colors.ink },
+  body: { fontSize: fontSize.field, lineHeight: 24, color: colors.ink },
   path: { fontFamily: "monospace", color: colors.muted },
-  link: { fontSize: 16, color: colors.accent, textDecorationLine: "underline", paddingVertical: space.sm },
+  link: { fontSize: fontSize.field, color: colors.accent, textDecorationLine: "underline", paddingVertical: space.sm },
 });

@@ -23,3 +23,17 @@ export const CONTENT_MAX_PX = 760;
 export const WIDE_CONTENT_MAX_PX = 1040;
 
 export const fonts = { heading: "Lora-SemiBold", serif: "Lora-Regular" } as const;
+
+/**
+ * The type scale: every text size in the app is one of these. `body` is running text and form
+ * values (16 keeps mobile browsers from zooming into a field), `detail` the secondary lines.
+ */
+export const fontSize = { small: 13, detail: 14, body: 15, field: 16, lead: 17, title: 20, display: 26 } as const;
+
+/** The white card on the paper background: lists, forms and panels share it. */
+export const card = {
+  backgroundColor: colors.surface,
+  borderRadius: radius.md,
+  borderWidth: 1,
+  borderColor: colors.line,
+} as const;

@@ -13,7 +13,7 @@ import { Notice } from "@/components/ui/notice";
 import { Pager } from "@/components/ui/pager";
 import { Loading } from "@/components/ui/query-state";
 import { Screen } from "@/components/ui/screen";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 import { useIsWide } from "@/hooks/use-layout";
 import { useCaseSearch, useDebounced } from "@/hooks/use-search";
 import { useShopMembers } from "@/hooks/use-shop";
@@ -139,8 +139,8 @@ const casesText = (n: number) => (n === 0 ? "no cases" : n === 1 ? "1 case" : `$
 const styles = StyleSheet.create({
   bar: { flexDirection: "row", alignItems: "center", flexWrap: "wrap", gap: space.md },
   toggle: { minHeight: 40, justifyContent: "center" },
-  toggleText: { fontSize: 15, fontWeight: "600", color: colors.steel, textDecorationLine: "underline" },
-  count: { marginLeft: "auto", fontSize: 14, color: colors.muted },
+  toggleText: { fontSize: fontSize.body, fontWeight: "600", color: colors.steel, textDecorationLine: "underline" },
+  count: { marginLeft: "auto", fontSize: fontSize.detail, color: colors.muted },
   split: { flexDirection: "row", alignItems: "flex-start", gap: space.xl },
   side: { width: 280 },
   results: { flex: 1, gap: space.md },

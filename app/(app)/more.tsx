@@ -6,7 +6,7 @@ import { Screen } from "@/components/ui/screen";
 import { ShopExport } from "@/components/export/shop-export";
 import { ShopSettingsForm } from "@/components/shops/shop-settings-form";
 import { UnitsChooser } from "@/components/people/units-chooser";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 import { useShop, useShopMembers } from "@/hooks/use-shop";
 import { roleCan } from "@/lib/permissions";
 
@@ -65,6 +65,6 @@ const styles = StyleSheet.create({
     borderRadius: 8,
     padding: space.md,
   },
-  name: { fontSize: 16, fontWeight: "600", color: colors.ink },
-  meta: { fontSize: 14, color: colors.muted },
+  name: { fontSize: fontSize.field, fontWeight: "600", color: colors.ink },
+  meta: { fontSize: fontSize.detail, color: colors.muted },
 });

@@ -5,7 +5,7 @@ import { AuthCard } from "@/components/auth/auth-card";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { TextField } from "@/components/ui/text-field";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 import { useFormErrors } from "@/hooks/use-form-errors";
 import { authClient } from "@/lib/auth-client";
 import { SIGN_IN_FAILED, signInForm } from "@/lib/auth-forms";
@@ -61,6 +61,6 @@ export default function SignIn() {
 }
 
 const styles = StyleSheet.create({
-  alt: { color: colors.muted, fontSize: 15 },
+  alt: { color: colors.muted, fontSize: fontSize.body },
   link: { color: colors.accent, fontWeight: "600" },
 });

@@ -6,7 +6,7 @@ import { AuthCard } from "@/components/auth/auth-card";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { TextField } from "@/components/ui/text-field";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 import { useFormErrors } from "@/hooks/use-form-errors";
 import { meKey } from "@/hooks/use-me";
 import { authClient } from "@/lib/auth-client";
@@ -97,7 +97,7 @@ export default function SignUp() {
 }
 
 const styles = StyleSheet.create({
-  note: { color: colors.muted, fontSize: 14 },
-  alt: { color: colors.muted, fontSize: 15 },
+  note: { color: colors.muted, fontSize: fontSize.detail },
+  alt: { color: colors.muted, fontSize: fontSize.body },
   link: { color: colors.accent, fontWeight: "600" },
 });

@@ -1,7 +1,7 @@
 import type { ReactNode } from "react";
 import { ScrollView, StyleSheet, Text, View } from "react-native";
 import { Heading } from "@/components/ui/heading";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 
 /** The frame of the sign-in and sign-up pages: the product's name, what it is for, the form. */
 export function AuthCard({ title, children }: { title: string; children: ReactNode }) {
@@ -22,15 +22,6 @@ export function AuthCard({ title, children }: { title: string; children: ReactNo
 const styles = StyleSheet.create({
   scroll: { flex: 1, backgroundColor: colors.background },
   outer: { flexGrow: 1, alignItems: "center", justifyContent: "center", padding: space.lg },
-  card: {
-    width: "100%",
-    maxWidth: 420,
-    gap: space.lg,
-    backgroundColor: colors.surface,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    padding: space.xl,
-  },
-  lede: { color: colors.muted, fontSize: 15, lineHeight: 22 },
+  card: { ...card, width: "100%", maxWidth: 420, gap: space.lg, padding: space.xl },
+  lede: { color: colors.muted, fontSize: fontSize.body, lineHeight: 22 },
 });

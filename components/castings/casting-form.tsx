@@ -7,7 +7,7 @@ import { Notice } from "@/components/ui/notice";
 import { NumberField } from "@/components/ui/number-field";
 import { OutcomeChips } from "@/components/castings/outcome-chips";
 import { TextField } from "@/components/ui/text-field";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 import { useCastingDraft, type CastingInitial } from "@/hooks/use-casting-draft";
 import { ApiError } from "@/lib/api";
 import { OUTCOME_LABELS } from "@/lib/labels";
@@ -103,5 +103,5 @@ export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOp
 const styles = StyleSheet.create({
   form: { gap: space.md },
   start: { alignSelf: "flex-start" },
-  saved: { color: colors.steel, fontSize: 15, fontWeight: "600" },
+  saved: { color: colors.steel, fontSize: fontSize.body, fontWeight: "600" },
 });

@@ -1,6 +1,6 @@
 import { Link } from "expo-router";
 import { Image, Pressable, StyleSheet, Text, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, radius, space } from "@/constants/theme";
 import { photoUri } from "@/hooks/use-photos";
 import { DEFECTS } from "@/lib/defects";
 import { OUTCOME_LABELS } from "@/lib/labels";
@@ -47,22 +47,13 @@ export function CastingRow({ casting }: { casting: CastingSummary }) {
 }
 
 const styles = StyleSheet.create({
-  row: {
-    flexDirection: "row",
-    gap: space.md,
-    alignItems: "center",
-    backgroundColor: colors.surface,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.md,
-    padding: space.sm,
-  },
+  row: { ...card, flexDirection: "row", gap: space.md, alignItems: "center", padding: space.sm },
   thumb: { width: 56, height: 56, borderRadius: radius.sm, backgroundColor: colors.background },
   noThumb: { alignItems: "center", justifyContent: "center" },
-  noThumbText: { fontSize: 11, color: colors.muted },
+  noThumbText: { fontSize: fontSize.small, color: colors.muted },
   body: { flex: 1, minWidth: 0, gap: 2 },
   top: { flexDirection: "row", justifyContent: "space-between", gap: space.sm },
-  part: { flex: 1, fontSize: 16, fontWeight: "600", color: colors.ink },
-  outcome: { fontSize: 14, fontWeight: "700" },
-  muted: { fontSize: 14, color: colors.muted },
+  part: { flex: 1, fontSize: fontSize.field, fontWeight: "600", color: colors.ink },
+  outcome: { fontSize: fontSize.detail, fontWeight: "700" },
+  muted: { fontSize: fontSize.detail, color: colors.muted },
 });

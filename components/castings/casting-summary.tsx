@@ -6,7 +6,7 @@ import { CastingForm } from "@/components/castings/casting-form";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
 import { OutcomeChips } from "@/components/castings/outcome-chips";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 import { useUpdateCasting } from "@/hooks/use-castings";
 import { PROCESS_LABELS } from "@/lib/labels";
 import type { CastingDetail } from "@/lib/notebook-schemas";
@@ -70,6 +70,6 @@ export function CastingSummary({
 
 const styles = StyleSheet.create({
   wrap: { gap: space.md },
-  melt: { fontSize: 15, color: colors.muted },
+  melt: { fontSize: fontSize.body, color: colors.muted },
   start: { alignSelf: "flex-start" },
 });

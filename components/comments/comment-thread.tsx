@@ -4,7 +4,7 @@ import { Button } from "@/components/ui/button";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
 import { TextField } from "@/components/ui/text-field";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { useAddComment } from "@/hooks/use-comments";
 import { formatDay } from "@/lib/dates";
 import { commentInput, type Comment } from "@/lib/notebook-schemas";
@@ -62,16 +62,9 @@ export function CommentThread({
 
 const styles = StyleSheet.create({
   wrap: { gap: space.sm },
-  empty: { color: colors.muted, fontSize: 15 },
-  comment: {
-    backgroundColor: colors.surface,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.md,
-    padding: space.md,
-    gap: space.xs,
-  },
-  meta: { fontSize: 13, color: colors.muted },
-  body: { fontSize: 15, lineHeight: 22, color: colors.ink },
+  empty: { color: colors.muted, fontSize: fontSize.body },
+  comment: { ...card, padding: space.md, gap: space.xs },
+  meta: { fontSize: fontSize.small, color: colors.muted },
+  body: { fontSize: fontSize.body, lineHeight: 22, color: colors.ink },
   input: { minHeight: 80, paddingVertical: space.sm, textAlignVertical: "top" },
 });

@@ -2,7 +2,7 @@ import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { CauseRecordLine } from "@/components/rulebook/rule-record";
 import { ScoreBar } from "@/components/ui/score-bar";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { reasonInUnits } from "@/lib/reason-text";
 import type { CauseWithRecord } from "@/lib/review-schemas";
 import type { Units } from "@/lib/units";
@@ -59,16 +59,9 @@ export function CauseCard({ cause, rank, units }: { cause: Cause; rank: number; 
 }
 
 const styles = StyleSheet.create({
-  card: {
-    gap: space.sm,
-    padding: space.md,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
-  title: { fontSize: 16, fontWeight: "700", color: colors.ink },
-  sub: { fontSize: 13, fontWeight: "700", color: colors.muted, marginTop: space.xs },
+  card: { ...card, gap: space.sm, padding: space.md },
+  title: { fontSize: fontSize.field, fontWeight: "700", color: colors.ink },
+  sub: { fontSize: fontSize.small, fontWeight: "700", color: colors.muted, marginTop: space.xs },
   subNote: { fontWeight: "400" },
   fix: { flexDirection: "row", gap: space.sm, alignItems: "flex-start", minHeight: 32 },
   box: {
@@ -82,11 +75,11 @@ const styles = StyleSheet.create({
     marginTop: 1,
   },
   boxOn: { backgroundColor: colors.steel },
-  tick: { color: "#FFFFFF", fontSize: 14, fontWeight: "700", lineHeight: 16 },
-  fixText: { flex: 1, fontSize: 15, lineHeight: 22, color: colors.ink },
+  tick: { color: "#FFFFFF", fontSize: fontSize.detail, fontWeight: "700", lineHeight: 16 },
+  fixText: { flex: 1, fontSize: fontSize.body, lineHeight: 22, color: colors.ink },
   fixDone: { color: colors.muted, textDecorationLine: "line-through" },
-  toggle: { fontSize: 15, fontWeight: "600", color: colors.accent, paddingVertical: space.xs },
+  toggle: { fontSize: fontSize.body, fontWeight: "600", color: colors.accent, paddingVertical: space.xs },
   why: { gap: space.xs, paddingLeft: space.sm, borderLeftWidth: 3, borderLeftColor: colors.line },
-  reason: { fontSize: 14, lineHeight: 21, color: colors.ink },
-  sources: { fontSize: 13, lineHeight: 19, color: colors.muted, fontStyle: "italic" },
+  reason: { fontSize: fontSize.detail, lineHeight: 21, color: colors.ink },
+  sources: { fontSize: fontSize.small, lineHeight: 19, color: colors.muted, fontStyle: "italic" },
 });

@@ -2,7 +2,7 @@ import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 import { formatFact } from "@/lib/fact-display";
 import type { Units } from "@/lib/units";
 import type { DiagnosisResult } from "@/rules/rank";
@@ -56,8 +56,8 @@ export function DiagnosisExtras({ result, units }: { result: DiagnosisResult; un
 const styles = StyleSheet.create({
   wrap: { gap: space.md },
   block: { gap: space.xs },
-  line: { fontSize: 14, lineHeight: 21, color: colors.ink },
+  line: { fontSize: fontSize.detail, lineHeight: 21, color: colors.ink },
   value: { fontWeight: "700" },
-  toggle: { fontSize: 15, fontWeight: "600", color: colors.accent, paddingVertical: space.xs },
-  cautionHead: { fontSize: 15, fontWeight: "700", color: colors.ink },
+  toggle: { fontSize: fontSize.body, fontWeight: "600", color: colors.accent, paddingVertical: space.xs },
+  cautionHead: { fontSize: fontSize.body, fontWeight: "700", color: colors.ink },
 });

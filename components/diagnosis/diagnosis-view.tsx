@@ -4,7 +4,7 @@ import { CauseCard } from "@/components/diagnosis/cause-card";
 import { DiagnosisExtras } from "@/components/diagnosis/diagnosis-extras";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
-import { colors, CONTENT_MAX_PX, space } from "@/constants/theme";
+import { colors, CONTENT_MAX_PX, fontSize, space } from "@/constants/theme";
 import { useRunDiagnosis } from "@/hooks/use-diagnosis";
 import { formatMoment } from "@/lib/dates";
 import type { CastingDetail } from "@/lib/notebook-schemas";
@@ -62,5 +62,5 @@ const styles = StyleSheet.create({
   // Reading width: causes and fixes are sentences, not table rows.
   wrap: { gap: space.md, maxWidth: CONTENT_MAX_PX },
   start: { alignSelf: "flex-start" },
-  when: { fontSize: 14, lineHeight: 20, color: colors.muted },
+  when: { fontSize: fontSize.detail, lineHeight: 20, color: colors.muted },
 });

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 
 export type FactRow = { label: string; value: string | null };
 
@@ -26,17 +26,10 @@ export function FactGrid({ rows }: { rows: FactRow[] }) {
 }
 
 const styles = StyleSheet.create({
-  box: {
-    backgroundColor: colors.surface,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.md,
-    padding: space.md,
-    gap: space.sm,
-  },
+  box: { ...card, padding: space.md, gap: space.sm },
   grid: { flexDirection: "row", flexWrap: "wrap", rowGap: space.sm },
   cell: { flexBasis: 160, flexGrow: 1, paddingRight: space.sm },
-  label: { fontSize: 13, color: colors.muted },
-  value: { fontSize: 15, color: colors.ink, fontWeight: "600" },
-  missing: { fontSize: 14, color: colors.muted, fontStyle: "italic" },
+  label: { fontSize: fontSize.small, color: colors.muted },
+  value: { fontSize: fontSize.body, color: colors.ink, fontWeight: "600" },
+  missing: { fontSize: fontSize.detail, color: colors.muted, fontStyle: "italic" },
 });

@@ -1,6 +1,6 @@
 import { StyleSheet, Text } from "react-native";
 import { Notice } from "@/components/ui/notice";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 import { GENERAL_CAUTIONS } from "@/rules/safety";
 
 export function SafetyCautions() {
@@ -20,6 +20,6 @@ export function SafetyCautions() {
 }
 
 const styles = StyleSheet.create({
-  line: { fontSize: 14, lineHeight: 21, color: colors.ink },
-  defer: { fontSize: 14, lineHeight: 21, color: colors.ink, fontStyle: "italic" },
+  line: { fontSize: fontSize.detail, lineHeight: 21, color: colors.ink },
+  defer: { fontSize: fontSize.detail, lineHeight: 21, color: colors.ink, fontStyle: "italic" },
 });

@@ -1,6 +1,6 @@
 import { Linking, StyleSheet, Text } from "react-native";
 import { Button } from "@/components/ui/button";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 import { apiBaseUrl } from "@/lib/client-env";
 
 /** The owner's export: every casting with its melt conditions and marks, as a CSV file for a spreadsheet. */
@@ -20,4 +20,4 @@ export function ShopExport() {
   );
 }
 
-const styles = StyleSheet.create({ meta: { fontSize: 14, color: colors.muted } });
+const styles = StyleSheet.create({ meta: { fontSize: fontSize.detail, color: colors.muted } });

@@ -5,7 +5,7 @@ import { ChoiceChips } from "@/components/ui/choice-chips";
 import { castingWords } from "@/lib/case-words";
 import { Heading } from "@/components/ui/heading";
 import { TextField } from "@/components/ui/text-field";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, radius, space } from "@/constants/theme";
 import { useAddFix } from "@/hooks/use-followups";
 import { ApiError } from "@/lib/api";
 import { fixInput, type CastingRef } from "@/lib/review-schemas";
@@ -70,16 +70,9 @@ export function FollowupAdd({ castingId, candidates, suggestions }: Props) {
 }
 
 const styles = StyleSheet.create({
-  card: {
-    gap: space.sm,
-    padding: space.md,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
+  card: { ...card, gap: space.sm, padding: space.md },
   suggestions: { gap: space.xs },
-  label: { fontSize: 14, fontWeight: "600", color: colors.ink },
+  label: { fontSize: fontSize.detail, fontWeight: "600", color: colors.ink },
   suggestion: {
     padding: space.sm,
     borderRadius: radius.sm,
@@ -88,5 +81,5 @@ const styles = StyleSheet.create({
     backgroundColor: colors.background,
   },
   on: { borderColor: colors.steel, backgroundColor: "#E7EFEF" },
-  suggestionText: { fontSize: 14, lineHeight: 20, color: colors.ink },
+  suggestionText: { fontSize: fontSize.detail, lineHeight: 20, color: colors.ink },
 });

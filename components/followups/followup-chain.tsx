@@ -1,6 +1,6 @@
 import { Link } from "expo-router";
 import { StyleSheet, Text, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { WORKED_LABELS, type ChainLink } from "@/lib/review-schemas";
 import { castingWords } from "@/lib/case-words";
 
@@ -32,16 +32,9 @@ export function FollowupChain({ chain }: { chain: ChainLink[] }) {
 }
 
 const styles = StyleSheet.create({
-  list: {
-    gap: space.xs,
-    padding: space.md,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
+  list: { ...card, gap: space.xs, padding: space.md },
   step: { gap: 2 },
-  casting: { fontSize: 15, fontWeight: "700", color: colors.accent },
+  casting: { fontSize: fontSize.body, fontWeight: "700", color: colors.accent },
   current: { color: colors.ink },
-  fix: { fontSize: 14, lineHeight: 20, color: colors.steel, paddingLeft: space.md },
+  fix: { fontSize: fontSize.detail, lineHeight: 20, color: colors.steel, paddingLeft: space.md },
 });

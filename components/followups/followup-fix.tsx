@@ -2,7 +2,7 @@ import { StyleSheet, Text, View } from "react-native";
 import { ChoiceChips } from "@/components/ui/choice-chips";
 import { Notice } from "@/components/ui/notice";
 import { castingWords } from "@/lib/case-words";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { usePatchFix } from "@/hooks/use-followups";
 import { ApiError } from "@/lib/api";
 import { formatMoment } from "@/lib/dates";
@@ -62,14 +62,7 @@ export function FollowupFix({
 }
 
 const styles = StyleSheet.create({
-  card: {
-    gap: space.xs,
-    padding: space.md,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
-  fix: { fontSize: 16, fontWeight: "600", color: colors.ink },
-  meta: { fontSize: 14, color: colors.muted },
+  card: { ...card, gap: space.xs, padding: space.md },
+  fix: { fontSize: fontSize.field, fontWeight: "600", color: colors.ink },
+  meta: { fontSize: fontSize.detail, color: colors.muted },
 });

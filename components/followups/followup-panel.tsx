@@ -5,7 +5,7 @@ import { FollowupFix } from "@/components/followups/followup-fix";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
 import { Loading } from "@/components/ui/query-state";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 import { useFollowups } from "@/hooks/use-followups";
 import { useMay } from "@/hooks/use-rulebook";
 
@@ -35,5 +35,5 @@ export function FollowupPanel({ castingId, suggestions = [] }: { castingId: numb
 
 const styles = StyleSheet.create({
   wrap: { gap: space.md },
-  meta: { fontSize: 14, color: colors.muted },
+  meta: { fontSize: fontSize.detail, color: colors.muted },
 });

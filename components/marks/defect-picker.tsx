@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from "react-native";
 import { ChoiceChips } from "@/components/ui/choice-chips";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 import { DEFECT_CLASSES, DEFECTS, type DefectClass } from "@/lib/defects";
 import { DEFECT_TYPES, type DefectType } from "@/rules/case";
 
@@ -42,6 +42,6 @@ export function DefectPicker({ value, onChange }: { value: DefectType | null; on
 const styles = StyleSheet.create({
   wrap: { gap: space.md },
   about: { backgroundColor: colors.background, borderRadius: radius.sm, padding: space.md, gap: 2 },
-  name: { fontSize: 15, fontWeight: "700", color: colors.ink },
-  text: { fontSize: 14, lineHeight: 20, color: colors.ink },
+  name: { fontSize: fontSize.body, fontWeight: "700", color: colors.ink },
+  text: { fontSize: fontSize.detail, lineHeight: 20, color: colors.ink },
 });

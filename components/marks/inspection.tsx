@@ -7,7 +7,7 @@ import { MarkList } from "@/components/marks/mark-list";
 import { PhotoAdd } from "@/components/photos/photo-add";
 import { PhotoDropZone } from "@/components/photos/photo-drop-zone";
 import { PhotoPanel } from "@/components/photos/photo-panel";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 import { useInspection } from "@/hooks/use-inspection";
 import { useUploadPhoto } from "@/hooks/use-photos";
 import type { CastingDetail } from "@/lib/notebook-schemas";
@@ -108,6 +108,6 @@ const styles = StyleSheet.create({
   left: { flex: 3, minWidth: 0 },
   side: { flex: 2, minWidth: 0, gap: space.md },
   photo: { gap: space.sm },
-  hint: { fontSize: 14, color: colors.muted },
-  moving: { fontSize: 15, color: colors.steel, fontWeight: "700" },
+  hint: { fontSize: fontSize.detail, color: colors.muted },
+  moving: { fontSize: fontSize.body, color: colors.steel, fontWeight: "700" },
 });

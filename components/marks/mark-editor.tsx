@@ -6,7 +6,7 @@ import { DefectPicker } from "@/components/marks/defect-picker";
 import { FieldError } from "@/components/ui/field-error";
 import { Heading } from "@/components/ui/heading";
 import { TextField } from "@/components/ui/text-field";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 import { fieldErrors } from "@/lib/field-errors";
 import { LOCATION_LABELS, SEVERITY_LABELS } from "@/lib/defects";
 import { markFields, type Mark, type MarkDescription } from "@/lib/notebook-schemas";
@@ -97,5 +97,5 @@ const styles = StyleSheet.create({
     backgroundColor: colors.surface,
   },
   actions: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
-  failure: { color: colors.danger, fontSize: 14 },
+  failure: { color: colors.danger, fontSize: fontSize.detail },
 });

@@ -1,6 +1,6 @@
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import type { Pin } from "@/components/photos/photo-marker";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { DEFECTS, LOCATION_LABELS, SEVERITY_LABELS } from "@/lib/defects";
 
 type Props = { pins: Pin[]; selectedId: number | null; onOpen: (pin: Pin) => void; photoNumbers: Map<number, number> };
@@ -43,17 +43,8 @@ export function MarkList({ pins, selectedId, onOpen, photoNumbers }: Props) {
 
 const styles = StyleSheet.create({
   list: { gap: space.sm },
-  empty: { fontSize: 15, color: colors.muted },
-  row: {
-    flexDirection: "row",
-    gap: space.md,
-    alignItems: "flex-start",
-    padding: space.sm,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
+  empty: { fontSize: fontSize.body, color: colors.muted },
+  row: { ...card, flexDirection: "row", gap: space.md, alignItems: "flex-start", padding: space.sm },
   on: { borderColor: colors.steel, borderWidth: 2 },
   badge: {
     width: 28,
@@ -65,8 +56,8 @@ const styles = StyleSheet.create({
   },
   badgeText: { color: "#FFFFFF", fontWeight: "700" },
   body: { flex: 1, gap: 2 },
-  title: { fontSize: 15, fontWeight: "600", color: colors.ink },
+  title: { fontSize: fontSize.body, fontWeight: "600", color: colors.ink },
   cls: { color: colors.muted, fontWeight: "400" },
-  meta: { fontSize: 14, color: colors.muted },
-  note: { fontSize: 14, color: colors.ink },
+  meta: { fontSize: fontSize.detail, color: colors.muted },
+  note: { fontSize: fontSize.detail, color: colors.ink },
 });

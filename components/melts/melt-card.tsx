@@ -1,6 +1,6 @@
 import { Link } from "expo-router";
 import { Pressable, StyleSheet, Text, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { formatDay } from "@/lib/dates";
 import { PROCESS_LABELS } from "@/lib/labels";
 import type { MeltSummary } from "@/lib/notebook-schemas";
@@ -32,18 +32,11 @@ export function MeltCard({ melt, units }: { melt: MeltSummary; units: Units }) {
 }
 
 const styles = StyleSheet.create({
-  card: {
-    backgroundColor: colors.surface,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.md,
-    padding: space.md,
-    gap: 2,
-  },
+  card: { ...card, padding: space.md, gap: 2 },
   top: { flexDirection: "row", justifyContent: "space-between", alignItems: "baseline" },
-  day: { fontSize: 16, fontWeight: "600", color: colors.ink },
-  alloy: { fontSize: 15, fontWeight: "700", color: colors.steel },
-  line: { fontSize: 15, color: colors.ink },
-  muted: { fontSize: 14, color: colors.muted },
+  day: { fontSize: fontSize.field, fontWeight: "600", color: colors.ink },
+  alloy: { fontSize: fontSize.body, fontWeight: "700", color: colors.steel },
+  line: { fontSize: fontSize.body, color: colors.ink },
+  muted: { fontSize: fontSize.detail, color: colors.muted },
   scrap: { color: colors.danger },
 });

@@ -3,7 +3,7 @@ import { Platform, StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { UploadProgress } from "@/components/ui/upload-progress";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 import { pickPhoto } from "@/hooks/use-photo-picker";
 import type { PhotoSource } from "@/hooks/use-photos";
 
@@ -50,5 +50,5 @@ export function PhotoAdd({ upload, busy, progress, error, wide }: Props) {
 const styles = StyleSheet.create({
   wrap: { gap: space.sm },
   row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
-  hint: { fontSize: 14, color: colors.muted },
+  hint: { fontSize: fontSize.detail, color: colors.muted },
 });

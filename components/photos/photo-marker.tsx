@@ -1,6 +1,6 @@
 import { useRef, useState } from "react";
 import { Image, Platform, Pressable, StyleSheet, Text, View, type GestureResponderEvent } from "react-native";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 import { photoUri } from "@/hooks/use-photos";
 import type { Mark, Photo } from "@/lib/notebook-schemas";
 
@@ -117,5 +117,5 @@ const styles = StyleSheet.create({
   },
   pinOn: { backgroundColor: colors.steel, transform: [{ scale: 1.2 }] },
   pending: { backgroundColor: colors.ink },
-  pinText: { color: "#FFFFFF", fontWeight: "700", fontSize: 14 },
+  pinText: { color: "#FFFFFF", fontWeight: "700", fontSize: fontSize.detail },
 });

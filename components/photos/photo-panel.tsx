@@ -3,7 +3,7 @@ import { StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { PhotoMarker, type Pin } from "@/components/photos/photo-marker";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 import { useDeletePhoto } from "@/hooks/use-photos";
 import type { Mark, Photo } from "@/lib/notebook-schemas";
 
@@ -44,5 +44,5 @@ export function PhotoPanel({ photo, number, castingId, ...marker }: Props) {
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
   row: { flexDirection: "row", alignItems: "center", justifyContent: "space-between", gap: space.sm },
-  caption: { fontSize: 14, color: colors.muted },
+  caption: { fontSize: fontSize.detail, color: colors.muted },
 });

@@ -6,7 +6,7 @@ import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
 import { CauseRecordLine } from "@/components/rulebook/rule-record";
 import { TextField } from "@/components/ui/text-field";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, radius, space } from "@/constants/theme";
 import { useConfirmCause } from "@/hooks/use-review";
 import { ApiError } from "@/lib/api";
 import { fieldErrors } from "@/lib/field-errors";
@@ -94,15 +94,8 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
 }
 
 const styles = StyleSheet.create({
-  wrap: {
-    gap: space.sm,
-    padding: space.md,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
-  label: { fontSize: 14, fontWeight: "600", color: colors.ink },
+  wrap: { ...card, gap: space.sm, padding: space.md },
+  label: { fontSize: fontSize.detail, fontWeight: "600", color: colors.ink },
   list: { gap: space.xs },
   option: {
     gap: 2,
@@ -113,6 +106,6 @@ const styles = StyleSheet.create({
     backgroundColor: colors.background,
   },
   on: { borderColor: colors.steel, backgroundColor: "#E7EFEF" },
-  title: { fontSize: 15, color: colors.ink },
+  title: { fontSize: fontSize.body, color: colors.ink },
   multi: { minHeight: 64, paddingVertical: space.sm, textAlignVertical: "top" },
 });

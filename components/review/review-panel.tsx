@@ -6,7 +6,7 @@ import { Notice } from "@/components/ui/notice";
 import { Loading } from "@/components/ui/query-state";
 import { ReviewConfirmForm } from "@/components/review/review-confirm-form";
 import { TextField } from "@/components/ui/text-field";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 import { useAskReview, useCaseReview } from "@/hooks/use-review";
 import { useMay } from "@/hooks/use-rulebook";
 import { formatMoment } from "@/lib/dates";
@@ -95,9 +95,9 @@ const styles = StyleSheet.create({
     borderColor: colors.steel,
     backgroundColor: colors.surface,
   },
-  strong: { fontSize: 16, fontWeight: "700", color: colors.ink },
-  text: { fontSize: 15, lineHeight: 22, color: colors.ink },
-  meta: { fontSize: 14, color: colors.muted },
+  strong: { fontSize: fontSize.field, fontWeight: "700", color: colors.ink },
+  text: { fontSize: fontSize.body, lineHeight: 22, color: colors.ink },
+  meta: { fontSize: fontSize.detail, color: colors.muted },
   ask: { gap: space.sm },
   earlier: { gap: 2 },
 });

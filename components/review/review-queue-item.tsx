@@ -1,6 +1,6 @@
 import { Link } from "expo-router";
 import { Pressable, StyleSheet, Text } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { formatDay, formatMoment } from "@/lib/dates";
 import { DEFECTS } from "@/lib/defects";
 import { PROCESS_LABELS } from "@/lib/labels";
@@ -30,16 +30,9 @@ export function ReviewQueueItem({ item }: { item: QueueItem }) {
 }
 
 const styles = StyleSheet.create({
-  row: {
-    gap: 2,
-    padding: space.md,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
-  part: { fontSize: 16, fontWeight: "700", color: colors.accent },
-  meta: { fontSize: 14, color: colors.muted },
-  note: { fontSize: 15, lineHeight: 22, color: colors.ink, fontStyle: "italic" },
-  top: { fontSize: 14, color: colors.steel, fontWeight: "600" },
+  row: { ...card, gap: 2, padding: space.md },
+  part: { fontSize: fontSize.field, fontWeight: "700", color: colors.accent },
+  meta: { fontSize: fontSize.detail, color: colors.muted },
+  note: { fontSize: fontSize.body, lineHeight: 22, color: colors.ink, fontStyle: "italic" },
+  top: { fontSize: fontSize.detail, color: colors.steel, fontWeight: "600" },
 });

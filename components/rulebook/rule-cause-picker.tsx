@@ -3,7 +3,7 @@ import { Pressable, StyleSheet, Text, TextInput, View } from "react-native";
 import { ChoiceChips } from "@/components/ui/choice-chips";
 import { FieldError } from "@/components/ui/field-error";
 import { TextField } from "@/components/ui/text-field";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 import type { RuleFormState } from "@/hooks/use-rule-draft";
 import type { CauseOption } from "@/lib/rulebook-schemas";
 
@@ -92,14 +92,14 @@ export function RuleCausePicker({ state, causes, errors, set }: Props) {
 
 const styles = StyleSheet.create({
   wrap: { gap: space.sm },
-  chosen: { fontSize: 15, fontWeight: "600", color: colors.steel },
+  chosen: { fontSize: fontSize.body, fontWeight: "600", color: colors.steel },
   search: {
     minHeight: 44,
     borderWidth: 1,
     borderColor: colors.line,
     borderRadius: radius.sm,
     paddingHorizontal: space.md,
-    fontSize: 16,
+    fontSize: fontSize.field,
     backgroundColor: colors.surface,
     color: colors.ink,
   },
@@ -115,8 +115,8 @@ const styles = StyleSheet.create({
     borderBottomColor: colors.line,
   },
   on: { backgroundColor: "#E7EFEF" },
-  optionText: { flex: 1, fontSize: 15, color: colors.ink },
-  tag: { fontSize: 12, color: colors.steel, fontWeight: "700" },
-  more: { padding: space.sm, fontSize: 13, color: colors.muted },
+  optionText: { flex: 1, fontSize: fontSize.body, color: colors.ink },
+  tag: { fontSize: fontSize.small, color: colors.steel, fontWeight: "700" },
+  more: { padding: space.sm, fontSize: fontSize.small, color: colors.muted },
   multi: { minHeight: 88, paddingVertical: space.sm, textAlignVertical: "top" },
 });

@@ -4,7 +4,7 @@ import { FieldError } from "@/components/ui/field-error";
 import { NumberField } from "@/components/ui/number-field";
 import { MultiChips } from "@/components/rulebook/rule-multi-chips";
 import { RuleFactPicker } from "@/components/rulebook/rule-fact-picker";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 import type { RowState } from "@/hooks/use-rule-draft";
 import { COMPARISON_WORDS, comparisonsFor, type Comparison } from "@/lib/rulebook-schemas";
 import { factUnit } from "@/lib/rule-units";
@@ -122,8 +122,8 @@ const styles = StyleSheet.create({
     backgroundColor: colors.background,
   },
   head: { flexDirection: "row", justifyContent: "space-between", alignItems: "center" },
-  title: { fontSize: 14, fontWeight: "700", color: colors.muted },
-  remove: { fontSize: 14, fontWeight: "600", color: colors.danger, paddingVertical: space.xs },
+  title: { fontSize: fontSize.detail, fontWeight: "700", color: colors.muted },
+  remove: { fontSize: fontSize.detail, fontWeight: "600", color: colors.danger, paddingVertical: space.xs },
   pair: { flexDirection: "row", flexWrap: "wrap", gap: space.md },
-  note: { fontSize: 14, color: colors.muted },
+  note: { fontSize: fontSize.detail, color: colors.muted },
 });

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from "react-native";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 import { unitsFormat } from "@/lib/rule-units";
 import type { Units } from "@/lib/units";
 import type { Condition } from "@/rules/kb-schema";
@@ -33,7 +33,7 @@ function Part({ words }: { words: ConditionWords }) {
 
 const styles = StyleSheet.create({
   list: { gap: space.xs },
-  leaf: { fontSize: 15, lineHeight: 22, color: colors.ink },
+  leaf: { fontSize: fontSize.body, lineHeight: 22, color: colors.ink },
   group: { gap: space.xs, paddingLeft: space.md, borderLeftWidth: 2, borderLeftColor: colors.line },
-  join: { fontSize: 14, fontWeight: "700", color: colors.muted },
+  join: { fontSize: fontSize.detail, fontWeight: "700", color: colors.muted },
 });

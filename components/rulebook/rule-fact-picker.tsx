@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { Pressable, StyleSheet, Text, TextInput, View } from "react-native";
 import { FieldError } from "@/components/ui/field-error";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 import { PICKABLE_FACTS } from "@/lib/rulebook-schemas";
 import type { Units } from "@/lib/units";
 import { factSpec } from "@/rules/fact-catalog";
@@ -93,15 +93,15 @@ const styles = StyleSheet.create({
     borderColor: colors.steel,
     backgroundColor: colors.surface,
   },
-  chosenText: { flex: 1, fontSize: 16, fontWeight: "600", color: colors.ink },
-  change: { fontSize: 14, color: colors.accent, fontWeight: "600" },
+  chosenText: { flex: 1, fontSize: fontSize.field, fontWeight: "600", color: colors.ink },
+  change: { fontSize: fontSize.detail, color: colors.accent, fontWeight: "600" },
   search: {
     minHeight: 44,
     borderWidth: 1,
     borderColor: colors.line,
     borderRadius: radius.sm,
     paddingHorizontal: space.md,
-    fontSize: 16,
+    fontSize: fontSize.field,
     backgroundColor: colors.surface,
     color: colors.ink,
   },
@@ -117,7 +117,7 @@ const styles = StyleSheet.create({
     borderBottomWidth: 1,
     borderBottomColor: colors.line,
   },
-  optionText: { flex: 1, fontSize: 15, color: colors.ink },
-  kind: { fontSize: 12, color: colors.muted },
-  more: { padding: space.sm, fontSize: 13, color: colors.muted },
+  optionText: { flex: 1, fontSize: fontSize.body, color: colors.ink },
+  kind: { fontSize: fontSize.small, color: colors.muted },
+  more: { padding: space.sm, fontSize: fontSize.small, color: colors.muted },
 });

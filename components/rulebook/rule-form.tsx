@@ -10,7 +10,7 @@ import { RuleConditionRow } from "@/components/rulebook/rule-condition-row";
 import { MultiChips } from "@/components/rulebook/rule-multi-chips";
 import { RuleTrial } from "@/components/rulebook/rule-trial";
 import { TextField } from "@/components/ui/text-field";
-import { colors, radius, space } from "@/constants/theme";
+import { card, space } from "@/constants/theme";
 import { useSaveRule, useTryRule } from "@/hooks/use-rulebook";
 import { useRuleDraft, type RuleFormState } from "@/hooks/use-rule-draft";
 import { ApiError } from "@/lib/api";
@@ -180,14 +180,7 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
 
 const styles = StyleSheet.create({
   form: { gap: space.lg },
-  section: {
-    gap: space.md,
-    padding: space.md,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
+  section: { ...card, gap: space.md, padding: space.md },
   multi: { minHeight: 64, paddingVertical: space.sm, textAlignVertical: "top" },
   buttons: { flexDirection: "row", flexWrap: "wrap", gap: space.md, justifyContent: "flex-end" },
 });

@@ -1,7 +1,7 @@
 import { Link } from "expo-router";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { RuleRecordLine } from "@/components/rulebook/rule-record";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { DEFECTS } from "@/lib/defects";
 import type { RuleRow } from "@/lib/rulebook-schemas";
 import { unitsFormat } from "@/lib/rule-units";
@@ -36,18 +36,11 @@ export function RuleListItem({ rule, units }: { rule: RuleRow; units: Units }) {
 }
 
 const styles = StyleSheet.create({
-  row: {
-    gap: 2,
-    padding: space.md,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
+  row: { ...card, gap: 2, padding: space.md },
   top: { flexDirection: "row", gap: space.sm, alignItems: "flex-start" },
-  title: { flex: 1, fontSize: 15, fontWeight: "700", color: colors.ink },
-  state: { fontSize: 12, fontWeight: "700", color: colors.steel, textTransform: "uppercase" },
+  title: { flex: 1, fontSize: fontSize.body, fontWeight: "700", color: colors.ink },
+  state: { fontSize: fontSize.small, fontWeight: "700", color: colors.steel, textTransform: "uppercase" },
   off: { color: colors.muted },
-  when: { fontSize: 14, lineHeight: 20, color: colors.ink },
-  meta: { fontSize: 13, color: colors.muted },
+  when: { fontSize: fontSize.detail, lineHeight: 20, color: colors.ink },
+  meta: { fontSize: fontSize.small, color: colors.muted },
 });

@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, Text, View } from "react-native";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 import { chipStyles, type Choice } from "@/components/ui/choice-chips";
 
 type Props = {
@@ -43,4 +43,4 @@ export function MultiChips({ label, hint, options, values, onChange, disabled }:
   );
 }
 
-const styles = { ...chipStyles, ...StyleSheet.create({ hint: { fontSize: 13, color: colors.muted } }) };
+const styles = { ...chipStyles, ...StyleSheet.create({ hint: { fontSize: fontSize.small, color: colors.muted } }) };

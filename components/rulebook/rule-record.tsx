@@ -1,5 +1,5 @@
 import { StyleSheet, Text } from "react-native";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 import { recordWords } from "@/lib/review-schemas";
 import type { CauseRecord, RuleRecord } from "@/lib/rulebook-schemas";
 
@@ -25,4 +25,4 @@ export function CauseRecordLine({ cause }: { cause: { record?: CauseRecord | nul
   ) : null;
 }
 
-const styles = StyleSheet.create({ text: { fontSize: 13, color: colors.steel, fontWeight: "600" } });
+const styles = StyleSheet.create({ text: { fontSize: fontSize.small, color: colors.steel, fontWeight: "600" } });

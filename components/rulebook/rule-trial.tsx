@@ -2,7 +2,7 @@ import { Link } from "expo-router";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 import { formatDay } from "@/lib/dates";
 import type { Trial } from "@/lib/rulebook-schemas";
 import type { Verdict } from "@/rules/backtest";
@@ -75,8 +75,8 @@ const styles = StyleSheet.create({
     borderColor: colors.steel,
     backgroundColor: colors.surface,
   },
-  line: { fontSize: 15, lineHeight: 22, color: colors.ink },
-  sub: { fontSize: 14, fontWeight: "700", color: colors.muted, marginTop: space.xs },
+  line: { fontSize: fontSize.body, lineHeight: 22, color: colors.ink },
+  sub: { fontSize: fontSize.detail, fontWeight: "700", color: colors.muted, marginTop: space.xs },
   case: {
     gap: 2,
     padding: space.sm,
@@ -85,8 +85,8 @@ const styles = StyleSheet.create({
     borderColor: colors.line,
     backgroundColor: colors.background,
   },
-  part: { fontSize: 15, fontWeight: "700", color: colors.accent },
-  change: { fontSize: 14, lineHeight: 20, color: colors.ink },
-  confirmed: { fontSize: 13, color: colors.muted },
-  verdict: { fontSize: 13, fontWeight: "700" },
+  part: { fontSize: fontSize.body, fontWeight: "700", color: colors.accent },
+  change: { fontSize: fontSize.detail, lineHeight: 20, color: colors.ink },
+  confirmed: { fontSize: fontSize.small, color: colors.muted },
+  verdict: { fontSize: fontSize.small, fontWeight: "700" },
 });

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 import { DEFECTS, LOCATION_LABELS } from "@/lib/defects";
 import { formatMoment } from "@/lib/dates";
 import type { CauseOption, RuleVersion } from "@/lib/rulebook-schemas";
@@ -52,6 +52,6 @@ const styles = StyleSheet.create({
     borderLeftColor: colors.steel,
     backgroundColor: colors.surface,
   },
-  head: { fontSize: 14, fontWeight: "700", color: colors.ink },
-  change: { fontSize: 14, lineHeight: 20, color: colors.ink },
+  head: { fontSize: fontSize.detail, fontWeight: "700", color: colors.ink },
+  change: { fontSize: fontSize.detail, lineHeight: 20, color: colors.ink },
 });

@@ -1,7 +1,7 @@
 import { useRouter } from "expo-router";
 import { StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { emptyText, type SearchRequest } from "@/lib/search-schemas";
 
 type Props = { query: SearchRequest; filtered: boolean; onClearFilters: () => void; onClearWords: () => void };
@@ -43,15 +43,8 @@ export function CasebookEmptyState({ query, filtered, onClearFilters, onClearWor
 }
 
 const styles = StyleSheet.create({
-  box: {
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.md,
-    backgroundColor: colors.surface,
-    padding: space.lg,
-    gap: space.sm,
-  },
-  title: { fontSize: 17, fontWeight: "600", color: colors.ink },
-  hint: { fontSize: 15, lineHeight: 22, color: colors.muted },
+  box: { ...card, padding: space.lg, gap: space.sm },
+  title: { fontSize: fontSize.lead, fontWeight: "600", color: colors.ink },
+  hint: { fontSize: fontSize.body, lineHeight: 22, color: colors.muted },
   row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm, marginTop: space.xs },
 });

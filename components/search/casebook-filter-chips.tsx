@@ -1,7 +1,7 @@
 import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { TextField } from "@/components/ui/text-field";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { DEFECTS } from "@/lib/defects";
 import { OUTCOME_LABELS, PROCESS_LABELS } from "@/lib/labels";
 import type { SearchFacets } from "@/lib/search-schemas";
@@ -134,25 +134,22 @@ function ChipGroup({
 const styles = StyleSheet.create({
   wrap: { gap: space.md },
   group: { gap: space.xs },
-  label: { fontSize: 13, fontWeight: "700", color: colors.muted },
+  label: { fontSize: fontSize.small, fontWeight: "700", color: colors.muted },
   row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
   chip: {
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.md,
+    ...card,
     paddingHorizontal: space.md,
     paddingVertical: 6,
-    backgroundColor: colors.surface,
     minHeight: 36,
     justifyContent: "center",
     maxWidth: "100%",
   },
   on: { backgroundColor: colors.steel, borderColor: colors.steel },
-  text: { color: colors.ink, fontSize: 14, flexShrink: 1 },
-  count: { color: colors.muted, fontSize: 12 },
+  text: { color: colors.ink, fontSize: fontSize.detail, flexShrink: 1 },
+  count: { color: colors.muted, fontSize: fontSize.small },
   textOn: { color: "#FFFFFF", fontWeight: "600" },
   more: { paddingHorizontal: space.sm, paddingVertical: 6, justifyContent: "center", minHeight: 36 },
-  moreText: { color: colors.steel, fontSize: 14, textDecorationLine: "underline" },
+  moreText: { color: colors.steel, fontSize: fontSize.detail, textDecorationLine: "underline" },
   dates: { flexDirection: "row", gap: space.md },
   stacked: { flexDirection: "column" },
   date: { flex: 1 },

@@ -1,7 +1,7 @@
 import { Link } from "expo-router";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { MarkedText } from "@/components/search/casebook-marked-text";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, radius, space } from "@/constants/theme";
 import { formatDay } from "@/lib/dates";
 import { OUTCOME_LABELS, PROCESS_LABELS } from "@/lib/labels";
 import type { CaseHit, CaseSummary } from "@/lib/search-schemas";
@@ -48,22 +48,15 @@ export function CasebookResultCard({ hit }: { hit: CaseHit }) {
 }
 
 const styles = StyleSheet.create({
-  card: {
-    backgroundColor: colors.surface,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.md,
-    padding: space.md,
-    gap: 4,
-  },
+  card: { ...card, padding: space.md, gap: 4 },
   top: { flexDirection: "row", justifyContent: "space-between", alignItems: "center", gap: space.sm },
-  part: { flex: 1, fontSize: 17, fontWeight: "600", color: colors.ink },
-  line: { fontSize: 15, color: colors.ink },
-  cause: { fontSize: 14, color: colors.steel },
-  words: { fontSize: 14, color: colors.muted, fontStyle: "italic" },
-  muted: { fontSize: 14, color: colors.muted },
+  part: { flex: 1, fontSize: fontSize.lead, fontWeight: "600", color: colors.ink },
+  line: { fontSize: fontSize.body, color: colors.ink },
+  cause: { fontSize: fontSize.detail, color: colors.steel },
+  words: { fontSize: fontSize.detail, color: colors.muted, fontStyle: "italic" },
+  muted: { fontSize: fontSize.detail, color: colors.muted },
   tag: {
-    fontSize: 13,
+    fontSize: fontSize.small,
     fontWeight: "700",
     borderWidth: 1,
     borderRadius: radius.sm,

@@ -4,7 +4,7 @@ import { MarkedText } from "@/components/search/casebook-marked-text";
 import { OutcomeTag } from "@/components/search/casebook-result-card";
 import { castingHref, causeLine, defectsLine } from "@/lib/case-words";
 import { ListTable, type Column } from "@/components/ui/list-table";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 import { formatDay } from "@/lib/dates";
 import { PROCESS_LABELS } from "@/lib/labels";
 import type { CaseHit, SearchSort } from "@/lib/search-schemas";
@@ -80,8 +80,8 @@ export function CasebookResultTable({
 }
 
 const styles = StyleSheet.create({
-  strong: { fontSize: 15, fontWeight: "600", color: colors.ink },
-  text: { fontSize: 14, color: colors.ink },
-  cause: { fontSize: 14, color: colors.steel },
-  words: { fontSize: 13, color: colors.muted, fontStyle: "italic", marginTop: 2 },
+  strong: { fontSize: fontSize.body, fontWeight: "600", color: colors.ink },
+  text: { fontSize: fontSize.detail, color: colors.ink },
+  cause: { fontSize: fontSize.detail, color: colors.steel },
+  words: { fontSize: fontSize.small, color: colors.muted, fontStyle: "italic", marginTop: 2 },
 });

@@ -1,5 +1,5 @@
 import { ActivityIndicator, Pressable, StyleSheet, Text, TextInput, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 import { SEARCH_QUERY_MAX } from "@/lib/search-schemas";
 
 type Props = { value: string; onChange: (text: string) => void; busy: boolean };
@@ -43,7 +43,7 @@ const styles = StyleSheet.create({
   wrap: { justifyContent: "center" },
   input: {
     minHeight: 48,
-    fontSize: 17,
+    fontSize: fontSize.lead,
     color: colors.ink,
     backgroundColor: colors.surface,
     borderWidth: 1,
@@ -54,5 +54,5 @@ const styles = StyleSheet.create({
   },
   end: { position: "absolute", right: space.xs, flexDirection: "row", alignItems: "center", gap: space.xs },
   clear: { width: 40, height: 40, alignItems: "center", justifyContent: "center" },
-  clearText: { fontSize: 24, color: colors.muted, lineHeight: 26 },
+  clearText: { fontSize: fontSize.display, color: colors.muted, lineHeight: 26 },
 });

@@ -5,7 +5,7 @@ import { castingHref, causeLine } from "@/lib/case-words";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
 import { Loading } from "@/components/ui/query-state";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { useSimilarCases } from "@/hooks/use-search";
 import { useUnits } from "@/hooks/use-units";
 import { formatDay } from "@/lib/dates";
@@ -51,17 +51,10 @@ export function SimilarCases({ castingId }: { castingId: number }) {
 
 const styles = StyleSheet.create({
   wrap: { gap: space.sm },
-  item: {
-    backgroundColor: colors.surface,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.md,
-    padding: space.md,
-    gap: 2,
-  },
+  item: { ...card, padding: space.md, gap: 2 },
   top: { flexDirection: "row", justifyContent: "space-between", alignItems: "center", gap: space.sm },
-  part: { flex: 1, fontSize: 16, fontWeight: "600", color: colors.ink },
-  reason: { fontSize: 15, color: colors.ink },
-  cause: { fontSize: 14, color: colors.steel },
-  muted: { fontSize: 14, color: colors.muted },
+  part: { flex: 1, fontSize: fontSize.field, fontWeight: "600", color: colors.ink },
+  reason: { fontSize: fontSize.body, color: colors.ink },
+  cause: { fontSize: fontSize.detail, color: colors.steel },
+  muted: { fontSize: fontSize.detail, color: colors.muted },
 });

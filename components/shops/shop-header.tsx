@@ -1,7 +1,7 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
-import { colors, fonts, radius, space } from "@/constants/theme";
+import { colors, fonts, fontSize, radius, space } from "@/constants/theme";
 import type { Me } from "@/hooks/use-me";
 import { authClient } from "@/lib/auth-client";
 
@@ -69,8 +69,8 @@ const styles = StyleSheet.create({
   },
   row: { flexDirection: "row", alignItems: "center", gap: space.sm },
   who: { flex: 1, minWidth: 0 },
-  shop: { fontFamily: fonts.heading, fontSize: 17, color: colors.ink },
-  person: { fontSize: 13, color: colors.muted },
+  shop: { fontFamily: fonts.heading, fontSize: fontSize.lead, color: colors.ink },
+  person: { fontSize: fontSize.small, color: colors.muted },
   role: { color: colors.steel, fontWeight: "700" },
   action: {
     paddingHorizontal: space.sm,
@@ -79,9 +79,9 @@ const styles = StyleSheet.create({
     borderWidth: 1,
     borderColor: colors.line,
   },
-  actionText: { color: colors.accent, fontWeight: "600", fontSize: 14 },
+  actionText: { color: colors.accent, fontWeight: "600", fontSize: fontSize.detail },
   menu: { marginTop: space.sm, gap: space.xs },
   menuItem: { paddingVertical: space.sm },
-  menuText: { fontSize: 15, color: colors.ink },
+  menuText: { fontSize: fontSize.body, color: colors.ink },
   current: { fontWeight: "700" },
 });

@@ -1,6 +1,6 @@
 import { Link, type Href } from "expo-router";
 import { StyleSheet, Text } from "react-native";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 
 /** Where this page sits: one tap back up to its parent (the browser's back button may lead elsewhere). */
 export function BackLink({ href, label }: { href: Href; label: string }) {
@@ -13,5 +13,5 @@ export function BackLink({ href, label }: { href: Href; label: string }) {
 
 const styles = StyleSheet.create({
   link: { alignSelf: "flex-start", paddingVertical: 4 },
-  text: { color: colors.accent, fontSize: 15, fontWeight: "600" },
+  text: { color: colors.accent, fontSize: fontSize.body, fontWeight: "600" },
 });

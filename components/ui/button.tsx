@@ -1,5 +1,5 @@
 import { ActivityIndicator, Pressable, StyleSheet, Text } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 
 type Props = { label: string; onPress: () => void; busy?: boolean; kind?: "primary" | "plain"; testID?: string };
 
@@ -33,5 +33,5 @@ const styles = StyleSheet.create({
   primary: { backgroundColor: colors.accent },
   plain: { backgroundColor: "transparent", borderWidth: 1, borderColor: colors.line },
   pressed: { opacity: 0.75 },
-  label: { fontSize: 16, fontWeight: "600" },
+  label: { fontSize: fontSize.field, fontWeight: "600" },
 });

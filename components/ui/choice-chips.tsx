@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, Text, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 
 export type Choice = { value: string; label: string };
 type Props = {
@@ -36,17 +36,10 @@ export function ChoiceChips({ label, options, value, onChange, disabled }: Props
 /** The chip look, shared with the many-choice chips (rule-multi-chips.tsx). */
 export const chipStyles = StyleSheet.create({
   wrap: { gap: space.xs },
-  label: { fontSize: 14, fontWeight: "600", color: colors.ink },
+  label: { fontSize: fontSize.detail, fontWeight: "600", color: colors.ink },
   row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },
-  chip: {
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.md,
-    paddingHorizontal: space.md,
-    paddingVertical: space.sm,
-    backgroundColor: colors.surface,
-  },
+  chip: { ...card, paddingHorizontal: space.md, paddingVertical: space.sm },
   on: { backgroundColor: colors.steel, borderColor: colors.steel },
-  text: { color: colors.ink, fontSize: 14 },
+  text: { color: colors.ink, fontSize: fontSize.detail },
   textOn: { color: "#FFFFFF", fontWeight: "600" },
 });

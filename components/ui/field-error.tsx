@@ -1,5 +1,5 @@
 import { StyleSheet, Text } from "react-native";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 
 /** The error line under a field that is not a text box (chips, photo area). */
 export function FieldError({ message }: { message?: string }) {
@@ -10,4 +10,4 @@ export function FieldError({ message }: { message?: string }) {
   ) : null;
 }
 
-const styles = StyleSheet.create({ error: { color: colors.danger, fontSize: 14 } });
+const styles = StyleSheet.create({ error: { color: colors.danger, fontSize: fontSize.detail } });

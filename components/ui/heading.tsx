@@ -1,5 +1,5 @@
 import { StyleSheet, Text, type TextProps } from "react-native";
-import { colors, fonts } from "@/constants/theme";
+import { colors, fonts, fontSize } from "@/constants/theme";
 
 /** Headings in Lora, shipped with the app. */
 export function Heading({ level = 1, style, ...props }: TextProps & { level?: 1 | 2 | 3 }) {
@@ -8,7 +8,7 @@ export function Heading({ level = 1, style, ...props }: TextProps & { level?: 1 
 
 const styles = StyleSheet.create({
   base: { fontFamily: fonts.heading, color: colors.ink },
-  h1: { fontSize: 26, lineHeight: 34 },
-  h2: { fontSize: 20, lineHeight: 28 },
-  h3: { fontSize: 17, lineHeight: 24 },
+  h1: { fontSize: fontSize.display, lineHeight: 34 },
+  h2: { fontSize: fontSize.title, lineHeight: 28 },
+  h3: { fontSize: fontSize.lead, lineHeight: 24 },
 });

@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 
 export type Column<Row> = {
   key: string;
@@ -77,13 +77,7 @@ export function ListTable<Row>({ columns, rows, rowKey, sort, onSort, onOpen }: 
 }
 
 const styles = StyleSheet.create({
-  table: {
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.md,
-    backgroundColor: colors.surface,
-    overflow: "hidden",
-  },
+  table: { ...card, overflow: "hidden" },
   row: {
     flexDirection: "row",
     borderBottomWidth: 1,
@@ -94,8 +88,8 @@ const styles = StyleSheet.create({
   head: { backgroundColor: colors.background },
   hover: { backgroundColor: "#FBF8F3" },
   cell: { paddingHorizontal: space.md, paddingVertical: space.sm, justifyContent: "center" },
-  headText: { fontSize: 13, fontWeight: "700", color: colors.muted },
+  headText: { fontSize: fontSize.small, fontWeight: "700", color: colors.muted },
   sortable: { color: colors.steel, textDecorationLine: "underline" },
-  text: { fontSize: 15, color: colors.ink },
+  text: { fontSize: fontSize.body, color: colors.ink },
   right: { textAlign: "right" },
 });

@@ -1,6 +1,6 @@
 import { forwardRef } from "react";
 import { Pressable, StyleSheet, Text, View, type PressableProps } from "react-native";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 
 type Props = PressableProps & { label: string; isFocused?: boolean; wide: boolean };
 
@@ -31,6 +31,6 @@ const styles = StyleSheet.create({
   barOn: { borderTopColor: colors.accent },
   rail: { paddingVertical: space.md, paddingHorizontal: space.lg, borderLeftWidth: 4, borderLeftColor: "transparent" },
   railOn: { borderLeftColor: colors.accent, backgroundColor: colors.background },
-  label: { fontSize: 14, color: colors.muted, fontWeight: "600" },
+  label: { fontSize: fontSize.detail, color: colors.muted, fontWeight: "600" },
   labelOn: { color: colors.ink },
 });

@@ -2,7 +2,7 @@ import { StyleSheet, Text } from "react-native";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
 import { Screen } from "@/components/ui/screen";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 
 /** A section whose feature is not built yet: says so plainly, and shows no made-up data. */
 export function NotBuiltYet({ title, purpose }: { title: string; purpose: string }) {
@@ -15,4 +15,4 @@ export function NotBuiltYet({ title, purpose }: { title: string; purpose: string
   );
 }
 
-const styles = StyleSheet.create({ purpose: { fontSize: 16, lineHeight: 24, color: colors.ink } });
+const styles = StyleSheet.create({ purpose: { fontSize: fontSize.field, lineHeight: 24, color: colors.ink } });

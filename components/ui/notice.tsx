@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 import { StyleSheet, Text, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 
 /** A boxed message: an error, a caution, or a plain note. */
 export function Notice({ tone = "note", children }: { tone?: "error" | "caution" | "note"; children: ReactNode }) {
@@ -14,5 +14,5 @@ export function Notice({ tone = "note", children }: { tone?: "error" | "caution"
 
 const styles = StyleSheet.create({
   box: { borderRadius: radius.md, borderWidth: 1, borderColor: colors.line, padding: space.md, gap: space.xs },
-  text: { fontSize: 15, lineHeight: 22, color: colors.ink },
+  text: { fontSize: fontSize.body, lineHeight: 22, color: colors.ink },
 });

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, TextInput, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 
 type Props = {
   label: string;
@@ -44,7 +44,7 @@ export function NumberField({ label, unit, value, onChangeText, error, hint, who
 
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
-  label: { fontSize: 14, fontWeight: "600", color: colors.ink },
+  label: { fontSize: fontSize.detail, fontWeight: "600", color: colors.ink },
   // A number is short: the box stays narrow on a wide screen.
   row: { flexDirection: "row", alignItems: "center", gap: space.sm, maxWidth: 280 },
   input: {
@@ -55,11 +55,11 @@ const styles = StyleSheet.create({
     borderColor: colors.line,
     borderRadius: radius.sm,
     paddingHorizontal: space.md,
-    fontSize: 16,
+    fontSize: fontSize.field,
     backgroundColor: colors.surface,
     color: colors.ink,
   },
   inputError: { borderColor: colors.danger },
-  unit: { fontSize: 15, color: colors.muted, minWidth: 36 },
-  error: { color: colors.danger, fontSize: 14 },
+  unit: { fontSize: fontSize.body, color: colors.muted, minWidth: 36 },
+  error: { color: colors.danger, fontSize: fontSize.detail },
 });

@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 
 type Props = { page: number; pageSize: number; total: number; onPage: (page: number) => void };
 
@@ -31,6 +31,6 @@ export function Pager({ page, pageSize, total, onPage }: Props) {
 
 const styles = StyleSheet.create({
   row: { flexDirection: "row", alignItems: "center", justifyContent: "space-between", gap: space.sm },
-  where: { fontSize: 14, color: colors.muted, textAlign: "center" },
+  where: { fontSize: fontSize.detail, color: colors.muted, textAlign: "center" },
   gap: { width: 100 },
 });

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 
 /** How strongly the evidence points at a cause, 0 to 1, as a bar a person takes in at a glance. */
 export function ScoreBar({ score }: { score: number }) {
@@ -25,5 +25,5 @@ const styles = StyleSheet.create({
   row: { flexDirection: "row", alignItems: "center", gap: space.sm },
   track: { flex: 1, height: 10, borderRadius: radius.sm, backgroundColor: colors.line, overflow: "hidden" },
   fill: { height: "100%", backgroundColor: colors.accent },
-  text: { width: 40, textAlign: "right", fontSize: 14, fontWeight: "700", color: colors.ink },
+  text: { width: 40, textAlign: "right", fontSize: fontSize.detail, fontWeight: "700", color: colors.ink },
 });

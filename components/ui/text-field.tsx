@@ -1,5 +1,5 @@
 import { StyleSheet, Text, TextInput, View, type TextInputProps } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 
 type Props = TextInputProps & { label: string; error?: string };
 
@@ -26,17 +26,17 @@ export function TextField({ label, error, style, ...input }: Props) {
 
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
-  label: { fontSize: 14, fontWeight: "600", color: colors.ink },
+  label: { fontSize: fontSize.detail, fontWeight: "600", color: colors.ink },
   input: {
     minHeight: 44,
     borderWidth: 1,
     borderColor: colors.line,
     borderRadius: radius.sm,
     paddingHorizontal: space.md,
-    fontSize: 16,
+    fontSize: fontSize.field,
     backgroundColor: colors.surface,
     color: colors.ink,
   },
   inputError: { borderColor: colors.danger },
-  error: { color: colors.danger, fontSize: 14 },
+  error: { color: colors.danger, fontSize: fontSize.detail },
 });

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, View } from "react-native";
-import { colors, radius, space } from "@/constants/theme";
+import { colors, fontSize, radius, space } from "@/constants/theme";
 
 /** A bar that fills as the photo's bytes go up; the percentage is also read out as text. */
 export function UploadProgress({ fraction, label = "Uploading photo" }: { fraction: number; label?: string }) {
@@ -25,7 +25,7 @@ export function UploadProgress({ fraction, label = "Uploading photo" }: { fracti
 
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
-  text: { fontSize: 14, color: colors.ink },
+  text: { fontSize: fontSize.detail, color: colors.ink },
   track: { height: 10, borderRadius: radius.sm, backgroundColor: colors.line, overflow: "hidden" },
   fill: { height: "100%", backgroundColor: colors.steel },
 });

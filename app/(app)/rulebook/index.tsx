@@ -9,7 +9,7 @@ import { LoadFailed, Loading } from "@/components/ui/query-state";
 import { RuleListItem } from "@/components/rulebook/rule-list-item";
 import { Screen } from "@/components/ui/screen";
 import { TextField } from "@/components/ui/text-field";
-import { colors, space } from "@/constants/theme";
+import { colors, fontSize, space } from "@/constants/theme";
 import { useReviewQueue } from "@/hooks/use-review";
 import { useMay, useRulebook } from "@/hooks/use-rulebook";
 import { useUnits } from "@/hooks/use-units";
@@ -114,7 +114,7 @@ export default function RulebookScreen() {
 }
 
 const styles = StyleSheet.create({
-  intro: { fontSize: 15, lineHeight: 22, color: colors.ink },
+  intro: { fontSize: fontSize.body, lineHeight: 22, color: colors.ink },
   actions: { flexDirection: "row", flexWrap: "wrap", gap: space.md },
   list: { gap: space.sm },
 });

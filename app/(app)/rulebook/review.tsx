@@ -7,7 +7,7 @@ import { ReviewQueueItem } from "@/components/review/review-queue-item";
 import { Screen } from "@/components/ui/screen";
 import { useReviewQueue } from "@/hooks/use-review";
 import { useMay } from "@/hooks/use-rulebook";
-import { colors } from "@/constants/theme";
+import { colors, fontSize } from "@/constants/theme";
 
 /** Castings whose casters asked a mentor to look, oldest first: open one to confirm its cause. */
 export default function ReviewQueueScreen() {
@@ -36,4 +36,4 @@ export default function ReviewQueueScreen() {
   );
 }
 
-const styles = StyleSheet.create({ intro: { fontSize: 15, lineHeight: 22, color: colors.ink } });
+const styles = StyleSheet.create({ intro: { fontSize: fontSize.body, lineHeight: 22, color: colors.ink } });

@@ -9,7 +9,7 @@ import { MeltFacts } from "@/components/melts/melt-facts";
 import { Notice } from "@/components/ui/notice";
 import { LoadFailed, Loading } from "@/components/ui/query-state";
 import { Screen } from "@/components/ui/screen";
-import { colors, radius, space } from "@/constants/theme";
+import { card, space } from "@/constants/theme";
 import { useCreateCasting } from "@/hooks/use-castings";
 import { useMelt } from "@/hooks/use-melts";
 import { useUnitsQuery } from "@/hooks/use-units";
@@ -60,12 +60,5 @@ export default function MeltScreen() {
 const styles = StyleSheet.create({
   head: { flexDirection: "row", alignItems: "center", justifyContent: "space-between", gap: space.md },
   title: { flex: 1 },
-  add: {
-    gap: space.md,
-    padding: space.md,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
+  add: { ...card, gap: space.md, padding: space.md },
 });

@@ -11,7 +11,7 @@ import { stateWords } from "@/lib/rule-state";
 import { RuleRecordLine } from "@/components/rulebook/rule-record";
 import { RuleVersions } from "@/components/rulebook/rule-versions";
 import { Screen } from "@/components/ui/screen";
-import { colors, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, space } from "@/constants/theme";
 import { useRule, useRulebook } from "@/hooks/use-rulebook";
 import { useUnits } from "@/hooks/use-units";
 import { formatMoment } from "@/lib/dates";
@@ -110,16 +110,9 @@ function Block({ title, children }: { title: string; children: ReactNode }) {
 }
 
 const styles = StyleSheet.create({
-  meta: { fontSize: 14, color: colors.muted, fontWeight: "600" },
-  block: {
-    gap: space.xs,
-    padding: space.md,
-    borderRadius: radius.md,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.surface,
-  },
-  text: { fontSize: 15, lineHeight: 22, color: colors.ink },
-  strong: { fontSize: 15, lineHeight: 22, fontWeight: "700", color: colors.ink },
-  muted: { fontSize: 14, lineHeight: 20, color: colors.muted },
+  meta: { fontSize: fontSize.detail, color: colors.muted, fontWeight: "600" },
+  block: { ...card, gap: space.xs, padding: space.md },
+  text: { fontSize: fontSize.body, lineHeight: 22, color: colors.ink },
+  strong: { fontSize: fontSize.body, lineHeight: 22, fontWeight: "700", color: colors.ink },
+  muted: { fontSize: fontSize.detail, lineHeight: 20, color: colors.muted },
 });
