@@ -1,9 +1,19 @@
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
+import { router, useLocalSearchParams } from "expo-router";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { CasebookEmptyState } from "@/components/search/casebook-empty-state";
 import { CasebookFilterChips } from "@/components/search/casebook-filter-chips";
-import { activeCount, filterQuery, NO_FILTERS, type CasebookFilters } from "@/lib/casebook-filters";
+import {
+  activeCount,
+  filterQuery,
+  NO_FILTERS,
+  viewFromParams,
+  viewToParams,
+  type CasebookFilters,
+  type CasebookView,
+  type RouteParams,
+} from "@/lib/casebook-filters";
 import { CasebookResultCard } from "@/components/search/casebook-result-card";
 import { CasebookResultTable } from "@/components/search/casebook-result-table";
 import { CasebookSearchBox } from "@/components/search/casebook-search-box";
@@ -25,27 +35,39 @@ const PAGE_SIZE = 20;
 /** The casebook: every case the shop has judged, found by words (typos forgiven) and filters. */
 export default function CasebookScreen() {
   const wide = useIsWide();
-  const [text, setText] = useState("");
+  // The words, filters, order and page live in the URL; only the words being typed are local.
+  const view = viewFromParams(useLocalSearchParams() as RouteParams);
+  const { filters, sort, page } = view;
+  const [text, setText] = useState(view.words);
   const words = useDebounced(text.trim(), 250);
-  const [filters, setFilters] = useState<CasebookFilters>(NO_FILTERS);
-  const [sort, setSort] = useState<SearchSort | undefined>();
+  /** A new question starts again at page 1: the page belongs to the question asked. */
+  const show = (next: Partial<CasebookView>) => router.setParams(viewToParams({ ...view, page: 1, ...next }));
+  const setFilters = (f: CasebookFilters) => show({ filters: f });
+  const setSort = (s: SearchSort) => show({ sort: s });
+  const written = useRef(view.words);
+  useEffect(() => {
+    // Only settled typing writes the URL; `show` reads the current view each render.
+    if (words === view.words) return;
+    written.current = words;
+    show({ words });
+  }, [words]);
+  useEffect(() => {
+    // Back, forward or a followed link changed the words (not our own typing): show them in the box.
+    if (view.words !== written.current) setText((written.current = view.words));
+  }, [view.words]);
   const [showFilters, setShowFilters] = useState(wide);
   const members = useShopMembers();
   const asked: SearchRequest = {
-    q: words,
+    q: view.words,
     ...filterQuery(filters),
-    sort: words ? sort : sort === "relevance" ? undefined : sort,
+    sort: view.words ? sort : sort === "relevance" ? undefined : sort,
   };
-  // New words, filters or order start again at page 1: the page belongs to the question asked.
-  const [paging, setPaging] = useState({ for: "", page: 1 });
-  const key = JSON.stringify(asked);
-  const page = paging.for === key ? paging.page : 1;
   const query: SearchRequest = { ...asked, page, pageSize: PAGE_SIZE };
   const search = useCaseSearch(query);
   const answer = search.data;
   const active = activeCount(filters);
   const order = [
-    ...(words ? [{ value: "relevance", label: "best match" }] : []),
+    ...(view.words ? [{ value: "relevance", label: "best match" }] : []),
     { value: "date-desc", label: "newest" },
     { value: "date-asc", label: "oldest" },
   ];
@@ -83,7 +105,7 @@ export default function CasebookScreen() {
         )
       ) : null}
       {answer && answer.total > PAGE_SIZE ? (
-        <Pager page={page} pageSize={PAGE_SIZE} total={answer.total} onPage={(n) => setPaging({ for: key, page: n })} />
+        <Pager page={page} pageSize={PAGE_SIZE} total={answer.total} onPage={(n) => show({ page: n })} />
       ) : null}
     </View>
   );

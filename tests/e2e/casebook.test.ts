@@ -44,6 +44,14 @@ for (const [sizeName, size] of [
       if (sizeName === "phone") await page.getByRole("button", { name: /^Show \d+ cases?$/ }).click();
       await shot(page, `${sizeName}-casebook-filtered`);
 
+      // The question is in the URL: a reload (or the link sent to someone) shows the same cases.
+      await expect.poll(() => new URL(page.url()).searchParams.get("q")).toBe("misrnu");
+      expect(new URL(page.url()).searchParams.get("process")).toBe("lost-foam");
+      const narrowed = await total(page);
+      await page.reload();
+      await expect.poll(() => total(page), { timeout: 15000 }).toBe(narrowed);
+      expect(await page.getByRole("searchbox", { name: "Search the casebook" }).inputValue()).toBe("misrnu");
+
       await page.getByRole("searchbox", { name: "Search the casebook" }).fill("zzqx");
       await expect
         .poll(() => page.getByTestId("casebook-empty").textContent(), { timeout: 10000 })
