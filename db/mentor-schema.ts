@@ -12,6 +12,7 @@ import {
 } from "drizzle-orm/pg-core";
 import type { KbRule } from "../rules/kb-schema";
 import { organization, user } from "./auth-schema";
+import { ruleStatusEnum, workedEnum } from "./enums";
 import { castings } from "./notebook-schema";
 
 /**
@@ -81,7 +82,7 @@ export const fixesTried = pgTable(
     fix: text("fix").notNull(),
     nextCastingId: integer("next_casting_id").references(() => castings.id, { onDelete: "set null" }),
     /** yes | partly | no; null until judged. */
-    worked: text("worked"),
+    worked: workedEnum("worked"),
     createdBy: createdBy(),
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).defaultNow().notNull(),
@@ -110,8 +111,7 @@ export const shopRuleVersions = pgTable(
       .notNull()
       .references(() => shopRules.id, { onDelete: "cascade" }),
     version: integer("version").notNull(),
-    /** draft | published | retired */
-    status: text("status").notNull(),
+    status: ruleStatusEnum("status").notNull(),
     rule: jsonb("rule").$type<KbRule>().notNull(),
     createdBy: createdBy(),
     createdAt: createdAt(),

@@ -14,6 +14,18 @@ import {
   unique,
 } from "drizzle-orm/pg-core";
 import { organization, user } from "./auth-schema";
+import {
+  alloyFamilyEnum,
+  chargeEnum,
+  defectLocationEnum,
+  defectTypeEnum,
+  degassingEnum,
+  lengthUnitEnum,
+  massUnitEnum,
+  outcomeEnum,
+  processEnum,
+  temperatureUnitEnum,
+} from "./enums";
 
 /**
  * The shop's notebook: melts, castings, photos, defect marks, comments, diagnosis snapshots.
@@ -40,7 +52,7 @@ export const alloys = pgTable(
     designation: text("designation").notNull(),
     /** Upper case without spaces, so "a356.0" and "A356.0" are one alloy. */
     designationKey: text("designation_key").notNull(),
-    family: text("family").notNull(),
+    family: alloyFamilyEnum("family").notNull(),
     solidusC: doublePrecision("solidus_c").notNull(),
     liquidusC: doublePrecision("liquidus_c").notNull(),
     densityKgM3: doublePrecision("density_kg_m3").notNull(),
@@ -65,12 +77,12 @@ export const melts = pgTable(
       .notNull()
       .references(() => alloys.id),
     pouredOn: date("poured_on", { mode: "string" }).notNull(),
-    process: text("process").notNull(),
-    charge: text("charge"),
+    process: processEnum("process").notNull(),
+    charge: chargeEnum("charge"),
     furnace: text("furnace"),
     meltTempC: doublePrecision("melt_temp_c"),
     pourTempC: doublePrecision("pour_temp_c"),
-    degassing: text("degassing"),
+    degassing: degassingEnum("degassing"),
     degasMinutes: doublePrecision("degas_minutes"),
     fluxed: boolean("fluxed"),
     skimmed: boolean("skimmed"),
@@ -112,7 +124,7 @@ export const castings = pgTable(
     hasOverflow: boolean("has_overflow"),
     hasVents: boolean("has_vents"),
     orientation: text("orientation"),
-    outcome: text("outcome"),
+    outcome: outcomeEnum("outcome"),
     notes: text("notes"),
     createdBy: createdBy(),
     createdAt: createdAt(),
@@ -160,8 +172,8 @@ export const defectMarks = pgTable(
     photoId: integer("photo_id").references(() => photos.id, { onDelete: "set null" }),
     x: doublePrecision("x"),
     y: doublePrecision("y"),
-    type: text("type").notNull(),
-    location: text("location").notNull(),
+    type: defectTypeEnum("type").notNull(),
+    location: defectLocationEnum("location").notNull(),
     severity: integer("severity").notNull(),
     note: text("note"),
     createdBy: createdBy(),
@@ -217,8 +229,8 @@ export const personUnits = pgTable("person_units", {
   userId: text("user_id")
     .primaryKey()
     .references(() => user.id, { onDelete: "cascade" }),
-  temperature: text("temperature").notNull(),
-  length: text("length").notNull(),
-  mass: text("mass").notNull(),
+  temperature: temperatureUnitEnum("temperature").notNull(),
+  length: lengthUnitEnum("length").notNull(),
+  mass: massUnitEnum("mass").notNull(),
   updatedAt: updatedAt(),
 });

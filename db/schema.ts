@@ -1,5 +1,6 @@
 import { pgTable, text, timestamp } from "drizzle-orm/pg-core";
 import { organization, user } from "./auth-schema";
+import { processEnum } from "./enums";
 
 // better-auth's own tables (generated; see DEVELOPERS.md). A "shop" is a better-auth organization.
 export * from "./auth-schema";
@@ -10,10 +11,11 @@ export const shopSettings = pgTable("shop_settings", {
     .primaryKey()
     .references(() => organization.id, { onDelete: "cascade" }),
   defaultAlloy: text("default_alloy"),
-  defaultProcess: text("default_process"),
+  defaultProcess: processEnum("default_process"),
   updatedAt: timestamp("updated_at", { withTimezone: true }).defaultNow().notNull(),
   updatedBy: text("updated_by").references(() => user.id, { onDelete: "set null" }),
 });
+export * from "./enums";
 export * from "./notebook-schema";
 export * from "./mentor-schema";
 export * from "./search-schema";

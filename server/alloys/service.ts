@@ -3,7 +3,6 @@ import { db } from "../db";
 import { alloys, user } from "../../db/schema";
 import type { Alloy, AlloyInput } from "../../lib/notebook-schemas";
 import { BUILT_IN_ALLOYS, type AlloySpec } from "../../rules/alloys";
-import type { AlloyFamily } from "../../rules/fact-catalog";
 import { HttpError } from "../http/errors";
 import { iso, isUniqueViolation, omit, personRef } from "../notebook/shared";
 
@@ -58,7 +57,7 @@ export async function alloyRowsFor(shopId: string) {
 export const toAlloy = ({ a, byName }: { a: AlloyRow; byName: string | null }): Alloy => ({
   id: a.id,
   designation: a.designation,
-  family: a.family as AlloyFamily,
+  family: a.family,
   solidusC: a.solidusC,
   liquidusC: a.liquidusC,
   densityKgM3: a.densityKgM3,
@@ -72,7 +71,7 @@ export const toAlloy = ({ a, byName }: { a: AlloyRow; byName: string | null }): 
 
 export const toAlloySpec = (a: AlloyRow): AlloySpec => ({
   designation: a.designation,
-  family: a.family as AlloyFamily,
+  family: a.family,
   solidusC: a.solidusC,
   liquidusC: a.liquidusC,
   densityKgM3: a.densityKgM3,

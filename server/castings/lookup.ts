@@ -1,7 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "../db";
 import { castings } from "../../db/schema";
-import type { Casting, Outcome } from "../../lib/notebook-schemas";
+import type { Casting } from "../../lib/notebook-schemas";
 import { notFound } from "../http/errors";
 import { iso, omit, personRef } from "../notebook/shared";
 
@@ -21,7 +21,7 @@ export async function castingInShop(shopId: string, id: number, tx: Tx | typeof 
 export function toCasting(c: CastingRow, byName: string): Casting {
   return {
     ...omit(c, ["shopId", "createdBy", "createdAt", "updatedAt"]),
-    outcome: c.outcome as Outcome | null,
+    outcome: c.outcome,
     createdBy: personRef(c.createdBy, byName),
     createdAt: iso(c.createdAt),
     updatedAt: iso(c.updatedAt),

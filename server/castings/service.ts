@@ -9,7 +9,6 @@ import {
   type CastingSummary,
   type Page,
 } from "../../lib/notebook-schemas";
-import type { DefectType, Process } from "../../rules/case";
 import type { ShopMember } from "../auth/shop-access";
 import { notFound, parseOr400 } from "../http/errors";
 import { insertMarks, marksOf } from "../marks/service";
@@ -114,10 +113,10 @@ export async function castingSummaries(
       outcome: c.outcome as CastingSummary["outcome"],
       pouredOn,
       alloy,
-      process: process as Process,
+      process: process,
       markCount: own.length,
       photoCount: ownPics.length,
-      defectTypes: [...new Set(own.map((mk) => mk.type as DefectType))],
+      defectTypes: [...new Set(own.map((mk) => mk.type))],
       thumbUrl: ownPics[0] ? photoUrls(ownPics[0].id).thumbUrl : null,
       createdBy: personRef(c.createdBy, byName),
       createdAt: iso(c.createdAt),

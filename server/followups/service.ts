@@ -1,8 +1,7 @@
 import { and, asc, eq, gt, inArray, or, sql } from "drizzle-orm";
 import { db } from "../db";
 import { castings, fixesTried, melts, user } from "../../db/schema";
-import type { CastingRef, ChainLink, FixInput, FixPatch, FixTried, Followups, Worked } from "../../lib/review-schemas";
-import type { Outcome } from "../../lib/notebook-schemas";
+import type { CastingRef, ChainLink, FixInput, FixPatch, FixTried, Followups } from "../../lib/review-schemas";
 import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
 import { HttpError, notFound } from "../http/errors";
@@ -29,9 +28,7 @@ async function refs(ids: number[]): Promise<Map<number, CastingRef & { meltOrder
     .from(castings)
     .innerJoin(melts, eq(melts.id, castings.meltId))
     .where(inArray(castings.id, ids));
-  return new Map(
-    rows.map((r) => [r.id, { ...r, outcome: r.outcome as Outcome | null, meltOrder: [r.pouredOn, r.meltId] }]),
-  );
+  return new Map(rows.map((r) => [r.id, { ...r, outcome: r.outcome, meltOrder: [r.pouredOn, r.meltId] }]));
 }
 const bare = (r: CastingRef & { meltOrder?: unknown }): CastingRef => ({
   id: r.id,
@@ -54,7 +51,7 @@ async function toFixes(rows: FixRow[]): Promise<FixTried[]> {
       castingId: r.castingId,
       fix: r.fix,
       next: n ? bare(n) : null,
-      worked: r.worked as Worked | null,
+      worked: r.worked,
       createdBy: personRef(r.createdBy, people.find((p) => p.id === r.createdBy)?.name ?? ""),
       createdAt: iso(r.createdAt),
       updatedAt: iso(r.updatedAt),
@@ -94,7 +91,7 @@ async function laterOfPart(shopId: string, castingId: number): Promise<CastingRe
     )
     .orderBy(asc(melts.pouredOn), asc(melts.id), asc(castings.id))
     .limit(50);
-  return rows.map((r) => ({ ...r, outcome: r.outcome as Outcome | null }));
+  return rows.map((r) => ({ ...r, outcome: r.outcome }));
 }
 
 /** Walks the links back to the first casting and forward to the last, each step once. */

@@ -2,7 +2,6 @@ import { and, asc, eq, inArray } from "drizzle-orm";
 import { db } from "../db";
 import { defectMarks, photos, user } from "../../db/schema";
 import { markInput, type Mark, type MarkInput } from "../../lib/notebook-schemas";
-import type { DefectLocation, DefectType } from "../../rules/case";
 import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
 import { HttpError, notFound, parseOr400 } from "../http/errors";
@@ -18,8 +17,8 @@ export function toMark(r: MarkRow, byName: string): Mark {
     photoId: r.photoId,
     x: r.x,
     y: r.y,
-    type: r.type as DefectType,
-    location: r.location as DefectLocation,
+    type: r.type,
+    location: r.location,
     severity: r.severity,
     note: r.note,
     createdBy: personRef(r.createdBy, byName),

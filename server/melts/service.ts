@@ -10,7 +10,7 @@ import {
   type MeltSummary,
   type Page,
 } from "../../lib/notebook-schemas";
-import type { Charge, DegassingMethod, Process } from "../../rules/case";
+import type { Process } from "../../rules/case";
 import type { ShopMember } from "../auth/shop-access";
 import { notFound, parseOr400 } from "../http/errors";
 import { requireAlloy } from "../alloys/service";
@@ -32,9 +32,9 @@ export function toMelt({ m, alloy, byName }: { m: MeltRow; alloy: string; byName
   return {
     ...omit(m, ["shopId", "alloyId", "createdBy", "createdAt", "updatedAt"]),
     alloy,
-    process: m.process as Process,
-    charge: m.charge as Charge | null,
-    degassing: m.degassing as DegassingMethod | null,
+    process: m.process,
+    charge: m.charge,
+    degassing: m.degassing,
     createdBy: personRef(m.createdBy, byName),
     createdAt: iso(m.createdAt),
     updatedAt: iso(m.updatedAt),
@@ -105,7 +105,7 @@ export async function listMelts(
     id: m.id,
     pouredOn: m.pouredOn,
     alloy,
-    process: m.process as Process,
+    process: m.process,
     furnace: m.furnace,
     pourTempC: m.pourTempC,
     castingCount,

@@ -11,7 +11,6 @@ import {
   user,
 } from "../../db/schema";
 import type { CaseReview, Confirmation, ConfirmationInput, QueueItem, ReviewRequest } from "../../lib/review-schemas";
-import type { DefectType, Process } from "../../rules/case";
 import type { DiagnosisResult } from "../../rules/engine";
 import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
 import type { ShopMember } from "../auth/shop-access";
@@ -176,8 +175,8 @@ export async function reviewQueue(shopId: string): Promise<QueueItem[]> {
       partName,
       pouredOn,
       alloy,
-      process: process as Process,
-      defectTypes: [...new Set(marks.filter((mk) => mk.castingId === r.castingId).map((mk) => mk.type as DefectType))],
+      process: process,
+      defectTypes: [...new Set(marks.filter((mk) => mk.castingId === r.castingId).map((mk) => mk.type))],
       note: r.note,
       askedBy: who(r.createdBy),
       askedAt: iso(r.createdAt),

@@ -15,7 +15,6 @@ import { ruleSetFor, type DiagnosisResult } from "../../rules/engine";
 import type { CauseWithRecord } from "../../lib/review-schemas";
 import { checkRule, type KbCause, type KbRule, type RuleSet } from "../../rules/kb-schema";
 import { BUILT_IN_RULE_SET, ruleSetVersion } from "../../rules/knowledge-base";
-import type { RuleStatus } from "../../rules/rule-diff";
 import { storedCases } from "./cases";
 
 /**
@@ -29,7 +28,7 @@ export const shopRuleKey = (shopRuleId: number) => `shop-${shopRuleId}`;
 /** The version a diagnosis uses: the newest published one, unless the rule was retired after it. */
 export function versionInUse(versions: VersionRow[]): VersionRow | undefined {
   for (const v of [...versions].sort((a, b) => b.version - a.version)) {
-    if ((v.status as RuleStatus) === "retired") return undefined;
+    if (v.status === "retired") return undefined;
     if (v.status === "published") return v;
   }
   return undefined;

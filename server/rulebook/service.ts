@@ -6,7 +6,6 @@ import { backtest } from "../../rules/backtest";
 import { weightFactorOf } from "../../rules/calibration";
 import type { KbRule } from "../../rules/kb-schema";
 import { BUILT_IN_RULE_FILES, BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
-import type { RuleStatus } from "../../rules/rule-diff";
 import { contradictions } from "../../rules/satisfiable";
 import { notFound } from "../http/errors";
 import { iso, personRef } from "../notebook/shared";
@@ -48,9 +47,7 @@ export const latest = (vs: VersionRow[]) => vs[vs.length - 1];
 
 export async function rulebook(shopId: string): Promise<Rulebook> {
   const l = await shopLearning(shopId);
-  const shopRows = [...l.versions.values()].map((vs) =>
-    row(l, latest(vs).rule, latest(vs).status as RuleStatus, !!versionInUse(vs)),
-  );
+  const shopRows = [...l.versions.values()].map((vs) => row(l, latest(vs).rule, latest(vs).status, !!versionInUse(vs)));
   const builtIn = BUILT_IN_RULE_SET.rules.map((r) => row(l, r, "built-in", !l.off.has(r.id)));
   return {
     rules: [...shopRows.reverse(), ...builtIn],
@@ -86,18 +83,13 @@ export async function ruleDetail(shopId: string, ruleId: string): Promise<RuleDe
   const versions: RuleVersion[] = (vs ?? [])
     .map((v) => ({
       version: v.version,
-      status: v.status as RuleStatus,
+      status: v.status,
       rule: v.rule,
       createdBy: who(v.createdBy),
       createdAt: iso(v.createdAt),
     }))
     .reverse();
-  const base = row(
-    l,
-    rule,
-    vs ? (latest(vs).status as RuleStatus) : "built-in",
-    vs ? !!versionInUse(vs) : !l.off.has(rule.id),
-  );
+  const base = row(l, rule, vs ? latest(vs).status : "built-in", vs ? !!versionInUse(vs) : !l.off.has(rule.id));
   return {
     ...base,
     rule,
