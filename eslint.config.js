@@ -37,5 +37,12 @@ export default tseslint.config(
     files: ["server/env.ts", "lib/client-env.ts", "scripts/**", "tests/**", "*.config.ts", "*.config.js"],
     rules: { "no-restricted-properties": "off" },
   },
+  {
+    files: ["*.cjs"],
+    languageOptions: {
+      sourceType: "commonjs",
+      globals: { require: "readonly", module: "writable", __dirname: "readonly" },
+    },
+  },
   ...layerRules,
 );

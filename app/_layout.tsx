@@ -1,25 +1,42 @@
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { useFonts } from "expo-font";
+import { FontDisplay, useFonts } from "expo-font";
 import { Stack } from "expo-router";
 import { useState } from "react";
-import { ActivityIndicator, View } from "react-native";
-import { colors } from "@/constants/theme";
+import { ActivityIndicator, Platform, StyleSheet, Text, View } from "react-native";
+import { colors, fontSize, space } from "@/constants/theme";
 import { authClient } from "@/lib/auth-client";
+
+/** The web loads WOFF2 (a third of the TTF's bytes); native builds keep the TTF. */
+const LORA = {
+  "Lora-Regular": {
+    uri:
+      Platform.OS === "web"
+        ? require("@/assets/fonts/Lora_400Regular.woff2")
+        : require("@/assets/fonts/Lora_400Regular.ttf"),
+    display: FontDisplay.SWAP,
+  },
+  "Lora-SemiBold": {
+    uri:
+      Platform.OS === "web"
+        ? require("@/assets/fonts/Lora_600SemiBold.woff2")
+        : require("@/assets/fonts/Lora_600SemiBold.ttf"),
+    display: FontDisplay.SWAP,
+  },
+};
 
 /** Fonts, one QueryClient, and the guard: signed-in people see (app), everyone else (auth). */
 export default function RootLayout() {
   const [queryClient] = useState(
     () => new QueryClient({ defaultOptions: { queries: { retry: 1, staleTime: 30_000 } } }),
   );
-  const [fontsLoaded] = useFonts({
-    "Lora-Regular": require("@/assets/fonts/Lora_400Regular.ttf"),
-    "Lora-SemiBold": require("@/assets/fonts/Lora_600SemiBold.ttf"),
-  });
+  const [fontsLoaded] = useFonts(LORA);
   const { data: session, isPending } = authClient.useSession();
 
-  if (!fontsLoaded || isPending) {
+  // On the web the page does not wait for Lora: headings show in the fallback serif and swap in.
+  if ((!fontsLoaded && Platform.OS !== "web") || isPending) {
     return (
-      <View style={{ flex: 1, alignItems: "center", justifyContent: "center", backgroundColor: colors.background }}>
+      <View style={styles.opening}>
+        <Text style={styles.name}>Shakeout Casebook</Text>
         <ActivityIndicator color={colors.accent} />
       </View>
     );
@@ -38,3 +55,14 @@ export default function RootLayout() {
     </QueryClientProvider>
   );
 }
+
+const styles = StyleSheet.create({
+  opening: {
+    flex: 1,
+    alignItems: "center",
+    justifyContent: "center",
+    gap: space.lg,
+    backgroundColor: colors.background,
+  },
+  name: { fontSize: fontSize.title, color: colors.ink, fontFamily: "Georgia, serif" },
+});

@@ -22,14 +22,20 @@ export function useAlloys() {
   });
 }
 
+/** The pour log as it first opens: the shell fetches it beside the person's shop (hooks/use-first-screens.ts). */
+export const FIRST_MELTS_PAGE: MeltListQuery = { page: 1, pageSize: 20, sort: "date-desc" };
+
+export const meltsQuery = (q: MeltListQuery) => ({
+  queryKey: meltKeys.list(q),
+  queryFn: () =>
+    api<Page<MeltSummary>>(
+      `/melts?${new URLSearchParams({ page: String(q.page), pageSize: String(q.pageSize), sort: q.sort })}`,
+    ),
+});
+
 export function useMelts(q: MeltListQuery) {
-  const search = new URLSearchParams({ page: String(q.page), pageSize: String(q.pageSize), sort: q.sort });
   // The last page stays on screen while the next one loads, so the list does not jump.
-  return useQuery({
-    queryKey: meltKeys.list(q),
-    queryFn: () => api<Page<MeltSummary>>(`/melts?${search}`),
-    placeholderData: keepPreviousData,
-  });
+  return useQuery({ ...meltsQuery(q), placeholderData: keepPreviousData });
 }
 
 export function useMelt(id: number) {

@@ -5,8 +5,14 @@ import { SI_UNITS, type Units } from "@/lib/units";
 export const unitsKey = ["me", "units"] as const;
 
 /** The person's units (GET /api/people/me/units). */
+export const unitsQuery = {
+  queryKey: unitsKey,
+  queryFn: () => api<Units>("/people/me/units"),
+  staleTime: 5 * 60_000,
+};
+
 export function useUnitsQuery() {
-  return useQuery({ queryKey: unitsKey, queryFn: () => api<Units>("/people/me/units"), staleTime: 5 * 60_000 });
+  return useQuery(unitsQuery);
 }
 
 /** The units to show values in: SI until the person's choice has loaded (values are stored SI). */

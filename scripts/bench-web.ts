@@ -68,6 +68,8 @@ try {
 
   await page.goto(`${baseUrl}/sign-in`, { waitUntil: "networkidle" });
   await page.getByLabel("E-mail").waitFor();
+  // The first paint is the opening screen from index.html; the form appears once the script has run.
+  const formMs = await page.evaluate(() => performance.now());
   const firstLoad = { ...first };
   const fcpMs = await firstPaintMs(page);
 
@@ -103,6 +105,7 @@ try {
   const rows: [string, string, string][] = [
     ["first load of the sign-in page", `${kb(firstLoad.bytes)} in ${firstLoad.requests} requests`, "<= 500 KB"],
     ["first contentful paint", `${fcpMs.toFixed(0)} ms`, "<= 1200 ms"],
+    ["sign-in form on screen (at most)", `${formMs.toFixed(0)} ms`, "(no aim; after the script runs)"],
     ["sign-in submit to the first melt card", `${firstCardMs} ms`, "<= 1500 ms"],
     ["repeat visit (signed in)", `${kb(repeat.bytes)} in ${repeat.requests} requests`, "< 20 KB"],
   ];

@@ -3,6 +3,7 @@ import { existsSync, readdirSync, statSync } from "node:fs";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { compressWebExport } from "./web-compress";
+import { addOpeningShell } from "./web-shell";
 
 /** Source of the web app: a newer file here than dist/index.html means the export is stale. */
 const SOURCES = ["app", "components", "hooks", "lib", "constants", "assets", "rules", "app.json", "package.json"];
@@ -33,6 +34,7 @@ export function ensureWebBuild(root: string): string {
       stdio: ["ignore", "inherit", "inherit"],
       env: { ...process.env, CI: "1", EXPO_OFFLINE: "1", EXPO_NO_TELEMETRY: "1" },
     });
+    addOpeningShell(outDir);
     const c = compressWebExport(outDir);
     console.log(`Compressed ${c.files} files: ${kb(c.bytes)} -> ${kb(c.brotliBytes)} with brotli.`);
   }

@@ -6,6 +6,7 @@ import { Notice } from "@/components/ui/notice";
 import { ShopHeader } from "@/components/shops/shop-header";
 import { colors } from "@/constants/theme";
 import { useIsWide } from "@/hooks/use-layout";
+import { usePrefetchFirstScreens } from "@/hooks/use-first-screens";
 import { useMe } from "@/hooks/use-me";
 
 const SECTIONS = [
@@ -20,6 +21,7 @@ const SECTIONS = [
 export default function AppLayout() {
   const wide = useIsWide();
   const me = useMe();
+  usePrefetchFirstScreens();
   if (me.isPending) return <ActivityIndicator style={styles.fill} color={colors.accent} />;
   if (me.error) return <Notice tone="error">{me.error.message}</Notice>;
   if (!me.data.activeShop) return <CreateShopForm />;

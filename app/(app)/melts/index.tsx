@@ -12,10 +12,10 @@ import { Loading } from "@/components/ui/query-state";
 import { Screen } from "@/components/ui/screen";
 import { space } from "@/constants/theme";
 import { useIsWide } from "@/hooks/use-layout";
-import { useMelts, type MeltSort } from "@/hooks/use-melts";
+import { FIRST_MELTS_PAGE, useMelts, type MeltSort } from "@/hooks/use-melts";
 import { useUnits } from "@/hooks/use-units";
 
-const PAGE_SIZE = 20;
+const PAGE_SIZE = FIRST_MELTS_PAGE.pageSize;
 const ORDER = [
   { value: "date-desc", label: "newest" },
   { value: "date-asc", label: "oldest" },
@@ -29,7 +29,7 @@ export default function MeltsScreen() {
   const units = useUnits();
   const router = useRouter();
   const [page, setPage] = useState(1);
-  const [sort, setSort] = useState<MeltSort>("date-desc");
+  const [sort, setSort] = useState<MeltSort>(FIRST_MELTS_PAGE.sort);
   const melts = useMelts({ page, pageSize: PAGE_SIZE, sort });
   const resort = (s: MeltSort) => {
     setSort(s);
