@@ -3,8 +3,8 @@ import { env } from "../env";
 
 export type Mail = { to: string; subject: string; text: string; html: string };
 
-/** Waits before each further attempt; a mail server that is briefly away gets about 15 s to come back. */
-const RETRY_DELAYS_MS = [1000, 4000, 10000];
+/** Waits before each further attempt: with the default 1 s, a mail server briefly away gets 15 s to come back. */
+const retryDelaysMs = () => [1, 4, 10].map((x) => x * env.MAIL_RETRY_MS);
 let transport: Transporter | undefined;
 const inFlight = new Set<Promise<boolean>>();
 
@@ -31,7 +31,7 @@ async function deliver(mail: Mail): Promise<boolean> {
       await transporter().sendMail({ from: env.MAIL_FROM, ...mail });
       return true;
     } catch (err) {
-      const delay = RETRY_DELAYS_MS[attempt];
+      const delay = retryDelaysMs()[attempt];
       const what = `mail "${mail.subject}" to ${mail.to}`;
       if (delay === undefined) {
         console.error(`Gave up on ${what} after ${attempt + 1} attempts: ${(err as Error).message}`);

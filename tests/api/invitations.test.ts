@@ -205,3 +205,22 @@ describe("who may invite, and what is refused", () => {
     expect((await request(app).get(`/api/people/invitations/${id}/open`)).body.state).toBe("pending");
   });
 });
+
+describe("the development inbox", () => {
+  it("lists caught messages with their links for an owner; 403 for others, 401 signed out", async () => {
+    const { owner, mentor, caster } = await shopWithCrew("Inbox Shop");
+    const email = uniqueEmail("inbox-guest");
+    await invite(owner, email, "caster");
+    const id = await invitationIdFromMail(email);
+    const inbox = await owner.agent.get("/api/people/dev/inbox");
+    expect(inbox.status).toBe(200);
+    const message = inbox.body.messages.find((m: { to: string[] }) => m.to.includes(email));
+    expect(message.subject).toContain("Inbox Shop");
+    expect(message.links).toContain(`http://127.0.0.1:8080/invitation/${id}`);
+    const one = await owner.agent.get(`/api/people/dev/inbox/${message.id}`);
+    expect(one.body.text).toContain("Inbox Shop");
+    expect((await owner.agent.get("/api/people/dev/inbox/..%2F..%2Fetc%2Fpasswd")).status).toBe(404);
+    for (const p of [mentor, caster]) expect((await p.agent.get("/api/people/dev/inbox")).status).toBe(403);
+    expect((await request(app).get("/api/people/dev/inbox")).status).toBe(401);
+  });
+});
