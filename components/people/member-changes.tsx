@@ -1,0 +1,36 @@
+import { StyleSheet, Text, View } from "react-native";
+import { Notice } from "@/components/ui/notice";
+import { colors, space } from "@/constants/theme";
+import { useMemberChanges } from "@/hooks/use-people";
+import { formatMoment } from "@/lib/dates";
+import { MEMBER_CHANGE_WORDS } from "@/lib/people-schemas";
+
+/** Who changed what about the shop's people, and when: newest first. */
+export function MemberChanges() {
+  const changes = useMemberChanges(true);
+  if (changes.error) return <Notice tone="error">{changes.error.message}</Notice>;
+  if (!changes.data) return null;
+  if (changes.data.length === 0) return <Text style={styles.meta}>No changes yet.</Text>;
+  return (
+    <View style={styles.list}>
+      {changes.data.map((c) => (
+        <View key={c.id} style={styles.row} testID="member-change">
+          <Text style={styles.line}>
+            <Text style={styles.who}>{c.actorName}</Text> {MEMBER_CHANGE_WORDS[c.action] ?? c.action}{" "}
+            {c.action === "joined" || c.action === "left" ? "" : c.subjectEmail}
+            {c.detail ? ` (${c.detail})` : ""}
+          </Text>
+          <Text style={styles.meta}>{formatMoment(c.at)}</Text>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { gap: space.sm },
+  row: { gap: 2, borderBottomWidth: 1, borderBottomColor: colors.line, paddingBottom: space.sm },
+  line: { fontSize: 15, color: colors.ink, lineHeight: 21 },
+  who: { fontWeight: "600" },
+  meta: { fontSize: 13, color: colors.muted },
+});
