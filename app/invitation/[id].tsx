@@ -1,6 +1,6 @@
 import { useQuery } from "@tanstack/react-query";
 import { Link, useLocalSearchParams } from "expo-router";
-import { StyleSheet, Text } from "react-native";
+import { StyleSheet } from "react-native";
 import { AuthCard } from "@/components/auth/auth-card";
 import { InvitationAnswer } from "@/components/people/invitation-answer";
 import { InvitationClosed } from "@/components/people/invitation-closed";
