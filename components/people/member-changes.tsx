@@ -1,9 +1,16 @@
 import { StyleSheet, Text, View } from "react-native";
 import { Notice } from "@/components/ui/notice";
 import { colors, space } from "@/constants/theme";
-import { useMemberChanges } from "@/hooks/use-people";
+import { useMemberChanges, type MemberChange } from "@/hooks/use-people";
 import { formatMoment } from "@/lib/dates";
 import { MEMBER_CHANGE_WORDS } from "@/lib/people-schemas";
+
+/** "invited a@b.example (mentor)"; joining and leaving concern the actor, so they name no one else. */
+function sentence(c: MemberChange): string {
+  const verb = MEMBER_CHANGE_WORDS[c.action] ?? c.action;
+  const whom = c.action === "joined" || c.action === "left" ? "" : ` ${c.subjectEmail}`;
+  return `${verb}${whom}${c.detail ? ` (${c.detail})` : ""}`;
+}
 
 /** Who changed what about the shop's people, and when: newest first. */
 export function MemberChanges() {
@@ -16,9 +23,7 @@ export function MemberChanges() {
       {changes.data.map((c) => (
         <View key={c.id} style={styles.row} testID="member-change">
           <Text style={styles.line}>
-            <Text style={styles.who}>{c.actorName}</Text> {MEMBER_CHANGE_WORDS[c.action] ?? c.action}{" "}
-            {c.action === "joined" || c.action === "left" ? "" : c.subjectEmail}
-            {c.detail ? ` (${c.detail})` : ""}
+            <Text style={styles.who}>{c.actorName}</Text> {sentence(c)}
           </Text>
           <Text style={styles.meta}>{formatMoment(c.at)}</Text>
         </View>

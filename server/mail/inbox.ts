@@ -20,7 +20,7 @@ export async function caughtMessage(name: string) {
   if (!raw) return undefined;
   const mail = await simpleParser(raw);
   const to = [mail.to].flat().flatMap((a) => a?.value.map((v) => v.address ?? "") ?? []);
-  const text = mail.text ?? "";
+  const text = (mail.text ?? "").trim();
   return {
     id: name,
     to,
