@@ -6,6 +6,21 @@ const baseUrl = inject("baseUrl");
 const browser = useBrowser();
 
 describe("inviting someone new", () => {
+  it("tells a different signed-in account that the link is not theirs", async () => {
+    const owner = await signedInAs(browser(), baseUrl, PHONE, "owner");
+    const email = `someone-else-${Date.now()}@test.example`;
+    const res = await owner.request.post(`${baseUrl}/api/people/invitations`, {
+      data: { email, role: "caster" },
+      headers: { Origin: baseUrl },
+    });
+    expect(res.status()).toBe(201);
+    const link = linkIn((await waitForMail(email))[0]);
+    await owner.goto(link.href);
+    await expect.poll(() => owner.getByTestId("wrong-account").count(), { timeout: 15000 }).toBe(1);
+    await shot(owner, "phone-invitation-wrong-account");
+    await owner.context().close();
+  });
+
   it("owner invites -> the message is caught over SMTP -> its link, in chromium, signs the person up into the shop", async () => {
     const owner = await signedInAs(browser(), baseUrl, WIDE, "owner");
     await owner.getByRole("tab", { name: "More" }).click();
@@ -35,6 +50,18 @@ describe("inviting someone new", () => {
     expect(await page.getByTestId("active-shop").textContent()).toBe("Quillstone Foundry Lab");
     await shot(page, "phone-after-joining");
     await page.context().close();
+
+    // Used once: the same link now says so, at both widths.
+    for (const [name, size] of [
+      ["phone", PHONE],
+      ["wide", WIDE],
+    ] as const) {
+      const again = await (await browser().newContext({ viewport: size })).newPage();
+      await again.goto(link.href);
+      await seen(again, /already been used/);
+      await shot(again, `${name}-invitation-used`);
+      await again.context().close();
+    }
 
     // The owner's record now shows the join.
     await owner.reload();
