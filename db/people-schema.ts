@@ -1,4 +1,4 @@
-import { index, pgTable, serial, text, timestamp } from "drizzle-orm/pg-core";
+import { boolean, index, pgTable, serial, text, timestamp } from "drizzle-orm/pg-core";
 import { organization, user } from "./auth-schema";
 
 /**
@@ -26,3 +26,15 @@ export const memberChanges = pgTable(
   },
   (t) => [index("member_changes_shop_idx").on(t.shopId, t.createdAt)],
 );
+
+/** Which e-mail notices a person wants; no row means all of them. */
+export const noticeSettings = pgTable("notice_settings", {
+  userId: text("user_id")
+    .primaryKey()
+    .references(() => user.id, { onDelete: "cascade" }),
+  /** Mentors and owners: a caster asked for a review. */
+  reviewRequested: boolean("review_requested").default(true).notNull(),
+  /** The person whose casting it is: a mentor confirmed or corrected its cause. */
+  causeConfirmed: boolean("cause_confirmed").default(true).notNull(),
+  updatedAt: timestamp("updated_at", { withTimezone: true }).defaultNow().notNull(),
+});

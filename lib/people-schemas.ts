@@ -53,3 +53,12 @@ export const MEMBER_CHANGE_WORDS: Record<string, string> = {
   "ownership-transferred": "handed ownership to",
   left: "left",
 };
+
+/** E-mail notices each person can turn off. */
+export const noticeSettingsInput = z
+  .object({
+    reviewRequested: z.boolean({ error: "true or false" }),
+    causeConfirmed: z.boolean({ error: "true or false" }),
+  })
+  .strict();
+export type NoticeSettings = z.infer<typeof noticeSettingsInput>;

@@ -54,3 +54,44 @@ export function passwordResetMail(p: { to: string; url: string; shopNames: strin
     { url: p.url, label: "Set a new password" },
   );
 }
+
+const TURN_OFF = "You can turn these notices off under More, Your notices.";
+
+export function reviewRequestedMail(p: {
+  to: string;
+  shopName: string;
+  casterName: string;
+  partName: string;
+  note: string | null;
+  url: string;
+}): Mail {
+  return compose(
+    p.to,
+    `${p.shopName}: ${p.casterName} asks for a review of ${p.partName}`,
+    [
+      `${p.casterName} asks a mentor of ${p.shopName} to look at the casting "${p.partName}" and confirm what caused its defects.`,
+      ...(p.note ? [`Their note: ${p.note}`] : []),
+      TURN_OFF,
+    ],
+    { url: p.url, label: "Open the casting" },
+  );
+}
+
+export function causeConfirmedMail(p: {
+  to: string;
+  shopName: string;
+  mentorName: string;
+  partName: string;
+  causeTitle: string;
+  url: string;
+}): Mail {
+  return compose(
+    p.to,
+    `${p.shopName}: ${p.mentorName} answered on ${p.partName}`,
+    [
+      `${p.mentorName} of ${p.shopName} looked at your casting "${p.partName}" and gave its cause as: ${p.causeTitle}.`,
+      TURN_OFF,
+    ],
+    { url: p.url, label: "See the answer" },
+  );
+}

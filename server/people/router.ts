@@ -1,7 +1,13 @@
 import { fromNodeHeaders } from "better-auth/node";
 import { Router, type Request, type RequestHandler } from "express";
 import { unitsInput } from "../../lib/notebook-schemas";
-import { changePasswordInput, displayNameInput, inviteInput, roleInput } from "../../lib/people-schemas";
+import {
+  changePasswordInput,
+  displayNameInput,
+  inviteInput,
+  noticeSettingsInput,
+  roleInput,
+} from "../../lib/people-schemas";
 import { getAuth } from "../auth/auth";
 import { allow, currentMember, requireShopMember, sessionOf } from "../auth/shop-access";
 import { HttpError, notFound, parseOr400 } from "../http/errors";
@@ -10,6 +16,7 @@ import { env } from "../env";
 import { authCall } from "./auth-calls";
 import { changesOf } from "./changes";
 import * as members from "./members";
+import { noticeSettingsOf, saveNoticeSettings } from "./notices";
 import { saveUnits, unitsOf } from "./service";
 
 export const peopleRouter = Router();
@@ -28,6 +35,15 @@ peopleRouter.get("/me/units", async (req, res) => {
 peopleRouter.put("/me/units", async (req, res) => {
   const userId = await signedInUserId(req);
   res.json(await saveUnits(userId, parseOr400(unitsInput, req.body)));
+});
+
+peopleRouter.get("/me/notices", async (req, res) => {
+  res.json(await noticeSettingsOf(await signedInUserId(req)));
+});
+
+peopleRouter.put("/me/notices", async (req, res) => {
+  const userId = await signedInUserId(req);
+  res.json(await saveNoticeSettings(userId, parseOr400(noticeSettingsInput, req.body)));
 });
 
 peopleRouter.patch("/me", async (req, res) => {
