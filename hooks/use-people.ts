@@ -1,6 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api";
-import type { InviteInput } from "@/lib/people-schemas";
+import type { InviteInput, NoticeSettings } from "@/lib/people-schemas";
 import type { ShopRole } from "@/lib/permissions";
 import { meKey } from "./use-me";
 import { shopKeys } from "./use-shop";
@@ -93,3 +93,17 @@ export const useChangePassword = () =>
     mutationFn: (v: { currentPassword: string; newPassword: string }) =>
       api("/people/me/password", { method: "POST", body: v }),
   });
+
+const noticesKey = ["people", "notices"] as const;
+
+export function useNoticeSettings() {
+  return useQuery({ queryKey: noticesKey, queryFn: () => api<NoticeSettings>("/people/me/notices") });
+}
+
+export function useSaveNoticeSettings() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (v: NoticeSettings) => api<NoticeSettings>("/people/me/notices", { method: "PUT", body: v }),
+    onSuccess: (v) => queryClient.setQueryData(noticesKey, v),
+  });
+}

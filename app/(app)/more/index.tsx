@@ -6,6 +6,7 @@ import { InviteForm } from "@/components/people/invite-form";
 import { LeaveShop } from "@/components/people/leave-shop";
 import { MemberChanges } from "@/components/people/member-changes";
 import { MemberList } from "@/components/people/member-list";
+import { NoticeChooser } from "@/components/people/notice-chooser";
 import { PendingInvitations } from "@/components/people/pending-invitations";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
@@ -67,6 +68,8 @@ export default function MoreScreen() {
       <LeaveShop shopName={shop.data.name} />
       <Heading level={2}>Your account</Heading>
       {me.data ? <AccountForm name={me.data.user.name} /> : null}
+      <Heading level={2}>Your notices</Heading>
+      <NoticeChooser mentor={roleCan(shop.data.role, { review: ["confirm"] })} />
       <Heading level={2}>Your units</Heading>
       <Text style={styles.meta}>
         How you see and type temperatures, sizes and weights. Only for you; the shop's records stay the same.
