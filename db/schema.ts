@@ -11,6 +11,10 @@ export const shopSettings = pgTable("shop_settings", {
     .references(() => organization.id, { onDelete: "cascade" }),
   defaultAlloy: text("default_alloy"),
   defaultProcess: text("default_process"),
+  /** Units a new member starts with (C/F, mm/in, kg/lb); each person can change their own after. */
+  defaultTemperature: text("default_temperature"),
+  defaultLength: text("default_length"),
+  defaultMass: text("default_mass"),
   updatedAt: timestamp("updated_at", { withTimezone: true }).defaultNow().notNull(),
   updatedBy: text("updated_by").references(() => user.id, { onDelete: "set null" }),
 });

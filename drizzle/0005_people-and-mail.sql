@@ -16,6 +16,9 @@ CREATE TABLE "notice_settings" (
 	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
 );
 --> statement-breakpoint
+ALTER TABLE "shop_settings" ADD COLUMN "default_temperature" text;--> statement-breakpoint
+ALTER TABLE "shop_settings" ADD COLUMN "default_length" text;--> statement-breakpoint
+ALTER TABLE "shop_settings" ADD COLUMN "default_mass" text;--> statement-breakpoint
 ALTER TABLE "member_changes" ADD CONSTRAINT "member_changes_shop_id_organization_id_fk" FOREIGN KEY ("shop_id") REFERENCES "public"."organization"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "member_changes" ADD CONSTRAINT "member_changes_actor_id_user_id_fk" FOREIGN KEY ("actor_id") REFERENCES "public"."user"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "notice_settings" ADD CONSTRAINT "notice_settings_user_id_user_id_fk" FOREIGN KEY ("user_id") REFERENCES "public"."user"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint

@@ -1,6 +1,6 @@
 import { eq } from "drizzle-orm";
 import { db } from "../db";
-import { user } from "../../db/schema";
+import { personUnits, shopSettings, user } from "../../db/schema";
 import { env } from "../env";
 import { invitationMail, passwordResetMail } from "../mail/messages";
 import { sendMail } from "../mail/send";
@@ -27,6 +27,21 @@ type InvitationData = {
   inviter: { user: { name: string } };
 };
 
+/** A newcomer starts with the shop's default units, unless they already chose their own. */
+async function inheritShopUnits(userId: string, shopId: string) {
+  const [s] = await db.select().from(shopSettings).where(eq(shopSettings.shopId, shopId));
+  if (!s?.defaultTemperature && !s?.defaultLength && !s?.defaultMass) return;
+  await db
+    .insert(personUnits)
+    .values({
+      userId,
+      temperature: s.defaultTemperature ?? "C",
+      length: s.defaultLength ?? "mm",
+      mass: s.defaultMass ?? "kg",
+    })
+    .onConflictDoNothing();
+}
+
 /** Options for better-auth's organization plugin. */
 export const invitationOptions = {
   invitationExpiresIn: INVITATION_LIFETIME_S,
@@ -52,6 +67,7 @@ export const invitationOptions = {
       organization: { id: string };
     }) => {
       await db.update(user).set({ emailVerified: true }).where(eq(user.id, data.user.id));
+      await inheritShopUnits(data.user.id, data.organization.id);
       await recordChange({
         shopId: data.organization.id,
         actor: data.user,

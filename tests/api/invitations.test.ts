@@ -224,3 +224,38 @@ describe("the development inbox", () => {
     expect((await request(app).get("/api/people/dev/inbox")).status).toBe(401);
   });
 });
+
+describe("shop default units", () => {
+  it("a new member starts with the shop's units; someone who chose their own keeps them", async () => {
+    const { owner } = await shopWithCrew("Imperial Shop");
+    const set = await owner.agent
+      .patch("/api/shops/current/settings")
+      .send({ defaultTemperature: "F", defaultLength: "in", defaultMass: "lb" });
+    expect(set.status).toBe(200);
+    expect(set.body).toMatchObject({ defaultTemperature: "F", defaultLength: "in", defaultMass: "lb" });
+    expect((await owner.agent.patch("/api/shops/current/settings").send({ defaultMass: "stone" })).status).toBe(400);
+
+    const email = uniqueEmail("imperial-newcomer");
+    await invite(owner, email, "caster");
+    const newcomer = await signUpInvited(email);
+    expect((await accept(newcomer, await invitationIdFromMail(email))).status).toBe(200);
+    expect((await newcomer.agent.get("/api/people/me/units")).body).toEqual({
+      temperature: "F",
+      length: "in",
+      mass: "lb",
+    });
+    // Theirs to change afterwards.
+    await newcomer.agent.put("/api/people/me/units").send({ temperature: "C", length: "in", mass: "lb" });
+    expect((await newcomer.agent.get("/api/people/me/units")).body.temperature).toBe("C");
+
+    const metric = await signUp("metric-hand");
+    await metric.agent.put("/api/people/me/units").send({ temperature: "C", length: "mm", mass: "kg" });
+    await invite(owner, metric.email, "caster");
+    expect((await accept(metric, await invitationIdFromMail(metric.email))).status).toBe(200);
+    expect((await metric.agent.get("/api/people/me/units")).body).toEqual({
+      temperature: "C",
+      length: "mm",
+      mass: "kg",
+    });
+  });
+});
