@@ -51,6 +51,9 @@ export default function RootLayout() {
         <Stack.Protected guard={!signedIn}>
           <Stack.Screen name="(auth)" />
         </Stack.Protected>
+        {/* Links from e-mail open whether or not someone is signed in. */}
+        <Stack.Screen name="invitation/[id]" />
+        <Stack.Screen name="reset-password" />
       </Stack>
     </QueryClientProvider>
   );

@@ -1,6 +1,6 @@
 import { pgTable, text, timestamp } from "drizzle-orm/pg-core";
 import { organization, user } from "./auth-schema";
-import { processEnum } from "./enums";
+import { lengthUnitEnum, massUnitEnum, processEnum, temperatureUnitEnum } from "./enums";
 
 // better-auth's own tables (generated; see DEVELOPERS.md). A "shop" is a better-auth organization.
 export * from "./auth-schema";
@@ -12,6 +12,10 @@ export const shopSettings = pgTable("shop_settings", {
     .references(() => organization.id, { onDelete: "cascade" }),
   defaultAlloy: text("default_alloy"),
   defaultProcess: processEnum("default_process"),
+  /** Units a new member starts with (C/F, mm/in, kg/lb); each person can change their own after. */
+  defaultTemperature: temperatureUnitEnum("default_temperature"),
+  defaultLength: lengthUnitEnum("default_length"),
+  defaultMass: massUnitEnum("default_mass"),
   updatedAt: timestamp("updated_at", { withTimezone: true }).defaultNow().notNull(),
   updatedBy: text("updated_by").references(() => user.id, { onDelete: "set null" }),
 });
@@ -19,3 +23,4 @@ export * from "./enums";
 export * from "./notebook-schema";
 export * from "./mentor-schema";
 export * from "./search-schema";
+export * from "./people-schema";

@@ -9,6 +9,9 @@ export type Shop = {
   role: ShopRole;
   defaultAlloy: string | null;
   defaultProcess: string | null;
+  defaultTemperature: string | null;
+  defaultLength: string | null;
+  defaultMass: string | null;
 };
 export type ShopMemberRow = { userId: string; name: string; email: string; role: ShopRole };
 

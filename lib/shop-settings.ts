@@ -6,6 +6,9 @@ export const shopSettingsInput = z
   .object({
     defaultAlloy: z.string().trim().min(1, "choose an alloy").max(40).nullable(),
     defaultProcess: z.enum(PROCESSES, { error: `process must be one of: ${PROCESSES.join(", ")}` }).nullable(),
+    defaultTemperature: z.enum(["C", "F"], { error: "C or F" }).nullable(),
+    defaultLength: z.enum(["mm", "in"], { error: "mm or in" }).nullable(),
+    defaultMass: z.enum(["kg", "lb"], { error: "kg or lb" }).nullable(),
   })
   .partial()
   .strict();

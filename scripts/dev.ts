@@ -9,6 +9,7 @@ import { applyMigrations } from "../db/migrate";
 import { closeDb, db } from "../server/db";
 import { seedDemoShop } from "../server/seed/seed";
 import { startLocalPostgres, type LocalPostgres } from "./local-postgres";
+import { ensureLocalMail } from "./local-mail";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 let localDb: LocalPostgres | undefined;
@@ -20,6 +21,8 @@ if (!process.env.DATABASE_URL) {
   });
   process.env.DATABASE_URL = localDb.url;
 }
+// The catcher lives in this process, so it outlasts the server's reloads.
+const mailCatcher = await ensureLocalMail(root);
 const port = process.env.PORT ?? "8080";
 const metroPort = process.env.METRO_PORT ?? "8081";
 const childEnv = { ...process.env, PORT: port, METRO_URL: `http://127.0.0.1:${metroPort}` };
@@ -56,6 +59,7 @@ async function stop() {
   const late = setTimeout(() => children.forEach((c) => signalGroup(c, "SIGKILL")), 5000);
   await Promise.all(exited);
   clearTimeout(late);
+  await mailCatcher?.close();
   localDb?.stop();
   process.exit(0);
 }

@@ -1,6 +1,7 @@
 // `npm start`: the whole product on one machine. Starts (and first initialises) a PostgreSQL
 // cluster under .data/ unless DATABASE_URL is set, applies migrations, seeds the demo shop into
-// an empty database, builds the web app when stale, and serves API and app from one process.
+// an empty database, starts a local mail catcher unless SMTP_URL is set, builds the web app when
+// stale, and serves API and app from one process.
 import { fileURLToPath } from "node:url";
 import { join } from "node:path";
 import { applyMigrations } from "../db/migrate";
@@ -10,6 +11,7 @@ import { listen } from "../server/index";
 import { DEMO_PEOPLE } from "../server/seed/demo-people";
 import { seedDemoShop } from "../server/seed/seed";
 import { startLocalPostgres, type LocalPostgres } from "./local-postgres";
+import { ensureLocalMail } from "./local-mail";
 import { ensureWebBuild } from "./web-build";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
@@ -27,6 +29,7 @@ try {
   process.exit(1);
 }
 
+const mailCatcher = await ensureLocalMail(root);
 await applyMigrations(db);
 const seeded = await seedDemoShop();
 const webDir = ensureWebBuild(root);
@@ -47,6 +50,7 @@ async function stop() {
   console.log("\nStopping...");
   server.closeAllConnections?.();
   await new Promise((r) => server.close(r));
+  await mailCatcher?.close();
   await closeDb();
   localDb?.stop();
   process.exit(0);

@@ -16,6 +16,10 @@ const schema = z.object({
   UPLOAD_DIR: z.string().default("uploads"),
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().default("Shakeout Casebook <casebook@localhost>"),
+  /** Where the local mail catcher writes .eml files; the development inbox page reads them from here. */
+  MAIL_DIR: z.string().default(".data/mail"),
+  /** The first wait before a failed send is tried again; later waits are 4x and 10x this. */
+  MAIL_RETRY_MS: z.coerce.number().int().min(0).default(1000),
   /** Only for `npm run dev`: the Expo dev server's origin, allowed to call the API with cookies. */
   DEV_WEB_ORIGIN: z.string().url().optional(),
   /** Only for `npm run dev`: the Expo dev server that server/dev-server.ts passes non-API requests to. */

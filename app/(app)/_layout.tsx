@@ -8,6 +8,8 @@ import { colors } from "@/constants/theme";
 import { useIsWide } from "@/hooks/use-layout";
 import { usePrefetchFirstScreens } from "@/hooks/use-first-screens";
 import { useMe } from "@/hooks/use-me";
+import { useReviewQueue } from "@/hooks/use-review";
+import { roleCan } from "@/lib/permissions";
 
 const SECTIONS = [
   { name: "casebook", href: "/", label: "Casebook" },
@@ -22,6 +24,9 @@ export default function AppLayout() {
   const wide = useIsWide();
   const me = useMe();
   usePrefetchFirstScreens();
+  // Mentors and owners see how many cases wait for review beside the Rulebook (where the queue is).
+  const reviews = !!me.data?.activeShop && roleCan(me.data.activeShop.role, { review: ["confirm"] });
+  const queue = useReviewQueue(reviews);
   if (me.isPending) return <ActivityIndicator style={styles.fill} color={colors.accent} />;
   if (me.error) return <Notice tone="error">{me.error.message}</Notice>;
   if (!me.data.activeShop) return <CreateShopForm />;
@@ -31,7 +36,12 @@ export default function AppLayout() {
     <TabList style={wide ? styles.rail : styles.bar}>
       {SECTIONS.map((s) => (
         <TabTrigger key={s.name} name={s.name} href={s.href} asChild>
-          <NavButton label={s.label} wide={wide} />
+          <NavButton
+            label={s.label}
+            wide={wide}
+            count={s.name === "rulebook" ? queue.data?.length : undefined}
+            countLabel={`${queue.data?.length ?? 0} waiting for review`}
+          />
         </TabTrigger>
       ))}
     </TabList>

@@ -50,6 +50,9 @@ export default function SignIn() {
         onSubmitEditing={submit}
       />
       <Button label="Sign in" onPress={submit} busy={busy} />
+      <Link href="/forgot-password" style={styles.link}>
+        Forgot your password?
+      </Link>
       <Text style={styles.alt}>
         New here?{" "}
         <Link href="/sign-up" style={styles.link}>

@@ -16,6 +16,9 @@ export function ShopSettingsForm({ shop }: { shop: Shop }) {
   const mayEdit = roleCan(shop.role, { shop: ["settings"] });
   const [alloy, setAlloy] = useState(shop.defaultAlloy);
   const [process, setProcess] = useState(shop.defaultProcess as Process | null);
+  const [temperature, setTemperature] = useState(shop.defaultTemperature);
+  const [length, setLength] = useState(shop.defaultLength);
+  const [mass, setMass] = useState(shop.defaultMass);
   const save = useSaveShopSettings();
   useEffect(() => {
     setAlloy(shop.defaultAlloy);
@@ -33,13 +36,51 @@ export function ShopSettingsForm({ shop }: { shop: Shop }) {
         onChange={(p) => setProcess(p as Process)}
         disabled={!mayEdit}
       />
+      <ChoiceChips
+        label="New members start with temperatures in"
+        options={[
+          { value: "C", label: "°C" },
+          { value: "F", label: "°F" },
+        ]}
+        value={temperature}
+        onChange={setTemperature}
+        disabled={!mayEdit}
+      />
+      <ChoiceChips
+        label="... lengths in"
+        options={[
+          { value: "mm", label: "mm" },
+          { value: "in", label: "inches" },
+        ]}
+        value={length}
+        onChange={setLength}
+        disabled={!mayEdit}
+      />
+      <ChoiceChips
+        label="... weights in"
+        options={[
+          { value: "kg", label: "kg" },
+          { value: "lb", label: "lb" },
+        ]}
+        value={mass}
+        onChange={setMass}
+        disabled={!mayEdit}
+      />
       {save.error ? <Notice tone="error">{save.error.message}</Notice> : null}
       {save.isSuccess ? <Notice>Saved.</Notice> : null}
       {mayEdit ? (
         <Button
           label="Save defaults"
           busy={save.isPending}
-          onPress={() => save.mutate({ defaultAlloy: alloy, defaultProcess: process })}
+          onPress={() =>
+            save.mutate({
+              defaultAlloy: alloy,
+              defaultProcess: process,
+              defaultTemperature: temperature as "C" | "F" | null,
+              defaultLength: length as "mm" | "in" | null,
+              defaultMass: mass as "kg" | "lb" | null,
+            })
+          }
         />
       ) : null}
     </>

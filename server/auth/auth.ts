@@ -5,6 +5,7 @@ import { db } from "../db";
 import * as schema from "../../db/schema";
 import { ac, roles } from "../../lib/permissions";
 import { env } from "../env";
+import { invitationOptions, passwordResetOptions } from "../people/auth-hooks";
 
 /**
  * Sign-in with e-mail and password; shops are better-auth organizations, with our three roles.
@@ -16,14 +17,21 @@ function buildAuth() {
     secret: env.BETTER_AUTH_SECRET,
     trustedOrigins: [env.PUBLIC_URL, ...(env.DEV_WEB_ORIGIN ? [env.DEV_WEB_ORIGIN] : [])],
     database: drizzleAdapter(db, { provider: "pg", schema }),
-    emailAndPassword: { enabled: true, minPasswordLength: 8, maxPasswordLength: 128 },
+    emailAndPassword: {
+      enabled: true,
+      minPasswordLength: 8,
+      maxPasswordLength: 128,
+      // Password reset by e-mail (issue 10): server/people/auth-hooks.ts.
+      ...passwordResetOptions,
+    },
     telemetry: { enabled: false },
     plugins: [
       organization({
         ac,
         roles,
         creatorRole: "owner",
-        // Invitations by e-mail arrive with the team-management issue; until then only demo data adds members.
+        // Invitations by e-mail and the record of who joined (issue 10): server/people/auth-hooks.ts.
+        ...invitationOptions,
       }),
     ],
   });

@@ -3,6 +3,7 @@ import { confirmationInput, reviewRequestInput } from "../../lib/review-schemas"
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
 import { idParam } from "../notebook/shared";
+import { noticeCauseConfirmed, noticeReviewRequested, openRequestersOf } from "../people/notices";
 import { caseReview, confirmCause, requestReview, reviewQueue } from "./service";
 
 /** Review of a casting: anyone in the shop asks and reads; mentors and owners see the queue and confirm. */
@@ -19,7 +20,12 @@ reviewRouter.post(
   allow({ casebook: ["request-review"] }),
   async (req, res) => {
     const { note } = parseOr400(reviewRequestInput, req.body ?? {});
-    const { created, review } = await requestReview(currentMember(req), castingId(req.params.id), note);
+    const m = currentMember(req);
+    const id = castingId(req.params.id);
+    const { created, review } = await requestReview(m, id, note);
+    // Mentors hear of a request once: asking again while it is open sends nothing.
+    if (created)
+      noticeReviewRequested({ shopId: m.shopId, castingId: id, askerId: m.userId, askerName: m.userName, note });
     res.status(created ? 201 : 200).json(review);
   },
 );
@@ -31,7 +37,18 @@ reviewRouter.post(
   async (req, res) => {
     const id = castingId(req.params.id);
     const input = parseOr400(confirmationInput, req.body);
-    res.status(201).json(await confirmCause(currentMember(req), id, input));
+    const m = currentMember(req);
+    const askerIds = await openRequestersOf(m.shopId, id);
+    const review = await confirmCause(m, id, input);
+    noticeCauseConfirmed({
+      shopId: m.shopId,
+      castingId: id,
+      mentorId: m.userId,
+      mentorName: m.userName,
+      causeTitle: review.current?.causeTitle ?? "",
+      askerIds,
+    });
+    res.status(201).json(review);
   },
 );
 

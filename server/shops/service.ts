@@ -21,6 +21,9 @@ export async function shopForMember(shopId: string, userId: string) {
       role: member.role,
       defaultAlloy: shopSettings.defaultAlloy,
       defaultProcess: shopSettings.defaultProcess,
+      defaultTemperature: shopSettings.defaultTemperature,
+      defaultLength: shopSettings.defaultLength,
+      defaultMass: shopSettings.defaultMass,
     })
     .from(organization)
     .innerJoin(member, and(eq(member.organizationId, organization.id), eq(member.userId, userId)))

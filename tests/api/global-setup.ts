@@ -7,6 +7,7 @@ import { migrate } from "drizzle-orm/node-postgres/migrator";
 import pg from "pg";
 import type { TestProject } from "vitest/node";
 import { freePort, startLocalPostgres } from "../../scripts/local-postgres";
+import { startMailCatcher } from "../../server/mail/catcher";
 
 const migrationsFolder = fileURLToPath(new URL("../../drizzle", import.meta.url));
 
@@ -28,7 +29,12 @@ export default async function setup(project: TestProject) {
   await migrate(drizzle(pool), { migrationsFolder });
   await pool.end();
   project.provide("templateUrl", pg15.url);
-  return () => {
+  // One real SMTP catcher for the run; tests find their messages by their own unique recipients.
+  const mail = await startMailCatcher({ dir: join(parent, "mail") });
+  project.provide("smtpUrl", mail.url);
+  project.provide("mailDir", mail.dir);
+  return async () => {
+    await mail.close();
     pg15.stop();
     rmSync(parent, { recursive: true, force: true });
     rmSync(pg15.dataDir, { recursive: true, force: true });
@@ -38,5 +44,7 @@ export default async function setup(project: TestProject) {
 declare module "vitest" {
   export interface ProvidedContext {
     templateUrl: string;
+    smtpUrl: string;
+    mailDir: string;
   }
 }

@@ -24,5 +24,7 @@ await admin.end();
 process.env.DATABASE_URL = new URL(`/${name}`, templateUrl).href;
 process.env.NODE_ENV = "test";
 process.env.PUBLIC_URL = "http://127.0.0.1:8080";
+process.env.SMTP_URL = inject("smtpUrl");
+process.env.MAIL_DIR = inject("mailDir");
 // Each file its own uploads folder too: photo tests count the files in it.
 process.env.UPLOAD_DIR = `${process.env.TMPDIR ?? "/tmp"}/casebook-test-uploads-${name}`;

@@ -1,4 +1,6 @@
 import { describe, expect, inject, it } from "vitest";
+import { DEMO_PEOPLE } from "../../server/seed/demo-people";
+import { waitForMail } from "../api/mail";
 import { PHONE, shot, signedInAs, useBrowser, WIDE } from "./browser";
 
 const baseUrl = inject("baseUrl");
@@ -27,6 +29,13 @@ describe("a casting's review and thread", () => {
     const mentor = await signedIn("mentor", WIDE);
     await mentor.goto(`${baseUrl}/rulebook/review`);
     await expect.poll(() => mentor.getByText(target.partName).count(), { timeout: 10000 }).toBeGreaterThan(0);
+    // The navigation counts the waiting cases for mentors; the request reached them by e-mail too.
+    await expect
+      .poll(() => mentor.getByTestId("nav-count-rulebook").textContent(), { timeout: 10000 })
+      .toMatch(/^[1-9]/);
+    expect(await caster.getByTestId("nav-count-rulebook").count()).toBe(0);
+    const [notice] = await waitForMail(DEMO_PEOPLE.find((p) => p.role === "mentor")!.email);
+    expect(notice.text).toContain(target.partName);
     await shot(mentor, "wide-review-queue");
     await mentor.goto(url);
     await expect.poll(() => mentor.getByText("Pinholes only on the cope side").count(), { timeout: 10000 }).toBe(1);

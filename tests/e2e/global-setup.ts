@@ -10,11 +10,12 @@ import { closeDb, db } from "../../server/db";
 import { listen } from "../../server/index";
 import { seedDemoShop } from "../../server/seed/seed";
 import { ensureChromium } from "../../scripts/debian-packages";
+import { startMailCatcher } from "../../server/mail/catcher";
 
 const root = fileURLToPath(new URL("../..", import.meta.url));
 
 /**
- * What `npm start` does, on throwaway ground: a new cluster, migrations, the demo shop, the web
+ * What `npm start` does, on throwaway ground: a new cluster, a mail catcher, migrations, the demo shop, the web
  * export (built when stale), and the real server on a free port. The tests get its address.
  */
 export default async function setup(project: TestProject) {
@@ -27,7 +28,10 @@ export default async function setup(project: TestProject) {
     throwaway: true,
   });
   const port = await freePort();
+  const mail = await startMailCatcher({ dir: join(parent, "mail") });
   Object.assign(process.env, {
+    SMTP_URL: mail.url,
+    MAIL_DIR: mail.dir,
     DATABASE_URL: pg.url,
     PORT: String(port),
     NODE_ENV: "test",
@@ -40,11 +44,13 @@ export default async function setup(project: TestProject) {
   const webDir = ensureWebBuild(root);
   const server = await listen({ port, host: "127.0.0.1", webDir });
   project.provide("baseUrl", `http://127.0.0.1:${port}`);
+  project.provide("mailDir", mail.dir);
 
   return async () => {
     server.closeAllConnections();
     await new Promise((r) => server.close(r));
     await closeDb();
+    await mail.close();
     pg.stop();
     rmSync(parent, { recursive: true, force: true });
     rmSync(pg.dataDir, { recursive: true, force: true });
@@ -54,5 +60,6 @@ export default async function setup(project: TestProject) {
 declare module "vitest" {
   export interface ProvidedContext {
     baseUrl: string;
+    mailDir: string;
   }
 }

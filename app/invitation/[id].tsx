@@ -1,0 +1,44 @@
+import { useQuery } from "@tanstack/react-query";
+import { Link, useLocalSearchParams } from "expo-router";
+import { StyleSheet } from "react-native";
+import { AuthCard } from "@/components/auth/auth-card";
+import { InvitationAnswer } from "@/components/people/invitation-answer";
+import { InvitationClosed } from "@/components/people/invitation-closed";
+import { Loading } from "@/components/ui/query-state";
+import { Notice } from "@/components/ui/notice";
+import { colors, fontSize } from "@/constants/theme";
+import { api } from "@/lib/api";
+import type { InvitationView } from "@/lib/people-schemas";
+
+/** Where an invitation link leads, signed in or not: join, or a plain word on why the link no longer works. */
+export default function InvitationScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const view = useQuery({
+    queryKey: ["invitation", id],
+    queryFn: () => api<InvitationView>(`/people/invitations/${encodeURIComponent(id)}/open`),
+    retry: false,
+  });
+  const inv = view.data;
+  return (
+    <AuthCard title={inv ? `Join ${inv.shopName}` : "Invitation"}>
+      {view.isPending ? <Loading /> : null}
+      {view.error ? (
+        <>
+          <Notice tone="error">{view.error.message}</Notice>
+          <Link href="/" style={styles.link}>
+            Go to Shakeout Casebook
+          </Link>
+        </>
+      ) : null}
+      {inv ? (
+        inv.state === "pending" ? (
+          <InvitationAnswer invitation={inv} />
+        ) : (
+          <InvitationClosed invitation={inv} />
+        )
+      ) : null}
+    </AuthCard>
+  );
+}
+
+const styles = StyleSheet.create({ link: { color: colors.accent, fontWeight: "600", fontSize: fontSize.body } });

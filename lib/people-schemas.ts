@@ -1,0 +1,64 @@
+import { z } from "zod";
+import { emailField, passwordField } from "./auth-forms";
+import { SHOP_ROLES } from "./permissions";
+
+/** Inputs of the people routes (server/people) and the forms that send them. */
+export const roleField = z.enum(SHOP_ROLES, { error: "Choose owner, mentor or caster" });
+
+export const inviteInput = z.object({ email: emailField, role: roleField });
+export type InviteInput = z.infer<typeof inviteInput>;
+
+export const roleInput = z.object({ role: roleField });
+
+export const displayNameInput = z.object({
+  name: z.string().trim().min(1, "Enter a name").max(80, "Use at most 80 characters"),
+});
+
+export const changePasswordInput = z.object({
+  currentPassword: z.string().min(1, "Enter your current password"),
+  newPassword: passwordField,
+});
+
+export const forgotPasswordForm = z.object({ email: emailField });
+export const resetPasswordForm = z
+  .object({ newPassword: passwordField, repeat: z.string() })
+  .refine((v) => v.newPassword === v.repeat, { path: ["repeat"], message: "The two passwords differ" });
+
+/** Signing up from an invitation: the e-mail is the invited one, so only name and password. */
+export const invitedSignUpForm = z.object({
+  name: displayNameInput.shape.name,
+  password: passwordField,
+});
+
+export type InvitationState = "pending" | "expired" | "cancelled" | "accepted" | "declined";
+
+/** What the accept page learns from an invitation link. */
+export type InvitationView = {
+  id: string;
+  state: InvitationState;
+  email: string;
+  role: string;
+  shopName: string;
+  inviterName: string;
+  expiresAt: string;
+};
+
+export const MEMBER_CHANGE_WORDS: Record<string, string> = {
+  invited: "invited",
+  "invitation-resent": "re-sent the invitation to",
+  "invitation-cancelled": "cancelled the invitation to",
+  joined: "joined",
+  "role-changed": "changed the role of",
+  removed: "removed",
+  "ownership-transferred": "handed ownership to",
+  left: "left",
+};
+
+/** E-mail notices each person can turn off. */
+export const noticeSettingsInput = z
+  .object({
+    reviewRequested: z.boolean({ error: "true or false" }),
+    causeConfirmed: z.boolean({ error: "true or false" }),
+  })
+  .strict();
+export type NoticeSettings = z.infer<typeof noticeSettingsInput>;

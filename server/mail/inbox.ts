@@ -1,0 +1,32 @@
+import { readdir, readFile } from "node:fs/promises";
+import { join } from "node:path";
+import { simpleParser } from "mailparser";
+import { env } from "../env";
+
+/** The caught messages of the local mail catcher (MAIL_DIR), newest first, for the development inbox. */
+export async function caughtMessages(limit = 50) {
+  const names = (await readdir(env.MAIL_DIR).catch(() => [] as string[]))
+    .filter((n) => n.endsWith(".eml"))
+    .sort()
+    .reverse()
+    .slice(0, limit);
+  return Promise.all(names.map((name) => caughtMessage(name)));
+}
+
+/** One message by its file name; only plain .eml names inside the folder are read. */
+export async function caughtMessage(name: string) {
+  if (!/^[\w.-]+\.eml$/.test(name)) return undefined;
+  const raw = await readFile(join(env.MAIL_DIR, name)).catch(() => undefined);
+  if (!raw) return undefined;
+  const mail = await simpleParser(raw);
+  const to = [mail.to].flat().flatMap((a) => a?.value.map((v) => v.address ?? "") ?? []);
+  const text = (mail.text ?? "").trim();
+  return {
+    id: name,
+    to,
+    subject: mail.subject ?? "(no subject)",
+    date: (mail.date ?? new Date(0)).toISOString(),
+    text,
+    links: [...new Set(text.match(/https?:\/\/[^\s<>"]+/g) ?? [])],
+  };
+}
