@@ -64,6 +64,7 @@ export type AlloyFamily = (typeof ALLOY_FAMILIES)[number];
 
 export const METALS = ["aluminium", "copper", "iron"] as const;
 export const TEMPERS = ["dry", "right", "wet"] as const;
+export const TEMPER_BASES = ["compactability", "feel", "water-for-the-sand-type", "water"] as const;
 export const MOISTURE_RISKS = ["low", "moderate", "high"] as const;
 export const POUR_WINDOW_POSITIONS = ["below", "inside", "above"] as const;
 
@@ -155,6 +156,7 @@ export const FACTS: readonly FactSpec[] = [
   n("ingateVelocityRatio", "ingate velocity over the critical velocity", "ratio", true),
   b("pressurisedGating", "pressurised gating (ingates no larger than the sprue base)", true),
   e("sandTemper", "sand temper (compactability, feel or water against the sand type)", TEMPERS, true),
+  e("sandTemperBasis", "what the sand temper was judged by", TEMPER_BASES, true),
   n("carbonEquivalentPct", "carbon equivalent", "percent", true),
   n("sectionRatio", "thickest over thinnest section", "ratio", true),
   n("freezeTimeRatio", "freezing time of thickest over thinnest section", "ratio", true),

@@ -7,7 +7,7 @@ import { alloyHydrogenSolubilityCm3Per100g, vapourPressureKPa } from "./compute/
 import { moistureRisk } from "./compute/moisture-risk";
 import { freeFallVelocityMS, velocityGuideMS } from "./compute/filling";
 import { gatingFromCase } from "./compute/gating";
-import { sandTemper } from "./compute/green-sand";
+import { sandTemper, temperBasis } from "./compute/green-sand";
 import { carbonEquivalentPct } from "./compute/iron";
 import { findBuiltInAlloy, metalOf } from "./alloys";
 import { freezeTimeRatio, plateModulusMm } from "./compute/solidification";
@@ -58,6 +58,13 @@ export function deriveFacts(c: DiagnosisCase, alloy: AlloySpec): Facts {
           minSectionMm: c.minSectionMm,
         });
 
+  const sand = {
+    process: c.process,
+    sandType: c.sandType,
+    moisturePct: c.sandMoisturePct,
+    compactabilityPct: c.sandCompactabilityPct,
+    feel: c.sandFeel,
+  };
   const facts: Facts = {
     process: c.process,
     pourTempC: c.pourTempC,
@@ -140,13 +147,8 @@ export function deriveFacts(c: DiagnosisCase, alloy: AlloySpec): Facts {
     ingateVelocityMS: gating?.ingateVelocityMPerS,
     ingateVelocityRatio: gating?.ingateVelocityRatio,
     pressurisedGating: gating?.pressurised,
-    sandTemper: sandTemper({
-      process: c.process,
-      sandType: c.sandType,
-      moisturePct: c.sandMoisturePct,
-      compactabilityPct: c.sandCompactabilityPct,
-      feel: c.sandFeel,
-    }),
+    sandTemper: sandTemper(sand),
+    sandTemperBasis: temperBasis(sand),
     carbonEquivalentPct: metal === "iron" ? known(carbonEquivalentPct, c.meltCarbonPct, c.meltSiliconPct) : undefined,
     sectionRatio: known((max: number, min: number) => max / min, c.maxSectionMm, c.minSectionMm),
     freezeTimeRatio: known(

@@ -57,3 +57,11 @@ export function sandTemper(s: {
   if (s.moisturePct !== undefined) return moistureAgainstSand(s.moisturePct, s.sandType);
   return undefined;
 }
+
+/** What sandTemper went by, for the reason shown to the caster. */
+export function temperBasis(s: Parameters<typeof sandTemper>[0]) {
+  if (sandTemper(s) === undefined) return undefined;
+  if (s.compactabilityPct !== undefined) return "compactability" as const;
+  if (s.feel !== undefined) return "feel" as const;
+  return s.sandType ? ("water-for-the-sand-type" as const) : ("water" as const);
+}
