@@ -19,6 +19,8 @@ export type AlloySpec = {
   /** Usual pour range for light and heavy sections, °C (copper-base and iron; per alloy). */
   pourLightC?: readonly [number, number];
   pourHeavyC?: readonly [number, number];
+  /** Holds lead (leaded brasses and bronzes): lead fume, and lead sweat in heavy sections. */
+  leaded?: boolean;
   /** Other names people write for it ("gray-iron", "85-5-5-5"). */
   aliases?: readonly string[];
   sources: string;
@@ -87,6 +89,7 @@ const copper = ([
   pourLightC: light,
   pourHeavyC: heavy,
   ...(aliases ? { aliases } : {}),
+  ...(/lead/i.test(what) ? { leaded: true } : {}),
   sources: `${what}; solidus/liquidus and density [web] stockist pages reproducing Copper Development Association data ([mem] where not found); ${CDA_TABLE}; ${shrink >= 1.8 ? BRONZE_SHRINK : CU_SHRINK}`,
 });
 

@@ -128,6 +128,8 @@ export const caseSchema = z
     meltSiliconPct: z.number().min(0).max(6, "0 to 6 %").optional(),
     inoculated: z.boolean().optional(),
     treatmentToPourMin: z.number().min(0, "cannot be negative").max(240).optional(),
+    /** Copper-base: phosphor copper (or another deoxidiser) added just before the pour. */
+    deoxidised: z.boolean().optional(),
     fluxed: z.boolean().optional(),
     skimmed: z.boolean().optional(),
     charge: z.enum(CHARGES, { error: `charge must be one of: ${list(CHARGES)}` }).optional(),
@@ -139,6 +141,8 @@ export const caseSchema = z
     greenStrengthKPa: z.number().positive("must be above 0 kPa").max(1000).optional(),
     sandFeel: oneOf("sandFeel", SAND_FEELS).optional(),
     mouldTempC: temperatureC.optional(),
+    /** Plaster or investment mould dried and baked through before the pour; sand moulds and cores dried. */
+    mouldDried: z.boolean().optional(),
     coating: z
       .object({
         applied: z.boolean().optional(),
