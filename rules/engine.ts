@@ -1,5 +1,5 @@
 import { Engine, Operator } from "json-rules-engine";
-import { BUILT_IN_ALLOYS, findBuiltInAlloy, type AlloySpec } from "./alloys";
+import { findBuiltInAlloy, type AlloySpec } from "./alloys";
 import type { DefectLocation, DefectType, DiagnosisCase } from "./case";
 import type { Facts } from "./fact-catalog";
 import { deriveFacts } from "./facts";

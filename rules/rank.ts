@@ -1,4 +1,3 @@
-import type { DiagnosisCase } from "./case";
 import { FACTS, factSpec, type Facts, type METALS } from "./fact-catalog";
 import { roundFact } from "./facts";
 import { conditionLeaves, evaluateLeaf, type Condition, type KbCause, type KbRule } from "./kb-schema";
