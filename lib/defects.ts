@@ -141,7 +141,8 @@ export const DEFECTS: Record<DefectType, DefectInfo> = {
     label: "Pinholes",
     defectClass: "B",
     checked: true,
-    description: "Many small round holes, often just under the skin, from gas coming out of the metal or the mould face.",
+    description:
+      "Many small round holes, often just under the skin, from gas coming out of the metal or the mould face.",
   },
   sink: {
     label: "Sink",
