@@ -213,7 +213,7 @@ export const DEFECTS: Record<DefectType, DefectInfo> = {
 };
 
 export const LOCATION_LABELS: Record<DefectLocation, string> = {
-  top: "top (under the cope)",
+  top: "top",
   bottom: "bottom",
   side: "side",
   corner: "corner",

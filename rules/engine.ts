@@ -141,7 +141,13 @@ export async function diagnose(c: DiagnosisCase, options: DiagnoseOptions = {}):
   const weightFactor = options.weightFactor ?? (() => 1);
   let causes = rankCauses(hits, compiled.causes, facts, weightFactor);
   if (causes.length === 0) {
-    causes = priorCauses(unfired, compiled.causes, facts, weightFactor);
+    causes = priorCauses(
+      unfired,
+      compiled.causes,
+      facts,
+      weightFactor,
+      hits.map((h) => h.rule),
+    );
     if (causes.length)
       notes.push(
         "The conditions logged do not decide this: the causes below are ranked by how often each lies behind this defect in this process and metal. The inputs listed under what would sharpen the answer would decide it.",

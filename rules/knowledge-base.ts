@@ -5,6 +5,7 @@ import gas from "./kb/gas.json";
 import gating from "./kb/gating.json";
 import inclusions from "./kb/inclusions.json";
 import iron from "./kb/iron.json";
+import melt from "./kb/melt.json";
 import mould from "./kb/mould.json";
 import shrinkage from "./kb/shrinkage.json";
 import surface from "./kb/surface.json";
@@ -25,6 +26,7 @@ export const BUILT_IN_RULE_FILES = [
   { name: "copper.json", json: copper as unknown },
   { name: "iron.json", json: iron as unknown },
   { name: "mould.json", json: mould as unknown },
+  { name: "melt.json", json: melt as unknown },
 ];
 
 /** FNV-1a, twice with different offsets for 64 bits: small, stable, and runs in the browser too. */

@@ -118,6 +118,7 @@ export function priorCauses(
   causes: Map<string, KbCause>,
   facts: Facts,
   weightFactor: (ruleId: string) => number,
+  firedAgainst: KbRule[] = [],
 ): RankedCause[] {
   const byCause = new Map<string, number>();
   for (const rule of new Map(candidates.map((r) => [r.id, r])).values()) {
@@ -125,6 +126,10 @@ export function priorCauses(
     const w = clamp01(rule.weight * weightFactor(rule.id));
     byCause.set(rule.cause, 1 - (1 - (byCause.get(rule.cause) ?? 0)) * (1 - w));
   }
+  // What was logged against a cause still counts: a cause ruled out stays low.
+  for (const rule of new Map(firedAgainst.map((r) => [r.id, r])).values())
+    if (rule.effect === "weakens" && byCause.has(rule.cause))
+      byCause.set(rule.cause, byCause.get(rule.cause)! * (1 - clamp01(rule.weight * weightFactor(rule.id))));
   return [...byCause]
     .map(([id, p]) => {
       const cause = causes.get(id)!;

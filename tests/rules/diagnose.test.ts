@@ -93,8 +93,10 @@ describe("handbook cases rank the handbook's cause first", () => {
   });
 
   it("gas porosity from a 300 mm straight drop into thick sections: turbulent fill", async () => {
-    // Front velocity above about 0.5 m/s entrains air: [hb] Campbell, Ten Rules, rule 2.
+    // Metal entering above about 0.5 m/s entrains air: [hb] Campbell, Ten Rules, rule 2. A straight drop is
+    // top gating: the metal falls through the cavity (docs/gating-and-copper-facts.md "Filling").
     const c = {
+      gating: "top",
       defects: [{ type: "gas-porosity" }],
       pourTempC: 720,
       degassing: "rotary",

@@ -152,6 +152,44 @@ const EXAMPLES: Example[] = [
     input: { sandCompactabilityPct: 28, sandMoisturePct: 3.5, sandType: "synthetic-bentonite", pourTempC: 720 },
   },
 
+  // Reduced-pressure test (docs: DI < 1 % a very good melt [web] Giesserei-Lexikon; shop limits 1-3 % [mem]).
+  {
+    name: "A356 gas porosity, density index 8 % although rotary-degassed",
+    type: "gas-porosity",
+    first: "hydrogen-pickup",
+    input: { densityIndexPct: 8, degassing: "rotary", degasMinutes: 10, pourTempC: 720 },
+  },
+  {
+    name: "A356 gas porosity, not degassed but density index 0.6 %, coating undried",
+    type: "gas-porosity",
+    notFirst: "hydrogen-pickup",
+    input: { densityIndexPct: 0.6, degassing: "none", coating: { applied: true, dried: false }, pourTempC: 720 },
+  },
+  // Strontium raises porosity ([hb] Int. J. Metalcasting 2018 abstract).
+  {
+    name: "Sr-modified A356 porosity after good degassing, dry sand",
+    type: "gas-porosity",
+    first: "strontium-modification",
+    input: {
+      modifier: "strontium",
+      degassing: "rotary",
+      degasMinutes: 12,
+      degasToPourMin: 10,
+      sandType: "synthetic-bentonite",
+      sandCompactabilityPct: 40,
+      gatingRatio: "1:2:4",
+      sprueHeightMm: 200,
+      gating: "bottom",
+    },
+  },
+  // Steel crucibles add iron (issue coverage list; [mem]).
+  {
+    name: "A356 cracked, melted in a steel crucible from ingot",
+    type: "crack",
+    first: "iron-pickup",
+    input: { crucible: "steel", charge: "ingot", minSectionMm: 8, maxSectionMm: 10, pourTempC: 720 },
+  },
+
   // --- copper-base (issue item 2), docs/gating-and-copper-facts.md "Copper-base melt practice" ---
   // Red brass not deoxidised: steam-reaction porosity; phosphor copper before the pour [web].
   {
