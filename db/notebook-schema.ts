@@ -101,7 +101,7 @@ export const melts = pgTable(
   (t) => [
     index("melts_shop_poured_idx").on(t.shopId, t.pouredOn, t.id),
     index("melts_shop_created_idx").on(t.shopId, t.createdAt),
-    check("melts_pour_temp_ck", sql`${t.pourTempC} is null or ${t.pourTempC} <= 1400`),
+    check("melts_pour_temp_ck", sql`${t.pourTempC} is null or ${t.pourTempC} <= 1700`),
     check("melts_humidity_ck", sql`${t.humidityPct} is null or ${t.humidityPct} between 0 and 100`),
   ],
 );

@@ -137,6 +137,79 @@ export const DEFECTS: Record<DefectType, DefectInfo> = {
     checked: false,
     description: "A raised bump on the skin over a shallow gas pocket just beneath it.",
   },
+  pinholes: {
+    label: "Pinholes",
+    defectClass: "B",
+    checked: true,
+    description:
+      "Many small round holes, often just under the skin, from gas coming out of the metal or the mould face.",
+  },
+  sink: {
+    label: "Sink",
+    defectClass: "B",
+    checked: false,
+    description: "A shallow dip in the surface over a heavy section that drew in as it froze unfed.",
+  },
+  scab: {
+    label: "Scab",
+    defectClass: "D",
+    checked: false,
+    description: "A rough, raised patch of metal where a layer of the mould face lifted and metal ran behind it.",
+  },
+  "rat-tail": {
+    label: "Rat tail",
+    defectClass: "D",
+    checked: false,
+    description: "A thin, wandering groove or step in the surface where the expanding sand face buckled.",
+  },
+  buckle: {
+    label: "Buckle",
+    defectClass: "D",
+    checked: false,
+    description: "A long, shallow V-shaped depression in a flat surface from the sand face expanding and bowing.",
+  },
+  erosion: {
+    label: "Erosion cut or wash",
+    defectClass: "D",
+    checked: false,
+    description: "Extra metal where the stream washed sand away, usually near the gate; the sand turns up elsewhere.",
+  },
+  mismatch: {
+    label: "Mismatch (shift)",
+    defectClass: "F",
+    checked: false,
+    description: "The cope and drag halves of the casting are offset at the parting line.",
+  },
+  "core-shift": {
+    label: "Core shift",
+    defectClass: "F",
+    checked: false,
+    description: "A cored hole or wall is out of place: the core moved or floated during pouring.",
+  },
+  "run-out": {
+    label: "Run-out",
+    defectClass: "E",
+    checked: false,
+    description: "Metal leaked out of the mould through the parting line or a crack, leaving the casting short.",
+  },
+  leaker: {
+    label: "Leaker",
+    defectClass: "B",
+    checked: false,
+    description: "The casting does not hold pressure: a path of porosity runs through a wall.",
+  },
+  segregation: {
+    label: "Segregation or sweat",
+    defectClass: "G",
+    checked: false,
+    description: "Uneven composition: beads or a skin of low-melting phase (lead, tin) pressed out at the surface.",
+  },
+  "zinc-loss": {
+    label: "Zinc loss",
+    defectClass: "G",
+    checked: false,
+    description: "A brass that lost zinc to fume during melting: off colour, off composition, harder to pour.",
+  },
 };
 
 export const LOCATION_LABELS: Record<DefectLocation, string> = {
@@ -144,10 +217,16 @@ export const LOCATION_LABELS: Record<DefectLocation, string> = {
   bottom: "bottom",
   side: "side",
   corner: "corner",
+  edge: "edge",
   "thin-section": "thin section",
   "thick-section": "thick section",
   "near-gate": "near the gate",
   "far-from-gate": "far from the gate",
+  junction: "at a junction",
+  "parting-line": "at the parting line",
+  "around-core": "around a core",
+  "glue-line": "along a glue line",
+  surface: "on the surface",
   throughout: "throughout",
 };
 

@@ -9,6 +9,7 @@ const FIXED: Partial<Record<FactQuantity, string>> = {
   percent: "%",
   hydrogen: "cm³ per 100 g",
   pressure: "kPa",
+  area: "mm²",
 };
 const CONVERTED: Partial<Record<FactQuantity, Quantity>> = {
   temperature: "temperature",

@@ -15,8 +15,8 @@ const isNum = (v: unknown): v is number => typeof v === "number" && Number.isFin
 /** Cross-field checks run even when a single field is already wrong, so a form shows every problem at once. */
 const always = { when: (p: { value: unknown }) => typeof p.value === "object" && p.value !== null };
 const text = (max: number) => z.string().trim().max(max, `at most ${max} characters`);
-/** The scale tops out at 1,400 °C: no alloy a small shop pours needs more (copper-base liquidus ~1,040 °C). */
-const tempC = z.number().gt(0, "must be above 0 °C").max(1400, "above 1,400 °C");
+/** The scale tops out at 1,700 °C, as the diagnosis does: iron pours at 1,300-1,450 °C (docs/gating-and-copper-facts.md "Iron"). */
+const tempC = z.number().gt(0, "must be above 0 °C").max(1700, "above 1,700 °C");
 const sectionMm = z.number().positive("must be above 0 mm").max(5000, "above 5 m");
 
 export const alloyInput = z

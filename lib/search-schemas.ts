@@ -141,10 +141,16 @@ const LOCATION_PHRASES: Record<DefectLocation, string> = {
   bottom: "at the bottom",
   side: "on the side",
   corner: "at a corner",
+  edge: "at an edge",
   "thin-section": "in a thin section",
   "thick-section": "in a thick section",
   "near-gate": "near the gate",
   "far-from-gate": "far from the gate",
+  junction: "at a junction",
+  "parting-line": "at the parting line",
+  "around-core": "around a core",
+  "glue-line": "along a glue line",
+  surface: "on the surface",
   throughout: "throughout",
 };
 

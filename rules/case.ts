@@ -21,6 +21,22 @@ export type DegassingMethod = (typeof DEGASSING_METHODS)[number];
 export const CHARGES = ["ingot", "clean-scrap", "mixed-scrap"] as const;
 export type Charge = (typeof CHARGES)[number];
 
+/** Where the metal enters the cavity: from below, at the side (parting line), or falling from the top. */
+export const GATING_POSITIONS = ["bottom", "side", "top", "parting-line"] as const;
+export type GatingPosition = (typeof GATING_POSITIONS)[number];
+
+/** What holds the sand together: judged separately, because each wants its own water (docs/gating-and-copper-facts.md). */
+export const SAND_TYPES = ["synthetic-bentonite", "natural-bonded", "oil-bonded", "chemically-bonded"] as const;
+export type SandType = (typeof SAND_TYPES)[number];
+
+/** A moulder's squeeze test when no instrument is at hand. */
+export const SAND_FEELS = ["right", "too-dry", "too-wet"] as const;
+
+export const MODIFIERS = ["none", "strontium", "sodium"] as const;
+export const CRUCIBLES = ["clay-graphite", "silicon-carbide", "steel"] as const;
+export const COATING_PERMEABILITIES = ["low", "medium", "high"] as const;
+export const FOAM_TYPES = ["eps", "copolymer", "pmma"] as const;
+
 export const DEFECT_TYPES = [
   "misrun",
   "cold-shut",
@@ -41,6 +57,18 @@ export const DEFECT_TYPES = [
   "warp",
   "flash",
   "blister",
+  "pinholes",
+  "sink",
+  "scab",
+  "rat-tail",
+  "buckle",
+  "erosion",
+  "mismatch",
+  "core-shift",
+  "run-out",
+  "leaker",
+  "segregation",
+  "zinc-loss",
 ] as const;
 export type DefectType = (typeof DEFECT_TYPES)[number];
 
@@ -49,10 +77,16 @@ export const DEFECT_LOCATIONS = [
   "bottom",
   "side",
   "corner",
+  "edge",
   "thin-section",
   "thick-section",
   "near-gate",
   "far-from-gate",
+  "junction",
+  "parting-line",
+  "around-core",
+  "glue-line",
+  "surface",
   "throughout",
 ] as const;
 export type DefectLocation = (typeof DEFECT_LOCATIONS)[number];
@@ -68,7 +102,10 @@ export const defectSchema = z.object({
 });
 export type Defect = z.infer<typeof defectSchema>;
 
-const temperatureC = z.number().min(-60, "below -60 °C").max(1400, "above 1,400 °C");
+/** Up to 1,700 °C: iron pours at 1,300-1,450 °C (docs/gating-and-copper-facts.md "Iron"). */
+const temperatureC = z.number().min(-60, "below -60 °C").max(1700, "above 1,700 °C");
+const oneOf = <T extends readonly [string, ...string[]]>(name: string, values: T) =>
+  z.enum(values, { error: `${name} must be one of: ${list(values)}` });
 const positiveMm = z.number().positive("must be above 0 mm").max(5000, "above 5 m");
 
 /** The alloy is checked against the alloy table by the caller (the table may hold shop alloys). */
@@ -81,23 +118,55 @@ export const caseSchema = z
     meltTempC: temperatureC.optional(),
     degassing: z.enum(DEGASSING_METHODS, { error: `degassing must be one of: ${list(DEGASSING_METHODS)}` }).optional(),
     degasMinutes: z.number().min(0, "cannot be negative").max(240).optional(),
+    degasToPourMin: z.number().min(0, "cannot be negative").max(1440).optional(),
+    densityIndexPct: z.number().min(0, "0 to 100 %").max(100, "0 to 100 %").optional(),
+    grainRefined: z.boolean().optional(),
+    modifier: oneOf("modifier", MODIFIERS).optional(),
+    crucible: oneOf("crucible", CRUCIBLES).optional(),
+    /** Iron: melt analysis, inoculation, and minutes from inoculation or magnesium treatment to the pour. */
+    meltCarbonPct: z.number().min(0).max(6, "0 to 6 %").optional(),
+    meltSiliconPct: z.number().min(0).max(6, "0 to 6 %").optional(),
+    inoculated: z.boolean().optional(),
+    treatmentToPourMin: z.number().min(0, "cannot be negative").max(240).optional(),
+    /** Copper-base: phosphor copper (or another deoxidiser) added just before the pour. */
+    deoxidised: z.boolean().optional(),
     fluxed: z.boolean().optional(),
     skimmed: z.boolean().optional(),
     charge: z.enum(CHARGES, { error: `charge must be one of: ${list(CHARGES)}` }).optional(),
     ambientTempC: z.number().min(-40).max(60).optional(),
     humidityPct: z.number().min(0, "0 to 100 %").max(100, "0 to 100 %").optional(),
     sandMoisturePct: z.number().min(0, "0 to 100 %").max(100, "0 to 100 %").optional(),
+    sandType: oneOf("sandType", SAND_TYPES).optional(),
+    sandCompactabilityPct: z.number().min(0, "0 to 100 %").max(100, "0 to 100 %").optional(),
+    greenStrengthKPa: z.number().positive("must be above 0 kPa").max(1000).optional(),
+    sandFeel: oneOf("sandFeel", SAND_FEELS).optional(),
+    mouldTempC: temperatureC.optional(),
+    /** Plaster or investment mould dried and baked through before the pour; sand moulds and cores dried. */
+    mouldDried: z.boolean().optional(),
     coating: z
       .object({
         applied: z.boolean().optional(),
         dried: z.boolean().optional(),
         coats: z.number().int().min(0).max(20).optional(),
+        permeability: oneOf("coating permeability", COATING_PERMEABILITIES).optional(),
       })
       .optional(),
     foamDensityKgM3: z.number().positive().max(200).optional(),
+    foamType: oneOf("foamType", FOAM_TYPES).optional(),
+    glueJoints: z.boolean().optional(),
     minSectionMm: positiveMm.optional(),
     maxSectionMm: positiveMm.optional(),
     sprueHeightMm: positiveMm.optional(),
+    /** Sprue-base (choke) area and total ingate area, mm²; or a gating ratio sprue:runner:ingate. */
+    chokeAreaMm2: z.number().positive("must be above 0 mm²").max(1e6).optional(),
+    ingateAreaMm2: z.number().positive("must be above 0 mm²").max(1e6).optional(),
+    gatingRatio: z
+      .string()
+      .trim()
+      .regex(/^\d+(\.\d+)?\s*[:/-]\s*\d+(\.\d+)?\s*[:/-]\s*\d+(\.\d+)?$/, 'a ratio such as "1:2:4"')
+      .optional(),
+    gating: oneOf("gating", GATING_POSITIONS).optional(),
+    hasFilter: z.boolean().optional(),
     pourTimeS: z.number().positive("must be above 0 s").max(3600).optional(),
     hasRiser: z.boolean().optional(),
     hasOverflow: z.boolean().optional(),

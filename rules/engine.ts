@@ -1,6 +1,6 @@
 import { LRUCache } from "lru-cache";
 import { Engine, Operator } from "json-rules-engine";
-import { BUILT_IN_ALLOYS, findBuiltInAlloy, type AlloySpec } from "./alloys";
+import { findBuiltInAlloy, type AlloySpec } from "./alloys";
 import type { DefectLocation, DefectType, DiagnosisCase } from "./case";
 import type { Facts } from "./fact-catalog";
 import { deriveFacts } from "./facts";
@@ -15,7 +15,17 @@ import {
   type RuleSet,
 } from "./kb-schema";
 import { BUILT_IN_RULE_SET, ruleSetVersion } from "./knowledge-base";
-import { cautionsFor, displayFacts, missingInputs, rankCauses, type DiagnosisResult, type Hit } from "./rank";
+import {
+  causeCautionsFor,
+  displayFacts,
+  missingInputs,
+  priorCauses,
+  rankCauses,
+  type DiagnosisResult,
+  type Hit,
+} from "./rank";
+import { safetyCautions } from "./safety";
+import { alloyByFamilyGuess } from "./unknown-alloy";
 
 export type { DiagnosisResult } from "./rank";
 export type DiagnoseOptions = { alloy?: AlloySpec; ruleSet?: RuleSet; weightFactor?: (ruleId: string) => number };
@@ -105,12 +115,14 @@ const locationFits = (rule: KbRule, type: DefectType, at: DefectLocation) =>
   rule.explains.some((e) => e.type === type && (!e.locations || at === "throughout" || e.locations.includes(at)));
 
 export async function diagnose(c: DiagnosisCase, options: DiagnoseOptions = {}): Promise<DiagnosisResult> {
-  const alloy = options.alloy ?? findBuiltInAlloy(c.alloy);
-  if (!alloy)
-    throw new DiagnosisInputError(
-      c.alloy,
-      BUILT_IN_ALLOYS.map((a) => a.designation),
-    );
+  const notes: string[] = [];
+  let alloy = options.alloy ?? findBuiltInAlloy(c.alloy);
+  if (!alloy) {
+    // An alloy the product does not know is diagnosed by its family, with a note, not refused.
+    const guess = alloyByFamilyGuess(c);
+    alloy = guess.alloy;
+    notes.push(guess.note);
+  }
   const compiled = compiledRuleSet(options.ruleSet ?? BUILT_IN_RULE_SET);
   const facts = deriveFacts(c, alloy);
   const types = [...new Set(c.defects.map((d) => d.type))];
@@ -127,14 +139,29 @@ export async function diagnose(c: DiagnosisCase, options: DiagnoseOptions = {}):
     }
   }
   const weightFactor = options.weightFactor ?? (() => 1);
-  const causes = rankCauses(hits, compiled.causes, facts, weightFactor);
+  let causes = rankCauses(hits, compiled.causes, facts, weightFactor);
+  if (causes.length === 0) {
+    causes = priorCauses(
+      unfired,
+      compiled.causes,
+      facts,
+      weightFactor,
+      hits.map((h) => h.rule),
+    );
+    if (causes.length)
+      notes.push(
+        "The conditions logged do not decide this: the causes below are ranked by how often each lies behind this defect in this process and metal. The inputs listed under what would sharpen the answer would decide it.",
+      );
+  }
   return {
     causes,
     facts: displayFacts(facts),
-    cautions: cautionsFor(
+    cautions: safetyCautions(
       c,
-      causes.slice(0, 3).map((x) => compiled.causes.get(x.id)!),
+      facts,
+      causes.slice(0, 3).flatMap((x) => causeCautionsFor(compiled.causes.get(x.id)!, facts)),
     ),
     missing: missingInputs(unfired, facts, weightFactor, new Set(causes.map((x) => x.id))),
+    notes,
   };
 }

@@ -6,6 +6,10 @@ import { pourWindowC, pourWindowPosition } from "./compute/pour-window";
 import { alloyHydrogenSolubilityCm3Per100g, vapourPressureKPa } from "./compute/hydrogen";
 import { moistureRisk } from "./compute/moisture-risk";
 import { freeFallVelocityMS, velocityGuideMS } from "./compute/filling";
+import { gatingFromCase } from "./compute/gating";
+import { sandTemper, temperBasis } from "./compute/green-sand";
+import { carbonEquivalentPct } from "./compute/iron";
+import { findBuiltInAlloy, metalOf } from "./alloys";
 import { freezeTimeRatio, plateModulusMm } from "./compute/solidification";
 
 type FactValue = Facts[string];
@@ -23,12 +27,17 @@ function known<A extends unknown[], R>(
  * them with rules/compute. Nothing is rounded here (roundFact is for display).
  */
 export function deriveFacts(c: DiagnosisCase, alloy: AlloySpec): Facts {
-  const isAluminium = alloy.family !== "copper-base";
+  const metal = metalOf(alloy.family);
+  const isAluminium = metal === "aluminium";
+  // A shop's copy of a built-in alloy (same designation) keeps the built-in's per-alloy pour ranges.
+  const ranges = alloy.pourLightC ? alloy : findBuiltInAlloy(alloy.designation);
   const window = pourWindowC({
     family: alloy.family,
     process: c.process,
     liquidusC: alloy.liquidusC,
     minSectionMm: c.minSectionMm,
+    pourLightC: ranges?.family === alloy.family ? ranges.pourLightC : undefined,
+    pourHeavyC: ranges?.family === alloy.family ? ranges.pourHeavyC : undefined,
   });
   const place = known((t: number) => pourWindowPosition(t, window), c.pourTempC);
   // Solubility where the melt was hottest, else at pouring; aluminium only (the fit is for aluminium).
@@ -36,26 +45,68 @@ export function deriveFacts(c: DiagnosisCase, alloy: AlloySpec): Facts {
   const vapourKPa = known(vapourPressureKPa, c.ambientTempC, c.humidityPct);
   const frontVelocityMS = known((mm: number) => freeFallVelocityMS(mm / 1000), c.sprueHeightMm);
   const guideMS = velocityGuideMS(c.minSectionMm);
+  // In lost foam the front is paced by the foam's decomposition, not the sprue: no ingate velocity
+  // (docs/gating-and-copper-facts.md "Filling").
+  const gating =
+    c.process === "lost-foam"
+      ? undefined
+      : gatingFromCase({
+          sprueHeightMm: c.sprueHeightMm,
+          chokeAreaMm2: c.chokeAreaMm2,
+          ingateAreaMm2: c.ingateAreaMm2,
+          gatingRatio: c.gatingRatio,
+          minSectionMm: c.minSectionMm,
+        });
 
+  const sand = {
+    process: c.process,
+    sandType: c.sandType,
+    moisturePct: c.sandMoisturePct,
+    compactabilityPct: c.sandCompactabilityPct,
+    feel: c.sandFeel,
+  };
   const facts: Facts = {
     process: c.process,
     pourTempC: c.pourTempC,
     meltTempC: c.meltTempC,
     degassing: c.degassing,
     degasMinutes: c.degasMinutes,
+    degasToPourMin: c.degasToPourMin,
+    densityIndexPct: c.densityIndexPct,
+    grainRefined: c.grainRefined,
+    modifier: c.modifier,
+    crucible: c.crucible,
+    meltCarbonPct: c.meltCarbonPct,
+    meltSiliconPct: c.meltSiliconPct,
+    inoculated: c.inoculated,
+    treatmentToPourMin: c.treatmentToPourMin,
+    deoxidised: c.deoxidised,
     fluxed: c.fluxed,
     skimmed: c.skimmed,
     charge: c.charge,
     ambientTempC: c.ambientTempC,
     humidityPct: c.humidityPct,
     sandMoisturePct: c.sandMoisturePct,
+    sandType: c.sandType,
+    sandCompactabilityPct: c.sandCompactabilityPct,
+    greenStrengthKPa: c.greenStrengthKPa,
+    sandFeel: c.sandFeel,
+    mouldTempC: c.mouldTempC,
+    mouldDried: c.mouldDried,
     coatingApplied: c.coating?.applied,
     coatingDried: c.coating?.dried,
     coatingCoats: c.coating?.coats,
+    coatingPermeability: c.coating?.permeability,
     foamDensityKgM3: c.foamDensityKgM3,
+    foamType: c.foamType,
+    glueJoints: c.glueJoints,
     minSectionMm: c.minSectionMm,
     maxSectionMm: c.maxSectionMm,
     sprueHeightMm: c.sprueHeightMm,
+    chokeAreaMm2: c.chokeAreaMm2,
+    ingateAreaMm2: c.ingateAreaMm2,
+    gating: c.gating,
+    hasFilter: c.hasFilter,
     pourTimeS: c.pourTimeS,
     hasRiser: c.hasRiser,
     hasOverflow: c.hasOverflow,
@@ -63,6 +114,9 @@ export function deriveFacts(c: DiagnosisCase, alloy: AlloySpec): Facts {
 
     alloyFamily: alloy.family,
     isAluminium,
+    metal,
+    leadedAlloy:
+      metal === "copper" ? Boolean(alloy.leaded ?? ranges?.leaded) || /lead/i.test(alloy.designation) : false,
     liquidusC: alloy.liquidusC,
     solidusC: alloy.solidusC,
     freezingRangeC: alloy.liquidusC - alloy.solidusC,
@@ -88,10 +142,18 @@ export function deriveFacts(c: DiagnosisCase, alloy: AlloySpec): Facts {
       coatingApplied: c.coating?.applied,
       coatingDried: c.coating?.dried,
       charge: c.charge,
+      sandType: c.sandType,
     }),
     frontVelocityMS,
     velocityGuideMS: guideMS,
     frontVelocityRatio: known((v: number) => v / guideMS, frontVelocityMS),
+    sprueBaseVelocityMS: gating?.sprueBaseVelocityMPerS,
+    ingateVelocityMS: gating?.ingateVelocityMPerS,
+    ingateVelocityRatio: gating?.ingateVelocityRatio,
+    pressurisedGating: gating?.pressurised,
+    sandTemper: sandTemper(sand),
+    sandTemperBasis: temperBasis(sand),
+    carbonEquivalentPct: metal === "iron" ? known(carbonEquivalentPct, c.meltCarbonPct, c.meltSiliconPct) : undefined,
     sectionRatio: known((max: number, min: number) => max / min, c.maxSectionMm, c.minSectionMm),
     freezeTimeRatio: known(
       (max: number, min: number) => freezeTimeRatio(plateModulusMm(max), plateModulusMm(min)),
@@ -119,6 +181,7 @@ const DECIMALS: Record<FactQuantity, number> = {
   percent: 1,
   density: 1,
   count: 0,
+  area: 0,
 };
 
 /** A fact's value rounded for display; non-numbers and unknown names pass through. */

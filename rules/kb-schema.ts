@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { DEFECT_LOCATIONS, DEFECT_TYPES } from "./case";
-import { factSpec, type FactSpec } from "./fact-catalog";
+import { factSpec, METALS, type FactSpec } from "./fact-catalog";
 
 /**
  * The rule file format (rules/kb/<family>.json) and its load-time checks. A rule that would
@@ -29,8 +29,12 @@ const text = z.string().trim().min(1);
 export const causeSchema = z.strictObject({
   id: z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, "ids are lower-case words joined by hyphens"),
   title: text,
+  /** Fixes for every metal: they name no metal. */
   fixes: z.array(text).min(1, "a cause needs at least one fix"),
   cautions: z.array(text).optional(),
+  /** Practice that belongs to one metal (aluminium, copper, iron): shown only for cases of that metal. */
+  fixesByMetal: z.partialRecord(z.enum(METALS), z.array(text).min(1)).optional(),
+  cautionsByMetal: z.partialRecord(z.enum(METALS), z.array(text).min(1)).optional(),
 });
 export const ruleSchema = z.strictObject({
   id: z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, "ids are lower-case words joined by hyphens"),

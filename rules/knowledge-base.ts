@@ -1,7 +1,12 @@
+import copper from "./kb/copper.json";
 import cracking from "./kb/cracking.json";
 import filling from "./kb/filling.json";
 import gas from "./kb/gas.json";
+import gating from "./kb/gating.json";
 import inclusions from "./kb/inclusions.json";
+import iron from "./kb/iron.json";
+import melt from "./kb/melt.json";
+import mould from "./kb/mould.json";
 import shrinkage from "./kb/shrinkage.json";
 import surface from "./kb/surface.json";
 import { validateRuleFiles, type KbCause, type KbRule, type RuleSet } from "./kb-schema";
@@ -17,6 +22,11 @@ export const BUILT_IN_RULE_FILES = [
   { name: "cracking.json", json: cracking as unknown },
   { name: "inclusions.json", json: inclusions as unknown },
   { name: "surface.json", json: surface as unknown },
+  { name: "gating.json", json: gating as unknown },
+  { name: "copper.json", json: copper as unknown },
+  { name: "iron.json", json: iron as unknown },
+  { name: "mould.json", json: mould as unknown },
+  { name: "melt.json", json: melt as unknown },
 ];
 
 /** FNV-1a, twice with different offsets for 64 bits: small, stable, and runs in the browser too. */

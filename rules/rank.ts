@@ -1,5 +1,4 @@
-import type { DiagnosisCase } from "./case";
-import { FACTS, factSpec, type Facts } from "./fact-catalog";
+import { FACTS, factSpec, type Facts, type METALS } from "./fact-catalog";
 import { roundFact } from "./facts";
 import { conditionLeaves, evaluateLeaf, type Condition, type KbCause, type KbRule } from "./kb-schema";
 
@@ -23,6 +22,8 @@ export type DiagnosisResult = {
   facts: Record<string, number | boolean | string>;
   cautions: string[];
   missing: MissingInput[];
+  /** What a caster should know about the answer itself (an alloy diagnosed by its family, causes by prior). */
+  notes: string[];
 };
 /** A rule that fired for a marked defect, with that mark's severity (1-3). */
 export type Hit = { rule: KbRule; severity: number };
@@ -74,7 +75,7 @@ export function rankCauses(
       id,
       title: cause.title,
       score,
-      fixes: [...cause.fixes],
+      fixes: fixesFor(cause, facts),
       because: [
         ...pro.map((h) => fillBecause(h.rule.because, facts)),
         ...con.map((h) => `Against: ${fillBecause(h.rule.because, facts)}`),
@@ -89,6 +90,66 @@ export function rankCauses(
   return ranked.sort((a, b) => b.score - a.score || a.id.localeCompare(b.id));
 }
 
+type Metal = (typeof METALS)[number];
+const metalOfFacts = (facts: Facts) => facts.metal as Metal | undefined;
+
+/** A cause's fixes for this case: the general ones, then those of the case's metal only. */
+export const fixesFor = (cause: KbCause, facts: Facts) => {
+  const metal = metalOfFacts(facts);
+  return [...cause.fixes, ...((metal && cause.fixesByMetal?.[metal]) || [])];
+};
+/** A cause's cautions for this case, likewise. */
+export const causeCautionsFor = (cause: KbCause, facts: Facts) => {
+  const metal = metalOfFacts(facts);
+  return [...(cause.cautions ?? []), ...((metal && cause.cautionsByMetal?.[metal]) || [])];
+};
+
+/** Scores of causes ranked by prior only stay well below any cause a logged condition supports. */
+export const PRIOR_SCALE = 0.2;
+
+/**
+ * When no rule decides: the defect type's general causes, ranked by prior. A cause's prior is the
+ * noisy-OR of the weights of its supporting rules for the marked defects that the logged facts do not
+ * rule out (a rule for lost foam does not count for green sand; one for copper alloys not for
+ * aluminium), scaled down so it never reads as evidence.
+ */
+export function priorCauses(
+  candidates: KbRule[],
+  causes: Map<string, KbCause>,
+  facts: Facts,
+  weightFactor: (ruleId: string) => number,
+  firedAgainst: KbRule[] = [],
+): RankedCause[] {
+  const byCause = new Map<string, number>();
+  for (const rule of new Map(candidates.map((r) => [r.id, r])).values()) {
+    if (rule.effect === "weakens" || decide(rule.conditions, facts) === false) continue;
+    const w = clamp01(rule.weight * weightFactor(rule.id));
+    byCause.set(rule.cause, 1 - (1 - (byCause.get(rule.cause) ?? 0)) * (1 - w));
+  }
+  // What was logged against a cause still counts: a cause ruled out stays low.
+  for (const rule of new Map(firedAgainst.map((r) => [r.id, r])).values())
+    if (rule.effect === "weakens" && byCause.has(rule.cause))
+      byCause.set(rule.cause, byCause.get(rule.cause)! * (1 - clamp01(rule.weight * weightFactor(rule.id))));
+  return [...byCause]
+    .map(([id, p]) => {
+      const cause = causes.get(id)!;
+      return {
+        id,
+        title: cause.title,
+        score: Math.round(p * PRIOR_SCALE * 1000) / 1000,
+        fixes: fixesFor(cause, facts),
+        because: [
+          "Ranked by how often this cause lies behind the defect in this process and metal; nothing logged decides it",
+        ],
+        reasons: [],
+        sources: ["common practice"],
+      };
+    })
+    .filter((c) => c.score > 0)
+    .sort((a, b) => b.score - a.score || a.id.localeCompare(b.id))
+    .slice(0, 6);
+}
+
 /** Derived facts are missing because an input is: point at the input a person can log. */
 const NEEDS: Record<string, string[]> = {
   superheatC: ["pourTempC"],
@@ -101,6 +162,12 @@ const NEEDS: Record<string, string[]> = {
   moistureRisk: ["humidityPct", "sandMoisturePct"],
   frontVelocityMS: ["sprueHeightMm"],
   frontVelocityRatio: ["sprueHeightMm"],
+  sprueBaseVelocityMS: ["sprueHeightMm"],
+  ingateVelocityMS: ["sprueHeightMm", "chokeAreaMm2", "ingateAreaMm2"],
+  ingateVelocityRatio: ["sprueHeightMm", "chokeAreaMm2", "ingateAreaMm2"],
+  pressurisedGating: ["chokeAreaMm2", "ingateAreaMm2"],
+  sandTemper: ["sandCompactabilityPct", "sandType", "sandMoisturePct"],
+  carbonEquivalentPct: ["meltCarbonPct", "meltSiliconPct"],
   thickSectionModulusMm: ["maxSectionMm"],
   sectionRatio: ["minSectionMm", "maxSectionMm"],
   freezeTimeRatio: ["minSectionMm", "maxSectionMm"],
@@ -117,6 +184,19 @@ const NOTES: Record<string, string> = {
   hasVents: "not recorded whether the mould had vents",
   hasOverflow: "not recorded whether there was an overflow",
   hasRiser: "not recorded whether there was a riser",
+  chokeAreaMm2:
+    "no gating logged: the sprue-base (choke) and ingate areas, or a gating ratio, give the speed at which metal enters the cavity, so turbulence is only weighed as a weak prior",
+  ingateAreaMm2:
+    "no ingate area (or gating ratio) logged: without it the speed at which metal enters the cavity is unknown, so turbulence is only weighed as a weak prior",
+  sprueHeightMm: "no sprue height logged",
+  sandCompactabilityPct: "no compactability measured: it is how green sand's temper is best judged",
+  sandType:
+    "no sand type logged: the water a sand needs depends on its clay (synthetic bentonite, natural-bonded, oil-bonded)",
+  mouldTempC:
+    "no mould, die or shell temperature logged: the first check for misruns and gas in permanent mould, investment and plaster",
+  gating: "not recorded where the metal enters (bottom, side, top)",
+  hasFilter: "not recorded whether a filter was used",
+  densityIndexPct: "no reduced-pressure test (density index) logged",
 };
 const noteFor = (name: string) => {
   const spec = factSpec(name)!;
@@ -170,27 +250,6 @@ export function missingInputs(
     .sort((a, b) => b[1] - a[1] || a[0].localeCompare(b[0]))
     .slice(0, limit)
     .map(([fact]) => ({ fact, label: factSpec(fact)!.label, note: noteFor(fact) }));
-}
-
-const SAFETY = {
-  steam:
-    "Molten metal and water do not mix: moisture in tools, scrap, moulds or on the floor turns to steam and can throw metal. Preheat tools and charge; pour over dry sand, not concrete.",
-  ppe: "Wear a face shield, natural-fibre clothing, gloves and leather boots with trousers over them when melting and pouring.",
-  foam: "Burning foam gives off styrene and other harmful fumes: pour lost-foam moulds with good ventilation.",
-  flux: "Fluxes, fluoride fluxes especially, give off harmful fumes: use them under extraction.",
-  argon:
-    "Argon is odourless, heavier than air and collects in pits and low places where it can suffocate: ventilate, and read the gas's safety data sheet.",
-  defer:
-    "These notes do not replace local codes, the suppliers' safety data sheets and trained practice: follow those first.",
-};
-
-/** The top causes' own cautions, then the general ones for this case, ending with the deferral. */
-export function cautionsFor(c: DiagnosisCase, topCauses: KbCause[]): string[] {
-  const out = [...topCauses.flatMap((k) => k.cautions ?? []), SAFETY.steam, SAFETY.ppe];
-  if (c.process === "lost-foam") out.push(SAFETY.foam);
-  if (c.fluxed) out.push(SAFETY.flux);
-  if (c.degassing === "argon-lance" || c.degassing === "rotary") out.push(SAFETY.argon);
-  return [...new Set(out), SAFETY.defer];
 }
 
 /** Derived facts, rounded for display (inputs are in the case already). */

@@ -19,6 +19,7 @@ export const SI_UNIT: Record<FactQuantity, string> = {
   density: "kg/m³",
   hydrogen: "cm³/100 g",
   pressure: "kPa",
+  area: "mm²",
   ratio: "",
   count: "",
 };

@@ -1,4 +1,4 @@
-import { freeFallVelocityMS } from "./filling";
+import { DEFAULT_DISCHARGE_COEFFICIENT, sprueBaseVelocityMPerS } from "./gating";
 import { RISER_MODULUS_FACTOR } from "./solidification";
 
 /**
@@ -6,8 +6,8 @@ import { RISER_MODULUS_FACTOR } from "./solidification";
  * docs/calculator-facts.md (copied from the shared foundry facts with their sources).
  */
 
-/** Discharge coefficient of a sprue, about 0.6-0.8 [mem] (docs/calculator-facts.md "Filling"). */
-export const DEFAULT_DISCHARGE_COEFFICIENT = 0.8;
+/** Discharge coefficient of a sprue, about 0.6-0.8 [mem]: one figure, in rules/compute/gating.ts. */
+export { DEFAULT_DISCHARGE_COEFFICIENT };
 
 /** Melt temperature to reach so the metal still has pourTempC after the transfer loss the shop sets. */
 export function meltTempForPourC(pourTempC: number, transferLossC: number): number {
@@ -26,7 +26,7 @@ export function sprueBaseVelocityMS(
   sprueHeightM: number,
   dischargeCoefficient = DEFAULT_DISCHARGE_COEFFICIENT,
 ): number {
-  return dischargeCoefficient * freeFallVelocityMS(sprueHeightM);
+  return sprueBaseVelocityMPerS(sprueHeightM, dischargeCoefficient);
 }
 
 /** Continuity: the same flow through a larger total ingate area runs slower, v_i = v_c · A_c / A_i. */

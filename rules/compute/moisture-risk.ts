@@ -1,4 +1,5 @@
-import type { Charge, Process } from "../case";
+import type { Charge, Process, SandType } from "../case";
+import { MOISTURE_BAND_PCT, UNKNOWN_SAND_BAND_PCT } from "./green-sand";
 
 /**
  * How much water the melt and mould may meet: water is where the hydrogen in gas porosity comes from
@@ -15,8 +16,11 @@ export const DAMP_AIR_KPA = 1.2;
 /** Without an air temperature, relative humidity alone. */
 export const HUMID_AIR_PCT = 80;
 export const DAMP_AIR_PCT = 60;
-/** Green sand usually runs at about 3-5 % water [mem]; wetter than that steams at the mould face. */
-export const GREEN_SAND_WET_PCT = 5;
+/**
+ * Green sand is wet above the top of its sand type's band (synthetic bentonite about 4.5 %, natural-bonded
+ * about 8 % [mem]; docs/gating-and-copper-facts.md "Green sand"); with no type logged, above 8 %.
+ */
+export const GREEN_SAND_WET_PCT = UNKNOWN_SAND_BAND_PCT[1];
 /** Other sand processes use dry sand: more than 1 % water is unusual (common practice). */
 export const DRY_SAND_WET_PCT = 1;
 
@@ -28,6 +32,7 @@ export type MoistureInputs = {
   coatingApplied?: boolean;
   coatingDried?: boolean;
   charge?: Charge;
+  sandType?: SandType;
 };
 
 function airPoints(m: MoistureInputs): number | undefined {
@@ -40,7 +45,11 @@ function airPoints(m: MoistureInputs): number | undefined {
 
 function sandPoints(m: MoistureInputs): number | undefined {
   if (m.sandMoisturePct === undefined) return undefined;
-  const wetPct = m.process === "green-sand" ? GREEN_SAND_WET_PCT : DRY_SAND_WET_PCT;
+  const wetPct = m.sandType
+    ? MOISTURE_BAND_PCT[m.sandType][1]
+    : m.process === "green-sand"
+      ? GREEN_SAND_WET_PCT
+      : DRY_SAND_WET_PCT;
   return m.sandMoisturePct > wetPct ? 2 : 0;
 }
 

@@ -1,4 +1,5 @@
 import type { Process } from "../case";
+import { metalOf } from "../alloys";
 import type { AlloyFamily } from "../fact-catalog";
 
 /**
@@ -40,22 +41,65 @@ export const ALUMINIUM_CEILING_C = 790;
  */
 export const COPPER_SUPERHEAT_BAND_C: readonly [number, number] = [100, 200];
 
+/**
+ * Light and heavy sections for the per-alloy copper and iron ranges (docs/gating-and-copper-facts.md):
+ * gray iron is "thin" under 10 mm and "heavy" over 50 mm [mem]; the copper table gives light and heavy
+ * castings without a thickness, so 10 mm and 25 mm are taken for copper alloys (common practice). In
+ * between, the window runs from the middle of the two lows to the middle of the two highs.
+ */
+export const LIGHT_SECTION_MM = 10;
+export const HEAVY_SECTION_MM: Record<"copper" | "iron", number> = { copper: 25, iron: 50 };
+
+function sectionWindow(
+  light: readonly [number, number],
+  heavy: readonly [number, number],
+  metal: "copper" | "iron",
+  minSectionMm: number | undefined,
+  what: string,
+): PourWindow {
+  const source = `${what}: light sections ${light[0]}-${light[1]} °C, heavy ${heavy[0]}-${heavy[1]} °C`;
+  if (minSectionMm === undefined)
+    return { lowC: heavy[0], highC: light[1], source: `${source}; section not logged, so the whole span` };
+  if (minSectionMm <= LIGHT_SECTION_MM)
+    return { lowC: light[0], highC: light[1], source: `${source}; light (walls ≤ ${LIGHT_SECTION_MM} mm)` };
+  if (minSectionMm >= HEAVY_SECTION_MM[metal])
+    return { lowC: heavy[0], highC: heavy[1], source: `${source}; heavy (walls ≥ ${HEAVY_SECTION_MM[metal]} mm)` };
+  return {
+    lowC: (light[0] + heavy[0]) / 2,
+    highC: (light[1] + heavy[1]) / 2,
+    source: `${source}; medium walls, between the two (common practice)`,
+  };
+}
+
 export function pourWindowC(input: {
   family: AlloyFamily;
   process: Process;
   liquidusC: number;
   minSectionMm?: number;
+  pourLightC?: readonly [number, number];
+  pourHeavyC?: readonly [number, number];
 }): PourWindow {
+  const metal = metalOf(input.family);
+  if (metal !== "aluminium" && input.pourLightC && input.pourHeavyC)
+    return sectionWindow(
+      input.pourLightC,
+      input.pourHeavyC,
+      metal,
+      input.minSectionMm,
+      metal === "copper"
+        ? 'CDA/NFFS "Copper Casting Alloys" pouring-temperature table [mem]'
+        : "gray and ductile iron pouring by section [mem]",
+    );
   const thin = input.minSectionMm !== undefined && input.minSectionMm <= THIN_WALL_MM;
   const thinNote = thin ? `; walls ≤ ${THIN_WALL_MM} mm: ${THIN_WALL_SHIFT_C} °C hotter (common practice)` : "";
   const shift = thin ? THIN_WALL_SHIFT_C : 0;
 
-  if (input.family === "copper-base") {
+  if (metal !== "aluminium") {
     const [low, high] = COPPER_SUPERHEAT_BAND_C;
     return {
       lowC: input.liquidusC + low + shift,
       highC: input.liquidusC + high + shift,
-      source: `copper-base: liquidus + ${low}-${high} °C [mem], common practice${thinNote}`,
+      source: `${input.family} of no known grade: liquidus + ${low}-${high} °C [mem], common practice${thinNote}`,
     };
   }
   const [lowC, highC, source] = ALUMINIUM_WINDOWS_C[input.process];

@@ -28,7 +28,7 @@ describe("melts", () => {
     const { shopId, caster } = await shopWithCrew("Bad Melt Shop");
     const bad = await caster.agent.post("/api/melts").send({
       ...coldLostFoamMelt,
-      pourTempC: 1450,
+      pourTempC: 1750, // beyond the 1,700 °C scale (iron pours up to about 1,450 °C)
       humidityPct: 120,
       degasMinutes: -3,
       sandMoisturePct: -1,

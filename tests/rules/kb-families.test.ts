@@ -227,14 +227,17 @@ const EXAMPLES: Example[] = [
   },
 
   // --- sand-inclusion ---
-  // Campbell, rule 2 [hb]: a fast stream erodes the mould where it strikes.
+  // Campbell, rule 2 [hb]: a fast stream erodes the mould where it strikes; a pressurised 1:2:1 system
+  // jets at sprue-base speed (docs/gating-and-copper-facts.md "Filling").
   {
-    name: "sand by the gate, 300 mm sprue, sand at 3.5 %",
+    name: "sand by the gate, 300 mm sprue gated 1:2:1, sand at 3.5 %",
     type: "sand-inclusion",
     first: "sand-erosion",
     input: {
       location: "near-gate",
       sandMoisturePct: 3.5,
+      sandType: "synthetic-bentonite",
+      gatingRatio: "1:2:1",
       pourTempC: 730,
       sprueHeightMm: 300,
       minSectionMm: 8,
@@ -345,14 +348,15 @@ const EXAMPLES: Example[] = [
   },
 
   // --- rough-surface ---
-  // Green sand 3-5 % water [mem]: wetter sand steams and scabs at the face (common practice).
+  // Synthetic bentonite sand about 2.5-4.5 % water [mem]: wetter sand steams and scabs at the face (common practice).
   {
-    name: "green sand at 7 % water",
+    name: "synthetic bentonite green sand at 7 % water",
     type: "rough-surface",
     first: "mould-moisture",
     input: {
       location: "throughout",
       sandMoisturePct: 7,
+      sandType: "synthetic-bentonite",
       pourTempC: 730,
       sprueHeightMm: 100,
       minSectionMm: 8,
@@ -429,12 +433,13 @@ const EXAMPLES: Example[] = [
   // --- swell ---
   // ASM Vol. 15, Common Defects [mem]: soft, weak mould; wet green sand is plastic.
   {
-    name: "green sand at 7 % water bulged",
+    name: "synthetic bentonite green sand at 7 % water bulged",
     type: "swell",
     first: "mould-moisture",
     input: {
       location: "side",
       sandMoisturePct: 7,
+      sandType: "synthetic-bentonite",
       pourTempC: 730,
       sprueHeightMm: 150,
       minSectionMm: 8,
