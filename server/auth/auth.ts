@@ -5,6 +5,7 @@ import { db } from "../db";
 import * as schema from "../../db/schema";
 import { ac, roles } from "../../lib/permissions";
 import { env } from "../env";
+import { authInputGuard } from "./input-guard";
 
 /**
  * Sign-in with e-mail and password; shops are better-auth organizations, with our three roles.
@@ -18,6 +19,7 @@ function buildAuth() {
     database: drizzleAdapter(db, { provider: "pg", schema }),
     emailAndPassword: { enabled: true, minPasswordLength: 8, maxPasswordLength: 128 },
     telemetry: { enabled: false },
+    hooks: { before: authInputGuard },
     plugins: [
       organization({
         ac,
