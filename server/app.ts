@@ -6,6 +6,7 @@ import { getAuth } from "./auth/auth";
 import { healthRouter } from "./health/router";
 import { apiNotFound, errorHandler } from "./http/errors";
 import { apiBodies, authBodies, readablePath } from "./http/edge";
+import { sameOriginWrites } from "./http/same-origin";
 import { shopsRouter } from "./shops/router";
 import { searchRouter } from "./search/router";
 import { alloysRouter } from "./alloys/router";
@@ -55,6 +56,8 @@ export function createApp(opts: { webDir?: string } = {}) {
 
   if (env.DEV_WEB_ORIGIN) app.use(cors({ origin: env.DEV_WEB_ORIGIN, credentials: true }));
 
+  // Before any body is read: a write from another site's page is refused.
+  app.use("/api", sameOriginWrites);
   // better-auth re-reads a body that is already parsed, so its bodies are bounded here first.
   app.all("/api/auth/{*any}", ...authBodies, toNodeHandler(getAuth()));
 
