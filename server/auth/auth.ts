@@ -3,6 +3,7 @@ import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { organization } from "better-auth/plugins";
 import { db } from "../db";
 import * as schema from "../../db/schema";
+import { PASSWORD_MIN } from "../../lib/auth-forms";
 import { ac, roles } from "../../lib/permissions";
 import { env } from "../env";
 import { authInputGuard } from "./input-guard";
@@ -17,7 +18,7 @@ function buildAuth() {
     secret: env.BETTER_AUTH_SECRET,
     trustedOrigins: [env.PUBLIC_URL, ...(env.DEV_WEB_ORIGIN ? [env.DEV_WEB_ORIGIN] : [])],
     database: drizzleAdapter(db, { provider: "pg", schema }),
-    emailAndPassword: { enabled: true, minPasswordLength: 8, maxPasswordLength: 128 },
+    emailAndPassword: { enabled: true, minPasswordLength: PASSWORD_MIN, maxPasswordLength: 128 },
     telemetry: { enabled: false },
     hooks: { before: authInputGuard },
     plugins: [

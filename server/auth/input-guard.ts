@@ -1,5 +1,6 @@
 import { APIError, createAuthMiddleware } from "better-auth/api";
 import { hasNul } from "../../lib/fields";
+import { passwordProblem } from "./password-rules";
 
 /**
  * better-auth checks the shape of its bodies but not the size of a display name or a NUL byte,
@@ -33,4 +34,14 @@ function problem(value: unknown, path: string, depth = 0): string | undefined {
 export const authInputGuard = createAuthMiddleware(async (ctx) => {
   const found = problem(ctx.body, "") ?? problem(ctx.query, "");
   if (found) throw new APIError("BAD_REQUEST", { message: found });
+  // A new password (sign-up, change, reset) must not be a common one; sign-in is left alone.
+  const body = (ctx.body ?? {}) as Record<string, unknown>;
+  const fresh = ctx.path === "/sign-up/email" ? body.password : body.newPassword;
+  if (typeof fresh === "string") {
+    const weak = passwordProblem(
+      fresh,
+      [body.email, body.name].filter((v): v is string => typeof v === "string"),
+    );
+    if (weak) throw new APIError("BAD_REQUEST", { message: weak });
+  }
 });
