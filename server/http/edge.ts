@@ -1,4 +1,5 @@
 import express, { type RequestHandler } from "express";
+import { hasControl } from "../../lib/fields";
 import { HttpError } from "./errors";
 
 /**
@@ -23,8 +24,6 @@ export const authBodies: RequestHandler[] = [
   express.text({ type: () => true, limit: AUTH_BODY_LIMIT }),
 ];
 
-const CONTROL = /[\u0000-\u001f\u007f]/;
-
 /**
  * Route parameters are read from the path: one whose decoded text holds a NUL or another control
  * byte can name no row, and PostgreSQL would refuse it as a value (a 500). Refused here for every route.
@@ -37,7 +36,7 @@ export const readablePath: RequestHandler = (req, _res, next) => {
     } catch {
       throw new HttpError(400, "The address is not valid: a %-escape in it is broken.");
     }
-    if (CONTROL.test(decoded)) throw new HttpError(400, "The address holds a control character; no row has that name.");
+    if (hasControl(decoded)) throw new HttpError(400, "The address holds a control character; no row has that name.");
   }
   next();
 };
