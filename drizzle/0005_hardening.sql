@@ -1,0 +1,1 @@
+CREATE UNIQUE INDEX "review_requests_one_open_idx" ON "review_requests" USING btree ("casting_id") WHERE "review_requests"."answered_at" is null;
