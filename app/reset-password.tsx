@@ -1,3 +1,4 @@
+import { PASSWORD_MIN } from "@/lib/auth-forms";
 import { Link, useLocalSearchParams } from "expo-router";
 import { useState } from "react";
 import { StyleSheet, Text } from "react-native";
@@ -52,7 +53,7 @@ export default function ResetPassword() {
             error={errors.newPassword}
             secureTextEntry
             autoComplete="new-password"
-            placeholder="at least 8 characters"
+            placeholder={`at least ${PASSWORD_MIN} characters`}
           />
           <TextField
             label="Repeat it"

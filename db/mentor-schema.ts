@@ -1,3 +1,4 @@
+import { sql } from "drizzle-orm";
 import {
   boolean,
   index,
@@ -9,6 +10,7 @@ import {
   text,
   timestamp,
   unique,
+  uniqueIndex,
 } from "drizzle-orm/pg-core";
 import type { KbRule } from "../rules/kb-schema";
 import { organization, user } from "./auth-schema";
@@ -50,6 +52,10 @@ export const reviewRequests = pgTable(
   (t) => [
     index("review_requests_queue_idx").on(t.shopId, t.answeredAt, t.createdAt),
     index("review_requests_casting_idx").on(t.castingId),
+    // One open request per casting, however many people click at once (a lock takes no rows when none is open).
+    uniqueIndex("review_requests_one_open_idx")
+      .on(t.castingId)
+      .where(sql`${t.answeredAt} is null`),
   ],
 );
 

@@ -1,10 +1,14 @@
 import { z } from "zod";
+import { hasNul } from "./fields";
 
 /** Sign-in and sign-up checks, run on the form before anything is sent. */
 export const emailField = z.string().trim().toLowerCase().email("Enter an e-mail address like name@example.com");
+/** The server also refuses the most common passwords (server/auth/password-rules.ts). */
+export const PASSWORD_MIN = 10;
 export const passwordField = z
   .string()
-  .min(8, "Use at least 8 characters for the password")
+  .refine((s) => !hasNul(s), "A password cannot hold a NUL character")
+  .min(PASSWORD_MIN, `Use at least ${PASSWORD_MIN} characters for the password`)
   .max(128, "Use at most 128 characters");
 
 export const signInForm = z.object({ email: emailField, password: z.string().min(1, "Enter your password") });

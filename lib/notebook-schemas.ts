@@ -3,6 +3,7 @@ import { CHARGES, DEFECT_LOCATIONS, DEFECT_TYPES, DEGASSING_METHODS, PROCESSES }
 import type { Charge, DefectLocation, DefectType, DegassingMethod, Process } from "../rules/case";
 import { ALLOY_FAMILIES, type AlloyFamily } from "../rules/fact-catalog";
 import type { DiagnosisResult } from "../rules/rank";
+import { calendarDate, requiredText, rowId, text } from "./fields";
 
 /**
  * The notebook's input schemas and answer shapes (docs/notebook-api.md), shared by the forms and the
@@ -14,28 +15,27 @@ const opt = <T extends z.ZodType>(s: T) => s.nullable().optional();
 const isNum = (v: unknown): v is number => typeof v === "number" && Number.isFinite(v);
 /** Cross-field checks run even when a single field is already wrong, so a form shows every problem at once. */
 const always = { when: (p: { value: unknown }) => typeof p.value === "object" && p.value !== null };
-const text = (max: number) => z.string().trim().max(max, `at most ${max} characters`);
 /** The scale tops out at 1,700 °C, as the diagnosis does: iron pours at 1,300-1,450 °C (docs/gating-and-copper-facts.md "Iron"). */
 const tempC = z.number().gt(0, "must be above 0 °C").max(1700, "above 1,700 °C");
 const sectionMm = z.number().positive("must be above 0 mm").max(5000, "above 5 m");
 
 export const alloyInput = z
   .object({
-    designation: z.string().trim().min(1, "give the alloy a name").max(40, "at most 40 characters"),
+    designation: requiredText("give the alloy a name", 40),
     family: z.enum(ALLOY_FAMILIES, { error: `family must be one of: ${list(ALLOY_FAMILIES)}` }),
     solidusC: tempC,
     liquidusC: tempC,
     densityKgM3: z.number().min(1000, "below 1,000 kg/m³").max(20000, "above 20,000 kg/m³"),
     shrinkAllowancePct: z.number().min(0, "cannot be negative").max(5, "above 5 %"),
     siliconPct: opt(z.number().min(0, "cannot be negative").max(30, "above 30 %")),
-    sources: z.string().trim().min(1, "say where the figures come from (or 'shop measurement')").max(1000),
+    sources: requiredText("say where the figures come from (or 'shop measurement')", 1000),
   })
   .refine((a) => a.solidusC <= a.liquidusC, { path: ["solidusC"], message: "solidus is above the liquidus" });
 export type AlloyInput = z.infer<typeof alloyInput>;
 
 export const meltFields = z.object({
-  pouredOn: z.iso.date("a date as YYYY-MM-DD"),
-  alloy: z.string().trim().min(1, "choose an alloy").max(40),
+  pouredOn: calendarDate(),
+  alloy: requiredText("choose an alloy", 40),
   process: z.enum(PROCESSES, { error: `process must be one of: ${list(PROCESSES)}` }),
   charge: opt(z.enum(CHARGES, { error: `charge must be one of: ${list(CHARGES)}` })),
   furnace: opt(text(120)),
@@ -90,7 +90,7 @@ export const markFields = z.object({
   type: z.enum(DEFECT_TYPES, { error: `type must be one of: ${list(DEFECT_TYPES)}` }),
   location: z.enum(DEFECT_LOCATIONS, { error: `location must be one of: ${list(DEFECT_LOCATIONS)}` }),
   severity: z.number().int("1, 2 or 3").min(1, "1, 2 or 3").max(3, "1, 2 or 3"),
-  photoId: opt(z.number().int().positive()),
+  photoId: opt(rowId("must be the id of a photo of this casting")),
   /** Fractions of the photo's width and height, 0 at the top left. */
   x: opt(z.number().min(0, "0 to 1 of the photo's width").max(1, "0 to 1 of the photo's width")),
   y: opt(z.number().min(0, "0 to 1 of the photo's height").max(1, "0 to 1 of the photo's height")),
@@ -116,7 +116,7 @@ export type MarkDescription = Pick<z.infer<typeof markFields>, "type" | "locatio
 export type MarkInput = z.infer<typeof markInput>;
 
 export const castingFields = z.object({
-  partName: z.string().trim().min(1, "name the part").max(120, "at most 120 characters"),
+  partName: requiredText("name the part", 120),
   pattern: opt(text(120)),
   minSectionMm: opt(sectionMm),
   maxSectionMm: opt(sectionMm),
@@ -148,7 +148,7 @@ export type CastingInput = z.infer<typeof castingInput>;
 export type Outcome = NonNullable<CastingInput["outcome"]>;
 
 export const commentInput = z.object({
-  body: z.string().trim().min(1, "write something").max(4000, "at most 4,000 characters"),
+  body: requiredText("write something", 4000),
 });
 
 export const unitsInput = z.object({
@@ -160,7 +160,7 @@ export type Units = z.infer<typeof unitsInput>;
 export const DEFAULT_UNITS: Units = { temperature: "C", length: "mm", mass: "kg" };
 
 const pageQuery = {
-  page: z.coerce.number().int().min(1).default(1),
+  page: z.coerce.number().int().min(1).max(100_000, "at most page 100,000").default(1),
   pageSize: z.coerce.number().int().min(1).max(100).default(20),
 };
 export const MELT_SORTS = ["date-desc", "date-asc", "alloy", "castings"] as const;

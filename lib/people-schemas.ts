@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { emailField, passwordField } from "./auth-forms";
+import { requiredText } from "./fields";
 import { SHOP_ROLES } from "./permissions";
 
 /** Inputs of the people routes (server/people) and the forms that send them. */
@@ -10,12 +11,10 @@ export type InviteInput = z.infer<typeof inviteInput>;
 
 export const roleInput = z.object({ role: roleField });
 
-export const displayNameInput = z.object({
-  name: z.string().trim().min(1, "Enter a name").max(80, "Use at most 80 characters"),
-});
+export const displayNameInput = z.object({ name: requiredText("Enter a name", 80, "Use at most 80 characters") });
 
 export const changePasswordInput = z.object({
-  currentPassword: z.string().min(1, "Enter your current password"),
+  currentPassword: requiredText("Enter your current password", 128),
   newPassword: passwordField,
 });
 

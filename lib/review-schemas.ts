@@ -2,21 +2,22 @@ import { z } from "zod";
 import type { DefectType, Process } from "../rules/case";
 import type { CauseRecord } from "../rules/calibration";
 import type { RankedCause } from "../rules/rank";
+import { requiredText, rowId, text } from "./fields";
 import type { Outcome, PersonRef } from "./notebook-schemas";
 
 /**
  * Review, confirmed causes and follow-ups (core loop step 5): inputs for the casting-page panels
  * and the review queue, shared by the forms and the API.
  */
-const note = (max: number) => z.string().trim().max(max, `at most ${max} characters`).optional();
+const note = (max: number) => text(max).optional();
 
 export const reviewRequestInput = z.object({ note: note(1000) });
 
 /** A mentor confirms one of the listed causes (causeId) or names another (causeText), with a note. */
 export const confirmationInput = z
   .object({
-    causeId: z.string().trim().min(1).optional(),
-    causeText: z.string().trim().max(300, "at most 300 characters").optional(),
+    causeId: requiredText("choose a cause", 100).optional(),
+    causeText: text(300).optional(),
     note: note(2000),
   })
   .superRefine((c, ctx) => {
@@ -36,8 +37,8 @@ export type Worked = (typeof WORKED)[number];
 export const WORKED_LABELS: Record<Worked, string> = { yes: "it worked", partly: "partly", no: "it did not work" };
 
 const fixFields = z.object({
-  fix: z.string().trim().min(1, "say what was changed").max(500, "at most 500 characters"),
-  nextCastingId: z.number().int().positive().nullable().optional(),
+  fix: requiredText("say what was changed", 500),
+  nextCastingId: rowId("must be the id of a casting").nullable().optional(),
   worked: z.enum(WORKED, { error: "yes, partly or no" }).nullable().optional(),
 });
 /** Whether a fix worked is read off the next casting, so it needs one linked. */

@@ -6,6 +6,7 @@ import type { RuleStatus } from "../rules/rule-diff";
 import type { Backtest } from "../rules/backtest";
 import type { CauseRecord, RuleRecord } from "../rules/calibration";
 import type { Contradiction } from "../rules/satisfiable";
+import { requiredText, text } from "./fields";
 import type { PersonRef } from "./notebook-schemas";
 
 /**
@@ -69,7 +70,7 @@ export function rowProblems(row: ConditionRow): Partial<Record<"fact" | "compari
 
 const conditionRow = z
   .object({
-    fact: z.string(),
+    fact: text(100),
     comparison: z.union([z.enum(COMPARISONS), z.literal("")]),
     value: z.unknown().optional(),
   })
@@ -78,11 +79,11 @@ const conditionRow = z
       ctx.addIssue({ code: "custom", path: [part], message });
   });
 
-const line = (what: string, max: number) => z.string().trim().min(1, what).max(max, `at most ${max} characters`);
+const line = (what: string, max: number) => requiredText(what, max);
 export const causeChoice = z.discriminatedUnion(
   "kind",
   [
-    z.object({ kind: z.literal("existing"), id: z.string().trim().min(1, "choose a cause") }),
+    z.object({ kind: z.literal("existing"), id: requiredText("choose a cause", 100) }),
     z.object({
       kind: z.literal("new"),
       title: line("name the cause", 200),
@@ -193,7 +194,7 @@ export function ruleToDraft(r: KbRule): RuleDraft {
 }
 
 export const switchInput = z.object({ off: z.boolean({ error: "say whether the rule is off" }) });
-export const trialInput = z.object({ draft: z.unknown(), ruleId: z.string().optional() });
+export const trialInput = z.object({ draft: z.unknown(), ruleId: text(100).optional() });
 
 /** The facts the form offers, inputs first (what a caster logs), then the computed ones. */
 export const PICKABLE_FACTS = [...FACTS].sort((a, b) => Number(a.derived) - Number(b.derived));

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { DEFECT_TYPES, PROCESSES, type DefectLocation, type DefectType, type Process } from "../rules/case";
 import { DEFECTS } from "./defects";
+import { calendarDate, text } from "./fields";
 import { DEGASSING_LABELS, PROCESS_LABELS } from "./labels";
 import type { Outcome, PersonRef } from "./notebook-schemas";
 import type { Worked } from "./review-schemas";
@@ -47,10 +48,7 @@ const names = (max: number) =>
 
 export const searchQuery = z
   .object({
-    q: z
-      .string()
-      .trim()
-      .max(SEARCH_QUERY_MAX, `search words are limited to ${SEARCH_QUERY_MAX} characters`)
+    q: text(SEARCH_QUERY_MAX, `search words are limited to ${SEARCH_QUERY_MAX} characters`)
       .refine((q) => searchWords(q).length <= SEARCH_MAX_WORDS, `use at most ${SEARCH_MAX_WORDS} words`)
       .refine(
         (q) => searchWords(q).every((w) => w.length <= SEARCH_WORD_MAX),
@@ -63,8 +61,8 @@ export const searchQuery = z
     outcome: oneOf("an outcome", OUTCOMES),
     cause: names(80),
     by: names(64),
-    from: z.iso.date("a date as YYYY-MM-DD").optional(),
-    to: z.iso.date("a date as YYYY-MM-DD").optional(),
+    from: calendarDate().optional(),
+    to: calendarDate().optional(),
     sort: z.enum(SEARCH_SORTS, { error: `sort is one of: ${SEARCH_SORTS.join(", ")}` }).optional(),
     page: z.coerce
       .number({ error: "a page number" })

@@ -112,7 +112,13 @@ const positiveMm = z.number().positive("must be above 0 mm").max(5000, "above 5 
 export const caseSchema = z
   .object({
     defects: z.array(defectSchema).min(1, "mark at least one defect").max(50),
-    alloy: z.string().trim().min(1, "alloy is required").max(40),
+    // PostgreSQL text holds no NUL (the alloy is looked up in the table).
+    alloy: z
+      .string()
+      .trim()
+      .min(1, "alloy is required")
+      .max(40)
+      .refine((s) => !s.includes("\u0000"), "no NUL"),
     process: z.enum(PROCESSES, { error: `process must be one of: ${list(PROCESSES)}` }),
     pourTempC: temperatureC.optional(),
     meltTempC: temperatureC.optional(),

@@ -5,6 +5,8 @@ import { env } from "./env";
 import { getAuth } from "./auth/auth";
 import { healthRouter } from "./health/router";
 import { apiNotFound, errorHandler } from "./http/errors";
+import { apiBodies, authBodies, readablePath } from "./http/edge";
+import { sameOriginWrites } from "./http/same-origin";
 import { shopsRouter } from "./shops/router";
 import { searchRouter } from "./search/router";
 import { alloysRouter } from "./alloys/router";
@@ -21,6 +23,27 @@ import { reviewRouter } from "./review/router";
 import { rulebookRouter } from "./rulebook/router";
 import { serveWebApp } from "./web/static";
 
+// Each router under its own prefix, so a URL names its file: /api/marks/... is server/marks/router.ts.
+// The notebook (docs/notebook-api.md); photos take multipart bodies through multer, not express.json.
+export const API_ROUTERS: [string, express.Router][] = [
+  ["/health", healthRouter],
+  ["/shops", shopsRouter],
+  ["/people", peopleRouter],
+  ["/alloys", alloysRouter],
+  ["/melts", meltsRouter],
+  ["/castings", castingsRouter],
+  ["/photos", photosRouter],
+  ["/marks", marksRouter],
+  ["/comments", commentsRouter],
+  ["/export", exportRouter],
+  ["/diagnosis", diagnosisRouter],
+  // Mentors (docs/mentor-api.md): review, follow-ups and the shop's rulebook; then the casebook search.
+  ["/review", reviewRouter],
+  ["/followups", followupsRouter],
+  ["/rulebook", rulebookRouter],
+  ["/search", searchRouter],
+];
+
 /**
  * The whole HTTP surface: better-auth under /api/auth, the API under /api, and the exported
  * web app (when `webDir` holds one) for every other path. Built here, started in server/index.ts,
@@ -33,32 +56,14 @@ export function createApp(opts: { webDir?: string } = {}) {
 
   if (env.DEV_WEB_ORIGIN) app.use(cors({ origin: env.DEV_WEB_ORIGIN, credentials: true }));
 
-  // better-auth reads the raw body itself: mount it before express.json().
-  app.all("/api/auth/{*any}", toNodeHandler(getAuth()));
+  // Before any body is read: a write from another site's page is refused.
+  app.use("/api", sameOriginWrites);
+  // better-auth re-reads a body that is already parsed, so its bodies are bounded here first.
+  app.all("/api/auth/{*any}", ...authBodies, toNodeHandler(getAuth()));
 
   const api = express.Router();
-  api.use(express.json({ limit: "1mb" }));
-  // Each router under its own prefix, so a URL names its file: /api/marks/... is server/marks/router.ts.
-  // The notebook (docs/notebook-api.md); photos take multipart bodies through multer, not express.json.
-  const routers: [string, express.Router][] = [
-    ["/health", healthRouter],
-    ["/shops", shopsRouter],
-    ["/people", peopleRouter],
-    ["/alloys", alloysRouter],
-    ["/melts", meltsRouter],
-    ["/castings", castingsRouter],
-    ["/photos", photosRouter],
-    ["/marks", marksRouter],
-    ["/comments", commentsRouter],
-    ["/export", exportRouter],
-    ["/diagnosis", diagnosisRouter],
-    // Mentors (docs/mentor-api.md): review, follow-ups and the shop's rulebook; then the casebook search.
-    ["/review", reviewRouter],
-    ["/followups", followupsRouter],
-    ["/rulebook", rulebookRouter],
-    ["/search", searchRouter],
-  ];
-  for (const [prefix, router] of routers) api.use(prefix, router);
+  api.use(readablePath, ...apiBodies);
+  for (const [prefix, router] of API_ROUTERS) api.use(prefix, router);
   api.use(apiNotFound);
   app.use("/api", api);
 

@@ -74,7 +74,7 @@ export default function SignUp() {
         error={errors.password}
         secureTextEntry
         autoComplete="new-password"
-        placeholder="at least 8 characters"
+        placeholder="at least 10 characters"
       />
       <TextField
         label="Shop name"

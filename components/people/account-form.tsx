@@ -1,3 +1,4 @@
+import { PASSWORD_MIN } from "@/lib/auth-forms";
 import { useState } from "react";
 import { StyleSheet, View } from "react-native";
 import { Button } from "@/components/ui/button";
@@ -66,7 +67,7 @@ export function AccountForm({ name: currentName }: { name: string }) {
         error={passwordErrors.errors.newPassword}
         secureTextEntry
         autoComplete="new-password"
-        placeholder="at least 8 characters"
+        placeholder={`at least ${PASSWORD_MIN} characters`}
       />
       <Button kind="plain" label="Change password" onPress={savePassword} busy={changePassword.isPending} />
     </View>

@@ -1,3 +1,4 @@
+import { PASSWORD_MIN } from "@/lib/auth-forms";
 import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "expo-router";
 import { useState } from "react";
@@ -130,7 +131,7 @@ export function InvitationAnswer({ invitation: inv }: { invitation: InvitationVi
             error={errors.password}
             secureTextEntry
             autoComplete="new-password"
-            placeholder="at least 8 characters"
+            placeholder={`at least ${PASSWORD_MIN} characters`}
             onSubmitEditing={signUpAndJoin}
           />
           <Button label="Create account and join" onPress={signUpAndJoin} busy={busy} />

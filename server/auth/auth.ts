@@ -3,9 +3,11 @@ import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { organization } from "better-auth/plugins";
 import { db } from "../db";
 import * as schema from "../../db/schema";
+import { PASSWORD_MIN } from "../../lib/auth-forms";
 import { ac, roles } from "../../lib/permissions";
 import { env } from "../env";
 import { invitationOptions, passwordResetOptions } from "../people/auth-hooks";
+import { authInputGuard } from "./input-guard";
 
 /**
  * Sign-in with e-mail and password; shops are better-auth organizations, with our three roles.
@@ -19,12 +21,13 @@ function buildAuth() {
     database: drizzleAdapter(db, { provider: "pg", schema }),
     emailAndPassword: {
       enabled: true,
-      minPasswordLength: 8,
+      minPasswordLength: PASSWORD_MIN,
       maxPasswordLength: 128,
       // Password reset by e-mail (issue 10): server/people/auth-hooks.ts.
       ...passwordResetOptions,
     },
     telemetry: { enabled: false },
+    hooks: { before: authInputGuard },
     plugins: [
       organization({
         ac,

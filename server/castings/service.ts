@@ -12,7 +12,7 @@ import {
 import type { ShopMember } from "../auth/shop-access";
 import { notFound, parseOr400 } from "../http/errors";
 import { insertMarks, marksOf } from "../marks/service";
-import { groupBy, iso, offsetOf, personRef, withoutNulls } from "../notebook/shared";
+import { changedOnly, groupBy, iso, offsetOf, personRef, withoutNulls } from "../notebook/shared";
 import { photoUrls } from "../photos/urls";
 import { castingInShop, toCasting } from "./lookup";
 
@@ -50,7 +50,7 @@ export async function patchCasting(m: ShopMember, id: number, patch: Partial<Cas
   const merged = parseOr400(castingInput, { ...withoutNulls(current), ...patch });
   const [row] = await db
     .update(castings)
-    .set({ ...castingValues(merged), updatedAt: new Date() })
+    .set({ ...changedOnly(castingValues(merged), patch), updatedAt: new Date() })
     .where(and(eq(castings.shopId, m.shopId), eq(castings.id, id)))
     .returning();
   const [who] = await db.select({ name: user.name }).from(user).where(eq(user.id, row.createdBy));

@@ -6,10 +6,15 @@ import type { DiagnosisResult } from "../../rules/engine";
 import { marksOf } from "../marks/service";
 import { groupBy } from "../notebook/shared";
 
-/** Text a spreadsheet would run as a formula (=, +, -, @) is prefixed with ' so it stays text. */
-const safeText = (v: string | null) => (v && /^[=+\-@\t\r]/.test(v) ? `'${v}` : (v ?? ""));
+/**
+ * Text a spreadsheet would run as a formula (=, +, -, @, tab, CR) is prefixed with ' so it stays text.
+ * Applied to every string cell by the writer (castingsCsv), so no column can skip it; numbers are
+ * written as numbers, so a negative temperature is never mistaken for a formula.
+ */
+export const guardCell = (v: string) => (/^[=+\-@\t\r]/.test(v) ? `'${v}` : v);
+const orBlank = (v: string | null) => v ?? "";
 const yesNo = (v: boolean | null) => (v === null ? "" : v ? "yes" : "no");
-const num = (v: number | null) => (v === null ? "" : String(v));
+const num = (v: number | null) => (v === null ? "" : v);
 
 /** Column name (trade words, unit in the name) and how to read it from one joined row. */
 type Row = Awaited<ReturnType<typeof loadRows>>[number];
@@ -20,10 +25,10 @@ const COLUMNS: [string, (r: Row) => string | number][] = [
   ["alloy", (r) => r.alloy],
   ["process", (r) => r.m.process],
   ["charge", (r) => r.m.charge ?? ""],
-  ["furnace", (r) => safeText(r.m.furnace)],
+  ["furnace", (r) => orBlank(r.m.furnace)],
   ["melt_temp_c", (r) => num(r.m.meltTempC)],
   ["pour_temp_c", (r) => num(r.m.pourTempC)],
-  ["superheat_c", (r) => (r.m.pourTempC === null ? "" : String(Math.round((r.m.pourTempC - r.liquidusC) * 10) / 10))],
+  ["superheat_c", (r) => (r.m.pourTempC === null ? "" : Math.round((r.m.pourTempC - r.liquidusC) * 10) / 10)],
   ["degassing", (r) => r.m.degassing ?? ""],
   ["degas_minutes", (r) => num(r.m.degasMinutes)],
   ["fluxed", (r) => yesNo(r.m.fluxed)],
@@ -35,8 +40,8 @@ const COLUMNS: [string, (r: Row) => string | number][] = [
   ["coating_dried", (r) => yesNo(r.m.coatingDried)],
   ["coating_coats", (r) => num(r.m.coatingCoats)],
   ["foam_density_kg_m3", (r) => num(r.m.foamDensityKgM3)],
-  ["part_name", (r) => safeText(r.c.partName)],
-  ["pattern", (r) => safeText(r.c.pattern)],
+  ["part_name", (r) => orBlank(r.c.partName)],
+  ["pattern", (r) => orBlank(r.c.pattern)],
   ["min_section_mm", (r) => num(r.c.minSectionMm)],
   ["max_section_mm", (r) => num(r.c.maxSectionMm)],
   ["sprue_height_mm", (r) => num(r.c.sprueHeightMm)],
@@ -44,14 +49,14 @@ const COLUMNS: [string, (r: Row) => string | number][] = [
   ["riser", (r) => yesNo(r.c.hasRiser)],
   ["overflow", (r) => yesNo(r.c.hasOverflow)],
   ["vents", (r) => yesNo(r.c.hasVents)],
-  ["orientation", (r) => safeText(r.c.orientation)],
+  ["orientation", (r) => orBlank(r.c.orientation)],
   ["outcome", (r) => r.c.outcome ?? ""],
   ["marks", (r) => r.marks],
   ["photo_count", (r) => r.photoCount],
   ["likely_cause", (r) => r.likelyCause],
-  ["casting_notes", (r) => safeText(r.c.notes)],
-  ["melt_notes", (r) => safeText(r.m.notes)],
-  ["logged_by", (r) => safeText(r.byName)],
+  ["casting_notes", (r) => orBlank(r.c.notes)],
+  ["melt_notes", (r) => orBlank(r.m.notes)],
+  ["logged_by", (r) => orBlank(r.byName)],
   ["logged_at", (r) => r.c.createdAt.toISOString()],
 ];
 
@@ -95,5 +100,6 @@ export async function castingsCsv(shopId: string): Promise<string> {
   const rows = await loadRows(shopId);
   return stringify([COLUMNS.map(([name]) => name), ...rows.map((r) => COLUMNS.map(([, read]) => read(r)))], {
     bom: true,
+    cast: { string: guardCell },
   });
 }

@@ -5,7 +5,7 @@ import type { CastingRef, ChainLink, FixInput, FixPatch, FixTried, Followups } f
 import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
 import { HttpError, notFound } from "../http/errors";
-import { iso, personRef } from "../notebook/shared";
+import { changedOnly, iso, personRef } from "../notebook/shared";
 
 /**
  * Fixes tried after a casting and the next casting of the same part they were tried on. Linked
@@ -188,9 +188,7 @@ export async function patchFix(m: ShopMember, id: number, patch: FixPatch): Prom
   const [saved] = await db
     .update(fixesTried)
     .set({
-      fix: merged.fix,
-      nextCastingId: merged.nextCastingId,
-      worked: merged.worked,
+      ...changedOnly({ fix: merged.fix, nextCastingId: merged.nextCastingId, worked: merged.worked }, patch),
       updatedAt: new Date(),
       updatedBy: m.userId,
     })

@@ -70,9 +70,41 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
     });
     return;
   }
-  // Body parser errors (malformed JSON, too large) carry a status of their own.
+  const body = bodyParserError(err);
+  if (body) {
+    res.status(body.status).json({ error: { message: body.message } });
+    return;
+  }
+  // Inputs are checked at the edge (lib/fields.ts); a value PostgreSQL still refuses is a gap there,
+  // logged so it gets closed, and answered as bad input rather than a crash.
+  if (isDataException(err)) {
+    console.warn("a value reached PostgreSQL unchecked:", (err as Error).message);
+    res.status(400).json({ error: { message: "A value in the request cannot be stored; nothing was changed." } });
+    return;
+  }
+  // Other 4xx errors (a broken %-escape in a route parameter) carry a status of their own.
   const status = typeof err?.status === "number" && err.status >= 400 && err.status < 500 ? err.status : 500;
   if (status === 500) console.error(err);
   const message = status === 500 ? "Something went wrong on the server; nothing was changed." : String(err.message);
   res.status(status).json({ error: { message } });
 };
+
+/** body-parser's errors (express.json and friends) in plain words. */
+function bodyParserError(err: unknown): { status: number; message: string } | undefined {
+  const e = err as { type?: unknown; limit?: unknown };
+  if (e?.type === "entity.too.large")
+    return { status: 413, message: `The request body is larger than ${Number(e.limit) / 1024} kB; nothing was saved.` };
+  if (e?.type === "entity.parse.failed") return { status: 400, message: "The request body is not valid JSON." };
+  if (e?.type === "encoding.unsupported" || e?.type === "charset.unsupported")
+    return { status: 415, message: "The request body's encoding is not supported; send UTF-8 JSON." };
+  return undefined;
+}
+
+/** SQLSTATE class 22 (data exception: out of range, bad date, NUL in text) anywhere in the cause chain. */
+export function isDataException(err: unknown): boolean {
+  for (let e = err as { code?: unknown; cause?: unknown } | undefined, depth = 0; e && depth < 5; depth++) {
+    if (typeof e.code === "string" && /^22[0-9A-Z]{3}$/.test(e.code)) return true;
+    e = e.cause as typeof e;
+  }
+  return false;
+}

@@ -5,7 +5,7 @@ import { markInput, type Mark, type MarkInput } from "../../lib/notebook-schemas
 import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
 import { HttpError, notFound, parseOr400 } from "../http/errors";
-import { iso, personRef, withoutNulls } from "../notebook/shared";
+import { changedOnly, iso, personRef, withoutNulls } from "../notebook/shared";
 
 type MarkRow = typeof defectMarks.$inferSelect;
 type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
@@ -98,7 +98,7 @@ export async function patchMark(m: ShopMember, id: number, patch: Partial<MarkIn
   await checkPhoto(db, current.castingId, merged.photoId);
   const [row] = await db
     .update(defectMarks)
-    .set({ ...markValues(merged), updatedAt: new Date() })
+    .set({ ...changedOnly(markValues(merged), patch, { photoId: ["x", "y"] }), updatedAt: new Date() })
     .where(and(eq(defectMarks.shopId, m.shopId), eq(defectMarks.id, id)))
     .returning();
   const [who] = await db.select({ name: user.name }).from(user).where(eq(user.id, row.createdBy));

@@ -14,7 +14,7 @@ import type { Process } from "../../rules/case";
 import type { ShopMember } from "../auth/shop-access";
 import { notFound, parseOr400 } from "../http/errors";
 import { requireAlloy } from "../alloys/service";
-import { iso, offsetOf, omit, personRef, refuseIfAny, withoutNulls } from "../notebook/shared";
+import { iso, offsetOf, omit, personRef, refuseIfAny, withoutNulls, changedOnly } from "../notebook/shared";
 
 type MeltRow = typeof melts.$inferSelect;
 /** The melt's own columns that a MeltInput sets one to one (the alloy goes through the alloy table). */
@@ -73,7 +73,7 @@ export async function patchMelt(m: ShopMember, id: number, patch: Partial<MeltIn
   const values = await meltValues(m.shopId, merged);
   await db
     .update(melts)
-    .set({ ...values, updatedAt: new Date() })
+    .set({ ...changedOnly(values, patch, { alloy: ["alloyId"] }), updatedAt: new Date() })
     .where(and(eq(melts.shopId, m.shopId), eq(melts.id, id)));
   return getMelt(m.shopId, id);
 }

@@ -54,3 +54,18 @@ export function groupBy<T, K>(rows: T[], key: (row: T) => K): Map<K, T[]> {
   for (const r of rows) out.set(key(r), [...(out.get(key(r)) ?? []), r]);
   return out;
 }
+
+/**
+ * The columns a PATCH named, and no others: two people editing different fields of one row at the
+ * same moment each write only their own, so neither overwrites the other's with what they read.
+ * `alsoWhen` adds columns that move with a named one (alloy -> alloyId, photoId -> x and y).
+ */
+export function changedOnly<T extends object>(
+  values: T,
+  patch: object,
+  alsoWhen: Record<string, readonly string[]> = {},
+): Partial<T> {
+  const named = new Set(Object.keys(patch).filter((k) => (patch as Record<string, unknown>)[k] !== undefined));
+  for (const [key, extra] of Object.entries(alsoWhen)) if (named.has(key)) extra.forEach((k) => named.add(k));
+  return Object.fromEntries(Object.entries(values).filter(([k]) => named.has(k))) as Partial<T>;
+}

@@ -86,16 +86,13 @@ export async function requestReview(
   note?: string,
 ): Promise<{ created: boolean; review: CaseReview }> {
   await castingInShop(m.shopId, castingId);
-  const created = await db.transaction(async (tx) => {
-    const open = await tx
-      .select({ id: reviewRequests.id })
-      .from(reviewRequests)
-      .where(and(eq(reviewRequests.castingId, castingId), isNull(reviewRequests.answeredAt)))
-      .for("update");
-    if (open.length) return false;
-    await tx.insert(reviewRequests).values({ shopId: m.shopId, castingId, note: note || null, createdBy: m.userId });
-    return true;
-  });
+  // The partial unique index keeps one open request per casting; a second click gets the open one.
+  const inserted = await db
+    .insert(reviewRequests)
+    .values({ shopId: m.shopId, castingId, note: note || null, createdBy: m.userId })
+    .onConflictDoNothing({ target: reviewRequests.castingId, where: isNull(reviewRequests.answeredAt) })
+    .returning({ id: reviewRequests.id });
+  const created = inserted.length > 0;
   return { created, review: await caseReview(m.shopId, castingId) };
 }
 

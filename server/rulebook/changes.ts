@@ -18,6 +18,13 @@ const BUILT_IN_IDS = new Set(BUILT_IN_RULE_SET.rules.map((r) => r.id));
 
 type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 async function addVersion(tx: Tx, m: ShopMember, shopRuleId: number, status: RuleStatus, rule: KbRule) {
+  // Simultaneous saves of one rule take turns on its row, so each reads the other's version number
+  // (each statement sees what committed before it) instead of both writing the same one.
+  await tx
+    .select({ id: shopRulesTable.id })
+    .from(shopRulesTable)
+    .where(eq(shopRulesTable.id, shopRuleId))
+    .for("update");
   const [last] = await tx
     .select({ version: shopRuleVersions.version })
     .from(shopRuleVersions)
@@ -31,7 +38,9 @@ async function addVersion(tx: Tx, m: ShopMember, shopRuleId: number, status: Rul
 const saveCause = (tx: Tx, m: ShopMember, c: KbCause) =>
   tx
     .insert(shopCauses)
-    .values({ shopId: m.shopId, causeId: c.id, title: c.title, fixes: c.fixes, createdBy: m.userId });
+    .values({ shopId: m.shopId, causeId: c.id, title: c.title, fixes: c.fixes, createdBy: m.userId })
+    // Two saves naming the same new cause at once: the first one stores it, the other uses it.
+    .onConflictDoNothing();
 
 async function saved(shopId: string, ruleId: string): Promise<SavedRule> {
   const d = await ruleDetail(shopId, ruleId);

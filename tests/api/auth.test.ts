@@ -34,6 +34,22 @@ describe("sign-up with bad input", () => {
   });
 });
 
+describe("new passwords", () => {
+  it("refuses the most common passwords and nine characters, accepts a few unrelated words", async () => {
+    for (const password of ["12345678", "password1", "1234567890", "qwertyuiop", "iloveyou12", "shortpass"]) {
+      const email = uniqueEmail("weak");
+      const res = await post("/api/auth/sign-up/email", { name: "Weak", email, password });
+      expect(res.status, password).toBe(400);
+      expect(res.body.message, password).toMatch(/common|short/);
+      expect(await usersWithEmail(email)).toHaveLength(0);
+    }
+    const email = uniqueEmail("strong");
+    expect(
+      (await post("/api/auth/sign-up/email", { name: "Strong", email, password: "ladle-crucible-77" })).status,
+    ).toBe(200);
+  });
+});
+
 describe("sign-in", () => {
   it("signs in with the right password and the session reaches /api/shops/me", async () => {
     const p = await signUp("signin");

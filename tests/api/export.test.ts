@@ -73,6 +73,47 @@ describe("CSV export", () => {
     expect(row.casting_notes.startsWith("'=")).toBe(true);
   });
 
+  it("guards every text cell, the alloy and the likely cause included, and keeps negative numbers numbers", async () => {
+    const { owner } = await shopWithCrew("Export Guard Shop");
+    const alloy = {
+      designation: "=1+2",
+      family: "al-zn",
+      solidusC: 375,
+      liquidusC: 404,
+      densityKgM3: 6300,
+      shrinkAllowancePct: 1,
+      sources: "@shop",
+    };
+    expect((await owner.agent.post("/api/alloys").send(alloy)).status).toBe(201);
+    // A shop rule whose new cause's title starts with "-", so it shows up as the likely cause.
+    const rule = await owner.agent.post("/api/rulebook/rules").send({
+      defectTypes: ["flash"],
+      locations: [],
+      conditions: [{ fact: "sprueHeightMm", comparison: "above", value: 250 }],
+      cause: { kind: "new", title: "-cmd|' /C calc'!A0", fixes: ["Weight the cope"] },
+      weight: 0.99,
+      because: "A {sprueHeightMm} mm sprue pushes on the cope",
+      sources: ["shop experience"],
+    });
+    expect(rule.status).toBe(201);
+    expect((await owner.agent.post(`/api/rulebook/rules/${rule.body.id}/publish`)).status).toBe(200);
+    const melt = await newMelt(owner, { alloy: "=1+2", pourTempC: 430, meltTempC: 450, ambientTempC: -5 });
+    const casting = await newCasting(owner, melt.id, {
+      partName: "+plate",
+      pattern: "@pattern",
+      sprueHeightMm: 300,
+      marks: [{ type: "flash", location: "side", severity: 2 }],
+    });
+    expect((await owner.agent.post(`/api/diagnosis/castings/${casting.id}`)).status).toBe(201);
+    const [row] = await csvOf(await owner.agent.get("/api/export/castings.csv"));
+    expect(row.alloy).toBe("'=1+2");
+    expect(row.likely_cause).toBe("'-cmd|' /C calc'!A0");
+    expect(row.part_name).toBe("'+plate");
+    expect(row.pattern).toBe("'@pattern");
+    expect(row.ambient_temp_c).toBe("-5");
+    for (const cell of Object.values(row)) expect(cell).not.toMatch(/^[=+@\t\r]/);
+  });
+
   it("is the owner's alone (403 for mentor and caster), and a shop with no castings gets the header only", async () => {
     const { owner, mentor, caster } = await shopWithCrew("Export Rules Shop");
     expect((await caster.agent.get("/api/export/castings.csv")).status).toBe(403);

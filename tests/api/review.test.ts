@@ -167,3 +167,20 @@ describe("fixes tried and the next casting", () => {
     ).toBe(400); // still marked
   });
 });
+
+describe("simultaneous review requests", () => {
+  it("keeps one open request per casting when ten clicks arrive at once, answering the rest with it", async () => {
+    const { owner, mentor, caster } = await shopWithCrew("Review Race Shop");
+    const casting = await newCasting(caster, (await newMelt(caster)).id);
+    const people = [owner, mentor, caster];
+    const answers = await Promise.all(
+      Array.from({ length: 10 }, (_, i) =>
+        people[i % 3].agent.post(`/api/review/castings/${casting.id}/requests`).send({ note: `click ${i}` }),
+      ),
+    );
+    expect(answers.map((a) => a.status).sort()).toEqual([200, 200, 200, 200, 200, 200, 200, 200, 200, 201]);
+    const open = await db.select().from(reviewRequests).where(eq(reviewRequests.castingId, casting.id));
+    expect(open).toHaveLength(1);
+    for (const a of answers) expect(a.body.waiting.id).toBe(open[0].id);
+  });
+});

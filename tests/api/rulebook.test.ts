@@ -320,3 +320,21 @@ describe("trying a rule and learning from confirmed cases", () => {
     expect(row.factor).toBeCloseTo(0.5 + 5 / 7, 10); // (3 + 2) / (3 + 4)
   });
 });
+
+describe("simultaneous saves of one rule", () => {
+  it("gives every save its own version number, none answering 500", async () => {
+    const { mentor, owner } = await shopWithCrew("Rule Race Shop");
+    const id = (await mentor.agent.post("/api/rulebook/rules").send(draft)).body.id as string;
+    const saves = await Promise.all(
+      Array.from({ length: 8 }, (_, i) =>
+        (i % 2 ? owner : mentor).agent.put(`/api/rulebook/rules/${id}`).send({ ...draft, weight: 0.5 + i / 20 }),
+      ),
+    );
+    expect(saves.map((s) => s.status)).toEqual(Array(8).fill(200));
+    const detail = await mentor.agent.get(`/api/rulebook/rules/${id}`);
+    const numbers = detail.body.versions
+      .map((v: { version: number }) => v.version)
+      .sort((a: number, b: number) => a - b);
+    expect(numbers).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9]);
+  });
+});

@@ -47,7 +47,7 @@ for (const [sizeName, size] of [
       await page.getByLabel("Shop name").fill("Some Shop");
       await page.getByRole("button", { name: "Create account" }).click();
       await expect.poll(() => page.getByText("Enter an e-mail address like name@example.com").count()).toBe(1);
-      expect(await page.getByText("Use at least 8 characters for the password").count()).toBe(1);
+      expect(await page.getByText("Use at least 10 characters for the password").count()).toBe(1);
       expect(authCalls).toBe(0);
       await shot(page, `${sizeName}-sign-up-errors`);
       await page.context().close();

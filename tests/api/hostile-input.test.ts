@@ -1,0 +1,244 @@
+import request from "supertest";
+import { beforeAll, describe, expect, it } from "vitest";
+import { dbFingerprint } from "./db-fingerprint";
+import { app, migrateOnce, ORIGIN, shopWithCrew, uniqueEmail, type Person } from "./helpers";
+import { coldLostFoamMelt, newCasting, newMelt, thinPlate } from "./notebook-fixtures";
+import { apiRoutes, fill } from "./route-table";
+
+beforeAll(migrateOnce);
+
+type Write = { method: "POST" | "PATCH" | "PUT"; path: string; body: Record<string, unknown> };
+const draft = {
+  defectTypes: ["flash"],
+  locations: [],
+  conditions: [{ fact: "sprueHeightMm", comparison: "above", value: 250 }],
+  cause: { kind: "new", title: "Cope lifted", fixes: ["Weight the cope"] },
+  weight: 0.9,
+  because: "A {sprueHeightMm} mm sprue pushes on the cope",
+  sources: ["shop experience"],
+};
+
+let owner: Person;
+let writes: Write[];
+const ids: Record<string, string | number> = {};
+
+beforeAll(async () => {
+  const crew = await shopWithCrew("Hostile Input Shop");
+  owner = crew.owner;
+  const melt = await newMelt(owner);
+  const casting = await newCasting(owner, melt.id, { marks: [{ type: "misrun", location: "corner", severity: 2 }] });
+  const next = await newCasting(owner, melt.id);
+  const mark = await owner.agent
+    .post(`/api/marks/castings/${casting.id}`)
+    .send({ type: "misrun", location: "top", severity: 1 });
+  const fix = await owner.agent.post(`/api/followups/castings/${casting.id}/fixes`).send({ fix: "Pour hotter" });
+  const rule = await owner.agent.post("/api/rulebook/rules").send(draft);
+  Object.assign(ids, { melt: melt.id, casting: casting.id, mark: mark.body.id, fix: fix.body.id, rule: rule.body.id });
+  writes = [
+    {
+      method: "PATCH",
+      path: "/api/shops/current/settings",
+      body: { defaultAlloy: "A356.0", defaultProcess: "lost-foam" },
+    },
+    { method: "PUT", path: "/api/people/me/units", body: { temperature: "C", length: "mm", mass: "kg" } },
+    {
+      method: "POST",
+      path: "/api/alloys",
+      body: {
+        designation: "ZA-8",
+        family: "al-zn",
+        solidusC: 375,
+        liquidusC: 404,
+        densityKgM3: 6300,
+        shrinkAllowancePct: 1,
+        sources: "shop",
+      },
+    },
+    { method: "POST", path: "/api/melts", body: { ...coldLostFoamMelt } },
+    { method: "PATCH", path: `/api/melts/${melt.id}`, body: { notes: "re-read", pouredOn: "2026-01-15" } },
+    {
+      method: "POST",
+      path: `/api/castings/melts/${melt.id}`,
+      body: { ...thinPlate, marks: [{ type: "misrun", location: "top", severity: 2, note: "n" }] },
+    },
+    { method: "PATCH", path: `/api/castings/${casting.id}`, body: { notes: "re-read", partName: "Plate" } },
+    {
+      method: "POST",
+      path: `/api/marks/castings/${casting.id}`,
+      body: { type: "misrun", location: "top", severity: 2, note: "n" },
+    },
+    { method: "PATCH", path: `/api/marks/${mark.body.id}`, body: { note: "n", severity: 3 } },
+    { method: "POST", path: `/api/comments/castings/${casting.id}`, body: { body: "a comment" } },
+    {
+      method: "POST",
+      path: "/api/diagnosis",
+      body: {
+        defects: [{ type: "misrun", location: "top", severity: 2 }],
+        alloy: "A356.0",
+        process: "lost-foam",
+        pourTempC: 700,
+      },
+    },
+    { method: "POST", path: `/api/review/castings/${casting.id}/requests`, body: { note: "please look" } },
+    {
+      method: "POST",
+      path: `/api/review/castings/${casting.id}/confirmations`,
+      body: { causeText: "cold metal", note: "n" },
+    },
+    {
+      method: "POST",
+      path: `/api/followups/castings/${casting.id}/fixes`,
+      body: { fix: "Pour hotter", nextCastingId: next.id },
+    },
+    {
+      method: "PATCH",
+      path: `/api/followups/fixes/${fix.body.id}`,
+      body: { fix: "Pour hotter still", nextCastingId: next.id },
+    },
+    { method: "POST", path: "/api/rulebook/rules", body: draft },
+    { method: "PUT", path: `/api/rulebook/rules/${rule.body.id}`, body: draft },
+    { method: "PUT", path: "/api/rulebook/rules/h2-no-degassing/switch", body: { off: true } },
+    { method: "POST", path: "/api/rulebook/try", body: { draft, ruleId: rule.body.id } },
+    { method: "PUT", path: "/api/people/me/notices", body: { reviewRequested: true, causeConfirmed: false } },
+    { method: "PATCH", path: "/api/people/me", body: { name: "Hostile Owner" } },
+    {
+      method: "POST",
+      path: "/api/people/me/password",
+      body: { currentPassword: "not-the-password-1", newPassword: "quarry-ladle-sprue-77" },
+    },
+    { method: "POST", path: "/api/people/invitations", body: { email: uniqueEmail("hostile"), role: "caster" } },
+    { method: "PATCH", path: `/api/people/members/${crew.caster.userId}`, body: { role: "mentor" } },
+  ];
+});
+
+const send = (p: Person, w: { method: string; path: string }) =>
+  w.method === "POST" ? p.agent.post(w.path) : w.method === "PUT" ? p.agent.put(w.path) : p.agent.patch(w.path);
+
+/** Every string leaf of a body, as a path of keys. */
+function leaves(v: unknown, path: (string | number)[] = [], kind: "string" | "number"): (string | number)[][] {
+  if (typeof v === kind) return [path];
+  if (Array.isArray(v)) return v.flatMap((x, i) => leaves(x, [...path, i], kind));
+  if (v && typeof v === "object") return Object.entries(v).flatMap(([k, x]) => leaves(x, [...path, k], kind));
+  return [];
+}
+function withLeaf(body: unknown, path: (string | number)[], value: unknown): unknown {
+  const copy = structuredClone(body) as Record<string | number, unknown>;
+  let at = copy;
+  for (const k of path.slice(0, -1)) at = at[k] as typeof at;
+  at[path[path.length - 1]] = value;
+  return copy;
+}
+
+describe("hostile input at the edge", () => {
+  it("has a hostile-input case for every JSON write route", () => {
+    const bodiless =
+      /\/(publish|retire|resend|cancel|make-owner)$|^\/api\/people\/leave$|^\/api\/diagnosis\/castings\/|^\/api\/photos\//;
+    const routes = apiRoutes().filter((r) => r.method !== "GET" && r.method !== "DELETE" && !bodiless.test(r.path));
+    for (const r of routes) {
+      const pattern = new RegExp(`^${r.path.replace(/:\w+/g, "[^/]+")}$`);
+      expect(
+        writes.some((w) => w.method === r.method && pattern.test(w.path)),
+        `${r.method} ${r.path}`,
+      ).toBe(true);
+    }
+  });
+
+  it("refuses a NUL byte in any text field with 400 and a field message, changing no row", async () => {
+    const before = await dbFingerprint();
+    for (const w of writes)
+      for (const path of leaves(w.body, [], "string")) {
+        const res = await send(owner, w).send(withLeaf(w.body, path, "ok\u0000no") as object);
+        expect(res.status, `${w.method} ${w.path} ${path.join(".")}`).toBe(400);
+        // Field messages come from the edge (lib/fields.ts), not from the database backstop.
+        expect(res.body.error.fields, `${w.method} ${w.path} ${path.join(".")}`).toBeTruthy();
+      }
+    expect(await dbFingerprint()).toEqual(before);
+  });
+
+  it("never answers 5xx to huge or fractional numbers, and refuses ids beyond 32 bits", async () => {
+    for (const w of writes)
+      for (const path of leaves(w.body, [], "number"))
+        for (const value of [2 ** 31, 2 ** 53 + 1, 1e308, -1e308, 0.5]) {
+          const res = await send(owner, w).send(withLeaf(w.body, path, value) as object);
+          expect(res.status, `${w.method} ${w.path} ${path.join(".")}=${value}`).toBeLessThan(500);
+        }
+    const before = await dbFingerprint();
+    const fixRes = await owner.agent
+      .post(`/api/followups/castings/${ids.casting}/fixes`)
+      .send({ fix: "x", nextCastingId: 2 ** 31 });
+    expect(fixRes.status).toBe(400);
+    expect(fixRes.body.error.fields.nextCastingId).toBeTruthy();
+    const markRes = await owner.agent
+      .post(`/api/marks/castings/${ids.casting}`)
+      .send({ type: "misrun", location: "top", severity: 1, photoId: 2 ** 40, x: 0.5, y: 0.5 });
+    expect(markRes.status).toBe(400);
+    expect(markRes.body.error.fields.photoId).toBeTruthy();
+    expect(await dbFingerprint()).toEqual(before);
+  });
+
+  it("refuses year-0 and impossible dates with a field message", async () => {
+    const before = await dbFingerprint();
+    for (const pouredOn of ["0000-01-01", "2026-02-30", "2026-13-01", "99999-01-01"]) {
+      const res = await owner.agent.post("/api/melts").send({ ...coldLostFoamMelt, pouredOn });
+      expect(res.status, pouredOn).toBe(400);
+      expect(res.body.error.fields.pouredOn).toBeTruthy();
+      const patched = await owner.agent.patch(`/api/melts/${ids.melt}`).send({ pouredOn });
+      expect(patched.status, pouredOn).toBe(400);
+    }
+    expect((await owner.agent.get("/api/search?from=0000-01-01")).status).toBe(400);
+    expect(await dbFingerprint()).toEqual(before);
+  });
+
+  it("answers 400 for control bytes in an address or query, 404 for ids past 32 bits", async () => {
+    for (const path of ["/api/shops/%00", "/api/rulebook/rules/%00", "/api/melts/%00", "/api/shops/a%0Ab"])
+      expect((await owner.agent.get(path)).status, path).toBe(400);
+    expect((await owner.agent.get("/api/melts/99999999999")).status).toBe(404);
+    expect((await owner.agent.get("/api/castings/2147483648")).status).toBe(404);
+    for (const q of ["q=%00", "alloy=%00", "cause=a%00b", "page=1e300"])
+      expect((await owner.agent.get(`/api/search?${q}`)).status, q).toBe(400);
+    expect((await owner.agent.get("/api/melts?page=1e300")).status).toBe(400);
+  });
+
+  it("answers 413 to a 2 MB body on every write route, API and sign-in alike, changing no row", async () => {
+    const big = { notes: "x".repeat(2 * 1024 * 1024) };
+    const before = await dbFingerprint();
+    const targets = apiRoutes()
+      .filter((r) => r.method !== "GET" && r.method !== "DELETE" && !r.path.startsWith("/api/photos"))
+      .map((r) => ({ method: r.method, path: fill(r.path, ids) }));
+    for (const t of targets) expect((await send(owner, t).send(big)).status, `${t.method} ${t.path}`).toBe(413);
+    for (const path of ["/api/auth/sign-in/email", "/api/auth/sign-up/email", "/api/auth/organization/create"]) {
+      const res = await request(app)
+        .post(path)
+        .set("Origin", ORIGIN)
+        .send({ email: "a@b.example", password: "x", name: big.notes });
+      expect(res.status, path).toBe(413);
+      const plain = await request(app)
+        .post(path)
+        .set("Origin", ORIGIN)
+        .set("Content-Type", "text/plain")
+        .send(big.notes);
+      expect(plain.status, `${path} as text`).toBe(413);
+    }
+    expect(await dbFingerprint()).toEqual(before);
+  });
+
+  it("bounds and cleans the text better-auth stores: names, e-mails, shop names", async () => {
+    const before = await dbFingerprint();
+    const signUp = (body: object) => request(app).post("/api/auth/sign-up/email").set("Origin", ORIGIN).send(body);
+    const password = "correct-horse-9";
+    expect((await signUp({ name: "Ann\u0000", email: uniqueEmail("nul"), password })).status).toBe(400);
+    expect((await signUp({ name: "A".repeat(81), email: uniqueEmail("long"), password })).status).toBe(400);
+    expect((await signUp({ name: "Ann", email: `a\u0000${uniqueEmail("nul")}`, password })).status).toBe(400);
+    const shop = await owner.agent
+      .post("/api/auth/organization/create")
+      .set("Origin", ORIGIN)
+      .send({ name: "S".repeat(5000), slug: "s-long" });
+    expect(shop.status).toBe(400);
+    const rename = await owner.agent
+      .post("/api/auth/update-user")
+      .set("Origin", ORIGIN)
+      .send({ name: "N".repeat(200) });
+    expect(rename.status).toBe(400);
+    expect(await dbFingerprint()).toEqual(before);
+  });
+});
