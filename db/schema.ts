@@ -17,3 +17,4 @@ export const shopSettings = pgTable("shop_settings", {
 export * from "./notebook-schema";
 export * from "./mentor-schema";
 export * from "./search-schema";
+export * from "./calculator-schema";

@@ -19,6 +19,7 @@ import { photosRouter } from "./photos/router";
 import { followupsRouter } from "./followups/router";
 import { reviewRouter } from "./review/router";
 import { rulebookRouter } from "./rulebook/router";
+import { calculationsRouter } from "./calculations/router";
 import { serveWebApp } from "./web/static";
 
 /**
@@ -46,6 +47,7 @@ export function createApp(opts: { webDir?: string } = {}) {
     ["/people", peopleRouter],
     ["/alloys", alloysRouter],
     ["/melts", meltsRouter],
+    ["/calculations", calculationsRouter],
     ["/castings", castingsRouter],
     ["/photos", photosRouter],
     ["/marks", marksRouter],
