@@ -20,6 +20,7 @@ import { followupsRouter } from "./followups/router";
 import { reviewRouter } from "./review/router";
 import { rulebookRouter } from "./rulebook/router";
 import { calculationsRouter } from "./calculations/router";
+import { trendsRouter } from "./trends/router";
 import { serveWebApp } from "./web/static";
 
 /**
@@ -48,6 +49,7 @@ export function createApp(opts: { webDir?: string } = {}) {
     ["/alloys", alloysRouter],
     ["/melts", meltsRouter],
     ["/calculations", calculationsRouter],
+    ["/trends", trendsRouter],
     ["/castings", castingsRouter],
     ["/photos", photosRouter],
     ["/marks", marksRouter],
