@@ -24,3 +24,4 @@ export * from "./notebook-schema";
 export * from "./mentor-schema";
 export * from "./search-schema";
 export * from "./people-schema";
+export * from "./calculator-schema";

@@ -21,6 +21,8 @@ import { photosRouter } from "./photos/router";
 import { followupsRouter } from "./followups/router";
 import { reviewRouter } from "./review/router";
 import { rulebookRouter } from "./rulebook/router";
+import { calculationsRouter } from "./calculations/router";
+import { trendsRouter } from "./trends/router";
 import { serveWebApp } from "./web/static";
 
 // Each router under its own prefix, so a URL names its file: /api/marks/... is server/marks/router.ts.
@@ -31,6 +33,8 @@ export const API_ROUTERS: [string, express.Router][] = [
   ["/people", peopleRouter],
   ["/alloys", alloysRouter],
   ["/melts", meltsRouter],
+  ["/calculations", calculationsRouter],
+  ["/trends", trendsRouter],
   ["/castings", castingsRouter],
   ["/photos", photosRouter],
   ["/marks", marksRouter],

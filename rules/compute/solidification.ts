@@ -58,3 +58,37 @@ export function minRiserModulusCm(castingModulusCm: number): number {
 export function freezeTimeRatio(modulusA: number, modulusB: number, exponent = CHVORINOV_EXPONENT): number {
   return (modulusA / modulusB) ** exponent;
 }
+
+/**
+ * Casting : neck : riser moduli about 1 : 1.1 : 1.2, so the neck freezes after the casting and before
+ * the riser and the feed path stays open (rule of thumb, [mem]).
+ */
+export const NECK_MODULUS_FACTOR = 1.1;
+
+/** A box L × W × T cooling on all six faces: M = LWT / 2(LW + LT + WT). */
+export function boxModulusCm(lengthCm: number, widthCm: number, thicknessCm: number): number {
+  const volume = lengthCm * widthCm * thicknessCm;
+  const area = 2 * (lengthCm * widthCm + lengthCm * thicknessCm + widthCm * thicknessCm);
+  return modulusCm(volume, area);
+}
+
+/** A cylinder D × H cooling on its side and both ends: M = (π D² H / 4) / (π D H + π D² / 2). */
+export function cylinderSectionModulusCm(diameterCm: number, heightCm: number): number {
+  const volume = (Math.PI * diameterCm ** 2 * heightCm) / 4;
+  const area = Math.PI * diameterCm * heightCm + (Math.PI * diameterCm ** 2) / 2;
+  return modulusCm(volume, area);
+}
+
+/** A short round neck cools only round its side: M = (π d² L / 4) / (π d L) = d / 4, so d = 4 · 1.1 · M. */
+export function neckDiameterCm(castingModulusCm: number, factor = NECK_MODULUS_FACTOR): number {
+  return 4 * factor * castingModulusCm;
+}
+
+/**
+ * Feeding distance of a plate, rule of thumb from steel plates [mem]: a riser feeds about 2 T round
+ * itself (riser zone) and an edge adds about 2.5 T (end zone), so a riser with a free edge beyond it
+ * feeds about 4.5 T. Aluminium and copper alloys feed differently: a first guess, common practice.
+ */
+export function plateFeedingDistanceMm(thicknessMm: number): { riserZoneMm: number; withEndZoneMm: number } {
+  return { riserZoneMm: 2 * thicknessMm, withEndZoneMm: 4.5 * thicknessMm };
+}

@@ -99,6 +99,16 @@ beforeAll(async () => {
     { method: "PUT", path: `/api/rulebook/rules/${rule.body.id}`, body: draft },
     { method: "PUT", path: "/api/rulebook/rules/h2-no-degassing/switch", body: { off: true } },
     { method: "POST", path: "/api/rulebook/try", body: { draft, ruleId: rule.body.id } },
+    {
+      method: "POST",
+      path: "/api/calculations",
+      body: {
+        kind: "riser",
+        meltId: melt.id,
+        castingId: casting.id,
+        input: { shape: "plate", lengthMm: 125, widthMm: 75, thicknessMm: 20 },
+      },
+    },
     { method: "PUT", path: "/api/people/me/notices", body: { reviewRequested: true, causeConfirmed: false } },
     { method: "PATCH", path: "/api/people/me", body: { name: "Hostile Owner" } },
     {

@@ -40,6 +40,7 @@ export default function MeltsScreen() {
     <Screen wide={wide}>
       <View style={styles.head}>
         <Heading>Melts</Heading>
+        <Button kind="plain" label="Calculators" onPress={() => router.push("/melts/calculators")} />
         <Button label="Log a melt" onPress={() => router.push("/melts/new")} testID="new-melt" />
       </View>
       {!wide ? (

@@ -2,6 +2,7 @@ import { useLocalSearchParams, useRouter } from "expo-router";
 import { StyleSheet, View } from "react-native";
 import { BackLink } from "@/components/ui/back-link";
 import { Button } from "@/components/ui/button";
+import { CalcLinks } from "@/components/calculators/calc-links";
 import { CastingForm } from "@/components/castings/casting-form";
 import { CastingRow } from "@/components/castings/casting-row";
 import { Heading } from "@/components/ui/heading";
@@ -39,6 +40,18 @@ export default function MeltScreen() {
       </View>
       <MeltFacts melt={m} units={u} />
       {m.notes ? <Notice>{m.notes}</Notice> : null}
+      <CalcLinks
+        target={{ meltId: id }}
+        prefill={{
+          alloy: m.alloy,
+          process: m.process,
+          plannedPourC: m.pourTempC,
+          meltTempC: m.meltTempC,
+          airTempC: m.ambientTempC,
+          humidityPct: m.humidityPct,
+          foamDensityKgM3: m.foamDensityKgM3,
+        }}
+      />
       <Heading level={2}>Castings from this melt</Heading>
       {m.castings.length === 0 ? <Notice>No castings logged from this melt yet.</Notice> : null}
       {m.castings.map((c) => (

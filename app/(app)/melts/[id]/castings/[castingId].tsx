@@ -1,4 +1,5 @@
 import { useLocalSearchParams } from "expo-router";
+import { CalcLinks } from "@/components/calculators/calc-links";
 import { BackLink } from "@/components/ui/back-link";
 import { CastingSummary } from "@/components/castings/casting-summary";
 import { CommentThread } from "@/components/comments/comment-thread";
@@ -43,6 +44,16 @@ export default function CastingScreen() {
       <DiagnosisView casting={c} units={units} mayRun={mayWrite} />
       <ReviewPanel castingId={c.id} causes={causes} />
       <FollowupPanel castingId={c.id} suggestions={causes[0]?.fixes} />
+      <CalcLinks
+        target={{ meltId: c.meltId, castingId: c.id }}
+        prefill={{
+          alloy: c.melt.alloy,
+          process: c.melt.process,
+          minSectionMm: c.minSectionMm,
+          thicknessMm: c.maxSectionMm,
+          shape: "plate",
+        }}
+      />
       <SimilarCases castingId={c.id} />
       <CommentThread castingId={c.id} comments={c.comments} mayComment={roleCan(role, { casebook: ["comment"] })} />
     </Screen>

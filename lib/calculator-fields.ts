@@ -1,0 +1,144 @@
+import { PROCESSES } from "../rules/case";
+import type { CalcQuantity, CalculatorKind } from "../rules/calculators";
+import { fromField, fromSi, toField, unitLabel, type Quantity, type Units } from "./units";
+
+/** What each calculator asks for, in the order a caster has the figures to hand. */
+export type CalcField =
+  | { key: string; label: string; type: "number"; quantity: CalcQuantity; showIf?: [string, string[]] }
+  | { key: string; label: string; type: "choice"; options: readonly { value: string; label: string }[] }
+  | { key: "alloy"; label: string; type: "alloy" };
+
+const alloy = { key: "alloy", label: "Alloy", type: "alloy" } as const;
+const num = (key: string, label: string, quantity: CalcQuantity, showIf?: [string, string[]]): CalcField => ({
+  key,
+  label,
+  type: "number",
+  quantity,
+  showIf,
+});
+const processes = PROCESSES.map((p) => ({ value: p, label: p.replace(/-/g, " ") }));
+
+export const CALCULATOR_TITLES: Record<CalculatorKind, { title: string; purpose: string; pour: boolean }> = {
+  "pour-temperature": {
+    title: "Pour temperature",
+    purpose: "The window to aim for and the melt to reach.",
+    pour: true,
+  },
+  metal: {
+    title: "Metal to melt",
+    purpose: "From the pattern, a foam pattern's weight or a previous casting.",
+    pour: true,
+  },
+  pattern: { title: "Pattern size", purpose: "The pattern's sizes and the shrink rule for the alloy.", pour: false },
+  riser: { title: "Riser", purpose: "A section's modulus, a riser that freezes later, its neck.", pour: false },
+  hydrogen: { title: "Hydrogen", purpose: "The most hydrogen the melt could hold: an upper bound.", pour: true },
+};
+
+export const CALCULATOR_FIELDS: Record<CalculatorKind, CalcField[]> = {
+  "pour-temperature": [
+    alloy,
+    { key: "process", label: "Process", type: "choice", options: processes },
+    num("minSectionMm", "Thinnest section", "length"),
+    num("plannedPourC", "Planned pour temperature", "temperature"),
+    num("transferLossC", "Transfer loss, furnace to mould", "temperature-difference"),
+  ],
+  metal: [
+    alloy,
+    {
+      key: "method",
+      label: "Work it out from",
+      type: "choice",
+      options: [
+        { value: "volume", label: "pattern volume" },
+        { value: "foam", label: "foam pattern weight" },
+        { value: "previous", label: "a previous casting" },
+      ],
+    },
+    num("volumeCm3", "Pattern volume", "volume-cm3", ["method", ["volume"]]),
+    num("foamMassKg", "Foam pattern weight, before glue and coating", "mass", ["method", ["foam"]]),
+    num("foamDensityKgM3", "Foam density", "density", ["method", ["foam"]]),
+    num("previousCastingKg", "Previous casting's weight", "mass", ["method", ["previous"]]),
+    num("yieldPct", "Casting yield", "percent"),
+    num("meltLossPct", "Melt loss", "percent"),
+    num("crucibleKg", "Crucible capacity", "mass"),
+  ],
+  pattern: [
+    alloy,
+    num("lengthMm", "Length", "length"),
+    num("widthMm", "Width", "length"),
+    num("heightMm", "Height", "length"),
+  ],
+  riser: [
+    {
+      key: "shape",
+      label: "Section",
+      type: "choice",
+      options: [
+        { value: "plate", label: "plate" },
+        { value: "bar", label: "bar" },
+        { value: "cylinder", label: "cylinder" },
+        { value: "typed", label: "V and A typed in" },
+      ],
+    },
+    num("lengthMm", "Length", "length", ["shape", ["plate", "bar"]]),
+    num("widthMm", "Width", "length", ["shape", ["plate", "bar"]]),
+    num("thicknessMm", "Thickness", "length", ["shape", ["plate", "bar"]]),
+    num("diameterMm", "Diameter", "length", ["shape", ["cylinder"]]),
+    num("heightMm", "Height", "length", ["shape", ["cylinder"]]),
+    num("volumeCm3", "Volume", "volume-cm3", ["shape", ["typed"]]),
+    num("areaCm2", "Cooling area", "area-cm2", ["shape", ["typed"]]),
+    num("mouldConstantMinPerCm2", "Mould constant C_m", "min-per-cm2"),
+  ],
+  hydrogen: [
+    alloy,
+    num("meltTempC", "Melt temperature", "temperature"),
+    num("airTempC", "Air temperature", "temperature"),
+    num("humidityPct", "Humidity", "percent"),
+  ],
+};
+
+const PERSON_UNITS: Partial<Record<CalcQuantity, Quantity>> = {
+  temperature: "temperature",
+  "temperature-difference": "temperature-difference",
+  length: "length",
+  mass: "mass",
+  density: "density",
+};
+const SI_LABELS: Record<string, string> = {
+  "volume-cm3": "cm³",
+  "area-cm2": "cm²",
+  "time-min": "min",
+  percent: "%",
+  "solubility-cm3-per-100g": "cm³/100 g",
+  "pressure-kpa": "kPa",
+  "in-per-ft": "in/ft",
+  "min-per-cm2": "min/cm²",
+};
+
+/** The unit a calculator's number is typed and shown in: the person's where they chose one. */
+export function calcUnit(q: CalcQuantity, u: Units): string {
+  const p = PERSON_UNITS[q];
+  return p ? unitLabel(p, u) : SI_LABELS[q];
+}
+export function calcToField(q: CalcQuantity, si: number | undefined, u: Units): string {
+  const p = PERSON_UNITS[q];
+  if (si === undefined || !Number.isFinite(si)) return "";
+  return p ? toField(p, si, u) : String(Number(si.toFixed(3)));
+}
+export function calcFromField(q: CalcQuantity, text: string, u: Units): number | undefined {
+  const p = PERSON_UNITS[q];
+  if (p) return fromField(p, text, u);
+  const t = text.trim().replace(",", ".");
+  if (t === "") return undefined;
+  return Number.isFinite(Number(t)) ? Number(t) : Number.NaN;
+}
+/** A result for reading: "760 °C", "5.65 kg", "0.75 cm³/100 g". */
+export function calcFormat(q: CalcQuantity, si: number, u: Units): string {
+  const p = PERSON_UNITS[q];
+  if (p) {
+    const v = fromSi(p, si, u);
+    const digits = p.startsWith("temperature") ? 0 : Math.abs(v) < 10 ? 2 : 1;
+    return `${Number(v.toFixed(digits))} ${unitLabel(p, u)}`;
+  }
+  return `${Number(si.toPrecision(3))} ${SI_LABELS[q]}`;
+}

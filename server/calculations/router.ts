@@ -1,0 +1,19 @@
+import { Router } from "express";
+import { calculationListQuery, saveCalculationInput } from "../../lib/calculator-schemas";
+import { allow, currentMember, requireShopMember } from "../auth/shop-access";
+import { parseOr400 } from "../http/errors";
+import { listCalculations, saveCalculation } from "./service";
+
+/** Calculator results kept on a melt or a casting (docs/notebook-api.md, "Calculations"). */
+export const calculationsRouter = Router();
+const read = [requireShopMember, allow({ casebook: ["read"] })];
+const write = [requireShopMember, allow({ casebook: ["write"] })];
+
+calculationsRouter.get("/", ...read, async (req, res) => {
+  const q = parseOr400(calculationListQuery, req.query);
+  res.json({ items: await listCalculations(currentMember(req).shopId, q) });
+});
+
+calculationsRouter.post("/", ...write, async (req, res) => {
+  res.status(201).json(await saveCalculation(currentMember(req), parseOr400(saveCalculationInput, req.body)));
+});
