@@ -1,3 +1,4 @@
+import { PROCESS_LABELS } from "@/lib/labels";
 import { useState } from "react";
 import { StyleSheet, Text, View } from "react-native";
 import { RateBars, MIN_CASTINGS_FOR_RATE } from "@/components/trends/rate-bars";
@@ -52,7 +53,11 @@ export default function TrendsScreen() {
             {t.castings} castings. A bar is the share with at least one defect marked (or scrapped, reworked).
           </Text>
           <RateBars title="Defects by superheat" what="had defects" points={t.defectBySuperheat} />
-          <RateBars title="Defects by process" what="had defects" points={t.defectByProcess} />
+          <RateBars
+            title="Defects by process"
+            what="had defects"
+            points={t.defectByProcess.map((p) => ({ ...p, key: PROCESS_LABELS[p.key as Process] ?? p.key }))}
+          />
           <RateBars title="Defects by alloy" what="had defects" points={t.defectByAlloy} />
           <RateBars title="Scrap by month" what="scrapped" points={t.scrapByMonth} />
           <RateBars title="Rework by month" what="reworked" points={t.reworkByMonth} />
