@@ -4,7 +4,7 @@
  * Prints figures only (targets: median ≤ 2 ms, 10,000 cases ≤ 10 s); nothing is asserted.
  */
 import { performance } from "node:perf_hooks";
-import { BUILT_IN_ALLOYS } from "../rules/alloys";
+import { BUILT_IN_ALLOYS, metalOf } from "../rules/alloys";
 import {
   CHARGES,
   DEFECT_LOCATIONS,
@@ -24,7 +24,8 @@ function makeCases(count: number, seed = 42): DiagnosisCase[] {
   const maybe = <T>(v: T, p = 0.8) => (r() < p ? v : undefined);
   const num = (lo: number, hi: number, step = 1) => Math.round((lo + r() * (hi - lo)) / step) * step;
   return Array.from({ length: count }, () => {
-    const alloy = r() < 0.85 ? pick(BUILT_IN_ALLOYS.filter((a) => a.family !== "copper-base")) : pick(BUILT_IN_ALLOYS);
+    const alloy =
+      r() < 0.85 ? pick(BUILT_IN_ALLOYS.filter((a) => metalOf(a.family) === "aluminium")) : pick(BUILT_IN_ALLOYS);
     const process = pick(PROCESSES);
     const minSectionMm = maybe(num(1.5, 12, 0.5));
     return {

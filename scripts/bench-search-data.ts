@@ -13,7 +13,7 @@ import {
   organization,
   user,
 } from "../db/schema";
-import { BUILT_IN_ALLOYS } from "../rules/alloys";
+import { BUILT_IN_ALLOYS, metalOf } from "../rules/alloys";
 import { DEFECT_LOCATIONS, DEFECT_TYPES, DEGASSING_METHODS, PROCESSES } from "../rules/case";
 import { BUILT_IN_RULE_SET } from "../rules/knowledge-base";
 import { rng } from "./seeded-random";
@@ -125,7 +125,7 @@ export async function seedShop(db: Db, count: number, seed: number): Promise<See
     .select({ id: alloys.id, designation: alloys.designation, liquidusC: alloys.liquidusC })
     .from(alloys);
   const aluminium = alloyRows.filter(
-    (a) => BUILT_IN_ALLOYS.find((b) => b.designation === a.designation)?.family !== "copper-base",
+    (a) => metalOf(BUILT_IN_ALLOYS.find((b) => b.designation === a.designation)?.family ?? "al-si") === "aluminium",
   );
 
   const meltIds: number[] = [];
