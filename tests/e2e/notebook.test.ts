@@ -184,8 +184,10 @@ describe("the notebook at wide size (1280 px)", () => {
   it("shows temperatures in °F once a person chooses them, and sends °C", async () => {
     const page = await signedIn(WIDE, "owner");
     await page.getByRole("tab", { name: "More" }).click();
-    await page.getByRole("radio", { name: "°F" }).click();
-    await expect.poll(() => page.getByRole("radio", { name: "°F" }).getAttribute("aria-checked")).toBe("true");
+    // The person's own units (the shop's defaults for new members below have a °F chip too).
+    const fahrenheit = page.getByRole("radiogroup", { name: "Temperatures" }).getByRole("radio", { name: "°F" });
+    await fahrenheit.click();
+    await expect.poll(() => fahrenheit.getAttribute("aria-checked")).toBe("true");
     await page.getByRole("tab", { name: "Melts" }).click();
     await seen(page, /\d °F/);
     await page.getByTestId("new-melt").click();
@@ -227,8 +229,9 @@ describe("the notebook at wide size (1280 px)", () => {
     await expect.poll(reasons, { timeout: 10000 }).toMatch(/\d °F/);
     expect(await reasons()).not.toMatch(/\d °C/);
     await page.getByRole("tab", { name: "More" }).click();
-    await page.getByRole("radio", { name: "°C" }).click();
-    await expect.poll(() => page.getByRole("radio", { name: "°C" }).getAttribute("aria-checked")).toBe("true");
+    const celsius = page.getByRole("radiogroup", { name: "Temperatures" }).getByRole("radio", { name: "°C" });
+    await celsius.click();
+    await expect.poll(() => celsius.getAttribute("aria-checked")).toBe("true");
     await page.context().close();
   });
 });
