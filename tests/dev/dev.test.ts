@@ -76,6 +76,12 @@ describe("npm run dev", () => {
   });
 
   it("signs the demo caster in on one origin, then Ctrl-C frees every port", async () => {
+    // A fresh checkout has no Metro cache: have the dev server build the first bundle before the
+    // browser's shorter waits start (on a loaded 2-core machine that cold build can take a minute).
+    const base = `http://127.0.0.1:${ports.web}`;
+    const html = await (await fetch(base)).text();
+    const src = /<script src="([^"]+)"/.exec(html)?.[1];
+    if (src) await (await fetch(new URL(src, base))).arrayBuffer();
     const browser = await launchBrowser();
     try {
       // signedInAs waits for the signed-in shell to show the caster's role.
@@ -93,5 +99,5 @@ describe("npm run dev", () => {
     for (const port of [ports.web, ports.metro, ports.pg]) {
       await expect.poll(() => portInUse(port), { timeout: 10000 }).toBe(false);
     }
-  });
+  }, 240_000);
 });
