@@ -185,7 +185,9 @@ describe("the notebook at wide size (1280 px)", () => {
     const page = await signedIn(WIDE, "owner");
     await page.getByRole("tab", { name: "More" }).click();
     // The person's own units (the shop's defaults for new members below have a °F chip too).
-    const fahrenheit = page.getByRole("radiogroup", { name: "Temperatures" }).getByRole("radio", { name: "°F" });
+    const fahrenheit = page
+      .getByRole("radiogroup", { name: "Temperatures", exact: true })
+      .getByRole("radio", { name: "°F" });
     await fahrenheit.click();
     await expect.poll(() => fahrenheit.getAttribute("aria-checked")).toBe("true");
     await page.getByRole("tab", { name: "Melts" }).click();
@@ -229,7 +231,9 @@ describe("the notebook at wide size (1280 px)", () => {
     await expect.poll(reasons, { timeout: 10000 }).toMatch(/\d °F/);
     expect(await reasons()).not.toMatch(/\d °C/);
     await page.getByRole("tab", { name: "More" }).click();
-    const celsius = page.getByRole("radiogroup", { name: "Temperatures" }).getByRole("radio", { name: "°C" });
+    const celsius = page
+      .getByRole("radiogroup", { name: "Temperatures", exact: true })
+      .getByRole("radio", { name: "°C" });
     await celsius.click();
     await expect.poll(() => celsius.getAttribute("aria-checked")).toBe("true");
     await page.context().close();
