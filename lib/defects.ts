@@ -3,7 +3,7 @@ import type { DefectLocation, DefectType } from "../rules/case";
 /**
  * The seven classes of the international atlas of casting defects (International Committee of
  * Foundry Technical Associations), as reproduced in ASM Handbook Vol. 15, "Common Defects in
- * Various Casting Processes" (shared/reference/foundry-facts.md, [hb]).
+ * Various Casting Processes" (docs/foundry-facts.md, [hb]).
  */
 export const DEFECT_CLASSES = {
   A: "metallic projections",

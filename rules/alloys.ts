@@ -3,7 +3,7 @@ import type { AlloyFamily } from "./fact-catalog";
 /**
  * Built-in casting alloys. Data only (plus the lookup): this list also seeds the alloy table, where a
  * shop may add its own. Every figure's source is in `sources`, tagged as in
- * shared/reference/foundry-facts.md: [std] standard, [hb] handbook, [web] secondary web source to be
+ * docs/foundry-facts.md: [std] standard, [hb] handbook, [web] secondary web source to be
  * confirmed, [mem] recalled from memory and not yet checked against a document.
  */
 export type AlloySpec = {

@@ -1,5 +1,4 @@
-import { metalOf } from "../alloys";
-import type { AlloyFamily } from "../fact-catalog";
+import { metalOf, type AlloySpec } from "../alloys";
 
 /**
  * What every calculator hands back: its inputs and results as SI values with the quantity they are,
@@ -34,15 +33,10 @@ export type CalcResult = {
 };
 
 /** The alloy's figures a calculator needs (a row of the shop's alloy table). */
-export type CalcAlloy = {
-  designation: string;
-  family: AlloyFamily;
-  solidusC: number;
-  liquidusC: number;
-  densityKgM3: number;
-  shrinkAllowancePct: number;
-  siliconPct?: number | null;
-};
+export type CalcAlloy = Pick<
+  AlloySpec,
+  "designation" | "family" | "solidusC" | "liquidusC" | "densityKgM3" | "shrinkAllowancePct"
+> & { siliconPct?: number | null };
 
 /** An input that cannot be (a riser of negative volume, a pour below the solidus): which field and why. */
 export class CalcInputError extends Error {

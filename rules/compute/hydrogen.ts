@@ -2,7 +2,7 @@ import { celsiusToKelvin } from "./temperature";
 
 /**
  * Hydrogen solubility in aluminium, cm³ H2 (STP) per 100 g of metal. Figures from
- * shared/reference/foundry-facts.md "Hydrogen in aluminium".
+ * docs/foundry-facts.md "Hydrogen in aluminium".
  */
 
 /**

@@ -1,6 +1,6 @@
 /**
  * Pattern sizes and metal needed. Shrink allowances are from patternmakers' shrink-rule charts [web]
- * (shared/reference/foundry-facts.md "Pattern shrink allowance").
+ * (docs/foundry-facts.md "Pattern shrink allowance").
  */
 
 const INCHES_PER_FOOT = 12;

@@ -4,7 +4,7 @@ import type { AlloyFamily } from "../fact-catalog";
 
 /**
  * The usual pour-temperature window for an alloy family, process and thinnest section. Figures from
- * shared/reference/foundry-facts.md; where that says [mem] they are recalled from memory and should
+ * docs/foundry-facts.md; where that says [mem] they are recalled from memory and should
  * be checked against ASM Handbook Vol. 15 before they are relied on.
  */
 export type PourWindow = { lowC: number; highC: number; source: string };

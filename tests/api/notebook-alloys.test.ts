@@ -26,7 +26,7 @@ describe("the alloy table", () => {
     const res = await caster.agent.get("/api/alloys");
     expect(res.status).toBe(200);
     expect(res.body.alloys).toHaveLength(BUILT_IN_ALLOYS.length);
-    // A356.0: solidus 555 °C, liquidus 615 °C [mem] ASM Handbook Vol. 2 (shared/reference/foundry-facts.md).
+    // A356.0: solidus 555 °C, liquidus 615 °C [mem] ASM Handbook Vol. 2 (docs/foundry-facts.md).
     expect(res.body.alloys.find((a: { designation: string }) => a.designation === "A356.0")).toMatchObject({
       solidusC: 555,
       liquidusC: 615,

@@ -6,7 +6,7 @@ import type { Person } from "./helpers";
 
 /**
  * Inputs for the notebook tests. The lost-foam melt is the textbook misrun case: A356 (liquidus
- * 615 °C [mem] ASM Vol. 2, in shared/reference/foundry-facts.md) poured at 700 °C, a superheat of 85 °C,
+ * 615 °C [mem] ASM Vol. 2, in docs/foundry-facts.md) poured at 700 °C, a superheat of 85 °C,
  * below the roughly 730-790 °C lost foam usually needs [mem], into 4 mm walls.
  */
 export const coldLostFoamMelt: MeltInput = {

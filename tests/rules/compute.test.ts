@@ -37,7 +37,7 @@ import {
   shrinkPctToInPerFt,
 } from "@/rules/compute/pattern";
 
-// Sources are those of shared/reference/foundry-facts.md; each check names its own.
+// Sources are those of docs/foundry-facts.md; each check names its own.
 
 describe("temperature", () => {
   it("converts ITS-90 fixed points to kelvin", () => {

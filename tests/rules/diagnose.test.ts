@@ -8,7 +8,7 @@ const kase = (c: Record<string, unknown>): DiagnosisCase =>
 const top = async (c: Record<string, unknown>) => (await diagnose(kase(c))).causes[0]?.id;
 
 // A356.0: liquidus 615 °C [mem] ASM Vol. 2; green-sand window about 700-760 °C, lost foam about
-// 730-790 °C [mem] (shared/reference/foundry-facts.md).
+// 730-790 °C [mem] (docs/foundry-facts.md).
 describe("handbook cases rank the handbook's cause first", () => {
   it("misrun poured well below the window: cold pour", async () => {
     // Misrun from metal too cold (low superheat): [web] investment-casting trade bodies; common practice.

@@ -11,7 +11,7 @@ import surface from "@/rules/kb/surface.json";
 /**
  * Handbook-style cases for the shrinkage, cracking, inclusion and surface families. Each case is
  * built from a published cause list (the source is named beside it; [mem] where the list is recalled
- * rather than read, as in shared/reference/foundry-facts.md). "first" cases: the handbook's cause
+ * rather than read, as in docs/foundry-facts.md). "first" cases: the handbook's cause
  * must rank first. "not first" cases: the conditions point elsewhere, so that cause must not.
  */
 const MY_FILES = [shrinkage, cracking, inclusions, surface].map((json) => ruleFileSchema.parse(json));
