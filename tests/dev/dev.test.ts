@@ -85,7 +85,9 @@ describe("npm run dev", () => {
     const browser = await launchBrowser();
     try {
       // signedInAs waits for the signed-in shell to show the caster's role.
-      const page = await signedInAs(browser, `http://127.0.0.1:${ports.web}`, PHONE, "caster");
+      // In CI this runs beside the browser tests on two cores, where the dev bundle (unminified) takes
+      // far longer to parse than the export does: give the signed-in shell two minutes.
+      const page = await signedInAs(browser, `http://127.0.0.1:${ports.web}`, PHONE, "caster", 120_000);
       const cookies = await page.context().cookies(`http://127.0.0.1:${ports.web}`);
       expect(cookies.some((c) => c.name.includes("session"))).toBe(true);
     } finally {
@@ -99,5 +101,5 @@ describe("npm run dev", () => {
     for (const port of [ports.web, ports.metro, ports.pg]) {
       await expect.poll(() => portInUse(port), { timeout: 10000 }).toBe(false);
     }
-  }, 240_000);
+  }, 360_000);
 });
