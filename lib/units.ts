@@ -88,3 +88,19 @@ export function formatValue(q: Quantity, si: number | null | undefined, u: Units
   if (si === null || si === undefined) return "–";
   return `${toField(q, si, u)} ${unitLabel(q, u)}`;
 }
+
+/** The choices a person (or a shop's defaults for new members) picks units from, in words. */
+export const UNIT_CHOICES = {
+  temperature: [
+    { value: "C", label: "°C" },
+    { value: "F", label: "°F" },
+  ],
+  length: [
+    { value: "mm", label: "mm" },
+    { value: "in", label: "inches" },
+  ],
+  mass: [
+    { value: "kg", label: "kg" },
+    { value: "lb", label: "lb" },
+  ],
+} as const;

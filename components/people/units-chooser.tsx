@@ -1,20 +1,7 @@
 import { ChoiceChips } from "@/components/ui/choice-chips";
 import { Notice } from "@/components/ui/notice";
 import { useSaveUnits, useUnitsQuery } from "@/hooks/use-units";
-import type { Units } from "@/lib/units";
-
-const TEMPERATURE = [
-  { value: "C", label: "°C" },
-  { value: "F", label: "°F" },
-];
-const LENGTH = [
-  { value: "mm", label: "mm" },
-  { value: "in", label: "inches" },
-];
-const MASS = [
-  { value: "kg", label: "kg" },
-  { value: "lb", label: "lb" },
-];
+import { UNIT_CHOICES, type Units } from "@/lib/units";
 
 /** Each person's own units; saved as soon as a chip is tapped, since there is nothing to undo. */
 export function UnitsChooser() {
@@ -29,19 +16,19 @@ export function UnitsChooser() {
     <>
       <ChoiceChips
         label="Temperatures"
-        options={TEMPERATURE}
+        options={UNIT_CHOICES.temperature}
         value={current.temperature}
         onChange={(v) => set({ temperature: v as Units["temperature"] })}
       />
       <ChoiceChips
         label="Lengths and thicknesses"
-        options={LENGTH}
+        options={UNIT_CHOICES.length}
         value={current.length}
         onChange={(v) => set({ length: v as Units["length"] })}
       />
       <ChoiceChips
         label="Weights (foam density in kg/m³ or lb/ft³)"
-        options={MASS}
+        options={UNIT_CHOICES.mass}
         value={current.mass}
         onChange={(v) => set({ mass: v as Units["mass"] })}
       />

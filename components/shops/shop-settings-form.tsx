@@ -1,3 +1,4 @@
+import { UNIT_CHOICES } from "@/lib/units";
 import { useEffect, useState } from "react";
 import { ChoiceChips } from "@/components/ui/choice-chips";
 import { Button } from "@/components/ui/button";
@@ -38,30 +39,21 @@ export function ShopSettingsForm({ shop }: { shop: Shop }) {
       />
       <ChoiceChips
         label="New members start with temperatures in"
-        options={[
-          { value: "C", label: "°C" },
-          { value: "F", label: "°F" },
-        ]}
+        options={UNIT_CHOICES.temperature}
         value={temperature}
         onChange={setTemperature}
         disabled={!mayEdit}
       />
       <ChoiceChips
         label="... lengths in"
-        options={[
-          { value: "mm", label: "mm" },
-          { value: "in", label: "inches" },
-        ]}
+        options={UNIT_CHOICES.length}
         value={length}
         onChange={setLength}
         disabled={!mayEdit}
       />
       <ChoiceChips
         label="... weights in"
-        options={[
-          { value: "kg", label: "kg" },
-          { value: "lb", label: "lb" },
-        ]}
+        options={UNIT_CHOICES.mass}
         value={mass}
         onChange={setMass}
         disabled={!mayEdit}
