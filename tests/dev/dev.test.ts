@@ -19,6 +19,18 @@ const portInUse = (port: number) =>
     srv.listen(port, "127.0.0.1", () => srv.close(() => resolve(false)));
   });
 
+/**
+ * This process's environment without the product's settings: the browser tests' global setup runs in
+ * the same vitest process and sets PUBLIC_URL, SMTP_URL, MAIL_DIR and UPLOAD_DIR for its own server.
+ * Inherited, they would point the dev server at that server's origin (so it refuses the browser's
+ * sign-in as another site's) and at its mail catcher.
+ */
+function ownConfiguration(): NodeJS.ProcessEnv {
+  const env = { ...process.env };
+  for (const key of ["PUBLIC_URL", "SMTP_URL", "MAIL_DIR", "UPLOAD_DIR", "PORT"]) delete env[key];
+  return env;
+}
+
 // `npm run dev` as a developer runs it: on free ports, with a database folder of its own.
 describe("npm run dev", () => {
   let dev: ChildProcess;
@@ -33,7 +45,7 @@ describe("npm run dev", () => {
     dev = spawn("npm", ["run", "dev"], {
       cwd: root,
       env: {
-        ...process.env,
+        ...ownConfiguration(),
         DATABASE_URL: "",
         PORT: String(ports.web),
         METRO_PORT: String(ports.metro),
@@ -85,9 +97,7 @@ describe("npm run dev", () => {
     const browser = await launchBrowser();
     try {
       // signedInAs waits for the signed-in shell to show the caster's role.
-      // In CI this runs beside the browser tests on two cores, where the dev bundle (unminified) takes
-      // far longer to parse than the export does: give the signed-in shell two minutes.
-      const page = await signedInAs(browser, `http://127.0.0.1:${ports.web}`, PHONE, "caster", 120_000);
+      const page = await signedInAs(browser, `http://127.0.0.1:${ports.web}`, PHONE, "caster");
       const cookies = await page.context().cookies(`http://127.0.0.1:${ports.web}`);
       expect(cookies.some((c) => c.name.includes("session"))).toBe(true);
     } finally {
@@ -101,5 +111,5 @@ describe("npm run dev", () => {
     for (const port of [ports.web, ports.metro, ports.pg]) {
       await expect.poll(() => portInUse(port), { timeout: 10000 }).toBe(false);
     }
-  }, 360_000);
+  }, 240_000);
 });

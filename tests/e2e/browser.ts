@@ -57,15 +57,11 @@ export async function signedInAs(
   baseUrl: string,
   size: { width: number; height: number },
   role: string,
-  /** How long the signed-in shell may take to appear: the dev server's unminified bundle is slower. */
-  timeoutMs = 15000,
 ) {
   const person = DEMO_PEOPLE.find((p) => p.role === role)!;
   const page = await (await browser.newContext({ viewport: size })).newPage();
   await signIn(page, baseUrl, person.email, person.password);
-  await expect
-    .poll(() => page.getByTestId("active-role").textContent({ timeout: timeoutMs }), { timeout: timeoutMs })
-    .toBe(role);
+  await expect.poll(() => page.getByTestId("active-role").textContent(), { timeout: 15000 }).toBe(role);
   return page;
 }
 
