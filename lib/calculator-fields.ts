@@ -1,11 +1,18 @@
 import { PROCESSES } from "../rules/case";
 import type { CalcQuantity, CalculatorKind } from "../rules/calculators";
+import { GATING_POSITIONS, GATING_RATIOS } from "../rules/calculators/gating";
 import { fromField, fromSi, toField, unitLabel, type Quantity, type Units } from "./units";
 
 /** What each calculator asks for, in the order a caster has the figures to hand. */
 export type CalcField =
   | { key: string; label: string; type: "number"; quantity: CalcQuantity; showIf?: [string, string[]] }
-  | { key: string; label: string; type: "choice"; options: readonly { value: string; label: string }[] }
+  | {
+      key: string;
+      label: string;
+      type: "choice";
+      options: readonly { value: string; label: string }[];
+      showIf?: [string, string[]];
+    }
   | { key: "alloy"; label: string; type: "alloy" };
 
 const alloy = { key: "alloy", label: "Alloy", type: "alloy" } as const;
@@ -31,6 +38,11 @@ export const CALCULATOR_TITLES: Record<CalculatorKind, { title: string; purpose:
   },
   pattern: { title: "Pattern size", purpose: "The pattern's sizes and the shrink rule for the alloy.", pour: false },
   riser: { title: "Riser", purpose: "A section's modulus, a riser that freezes later, its neck.", pour: false },
+  gating: {
+    title: "Gating",
+    purpose: "How fast the metal enters, against the critical ingate velocity.",
+    pour: true,
+  },
   hydrogen: { title: "Hydrogen", purpose: "The most hydrogen the melt could hold: an upper bound.", pour: true },
 };
 
@@ -89,6 +101,35 @@ export const CALCULATOR_FIELDS: Record<CalculatorKind, CalcField[]> = {
     num("areaCm2", "Cooling area", "area-cm2", ["shape", ["typed"]]),
     num("mouldConstantMinPerCm2", "Mould constant C_m", "min-per-cm2"),
   ],
+  gating: [
+    num("sprueHeightMm", "Sprue height, cup level to sprue base", "length"),
+    num("chokeAreaCm2", "Sprue-base (choke) area", "area-cm2"),
+    {
+      key: "ingateFrom",
+      label: "Ingates from",
+      type: "choice",
+      options: [
+        { value: "ratio", label: "a gating ratio" },
+        { value: "area", label: "their area" },
+      ],
+    },
+    {
+      key: "gatingRatio",
+      label: "Sprue : runner : ingate",
+      type: "choice",
+      options: GATING_RATIOS.map((r) => ({ value: r, label: r })),
+      showIf: ["ingateFrom", ["ratio"]],
+    },
+    num("ingateAreaCm2", "Ingate area, all together", "area-cm2", ["ingateFrom", ["area"]]),
+    {
+      key: "position",
+      label: "Gated at the",
+      type: "choice",
+      options: GATING_POSITIONS.map((p) => ({ value: p, label: p })),
+    },
+    num("minSectionMm", "Thinnest section", "length"),
+    num("castingVolumeCm3", "Casting volume with risers", "volume-cm3"),
+  ],
   hydrogen: [
     alloy,
     num("meltTempC", "Melt temperature", "temperature"),
@@ -108,6 +149,9 @@ const SI_LABELS: Record<string, string> = {
   "volume-cm3": "cm³",
   "area-cm2": "cm²",
   "time-min": "min",
+  "time-s": "s",
+  velocity: "m/s",
+  "flow-cm3-per-s": "cm³/s",
   percent: "%",
   "solubility-cm3-per-100g": "cm³/100 g",
   "pressure-kpa": "kPa",

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { PROCESSES } from "../rules/case";
 import { CALCULATORS, type CalcResult, type CalculatorInputs, type CalculatorKind } from "../rules/calculators";
+import { GATING_POSITIONS, GATING_RATIOS, INGATE_FROM } from "../rules/calculators/gating";
 import { METAL_METHODS } from "../rules/calculators/metal";
 import { RISER_SHAPES } from "../rules/calculators/riser";
 
@@ -48,6 +49,16 @@ export const calculatorInputSchemas = {
     volumeCm3: positive("the volume").optional(),
     areaCm2: positive("the area").optional(),
     mouldConstantMinPerCm2: positive("the mould constant").optional(),
+  }),
+  gating: z.strictObject({
+    sprueHeightMm: positive("the sprue height").max(5000, "at most 5 m"),
+    chokeAreaCm2: positive("the sprue-base area").max(10000, "at most 10,000 cm²"),
+    ingateFrom: z.enum(INGATE_FROM, { error: "choose a ratio or the ingates' area" }),
+    gatingRatio: z.enum(GATING_RATIOS, { error: "choose a ratio sprue : runner : ingate" }).optional(),
+    ingateAreaCm2: positive("the ingate area").max(10000, "at most 10,000 cm²").optional(),
+    castingVolumeCm3: positive("the casting volume").optional(),
+    minSectionMm: positive("the thinnest section").optional(),
+    position: z.enum(GATING_POSITIONS, { error: "choose where the ingates enter" }),
   }),
   hydrogen: z.strictObject({
     alloy,

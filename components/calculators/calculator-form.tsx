@@ -34,7 +34,7 @@ export function CalculatorForm({ kind, prefill, target, targetLabel }: Props) {
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [result, setResult] = useState<{ r: CalcResult; input: Record<string, unknown> }>();
   const save = useSaveCalculation();
-  const shown = fields.filter((f) => f.type !== "number" || !f.showIf || f.showIf[1].includes(text[f.showIf[0]]));
+  const shown = fields.filter((f) => !("showIf" in f) || !f.showIf || f.showIf[1].includes(text[f.showIf[0]]));
 
   function workOut() {
     const raw: Record<string, unknown> = {};

@@ -1,3 +1,4 @@
+import { gating, type GatingInput } from "./gating";
 import { hydrogen, type HydrogenInput } from "./hydrogen";
 import { metalToMelt, type MetalInput } from "./metal";
 import { patternSize, type PatternInput } from "./pattern";
@@ -6,18 +7,19 @@ import type { CalcAlloy, CalcResult } from "./result";
 import { riser, type RiserInput } from "./riser";
 
 /** The calculators, by the name that appears in their URL and in a saved result. */
-export const CALCULATORS = ["pour-temperature", "metal", "pattern", "riser", "hydrogen"] as const;
+export const CALCULATORS = ["pour-temperature", "metal", "pattern", "riser", "gating", "hydrogen"] as const;
 export type CalculatorKind = (typeof CALCULATORS)[number];
 export type CalculatorInputs = {
   "pour-temperature": PourTemperatureInput;
   metal: MetalInput;
   pattern: PatternInput;
   riser: RiserInput;
+  gating: GatingInput;
   hydrogen: HydrogenInput;
 };
 
-/** Calculators that need an alloy's figures; the riser works from shape alone. */
-export const needsAlloy = (kind: CalculatorKind) => kind !== "riser";
+/** Calculators that need an alloy's figures; the riser works from shape alone, the gating from areas and heights. */
+export const needsAlloy = (kind: CalculatorKind) => kind !== "riser" && kind !== "gating";
 
 /** One way in for the app and the server, so a saved result is the one the screen showed. */
 export function runCalculator<K extends CalculatorKind>(
@@ -38,6 +40,8 @@ export function runCalculator<K extends CalculatorKind>(
       return patternSize(input as PatternInput, a());
     case "riser":
       return riser(input as RiserInput);
+    case "gating":
+      return gating(input as GatingInput);
     case "hydrogen":
       return hydrogen(input as HydrogenInput, a());
   }

@@ -24,16 +24,6 @@ export function fallHeightForVelocityM(velocityMS: number): number {
   return velocityMS ** 2 / (2 * STANDARD_GRAVITY_MS2);
 }
 
-/** Volume flow through a choke of this area: Q = v · A (continuity). */
-export function flowRateM3S(velocityMS: number, chokeAreaM2: number): number {
-  return velocityMS * chokeAreaM2;
-}
-
-/** Time to fill a cavity at a steady flow: t = V / Q. */
-export function fillTimeS(cavityVolumeM3: number, flowRateM3PerS: number): number {
-  return cavityVolumeM3 / flowRateM3PerS;
-}
-
 /**
  * Velocity guide for a casting: 0.5 m/s, about 1 m/s where the thinnest section is 5 mm or less.
  * Campbell gives these for aluminium [hb]; applying them to copper-base alloys rests on his remark that

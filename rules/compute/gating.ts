@@ -67,6 +67,12 @@ export function runnerVelocityMPerS(sprueBaseVelocity: number, ratio: GatingRati
 /** Pressurised when the ingates are no larger than the sprue base: the system runs full but jets. */
 export const isPressurised = (ratio: GatingRatio) => ratio.ingate <= ratio.sprue;
 
+/** The total ingate area that brings a flow Q down to a target velocity: A = Q / v (continuity). */
+export function ingateAreaForVelocityM2(flowM3PerS: number, targetVelocityMPerS: number) {
+  if (!(targetVelocityMPerS > 0)) throw new RangeError("the target velocity is above 0 m/s");
+  return flowM3PerS / targetVelocityMPerS;
+}
+
 /** Time to fill a cavity at a steady flow: t = V / Q (s). */
 export function fillTimeS(cavityVolumeM3: number, flowM3PerS: number) {
   if (!(flowM3PerS > 0)) throw new RangeError("the flow is above 0 m³/s");

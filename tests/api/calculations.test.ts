@@ -37,6 +37,14 @@ describe("calculator results kept on a melt or casting", () => {
     const castingList = await caster.agent.get(`/api/calculations?castingId=${casting.id}`);
     expect(castingList.body.items).toHaveLength(1);
     expect(castingList.body.items[0].result.summary).toMatch(/riser D = H = 50 mm/);
+    // The gating needs no alloy: 1:2:4 on the Groover sprue gives 0.40 m/s ([calc] docs/gating-and-copper-facts.md "Filling").
+    const gating = await caster.agent.post("/api/calculations").send({
+      kind: "gating",
+      castingId: casting.id,
+      input: { sprueHeightMm: 200, chokeAreaCm2: 2.5, ingateFrom: "ratio", gatingRatio: "1:2:4", position: "bottom" },
+    });
+    expect(gating.status).toBe(201);
+    expect(gating.body.result.summary).toMatch(/Ingates 0\.4 m\/s, within/);
   });
 
   it("refuses impossible input field by field and keeps nothing", async () => {
@@ -62,7 +70,13 @@ describe("calculator results kept on a melt or casting", () => {
     expect(alloy.body.error.fields.alloy).toMatch(/A356\.0/);
     const copper = await save({ kind: "hydrogen", meltId: melt.id, input: { alloy: "C83600", meltTempC: 1150 } });
     expect(copper.body.error.fields.alloy).toMatch(/aluminium/);
-    for (const r of [negative, unknownKind, both, alloy, copper]) expect(r.status).toBe(400);
+    const noRatio = await save({
+      kind: "gating",
+      meltId: melt.id,
+      input: { sprueHeightMm: 200, chokeAreaCm2: 2.5, ingateFrom: "ratio", position: "bottom" },
+    });
+    expect(noRatio.body.error.fields.gatingRatio).toMatch(/ratio/);
+    for (const r of [negative, unknownKind, both, alloy, copper, noRatio]) expect(r.status).toBe(400);
     expect((await caster.agent.get("/api/calculations?meltId=abc")).status).toBe(400);
     expect(await countFor(shopId)).toBe(0);
   });

@@ -141,3 +141,46 @@ describe("hydrogen, Ransley-Neufeld with Doutre's silicon factor (docs/calculato
     );
   });
 });
+
+// Worked example of docs/gating-and-copper-facts.md "Filling" [calc] on the Groover sprue ([hb] Groover,
+// Fundamentals of Modern Manufacturing): h = 0.20 m, sprue base 2.5 cm², cavity 1560 cm³, Cd = 0.8.
+describe("gating (docs/gating-and-copper-facts.md 'Filling', worked example)", () => {
+  const groover = { sprueHeightMm: 200, chokeAreaCm2: 2.5, castingVolumeCm3: 1560, position: "bottom" as const };
+  it("1:2:4 gives ingates of 10 cm² at 0.40 m/s, within 0.5 m/s; 396 cm³/s fills 1560 cm³ in 3.9 s", () => {
+    const r = runCalculator("gating", { ...groover, ingateFrom: "ratio", gatingRatio: "1:2:4" }, undefined);
+    expect(line(r, "Sprue-base velocity")).toBeCloseTo(1.585, 2);
+    expect(line(r, "Flow")).toBeCloseTo(396, 0);
+    expect(line(r, "Runner velocity")).toBeCloseTo(0.79, 2);
+    expect(line(r, "Ingate velocity")).toBeCloseTo(0.4, 2);
+    expect(line(r, "Pour time")).toBeCloseTo(3.9, 1);
+    expect(r.warnings).toEqual([]);
+    expect(r.summary).toMatch(/within the 0.5 m\/s/);
+  });
+  it("1:2:1 jets at 1.58 m/s, about 3 × the limit, and asks for 7.9 cm² of ingates (Q / 0.5 m/s)", () => {
+    const r = runCalculator("gating", { ...groover, ingateFrom: "ratio", gatingRatio: "1:2:1" }, undefined);
+    expect(line(r, "Ingate velocity")).toBeCloseTo(1.58, 2);
+    expect(line(r, "Ingate area for the critical velocity")).toBeCloseTo(7.92, 2);
+    expect(r.warnings[0]).toMatch(/3\.2 × the critical velocity.*7\.9 cm²/);
+    expect(r.notes.join(" ")).toMatch(/pressurised/);
+  });
+  it("walls of 5 mm or less are judged against about 1 m/s (Campbell's rule 2 [hb])", () => {
+    const r = runCalculator(
+      "gating",
+      { ...groover, ingateFrom: "area", ingateAreaCm2: 5, minSectionMm: 4, position: "side" },
+      undefined,
+    );
+    expect(line(r, "Critical ingate velocity")).toBe(1);
+    expect(line(r, "Ingate velocity")).toBeCloseTo(0.79, 2);
+    expect(r.warnings).toEqual([]);
+  });
+  it("top gating says the metal falls inside the cavity; a missing ratio or area is refused by field", () => {
+    const top = runCalculator(
+      "gating",
+      { ...groover, ingateFrom: "ratio", gatingRatio: "1:2:4", position: "top" },
+      undefined,
+    );
+    expect(top.notes.join(" ")).toMatch(/falls inside the cavity/);
+    expect(refusal(() => runCalculator("gating", { ...groover, ingateFrom: "ratio" }, undefined))).toBe("gatingRatio");
+    expect(refusal(() => runCalculator("gating", { ...groover, ingateFrom: "area" }, undefined))).toBe("ingateAreaCm2");
+  });
+});

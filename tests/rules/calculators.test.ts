@@ -1,32 +1,35 @@
 import { describe, expect, it } from "vitest";
+import { chargeForMeltLossKg, meltTempForPourC, riserDiameterForModulusCm } from "../../rules/compute/calculators";
 import {
-  chargeForMeltLossKg,
+  fillTimeS,
+  flowRateM3PerS,
   ingateAreaForVelocityM2,
-  ingateVelocityMS,
-  meltTempForPourC,
-  riserDiameterForModulusCm,
-  sprueBaseVelocityMS,
-} from "../../rules/compute/calculators";
-import { fillTimeS, flowRateM3S } from "../../rules/compute/filling";
+  ingateVelocityMPerS,
+  sprueBaseVelocityMPerS,
+} from "../../rules/compute/gating";
 import { chvorinovTimeMin, modulusCm } from "../../rules/compute/solidification";
 
 // Worked examples from docs/calculator-facts.md. Groover takes g = 9.81 m/s² (198.1 cm/s at 0.20 m);
 // the code uses standard gravity 9.80665, so velocities agree to 0.01 m/s.
 describe("gating, the Groover sprue with Cd = 0.8 (docs/calculator-facts.md 'Filling' [calc] from [hb] Groover)", () => {
-  const vBase = sprueBaseVelocityMS(0.2);
+  const vBase = sprueBaseVelocityMPerS(0.2);
   const chokeM2 = 2.5e-4;
   it("sprue base 1.585 m/s, flow 396 cm³/s, fill of 1560 cm³ in 3.9 s", () => {
     expect(vBase).toBeCloseTo(1.58, 2);
-    const q = flowRateM3S(vBase, chokeM2);
+    const q = flowRateM3PerS(vBase, chokeM2);
     expect(q * 1e6).toBeCloseTo(396.2, 0);
     expect(fillTimeS(1560e-6, q)).toBeCloseTo(3.94, 2);
   });
   it("1:2:4 (ingates 10 cm²) gives 0.40 m/s; 1:2:1 (2.5 cm²) 1.58 m/s", () => {
-    expect(ingateVelocityMS(vBase, chokeM2, 10e-4)).toBeCloseTo(0.396, 3);
-    expect(ingateVelocityMS(vBase, chokeM2, 2.5e-4)).toBeCloseTo(1.58, 2);
+    expect(
+      ingateVelocityMPerS({ sprueBaseVelocityMPerS: vBase, sprueBaseAreaM2: chokeM2, ingateAreaM2: 10e-4 }),
+    ).toBeCloseTo(0.396, 3);
+    expect(
+      ingateVelocityMPerS({ sprueBaseVelocityMPerS: vBase, sprueBaseAreaM2: chokeM2, ingateAreaM2: 2.5e-4 }),
+    ).toBeCloseTo(1.58, 2);
   });
   it("the ingate area for 0.5 m/s is Q / 0.5 = 7.92 cm² [calc]", () => {
-    expect(ingateAreaForVelocityM2(flowRateM3S(vBase, chokeM2), 0.5) * 1e4).toBeCloseTo(7.92, 2);
+    expect(ingateAreaForVelocityM2(flowRateM3PerS(vBase, chokeM2), 0.5) * 1e4).toBeCloseTo(7.92, 2);
   });
 });
 

@@ -20,13 +20,8 @@ import {
   plateModulusMm,
   riserDiameterCm,
 } from "@/rules/compute/solidification";
-import {
-  fallHeightForVelocityM,
-  fillTimeS,
-  flowRateM3S,
-  freeFallVelocityMS,
-  velocityGuideMS,
-} from "@/rules/compute/filling";
+import { fallHeightForVelocityM, freeFallVelocityMS, velocityGuideMS } from "@/rules/compute/filling";
+import { fillTimeS, flowRateM3PerS } from "@/rules/compute/gating";
 import {
   castingSizeMm,
   foamPatternVolumeCm3,
@@ -169,7 +164,7 @@ describe("filling", () => {
     // Groover textbook problem [hb]: sprue 20 cm, base 2.5 cm², cavity 1560 cm³.
     const vMS = freeFallVelocityMS(0.2);
     expect(Math.abs(vMS * 100 - 198.1)).toBeLessThan(0.1); // 198.1 cm/s (Groover uses g = 981 cm/s²)
-    const qM3S = flowRateM3S(vMS, 2.5e-4);
+    const qM3S = flowRateM3PerS(vMS, 2.5e-4);
     expect(Math.abs(qM3S * 1e6 - 495)).toBeLessThan(0.5); // 495 cm³/s
     expect(fillTimeS(1560e-6, qM3S)).toBeCloseTo(3.15, 2); // 3.15 s
   });
