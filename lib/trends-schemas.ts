@@ -16,6 +16,17 @@ export type TrendsQuery = z.infer<typeof trendsQuery>;
 
 /** A bar of a rate chart: castings in the group and how many had the thing counted. */
 export type RatePoint = { key: string; castings: number; count: number };
+/** A fix as the shop wrote it, how often it was tried and how the next casting came out. */
+export type FixPoint = {
+  fix: string;
+  tried: number;
+  worked: number;
+  partly: number;
+  failed: number;
+  notJudged: number;
+};
+/** A cause mentors confirmed (the newest word per casting), by id, or in words when the rulebook lacks it. */
+export type CausePoint = { causeId: string | null; title: string; castings: number };
 export type Trends = {
   castings: number;
   defectBySuperheat: RatePoint[];
@@ -23,6 +34,8 @@ export type Trends = {
   defectByAlloy: RatePoint[];
   scrapByMonth: RatePoint[];
   reworkByMonth: RatePoint[];
+  fixes: FixPoint[];
+  confirmedCauses: CausePoint[];
 };
 
 /** Superheat bands in °C (pour − liquidus); below 40 °C misruns rise in thin walls (common practice). */

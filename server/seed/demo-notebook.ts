@@ -1,4 +1,5 @@
 import type { CastingInput, MeltInput } from "../../lib/notebook-schemas";
+import type { Worked } from "../../lib/review-schemas";
 import type { DefectLocation, DefectType } from "../../rules/case";
 import type { DrawnDefect, PartShape } from "./demo-drawings";
 
@@ -15,6 +16,10 @@ export type DemoCasting = Omit<CastingInput, "marks"> & {
   photo?: PartShape;
   diagnose?: boolean;
   comments?: { by: "mentor" | "caster" | "owner"; body: string }[];
+  /** The mentor's confirmed cause (a rulebook cause id) and the fix tried on the next casting of the part. */
+  learned?: { cause: string; note?: string; fix?: string; worked?: Worked };
+  /** The caster asks a mentor to look at it (left open, so the review queue has a case). */
+  askReview?: string;
 };
 export type DemoMelt = Omit<MeltInput, "pouredOn"> & {
   daysAgo: number;
@@ -114,6 +119,12 @@ export const DEMO_MELTS: DemoMelt[] = [
         photo: "plate",
         diagnose: true,
         notes: "Far end of the ribs never filled.",
+        learned: {
+          cause: "cold-pour",
+          note: "705 °C after a three-minute wait is cold for lost foam.",
+          fix: "Pour hotter, inside the alloy's window for this process: raise the pour temperature by 20-30 °C and check it with a thermocouple just before pouring",
+          worked: "yes",
+        },
         marks: [
           { type: "misrun", location: "far-from-gate", severity: 3, draw: { kind: "unfilled", x: 0.8, y: 0.3 } },
           {
@@ -224,6 +235,11 @@ export const DEMO_MELTS: DemoMelt[] = [
     castings: [
       {
         partName: "Valve body",
+        learned: {
+          cause: "hydrogen-pickup",
+          note: "Humid day, scrap charge, no degassing: the porosity is hydrogen.",
+          fix: "Dry and preheat the charge, tools and skimmers before they touch the melt",
+        },
         pattern: "Wood VB-7",
         minSectionMm: 8,
         maxSectionMm: 20,
@@ -257,6 +273,12 @@ export const DEMO_MELTS: DemoMelt[] = [
       },
       {
         partName: "Shelf bracket",
+        learned: {
+          cause: "mould-moisture",
+          note: "Sand squeezed wet in the hand; the blowholes sit under the cope.",
+          fix: "Temper green sand to its clay, not to a fixed per cent: about 35-50 % compactability, or the water its clay wants, and mull it well",
+          worked: "partly",
+        },
         pattern: "Wood SB-2",
         minSectionMm: 6,
         maxSectionMm: 10,
@@ -288,6 +310,10 @@ export const DEMO_MELTS: DemoMelt[] = [
     castings: [
       {
         partName: "Bench block",
+        learned: {
+          cause: "insufficient-feeding",
+          fix: "Add a riser on the thick section with a modulus (volume over cooling area) at least 1.2 × the section's; a plate's modulus is half its thickness, a cylindrical riser with height = diameter has modulus D/6",
+        },
         pattern: "Wood BB-60",
         minSectionMm: 8,
         maxSectionMm: 60,
@@ -364,6 +390,7 @@ export const DEMO_MELTS: DemoMelt[] = [
       },
       {
         partName: "Door knocker",
+        learned: { cause: "sand-erosion", note: "Sand washed off the gate; the stream hit the mould wall square on." },
         pattern: "Wood DK-1",
         minSectionMm: 6,
         maxSectionMm: 15,
@@ -402,6 +429,7 @@ export const DEMO_MELTS: DemoMelt[] = [
     castings: [
       {
         partName: "Lever arm",
+        learned: { cause: "hot-tear-prone-alloy", note: "713 tears at a sharp corner like this one." },
         pattern: "Wood LA-2",
         minSectionMm: 5,
         maxSectionMm: 25,
@@ -653,6 +681,7 @@ export const DEMO_MELTS: DemoMelt[] = [
       },
       {
         partName: "Shelf bracket",
+        askReview: "Blowholes are gone but there is a fold along the side: coating or pour?",
         pattern: "Foam SB-2",
         minSectionMm: 6,
         maxSectionMm: 10,

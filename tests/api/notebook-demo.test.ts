@@ -43,5 +43,13 @@ describe("the demo notebook", () => {
     const pinned = details.flatMap((d) => d.marks).filter((m) => m.photoId !== null);
     expect(pinned.length).toBeGreaterThanOrEqual(6);
     expect(pinned.every((m) => m.x !== null && m.y !== null)).toBe(true);
+
+    // The learning loop has been run on a few cases, so the review, follow-ups and trends show something.
+    const trends = (await mentor.agent.get("/api/trends")).body;
+    expect(trends.confirmedCauses.map((c: { causeId: string }) => c.causeId)).toContain("cold-pour");
+    const pourHotter = trends.fixes.find((f: { fix: string }) => f.fix.startsWith("Pour hotter"));
+    expect(pourHotter).toMatchObject({ tried: 1, worked: 1 });
+    const queue = (await mentor.agent.get("/api/review/queue")).body.items;
+    expect(queue.map((q: { partName: string }) => q.partName)).toEqual(["Shelf bracket"]);
   });
 });

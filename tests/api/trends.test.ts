@@ -55,6 +55,60 @@ describe("trends", () => {
     expect(theirView.body.castings).toBe(1);
   });
 
+  it("counts fixes tried by how the next casting came out, and each casting's newest confirmed cause once", async () => {
+    const { caster, mentor } = await shopWithCrew("Trends Fix Shop");
+    const other = await shopWithCrew("Trends Fix Other Shop");
+    const march = await newMelt(caster, { pouredOn: "2026-03-10", process: "green-sand", pourTempC: 640 });
+    const may = await newMelt(caster, { pouredOn: "2026-05-10", process: "green-sand", pourTempC: 700 });
+    const [a, b, c] = [
+      await newCasting(caster, march.id, { outcome: "scrap", marks: misrun }),
+      await newCasting(caster, march.id, { outcome: "scrap", marks: misrun }),
+      await newCasting(caster, may.id, { outcome: "rework", marks: misrun }),
+    ];
+    // Whether a fix worked is read off the next casting of the part, from a later melt.
+    const june = await newMelt(caster, { pouredOn: "2026-06-10", process: "green-sand", pourTempC: 720 });
+    const next = await newCasting(caster, june.id, { outcome: "good", marks: [] });
+    const tryFix = async (castingId: number, fix: string, worked?: string) => {
+      const f = await caster.agent
+        .post(`/api/followups/castings/${castingId}/fixes`)
+        .send(worked ? { fix, nextCastingId: next.id, worked } : { fix });
+      expect(f.status).toBe(201);
+    };
+    await tryFix(a.id, "Pour hotter", "yes");
+    await tryFix(b.id, "Pour hotter", "no");
+    await tryFix(c.id, "Pour hotter");
+    await tryFix(c.id, "Widen the ingates", "partly");
+    const confirm = (castingId: number, body: object) =>
+      mentor.agent.post(`/api/review/castings/${castingId}/confirmations`).send(body);
+    expect((await confirm(a.id, { causeId: "cold-pour" })).status).toBe(201);
+    await confirm(b.id, { causeText: "Ladle lip froze over" });
+    await confirm(b.id, { causeId: "cold-pour" }); // the newest word on b replaces the first
+    await confirm(c.id, { causeText: "Ladle lip froze over" });
+    // Another shop's fix and confirmation must not enter the counts.
+    const theirMelt = await newMelt(other.caster, { pouredOn: "2026-03-11", process: "green-sand", pourTempC: 640 });
+    const theirs = await newCasting(other.caster, theirMelt.id, { outcome: "scrap", marks: misrun });
+    await other.caster.agent.post(`/api/followups/castings/${theirs.id}/fixes`).send({ fix: "Pour hotter" });
+    await other.mentor.agent.post(`/api/review/castings/${theirs.id}/confirmations`).send({ causeId: "cold-pour" });
+
+    const all = (await caster.agent.get("/api/trends")).body;
+    // Hand count: "Pour hotter" tried 3 times, worked 1, failed 1, 1 not judged; "Widen the ingates" once, partly.
+    expect(all.fixes).toEqual([
+      { fix: "Pour hotter", tried: 3, worked: 1, partly: 0, failed: 1, notJudged: 1 },
+      { fix: "Widen the ingates", tried: 1, worked: 0, partly: 1, failed: 0, notJudged: 0 },
+    ]);
+    expect(all.confirmedCauses).toHaveLength(2);
+    expect(all.confirmedCauses[0]).toMatchObject({ causeId: "cold-pour", castings: 2 });
+    expect(all.confirmedCauses[0].title).toMatch(/cold/i);
+    expect(all.confirmedCauses[1]).toEqual({ causeId: null, title: "Ladle lip froze over", castings: 1 });
+    // The filters narrow these charts too: only May's casting.
+    const mayOnly = (await caster.agent.get("/api/trends?from=2026-05-01")).body;
+    expect(mayOnly.fixes.map((f: { fix: string; tried: number }) => [f.fix, f.tried])).toEqual([
+      ["Pour hotter", 1],
+      ["Widen the ingates", 1],
+    ]);
+    expect(mayOnly.confirmedCauses).toEqual([{ causeId: null, title: "Ladle lip froze over", castings: 1 }]);
+  });
+
   it("refuses bad filters with a message per field, and strangers", async () => {
     const { caster } = await shopWithCrew("Trends Bad Shop");
     const bad = await caster.agent.get("/api/trends?from=2026-13-40&process=sandcastle&colour=blue");

@@ -14,6 +14,14 @@ describe("trends", () => {
     await page.setViewportSize(WIDE);
     await page.getByRole("radio", { name: "lost foam" }).click();
     await seen(page, "Scrap by month");
+    expect(page.url()).toContain("process=lost-foam"); // the filters live in the URL
+    // The demo mentor confirmed causes and the caster tried fixes: both charts have bars.
+    await seen(page, "Fixes tried and how they worked");
+    expect(await page.getByRole("img", { name: /^Pour hotter.*tried 1 times; 1 worked/ }).count()).toBe(1);
     await longShot(page, "trends-wide");
+    // A bar opens the castings behind it: the casebook with the same filters.
+    await page.getByRole("link", { name: /^lost foam: .*Open these castings/ }).click();
+    await expect.poll(() => page.url(), { timeout: 10000 }).toMatch(/\/\?process=lost-foam$/);
+    await seen(page, "Ribbed cover plate");
   });
 });
