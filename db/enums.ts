@@ -1,7 +1,20 @@
 import { pgEnum } from "drizzle-orm/pg-core";
 import { WORKED } from "../lib/review-schemas";
 import { OUTCOMES } from "../lib/search-schemas";
-import { CHARGES, DEFECT_LOCATIONS, DEFECT_TYPES, DEGASSING_METHODS, PROCESSES } from "../rules/case";
+import {
+  CHARGES,
+  COATING_PERMEABILITIES,
+  CRUCIBLES,
+  DEFECT_LOCATIONS,
+  DEFECT_TYPES,
+  DEGASSING_METHODS,
+  FOAM_TYPES,
+  GATING_POSITIONS,
+  MODIFIERS,
+  PROCESSES,
+  SAND_FEELS,
+  SAND_TYPES,
+} from "../rules/case";
 import { ALLOY_FAMILIES } from "../rules/fact-catalog";
 import { RULE_STATUSES } from "../rules/rule-diff";
 
@@ -22,3 +35,10 @@ export const ruleStatusEnum = pgEnum("rule_status", RULE_STATUSES);
 export const temperatureUnitEnum = pgEnum("temperature_unit", ["C", "F"]);
 export const lengthUnitEnum = pgEnum("length_unit", ["mm", "in"]);
 export const massUnitEnum = pgEnum("mass_unit", ["kg", "lb"]);
+export const crucibleEnum = pgEnum("crucible", CRUCIBLES);
+export const modifierEnum = pgEnum("modifier", MODIFIERS);
+export const sandTypeEnum = pgEnum("sand_type", SAND_TYPES);
+export const sandFeelEnum = pgEnum("sand_feel", SAND_FEELS);
+export const coatingPermeabilityEnum = pgEnum("coating_permeability", COATING_PERMEABILITIES);
+export const foamTypeEnum = pgEnum("foam_type", FOAM_TYPES);
+export const gatingPositionEnum = pgEnum("gating_position", GATING_POSITIONS);

@@ -1,6 +1,8 @@
 import { useState } from "react";
 import { fieldErrors } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
+import { CASTING_CONDITIONS } from "@/lib/condition-fields";
+import { conditionsFromDraft, conditionsToDraft, type ConditionDraft } from "@/lib/condition-drafts";
 import { castingInput, type CastingInput, type Outcome } from "@/lib/notebook-schemas";
 import type { Units } from "@/lib/units";
 
@@ -21,6 +23,8 @@ export type CastingDraft = Record<NumberKey, string> & {
   hasRiser?: boolean;
   hasOverflow?: boolean;
   hasVents?: boolean;
+  /** The gating beyond the sprue height (lib/condition-fields.ts). */
+  conditions: ConditionDraft;
 };
 export type CastingInitial = { [K in keyof CastingInput]?: CastingInput[K] | null };
 
@@ -35,6 +39,7 @@ function draftFrom(c: CastingInitial, units: Units): CastingDraft {
     hasRiser: c.hasRiser ?? undefined,
     hasOverflow: c.hasOverflow ?? undefined,
     hasVents: c.hasVents ?? undefined,
+    conditions: conditionsToDraft(CASTING_CONDITIONS, c, units),
   };
 }
 
@@ -47,8 +52,11 @@ export function useCastingDraft(initial: CastingInitial, units: Units) {
 
   function check(): CastingInput | undefined {
     const numbers = textToNumbers(CASTING_NUMBERS, draft, units);
+    // The gating applies to every process (lost foam too: its rules read the gating but not the free fall).
+    const conditions = conditionsFromDraft(CASTING_CONDITIONS, draft.conditions, { process: null }, units);
     const input = {
       ...numbers.values,
+      ...conditions.values,
       partName: draft.partName.trim(),
       pattern: draft.pattern.trim() || null,
       orientation: draft.orientation.trim() || null,
@@ -59,7 +67,11 @@ export function useCastingDraft(initial: CastingInitial, units: Units) {
       hasVents: draft.hasVents ?? null,
     };
     const parsed = castingInput.safeParse(input);
-    const found = { ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true })), ...numbers.errors };
+    const found = {
+      ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true })),
+      ...numbers.errors,
+      ...conditions.errors,
+    };
     setErrors(found);
     return parsed.success && Object.keys(found).length === 0 ? parsed.data : undefined;
   }

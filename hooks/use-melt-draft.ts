@@ -1,7 +1,10 @@
 import { useState } from "react";
 import { fieldErrors } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
+import { MELT_CONDITIONS, type ConditionContext } from "@/lib/condition-fields";
+import { conditionsFromDraft, conditionsToDraft, type ConditionDraft } from "@/lib/condition-drafts";
 import { alloyConflicts, meltInput, type Alloy, type MeltInput } from "@/lib/notebook-schemas";
+import { metalOf } from "@/rules/alloys";
 import type { Units } from "@/lib/units";
 import type { Charge, DegassingMethod, Process } from "@/rules/case";
 
@@ -29,6 +32,8 @@ export type MeltDraft = Record<NumberKey, string> & {
   skimmed?: boolean;
   coatingApplied?: boolean;
   coatingDried?: boolean;
+  /** Melt treatment, sand, mould and foam beyond the everyday fields (lib/condition-fields.ts). */
+  conditions: ConditionDraft;
   notes: string;
 };
 
@@ -57,8 +62,15 @@ function draftFrom(m: Initial, units: Units): MeltDraft {
     skimmed: orUndefined(m.skimmed),
     coatingApplied: orUndefined(m.coatingApplied),
     coatingDried: orUndefined(m.coatingDried),
+    conditions: conditionsToDraft(MELT_CONDITIONS, m, units),
     notes: m.notes ?? "",
   };
+}
+
+/** Which conditions apply: the process chosen and the metal of the alloy chosen. */
+export function meltContext(draft: MeltDraft, alloys: Alloy[]): ConditionContext {
+  const alloy = alloys.find((a) => a.designation === draft.alloy);
+  return { process: draft.process, metal: alloy ? metalOf(alloy.family) : undefined };
 }
 
 /**
@@ -72,9 +84,11 @@ export function useMeltDraft(initial: Initial, units: Units) {
 
   function check(alloys: Alloy[]): MeltInput | undefined {
     const numbers = textToNumbers(MELT_NUMBERS, draft, units);
+    const conditions = conditionsFromDraft(MELT_CONDITIONS, draft.conditions, meltContext(draft, alloys), units);
     const v = numbers.values;
     const input = {
       ...v,
+      ...conditions.values,
       sandMoisturePct: showsMoisture(draft.process) ? v.sandMoisturePct : null,
       foamDensityKgM3: showsFoam(draft.process) ? v.foamDensityKgM3 : null,
       // Hidden fields send nothing: minutes without degassing, coats of a coating that was not applied.
@@ -98,6 +112,7 @@ export function useMeltDraft(initial: Initial, units: Units) {
       ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true })),
       ...(alloy ? alloyConflicts(input as Initial as MeltInput, alloy) : {}),
       ...numbers.errors,
+      ...conditions.errors,
       ...(draft.process ? {} : { process: "choose a process" }),
       ...(draft.alloy ? {} : { alloy: "choose an alloy" }),
     };

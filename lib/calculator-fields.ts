@@ -1,6 +1,6 @@
-import { PROCESSES } from "../rules/case";
 import type { CalcQuantity, CalculatorKind } from "../rules/calculators";
-import { GATING_POSITIONS, GATING_RATIOS } from "../rules/calculators/gating";
+import { GATING_POSITIONS, PROCESSES } from "../rules/case";
+import { GATING_RATIOS } from "../rules/calculators/gating";
 import { fromField, fromSi, toField, unitLabel, type Quantity, type Units } from "./units";
 
 /** What each calculator asks for, in the order a caster has the figures to hand. */

@@ -1,7 +1,7 @@
 import { z } from "zod";
-import { PROCESSES } from "../rules/case";
 import { CALCULATORS, type CalcResult, type CalculatorInputs, type CalculatorKind } from "../rules/calculators";
-import { GATING_POSITIONS, GATING_RATIOS, INGATE_FROM } from "../rules/calculators/gating";
+import { GATING_POSITIONS, PROCESSES } from "../rules/case";
+import { GATING_RATIOS, INGATE_FROM } from "../rules/calculators/gating";
 import { METAL_METHODS } from "../rules/calculators/metal";
 import { RISER_SHAPES } from "../rules/calculators/riser";
 

@@ -3,6 +3,7 @@ import { CHARGES, DEFECT_LOCATIONS, DEFECT_TYPES, DEGASSING_METHODS, PROCESSES }
 import type { Charge, DefectLocation, DefectType, DegassingMethod, Process } from "../rules/case";
 import { ALLOY_FAMILIES, type AlloyFamily } from "../rules/fact-catalog";
 import type { DiagnosisResult } from "../rules/rank";
+import { castingConditionFields, meltConditionFields } from "./condition-fields";
 import { calendarDate, requiredText, rowId, text } from "./fields";
 
 /**
@@ -52,6 +53,7 @@ export const meltFields = z.object({
   coatingDried: opt(z.boolean()),
   coatingCoats: opt(z.number().int("whole coats").min(0, "cannot be negative").max(20)),
   foamDensityKgM3: opt(z.number().positive("must be above 0 kg/m³").max(200, "above 200 kg/m³")),
+  ...meltConditionFields,
   notes: opt(text(4000)),
 });
 
@@ -125,6 +127,7 @@ export const castingFields = z.object({
   hasRiser: opt(z.boolean()),
   hasOverflow: opt(z.boolean()),
   hasVents: opt(z.boolean()),
+  ...castingConditionFields,
   orientation: opt(text(120)),
   outcome: opt(z.enum(["good", "rework", "scrap"], { error: "outcome is good, rework or scrap" })),
   notes: opt(text(4000)),

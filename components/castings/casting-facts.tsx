@@ -1,4 +1,6 @@
 import { FactGrid, type FactRow } from "@/components/diagnosis/fact-grid";
+import { CASTING_CONDITIONS } from "@/lib/condition-fields";
+import { loggedConditions } from "@/lib/condition-drafts";
 import type { Casting } from "@/lib/notebook-schemas";
 import { formatValue, type Units } from "@/lib/units";
 
@@ -16,6 +18,7 @@ export function CastingFacts({ casting: c, units }: { casting: Casting; units: U
     { label: "Riser", value: yesNo(c.hasRiser) },
     { label: "Overflow", value: yesNo(c.hasOverflow) },
     { label: "Vents", value: yesNo(c.hasVents) },
+    ...loggedConditions(CASTING_CONDITIONS, c, units),
     { label: "Orientation", value: c.orientation },
   ];
   return <FactGrid rows={rows} />;

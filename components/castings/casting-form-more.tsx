@@ -1,8 +1,10 @@
+import { ConditionGroups } from "@/components/conditions/condition-groups";
 import { Pair } from "@/components/ui/field-pair";
 import { NumberField } from "@/components/ui/number-field";
 import { TextField } from "@/components/ui/text-field";
 import { YesNoChips } from "@/components/ui/yes-no-chips";
 import type { CastingDraft } from "@/hooks/use-casting-draft";
+import { CASTING_CONDITIONS } from "@/lib/condition-fields";
 import { unitLabel, type Units } from "@/lib/units";
 
 type Props = {
@@ -32,6 +34,14 @@ export function CastingMore({ draft, set, errors, units }: Props) {
           error={errors.pourTimeS}
         />
       </Pair>
+      <ConditionGroups
+        groups={CASTING_CONDITIONS}
+        draft={draft.conditions}
+        onChange={(v) => set("conditions", v)}
+        errors={errors}
+        context={{ process: null }}
+        units={units}
+      />
       <TextField
         label="Pattern"
         value={draft.pattern}

@@ -1,4 +1,6 @@
 import { FactGrid, type FactRow } from "@/components/diagnosis/fact-grid";
+import { MELT_CONDITIONS } from "@/lib/condition-fields";
+import { loggedConditions } from "@/lib/condition-drafts";
 import { CHARGE_LABELS, DEGASSING_LABELS, PROCESS_LABELS } from "@/lib/labels";
 import type { Melt } from "@/lib/notebook-schemas";
 import { formatValue, type Quantity, type Units } from "@/lib/units";
@@ -41,6 +43,7 @@ export function MeltFacts({ melt, units }: { melt: Melt; units: Units }) {
     ...(melt.process === "permanent-mould" ? [] : [{ label: "Mould moisture", value: pct(melt.sandMoisturePct) }]),
     { label: "Coating", value: coating },
     ...(melt.process === "lost-foam" ? [{ label: "Foam density", value: q("density", melt.foamDensityKgM3) }] : []),
+    ...loggedConditions(MELT_CONDITIONS, melt, units),
   ];
   return <FactGrid rows={rows} />;
 }

@@ -8,7 +8,9 @@ import { Notice } from "@/components/ui/notice";
 import { SafetyCautions } from "@/components/diagnosis/safety-cautions";
 import { TextField } from "@/components/ui/text-field";
 import { space } from "@/constants/theme";
-import { useMeltDraft } from "@/hooks/use-melt-draft";
+import { ConditionGroups } from "@/components/conditions/condition-groups";
+import { meltContext, useMeltDraft } from "@/hooks/use-melt-draft";
+import { MELT_CONDITIONS } from "@/lib/condition-fields";
 import { useAlloys } from "@/hooks/use-melts";
 import { ApiError } from "@/lib/api";
 import { PROCESS_LABELS } from "@/lib/labels";
@@ -73,6 +75,15 @@ export function MeltForm({ initial, units, submitLabel, onSubmit }: Props) {
       <CleaningSection {...sectionProps} />
       <DaySection {...sectionProps} />
       <MouldSection {...sectionProps} />
+      <ConditionGroups
+        groups={MELT_CONDITIONS}
+        draft={draft.conditions}
+        onChange={(v) => set("conditions", v)}
+        errors={errors}
+        context={meltContext(draft, alloys.data ?? [])}
+        units={units}
+        summary="treatment, sand, mould"
+      />
       <TextField
         label="Notes"
         value={draft.notes}

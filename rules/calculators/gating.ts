@@ -1,3 +1,4 @@
+import { GATING_POSITIONS } from "../case";
 import { velocityGuideMS } from "../compute/filling";
 import {
   DEFAULT_DISCHARGE_COEFFICIENT,
@@ -16,7 +17,6 @@ import { CalcInputError, type CalcLine, type CalcResult, type CalcValue } from "
 /** Ratios sprue : runner : ingate a caster meets most: three that slow the metal, three that do not. */
 export const GATING_RATIOS = ["1:2:4", "1:2:2", "1:4:4", "1:1:1", "1:2:1", "3:2:1"] as const;
 export const INGATE_FROM = ["ratio", "area"] as const;
-export const GATING_POSITIONS = ["bottom", "side", "top"] as const;
 
 export type GatingInput = {
   /** From the metal level in the pouring cup to the sprue base. */
@@ -29,6 +29,7 @@ export type GatingInput = {
   ingateAreaCm2?: number;
   castingVolumeCm3?: number;
   minSectionMm?: number;
+  /** The same positions a casting logs (rules/case.ts). */
   position: (typeof GATING_POSITIONS)[number];
 };
 

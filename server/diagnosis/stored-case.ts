@@ -1,3 +1,4 @@
+import { castingConditionFields, meltConditionFields } from "../../lib/condition-fields";
 import type { Mark, Melt } from "../../lib/notebook-schemas";
 import { caseSchema, type DiagnosisCase } from "../../rules/case";
 import type { CastingRow } from "../castings/lookup";
@@ -8,13 +9,28 @@ import { withoutNulls } from "../notebook/shared";
  * A stored casting as the diagnosis contract reads it (DESIGN.md "The diagnosis contract"): the melt's
  * pour conditions, the casting's geometry and gating, its marks as defects. Nothing logged stays absent.
  */
+const pick = (o: Record<string, unknown>, keys: string[]) =>
+  Object.fromEntries(keys.filter((k) => o[k] !== undefined).map((k) => [k, o[k]]));
+
 export function caseFromCasting(casting: CastingRow, melt: Melt, marks: Mark[]): DiagnosisCase {
   if (!marks.length) {
     throw new HttpError(400, "Mark at least one defect first.", { marks: "mark at least one defect first" });
   }
   const m = withoutNulls(melt);
   const c = withoutNulls(casting);
-  const coating = withoutNulls({ applied: melt.coatingApplied, dried: melt.coatingDried, coats: melt.coatingCoats });
+  const coating = withoutNulls({
+    applied: melt.coatingApplied,
+    dried: melt.coatingDried,
+    coats: melt.coatingCoats,
+    permeability: melt.coatingPermeability,
+  });
+  // The conditions beyond the everyday ones go over one to one (lib/condition-fields.ts), except the
+  // coating's permeability, which the contract keeps with the rest of the coating.
+  const meltConditions = pick(
+    m,
+    Object.keys(meltConditionFields).filter((k) => k !== "coatingPermeability"),
+  );
+  const castingConditions = pick(c, Object.keys(castingConditionFields));
   const raw = {
     defects: marks.map((mk) => ({ type: mk.type, location: mk.location, severity: mk.severity })),
     alloy: melt.alloy,
@@ -31,6 +47,7 @@ export function caseFromCasting(casting: CastingRow, melt: Melt, marks: Mark[]):
     sandMoisturePct: m.sandMoisturePct,
     coating: Object.keys(coating).length ? coating : undefined,
     foamDensityKgM3: m.foamDensityKgM3,
+    ...meltConditions,
     minSectionMm: c.minSectionMm,
     maxSectionMm: c.maxSectionMm,
     sprueHeightMm: c.sprueHeightMm,
@@ -38,6 +55,7 @@ export function caseFromCasting(casting: CastingRow, melt: Melt, marks: Mark[]):
     hasRiser: c.hasRiser,
     hasOverflow: c.hasOverflow,
     hasVents: c.hasVents,
+    ...castingConditions,
   };
   const parsed = caseSchema.safeParse(raw);
   if (!parsed.success) {
