@@ -186,3 +186,27 @@ export function calcFormat(q: CalcQuantity, si: number, u: Units): string {
   }
   return `${Number(si.toPrecision(3))} ${SI_LABELS[q]}`;
 }
+
+type LoggedGating = {
+  sprueHeightMm: number | null;
+  chokeAreaMm2: number | null;
+  ingateAreaMm2: number | null;
+  gatingRatio: string | null;
+  gating: string | null;
+};
+/**
+ * The gating calculator opened from a casting starts from the gating it logged: areas in cm² as the
+ * calculator asks, the ratio when it is one of those offered, otherwise the ingate area.
+ */
+export function gatingPrefill(c: LoggedGating): Record<string, string | number | undefined> {
+  const ratio = GATING_RATIOS.find((r) => r === c.gatingRatio?.replace(/\s/g, ""));
+  const cm2 = (mm2: number | null) => (mm2 === null ? undefined : mm2 / 100);
+  return {
+    sprueHeightMm: c.sprueHeightMm ?? undefined,
+    chokeAreaCm2: cm2(c.chokeAreaMm2),
+    ingateFrom: ratio ? "ratio" : c.ingateAreaMm2 !== null ? "area" : undefined,
+    gatingRatio: ratio,
+    ingateAreaCm2: cm2(c.ingateAreaMm2),
+    position: c.gating ?? undefined,
+  };
+}

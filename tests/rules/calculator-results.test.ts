@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { findBuiltInAlloy } from "../../rules/alloys";
 import { CalcInputError, runCalculator, type CalcAlloy, type CalcResult } from "../../rules/calculators";
 import { shrinkRuleMarking } from "../../rules/calculators/pattern";
+import { gatingPrefill } from "../../lib/calculator-fields";
 
 const alloy = (d: string): CalcAlloy => {
   const a = findBuiltInAlloy(d);
@@ -182,5 +183,19 @@ describe("gating (docs/gating-and-copper-facts.md 'Filling', worked example)", (
     expect(top.notes.join(" ")).toMatch(/falls inside the cavity/);
     expect(refusal(() => runCalculator("gating", { ...groover, ingateFrom: "ratio" }, undefined))).toBe("gatingRatio");
     expect(refusal(() => runCalculator("gating", { ...groover, ingateFrom: "area" }, undefined))).toBe("ingateAreaCm2");
+  });
+});
+
+describe("the gating calculator opened from a casting starts from its logged gating", () => {
+  it("areas go from mm² to cm² (1 cm² = 100 mm²); a ratio offered is kept, another falls back to the ingate area", () => {
+    const logged = { sprueHeightMm: 200, chokeAreaMm2: 250, ingateAreaMm2: 1000, gating: "bottom" };
+    expect(gatingPrefill({ ...logged, gatingRatio: "1 : 2 : 4" })).toMatchObject({
+      sprueHeightMm: 200,
+      chokeAreaCm2: 2.5,
+      ingateFrom: "ratio",
+      gatingRatio: "1:2:4",
+      position: "bottom",
+    });
+    expect(gatingPrefill({ ...logged, gatingRatio: "1:3:3" })).toMatchObject({ ingateFrom: "area", ingateAreaCm2: 10 });
   });
 });

@@ -1,5 +1,6 @@
 import { useLocalSearchParams } from "expo-router";
 import { CalcLinks } from "@/components/calculators/calc-links";
+import { gatingPrefill } from "@/lib/calculator-fields";
 import { BackLink } from "@/components/ui/back-link";
 import { CastingSummary } from "@/components/castings/casting-summary";
 import { CommentThread } from "@/components/comments/comment-thread";
@@ -52,6 +53,7 @@ export default function CastingScreen() {
           minSectionMm: c.minSectionMm,
           thicknessMm: c.maxSectionMm,
           shape: "plate",
+          ...gatingPrefill(c),
         }}
       />
       <SimilarCases castingId={c.id} />
