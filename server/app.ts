@@ -3,6 +3,7 @@ import cors from "cors";
 import express from "express";
 import { env } from "./env";
 import { getAuth } from "./auth/auth";
+import { clientAddressForAuth } from "./auth/client-address";
 import { healthRouter } from "./health/router";
 import { apiNotFound, errorHandler } from "./http/errors";
 import { apiBodies, authBodies, readablePath } from "./http/edge";
@@ -56,14 +57,14 @@ export const API_ROUTERS: [string, express.Router][] = [
 export function createApp(opts: { webDir?: string } = {}) {
   const app = express();
   app.disable("x-powered-by");
-  app.set("trust proxy", "loopback");
+  app.set("trust proxy", env.TRUST_PROXY);
 
   if (env.DEV_WEB_ORIGIN) app.use(cors({ origin: env.DEV_WEB_ORIGIN, credentials: true }));
 
   // Before any body is read: a write from another site's page is refused.
   app.use("/api", sameOriginWrites);
   // better-auth re-reads a body that is already parsed, so its bodies are bounded here first.
-  app.all("/api/auth/{*any}", ...authBodies, toNodeHandler(getAuth()));
+  app.all("/api/auth/{*any}", ...authBodies, clientAddressForAuth, toNodeHandler(getAuth()));
 
   const api = express.Router();
   api.use(readablePath, ...apiBodies);

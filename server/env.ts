@@ -20,6 +20,19 @@ const schema = z.object({
   MAIL_DIR: z.string().default(".data/mail"),
   /** The first wait before a failed send is tried again; later waits are 4x and 10x this. */
   MAIL_RETRY_MS: z.coerce.number().int().min(0).default(1000),
+  /**
+   * Whether X-Forwarded-For is believed, as Express's "trust proxy" reads it: "false" (the default: no
+   * proxy, every address is the connecting socket's), "true", a hop count, or addresses such as
+   * "loopback" or "10.0.0.0/8". Sign-in limits count by this address, so believe only a proxy you run.
+   */
+  TRUST_PROXY: z
+    .string()
+    .default("false")
+    .transform((v): boolean | number | string =>
+      v === "false" || v === "" ? false : v === "true" ? true : /^\d+$/.test(v) ? Number(v) : v,
+    ),
+  /** Limits on sign-in, sign-up, password reset and invitations; "off" only for load tests. */
+  RATE_LIMIT: z.enum(["on", "off"], { error: "RATE_LIMIT is on or off" }).default("on"),
   /** Only for `npm run dev`: the Expo dev server's origin, allowed to call the API with cookies. */
   DEV_WEB_ORIGIN: z.string().url().optional(),
   /** Only for `npm run dev`: the Expo dev server that server/dev-server.ts passes non-API requests to. */

@@ -7,7 +7,9 @@ import { PASSWORD_MIN } from "../../lib/auth-forms";
 import { ac, roles } from "../../lib/permissions";
 import { env } from "../env";
 import { invitationOptions, passwordResetOptions } from "../people/auth-hooks";
+import { CLIENT_ADDRESS_HEADER } from "./client-address";
 import { authInputGuard } from "./input-guard";
+import { AUTH_RATE_LIMITS } from "./rate-limits";
 
 /**
  * Sign-in with e-mail and password; shops are better-auth organizations, with our three roles.
@@ -27,6 +29,16 @@ function buildAuth() {
       ...passwordResetOptions,
     },
     telemetry: { enabled: false },
+    advanced: { ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] } },
+    // Counted in the database, so every server shares one count per client (server/auth/rate-limits.ts).
+    rateLimit: {
+      enabled: env.RATE_LIMIT === "on",
+      storage: "database",
+      modelName: "rateLimit",
+      window: 60,
+      max: 100,
+      customRules: AUTH_RATE_LIMITS,
+    },
     hooks: { before: authInputGuard },
     plugins: [
       organization({

@@ -23,6 +23,8 @@ await admin.end();
 
 process.env.DATABASE_URL = new URL(`/${name}`, templateUrl).href;
 process.env.NODE_ENV = "test";
+// Every test signs people up and in from one address; tests/api/rate-limit.test.ts turns the limits on.
+process.env.RATE_LIMIT = "off";
 process.env.PUBLIC_URL = "http://127.0.0.1:8080";
 process.env.SMTP_URL = inject("smtpUrl");
 process.env.MAIL_DIR = inject("mailDir");

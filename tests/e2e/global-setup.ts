@@ -37,6 +37,8 @@ export default async function setup(project: TestProject) {
     NODE_ENV: "test",
     PUBLIC_URL: `http://127.0.0.1:${port}`,
     UPLOAD_DIR: join(parent, "uploads"), // demo and test photos go with the throwaway cluster
+    // Every browser signs in from 127.0.0.1: the sign-in limits have their own test (tests/api/rate-limit.test.ts).
+    RATE_LIMIT: "off",
   });
 
   await applyMigrations(db);
