@@ -29,7 +29,7 @@ export async function startLocalObjectStore(opts: {
   return { endpoint: `http://127.0.0.1:${port}`, dir: opts.dir, close: () => server.close() };
 }
 
-/** For tests that give each file a bucket of its own on the one store. */
+/** For tests that give each file a bucket of its own on the one store (any region: buckets are made path-style). */
 export async function createBucket(
   endpoint: string,
   bucket: string,
@@ -37,7 +37,7 @@ export async function createBucket(
 ) {
   const s3 = new S3Client({
     endpoint,
-    region: process.env.S3_REGION ?? "us-east-1",
+    region: "us-east-1",
     forcePathStyle: true,
     credentials,
   });
