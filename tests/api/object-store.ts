@@ -1,5 +1,27 @@
-import { DeleteObjectCommand, ListObjectsV2Command, S3Client } from "@aws-sdk/client-s3";
+import {
+  BucketAlreadyOwnedByYou,
+  CreateBucketCommand,
+  DeleteObjectCommand,
+  ListObjectsV2Command,
+  S3Client,
+} from "@aws-sdk/client-s3";
 import { env } from "../../server/env";
+
+/** Each test file's own bucket on the run's one store (tests/api/setup.ts); buckets are made path-style. */
+export async function createBucket(
+  endpoint: string,
+  bucket: string,
+  credentials: { accessKeyId: string; secretAccessKey: string },
+) {
+  const client = new S3Client({ endpoint, region: "us-east-1", forcePathStyle: true, credentials });
+  try {
+    await client.send(new CreateBucketCommand({ Bucket: bucket }));
+  } catch (err) {
+    if (!(err instanceof BucketAlreadyOwnedByYou)) throw err;
+  } finally {
+    client.destroy();
+  }
+}
 
 /** A client of the test file's own bucket, apart from the server's, to look at what it stored. */
 const s3 = () =>

@@ -1,7 +1,8 @@
 import { randomUUID } from "node:crypto";
 import pg from "pg";
 import { inject } from "vitest";
-import { createBucket, STAND_IN_KEYS } from "../../server/photos/store-stand-in";
+import { STAND_IN_KEYS } from "../../server/photos/stand-in-keys";
+import { createBucket } from "./object-store";
 
 // Runs before each test file, before it loads the app: a database of the file's own, cloned from
 // the migrated template (CREATE DATABASE ... TEMPLATE copies it in well under a second), so test
