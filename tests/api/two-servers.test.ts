@@ -119,6 +119,19 @@ describe("two app servers on one database and one object store", () => {
     expect(diagnosis.status, diagnosis.text).toBe(201);
     // 700 °C lost foam is a cold pour ([mem] docs/foundry-facts.md), whichever server answers.
     expect(diagnosis.body.result.causes[0].id).toBe("cold-pour");
+    // B keeps its learning by the shop's revision, which lives in the database: a cause confirmed
+    // through A counts in B's very next diagnosis.
+    type Cause = { id: string; record: { confirmed: number } };
+    const coldPour = (body: { result: { causes: Cause[] } }) => body.result.causes.find((c) => c.id === "cold-pour")!;
+    expect(coldPour(diagnosis.body).record.confirmed).toBe(0);
+    const other = await newCasting(viaA, melt.id, { marks: [{ type: "misrun", location: "top", severity: 2 }] });
+    const confirmed = await viaA.agent
+      .post(`/api/review/castings/${other.id}/confirmations`)
+      .send({ causeId: "cold-pour" });
+    expect(confirmed.status, confirmed.text).toBe(201);
+    const after = await viaB.agent.post(`/api/diagnosis/castings/${casting.id}`);
+    expect(coldPour(after.body).record.confirmed).toBe(1);
+
     const image = await viaB.agent.get(photo.body.imageUrl).buffer(true);
     expect(image.status).toBe(200);
     expect(image.headers["content-type"]).toBe("image/jpeg");
