@@ -170,7 +170,7 @@ export const castings = pgTable(
   ],
 );
 
-/** Files live under UPLOAD_DIR with random names; only GET /api/photos/:id/... serves them. */
+/** Objects in the photo store (server/photos/object-store.ts) under random names; only GET /api/photos/:id/... serves them. */
 export const photos = pgTable(
   "photos",
   {

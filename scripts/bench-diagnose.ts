@@ -105,3 +105,6 @@ console.log(
 console.log(
   `Targets: median ≤ 2 ms (${median <= 2 ? "met" : "missed"}), 10,000 cases ≤ 10 s (${totalS <= 10 ? "met" : "missed"})`,
 );
+
+// Then the same engine behind the server, over HTTP, at shop sizes (scripts/bench-diagnose-http.ts).
+await import("./bench-diagnose-http");

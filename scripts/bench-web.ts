@@ -7,6 +7,7 @@ import { join } from "node:path";
 import { fileURLToPath } from "node:url";
 import { chromium, type CDPSession, type Page } from "playwright-core";
 import { freePort, startLocalPostgres } from "./local-postgres";
+import { ensureLocalObjectStore } from "./local-object-store";
 import { ensureWebBuild } from "./web-build";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
@@ -21,6 +22,8 @@ const port = await freePort();
 const baseUrl = `http://127.0.0.1:${port}`;
 Object.assign(process.env, { DATABASE_URL: pg.url, PORT: String(port), NODE_ENV: "test", PUBLIC_URL: baseUrl });
 process.env.UPLOAD_DIR = join(parent, "uploads");
+delete process.env.S3_ENDPOINT; // the demo photos go to a stand-in with the throwaway database
+const objectStore = await ensureLocalObjectStore(root);
 
 const { closeDb, db } = await import("../server/db");
 const { applyMigrations } = await import("../db/migrate");
@@ -116,6 +119,7 @@ try {
   server.closeAllConnections();
   await new Promise((r) => server.close(r));
   await closeDb();
+  await objectStore?.close();
   pg.stop();
   rmSync(parent, { recursive: true, force: true });
   rmSync(pg.dataDir, { recursive: true, force: true });

@@ -10,6 +10,7 @@ import { closeDb, db } from "../server/db";
 import { seedDemoShop } from "../server/seed/seed";
 import { startLocalPostgres, type LocalPostgres } from "./local-postgres";
 import { ensureLocalMail } from "./local-mail";
+import { ensureLocalObjectStore } from "./local-object-store";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 let localDb: LocalPostgres | undefined;
@@ -21,8 +22,9 @@ if (!process.env.DATABASE_URL) {
   });
   process.env.DATABASE_URL = localDb.url;
 }
-// The catcher lives in this process, so it outlasts the server's reloads.
+// The catcher and the object store live in this process, so they outlast the server's reloads.
 const mailCatcher = await ensureLocalMail(root);
+const objectStore = await ensureLocalObjectStore(root);
 const port = process.env.PORT ?? "8080";
 const metroPort = process.env.METRO_PORT ?? "8081";
 const childEnv = { ...process.env, PORT: port, METRO_URL: `http://127.0.0.1:${metroPort}` };
@@ -60,6 +62,7 @@ async function stop() {
   await Promise.all(exited);
   clearTimeout(late);
   await mailCatcher?.close();
+  await objectStore?.close();
   localDb?.stop();
   process.exit(0);
 }

@@ -1,6 +1,7 @@
 // `npm start`: the whole product on one machine. Starts (and first initialises) a PostgreSQL
 // cluster under .data/ unless DATABASE_URL is set, applies migrations, seeds the demo shop into
-// an empty database, starts a local mail catcher unless SMTP_URL is set, builds the web app when
+// an empty database, starts a local mail catcher unless SMTP_URL is set and a local object store
+// for photos unless S3_ENDPOINT is set, builds the web app when
 // stale, and serves API and app from one process.
 import { fileURLToPath } from "node:url";
 import { join } from "node:path";
@@ -12,6 +13,7 @@ import { DEMO_PEOPLE } from "../server/seed/demo-people";
 import { seedDemoShop } from "../server/seed/seed";
 import { startLocalPostgres, type LocalPostgres } from "./local-postgres";
 import { ensureLocalMail } from "./local-mail";
+import { ensureLocalObjectStore } from "./local-object-store";
 import { ensureWebBuild } from "./web-build";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
@@ -30,6 +32,7 @@ try {
 }
 
 const mailCatcher = await ensureLocalMail(root);
+const objectStore = await ensureLocalObjectStore(root);
 await applyMigrations(db);
 const seeded = await seedDemoShop();
 const webDir = ensureWebBuild(root);
@@ -51,6 +54,7 @@ async function stop() {
   server.closeAllConnections?.();
   await new Promise((r) => server.close(r));
   await mailCatcher?.close();
+  await objectStore?.close();
   await closeDb();
   localDb?.stop();
   process.exit(0);

@@ -1,10 +1,10 @@
-import { randomBytes } from "node:crypto";
 import { z } from "zod";
+import { localSessionSecret } from "./auth/local-secret";
 
 /**
  * The one place that reads process.env. Everything else imports `env`.
- * The session secret must be set in production; locally one is generated per process
- * (sessions then end when the server restarts, which is fine on a workbench).
+ * The session secret must be set in production; elsewhere one is generated once and kept in
+ * AUTH_SECRET_FILE, so restarts (and other servers on the same checkout) keep people signed in.
  */
 const schema = z.object({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),
@@ -13,7 +13,22 @@ const schema = z.object({
   DATABASE_URL: z.string().url().optional(),
   BETTER_AUTH_SECRET: z.string().min(32, "BETTER_AUTH_SECRET must be at least 32 characters").optional(),
   PUBLIC_URL: z.string().url().optional(),
+  /** Where a generated session secret is kept when BETTER_AUTH_SECRET is unset (not in production). */
+  AUTH_SECRET_FILE: z.string().default(".data/auth-secret"),
+  /** The old photo folder (read by `npm run photos:to-object-store`); the local object store keeps its data under it. */
   UPLOAD_DIR: z.string().default("uploads"),
+  /** The S3-compatible store for photos; unset, npm start, npm run dev and the tests start a local one. */
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_BUCKET: z.string().min(3).default("casebook-photos"),
+  S3_REGION: z.string().min(1).default("us-east-1"),
+  /** Unset, the AWS SDK's usual chain (instance role, ~/.aws) supplies the keys. */
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  /** Bucket in the path (`ENDPOINT/BUCKET/key`), which every S3-compatible store understands. */
+  S3_FORCE_PATH_STYLE: z
+    .enum(["true", "false"])
+    .default("true")
+    .transform((v) => v === "true"),
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().default("Shakeout Casebook <casebook@localhost>"),
   /** Where the local mail catcher writes .eml files; the development inbox page reads them from here. */
@@ -56,7 +71,7 @@ export function loadEnv(): Env {
   }
   cached = {
     ...raw,
-    BETTER_AUTH_SECRET: raw.BETTER_AUTH_SECRET ?? randomBytes(32).toString("hex"),
+    BETTER_AUTH_SECRET: raw.BETTER_AUTH_SECRET ?? localSessionSecret(raw.AUTH_SECRET_FILE),
     PUBLIC_URL: raw.PUBLIC_URL ?? `http://${raw.HOST}:${raw.PORT}`,
   };
   return cached;
@@ -73,4 +88,11 @@ export const env: Readonly<Env> = new Proxy({} as Env, {
 export function requireDatabaseUrl(): string {
   if (!env.DATABASE_URL) throw new Error("DATABASE_URL is not set (npm start sets it for its local database).");
   return env.DATABASE_URL;
+}
+
+export function requireObjectStoreEndpoint(): string {
+  if (!env.S3_ENDPOINT) {
+    throw new Error("S3_ENDPOINT is not set (npm start, npm run dev and the tests start a local object store).");
+  }
+  return env.S3_ENDPOINT;
 }

@@ -1,5 +1,10 @@
+import { existsSync } from "node:fs";
 import type { Server } from "node:http";
+import { resolve } from "node:path";
+import { pathToFileURL } from "node:url";
 import { createApp } from "./app";
+import { closeDb } from "./db";
+import { env } from "./env";
 
 /** Starts the one Express process: API under /api, the web app from `webDir`. */
 export function listen(opts: { port: number; host: string; webDir?: string }): Promise<Server> {
@@ -9,3 +14,24 @@ export function listen(opts: { port: number; host: string; webDir?: string }): P
     server.on("error", reject);
   });
 }
+
+/**
+ * `tsx server/index.ts`: one more app server on PORT and HOST, against a database that is already
+ * migrated (DATABASE_URL) and the shared object store (S3_*): what each server behind a load balancer
+ * runs, and what tests/api/two-servers.test.ts starts twice. It serves `dist/` when it has been built.
+ */
+async function runAlone() {
+  const dist = resolve("dist");
+  const server = await listen({ port: env.PORT, host: env.HOST, webDir: existsSync(dist) ? dist : undefined });
+  console.log(`Shakeout Casebook server listening on http://${env.HOST}:${env.PORT}`);
+  const stop = async () => {
+    server.closeAllConnections();
+    await new Promise((r) => server.close(r));
+    await closeDb();
+    process.exit(0);
+  };
+  process.once("SIGTERM", stop);
+  process.once("SIGINT", stop);
+}
+
+if (process.argv[1] && import.meta.url === pathToFileURL(resolve(process.argv[1])).href) await runAlone();

@@ -1,10 +1,13 @@
+import { pipeline } from "node:stream/promises";
 import { Router, type RequestHandler } from "express";
 import multer from "multer";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
 import { HttpError } from "../http/errors";
 import { idParam } from "../notebook/shared";
-import { deletePhoto, MAX_PHOTO_BYTES, photoInShop, storePhoto, uploadDir } from "./service";
+import { getObject } from "./object-store";
+import { singleByteRange } from "./range";
+import { deletePhoto, MAX_PHOTO_BYTES, photoInShop, storePhoto } from "./service";
 
 export const photosRouter = Router();
 
@@ -44,17 +47,28 @@ photosRouter.post(
   },
 );
 
+/** Streamed from the object store after the shop check; one byte range is honoured (a phone's viewer asks). */
 const serve =
   (which: "fileName" | "thumbName"): RequestHandler =>
   async (req, res) => {
     const row = await photoInShop(currentMember(req).shopId, idParam(req.params.id, "No such photo"));
-    res.sendFile(row[which], {
-      root: uploadDir(),
-      headers: {
-        "Content-Type": "image/jpeg",
-        "Cache-Control": "private, max-age=86400",
-        "X-Content-Type-Options": "nosniff",
-      },
+    const object = await getObject(row[which], singleByteRange(req.headers.range));
+    if (object === "missing") {
+      console.error(`Photo ${row.id}: object ${row[which]} is missing from the store.`);
+      throw new HttpError(404, "This photo's file is missing from the photo store.");
+    }
+    if (object === "unsatisfiable") throw new HttpError(416, "That byte range lies beyond the end of the photo.");
+    res.status(object.contentRange ? 206 : 200).set({
+      "Content-Type": "image/jpeg",
+      "Cache-Control": "private, max-age=86400",
+      "X-Content-Type-Options": "nosniff",
+      "Accept-Ranges": "bytes",
+      ...(object.length !== undefined && { "Content-Length": String(object.length) }),
+      ...(object.contentRange && { "Content-Range": object.contentRange }),
+    });
+    // A store that fails mid-photo, or a client that leaves, ends the response; either way the stream is closed.
+    await pipeline(object.body, res).catch((err: NodeJS.ErrnoException) => {
+      if (err.code !== "ERR_STREAM_PREMATURE_CLOSE") console.error(`Photo ${row.id}: stream broke off:`, err.message);
     });
   };
 photosRouter.get("/:id/image", requireShopMember, allow({ casebook: ["read"] }), serve("fileName"));

@@ -1,6 +1,4 @@
 import { randomUUID } from "node:crypto";
-import { mkdir, rename, rm, writeFile } from "node:fs/promises";
-import { join, resolve } from "node:path";
 import { and, asc, eq } from "drizzle-orm";
 import { fileTypeFromBuffer } from "file-type";
 import sharp from "sharp";
@@ -9,9 +7,9 @@ import { defectMarks, photos, user } from "../../db/schema";
 import type { Photo } from "../../lib/notebook-schemas";
 import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
-import { env } from "../env";
 import { HttpError, notFound } from "../http/errors";
 import { iso, personRef } from "../notebook/shared";
+import { deleteObjects, putObject } from "./object-store";
 import { photoUrls } from "./urls";
 
 export const MAX_PHOTO_BYTES = 15 * 1024 * 1024;
@@ -20,7 +18,6 @@ const ACCEPTED = new Set(["image/jpeg", "image/png", "image/webp", "image/heic",
 const LONG_EDGE_PX = 4096; // plenty to see a pinhole; keeps a 48-megapixel phone shot from filling the disk
 const THUMB_PX = 320;
 
-export const uploadDir = () => resolve(env.UPLOAD_DIR);
 type PhotoRow = typeof photos.$inferSelect;
 
 export const toPhoto = (p: PhotoRow, byName: string): Photo => ({
@@ -81,8 +78,9 @@ async function readableImage(buffer: Buffer) {
 }
 
 /**
- * Files are written under temporary names first and renamed inside the row's transaction: a failure
- * anywhere removes both files and leaves no row, so the folder never holds a photo nobody can reach.
+ * Both objects go to the store under fresh random keys before the row exists (nobody can reach them
+ * yet); the row is then written in its transaction. A failure of either removes both objects and
+ * leaves no row, so the store never holds a photo nobody can reach and no row points at nothing.
  */
 export async function storePhoto(
   m: ShopMember,
@@ -91,15 +89,11 @@ export async function storePhoto(
   clientGone = () => false,
 ): Promise<Photo> {
   const img = await readableImage(upload);
-  const dir = uploadDir();
-  await mkdir(dir, { recursive: true });
   const base = randomUUID();
   const fileName = `${base}.jpg`;
   const thumbName = `${base}.thumb.jpg`;
-  const paths = [fileName, thumbName].flatMap((n) => [join(dir, n), join(dir, `${n}.part`)]);
   try {
-    await writeFile(join(dir, `${fileName}.part`), img.image, { flag: "wx" });
-    await writeFile(join(dir, `${thumbName}.part`), img.thumb, { flag: "wx" });
+    await Promise.all([putObject(fileName, img.image, "image/jpeg"), putObject(thumbName, img.thumb, "image/jpeg")]);
     const row = await db.transaction(async (tx) => {
       await castingInShop(m.shopId, castingId, tx);
       const [inserted] = await tx
@@ -116,15 +110,13 @@ export async function storePhoto(
           createdBy: m.userId,
         })
         .returning();
-      await rename(join(dir, `${fileName}.part`), join(dir, fileName));
-      await rename(join(dir, `${thumbName}.part`), join(dir, thumbName));
       // Cut off while we were encoding: nobody will see this answer, so keep nothing (the phone retries).
       if (clientGone()) throw new HttpError(400, "The upload was cut off.");
       return inserted;
     });
     return toPhoto(row, m.userName);
   } catch (err) {
-    await Promise.all(paths.map((p) => rm(p, { force: true })));
+    await deleteObjects([fileName, thumbName]);
     throw err;
   }
 }
@@ -138,7 +130,10 @@ export async function photoInShop(shopId: string, id: number) {
   return row;
 }
 
-/** Its marks stay on the casting, without a position; the files go after the row is gone. */
+/**
+ * Its marks stay on the casting, without a position; the objects go after the row is gone (an object
+ * the store fails to remove is logged and unreachable, which is the harmless side to fail on).
+ */
 export async function deletePhoto(m: ShopMember, id: number) {
   const row = await photoInShop(m.shopId, id);
   await db.transaction(async (tx) => {
@@ -148,6 +143,5 @@ export async function deletePhoto(m: ShopMember, id: number) {
       .where(eq(defectMarks.photoId, id));
     await tx.delete(photos).where(eq(photos.id, id));
   });
-  const dir = uploadDir();
-  await Promise.all([row.fileName, row.thumbName].map((n) => rm(join(dir, n), { force: true })));
+  await deleteObjects([row.fileName, row.thumbName]);
 }

@@ -1,14 +1,13 @@
 import { LRUCache } from "lru-cache";
-import { and, asc, desc, eq, sql } from "drizzle-orm";
+import { and, asc, desc, eq } from "drizzle-orm";
 import { db } from "../db";
-import { ruleSwitches, shopCauses, shopRuleVersions } from "../../db/schema";
+import { ruleSwitches, shopCauses, shopRevisions, shopRuleVersions } from "../../db/schema";
 import {
   causeRecords,
   confirmedFirings,
   ruleRecords,
   weightFactors,
   type CauseRecord,
-  type Firing,
   type RuleRecord,
 } from "../../rules/calibration";
 import { ruleSetFor, type DiagnosisResult } from "../../rules/engine";
@@ -104,35 +103,18 @@ export type ShopLearning = ShopRules & {
   weightFactor: (ruleId: string) => number;
 };
 
-/**
- * What the confirmed cases look like now: any new confirmation, or a changed or removed casting, melt
- * or mark, changes it. The firings are kept per shop until it changes (a few hundred cases take a
- * noticeable fraction of a second to run, and every diagnosis needs them).
- */
-async function casesStamp(shopId: string): Promise<string> {
-  const { rows } = await db.execute(sql`select
-    (select count(*) || ':' || coalesce(max(id), 0) from confirmations where shop_id = ${shopId}) as c,
-    (select max(updated_at)::text from castings where shop_id = ${shopId}) as k,
-    (select max(updated_at)::text from melts where shop_id = ${shopId}) as m,
-    (select count(*) || ':' || coalesce(max(updated_at)::text, '') from defect_marks where shop_id = ${shopId}) as d`);
-  return JSON.stringify(rows[0]);
-}
-const FIRINGS_KEPT = 64;
-const firingsKept = new LRUCache<string, { key: string; firings: Firing[] }>({ max: FIRINGS_KEPT });
-
-async function firingsOf(shopId: string, everyRule: RuleSet): Promise<Firing[]> {
-  const key = `${everyRule.version}|${await casesStamp(shopId)}`;
-  const kept = firingsKept.get(shopId);
-  if (kept?.key === key) return kept.firings;
-  const firings = await confirmedFirings(await storedCases(shopId, { confirmedOnly: true }), everyRule);
-  firingsKept.set(shopId, { key, firings });
-  return firings;
+/** The shop's revision: raised by triggers in every transaction that changes what a diagnosis reads. */
+export async function shopRevision(shopId: string): Promise<number> {
+  const [row] = await db
+    .select({ revision: shopRevisions.revision })
+    .from(shopRevisions)
+    .where(eq(shopRevisions.shopId, shopId));
+  return row?.revision ?? 0;
 }
 
-/** The shop's rules with their records among its confirmed cases, and the weight factors those give. */
-export async function shopLearning(shopId: string): Promise<ShopLearning> {
+async function computeLearning(shopId: string): Promise<ShopLearning> {
   const rules = await shopRules(shopId);
-  const firings = await firingsOf(shopId, rules.everyRule);
+  const firings = await confirmedFirings(await storedCases(shopId, { confirmedOnly: true }), rules.everyRule);
   const records = ruleRecords(firings, rules.everyRule.rules);
   return {
     ...rules,
@@ -141,6 +123,34 @@ export async function shopLearning(shopId: string): Promise<ShopLearning> {
     causeRecords: causeRecords(firings, rules.ruleSet.rules),
     weightFactor: weightFactors(records),
   };
+}
+
+/**
+ * Per shop, the learning at one revision, as a promise: requests that arrive together while it is being
+ * worked out share the one computation. The revision is read before the rows, so a write that lands in
+ * between can only make the kept answer newer than its revision (then recomputed once), never older.
+ */
+const SHOPS_KEPT = 64;
+const learningKept = new LRUCache<string, { revision: number; learning: Promise<ShopLearning> }>({ max: SHOPS_KEPT });
+let computations = 0;
+/** How many times the learning was worked out in this process (tests and the bench read it). */
+export const learningComputations = () => computations;
+
+/** The shop's rules with their records among its confirmed cases, and the weight factors those give. */
+export async function shopLearning(shopId: string): Promise<ShopLearning> {
+  const revision = await shopRevision(shopId);
+  const kept = learningKept.get(shopId);
+  if (kept && kept.revision === revision) return kept.learning;
+  // A request that read its revision before a newer one was kept leaves the newer one in place.
+  if (kept && kept.revision > revision) return kept.learning;
+  computations++;
+  const learning = computeLearning(shopId);
+  learningKept.set(shopId, { revision, learning });
+  // A failed computation (the database went away) is not kept: the next request tries again.
+  learning.catch(() => {
+    if (learningKept.get(shopId)?.learning === learning) learningKept.delete(shopId);
+  });
+  return learning;
 }
 
 /**

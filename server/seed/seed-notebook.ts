@@ -16,7 +16,7 @@ const dayAgo = (days: number) => new Date(Date.now() - days * 864e5).toISOString
 
 /**
  * Stores the demo notebook through the same services the API uses, so every value passes the same
- * checks a person's input does, and photos go through the same sharp pipeline into UPLOAD_DIR.
+ * checks a person's input does, and photos go through the same sharp pipeline into the object store.
  */
 export async function seedDemoNotebook(shopId: string, crew: Crew) {
   const as = (role: keyof Crew): ShopMember => ({ userId: crew[role].id, userName: crew[role].name, shopId, role });

@@ -8,6 +8,7 @@ import pg from "pg";
 import type { TestProject } from "vitest/node";
 import { freePort, startLocalPostgres } from "../../scripts/local-postgres";
 import { startMailCatcher } from "../../server/mail/catcher";
+import { startLocalObjectStore } from "../../server/photos/store-stand-in";
 
 const migrationsFolder = fileURLToPath(new URL("../../drizzle", import.meta.url));
 
@@ -33,8 +34,17 @@ export default async function setup(project: TestProject) {
   const mail = await startMailCatcher({ dir: join(parent, "mail") });
   project.provide("smtpUrl", mail.url);
   project.provide("mailDir", mail.dir);
+  // One object store for the run (a stand-in unless S3_ENDPOINT names one); each file makes a bucket
+  // of its own on it (tests/api/setup.ts).
+  const store = process.env.S3_ENDPOINT
+    ? undefined
+    : await startLocalObjectStore({ dir: join(parent, "objects"), bucket: "casebook-photos" });
+  project.provide("s3Endpoint", store?.endpoint ?? process.env.S3_ENDPOINT!);
+  // The session secret every in-process app and child server of this run generates and shares.
+  project.provide("authSecretFile", join(parent, "auth-secret"));
   return async () => {
     await mail.close();
+    await store?.close();
     pg15.stop();
     rmSync(parent, { recursive: true, force: true });
     rmSync(pg15.dataDir, { recursive: true, force: true });
@@ -46,5 +56,7 @@ declare module "vitest" {
     templateUrl: string;
     smtpUrl: string;
     mailDir: string;
+    s3Endpoint: string;
+    authSecretFile: string;
   }
 }

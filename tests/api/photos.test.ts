@@ -1,21 +1,19 @@
-import { existsSync, readdirSync, rmSync } from "node:fs";
 import http from "node:http";
 import type { AddressInfo } from "node:net";
 import { eq } from "drizzle-orm";
 import sharp from "sharp";
 import request from "supertest";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "../../server/db";
 import { photos } from "../../db/schema";
-import { env } from "../../server/env";
 import { storePhoto } from "../../server/photos/service";
 import { app, migrateOnce, ORIGIN, shopWithCrew, signUp, type Person } from "./helpers";
 import { newCasting, newMelt } from "./notebook-fixtures";
+import { removeObject, storedKeys } from "./object-store";
 
 beforeAll(migrateOnce);
-afterAll(() => rmSync(env.UPLOAD_DIR, { recursive: true, force: true }));
 
-const filesInUploads = () => (existsSync(env.UPLOAD_DIR) ? readdirSync(env.UPLOAD_DIR).sort() : []);
+const objectsInStore = storedKeys;
 const photoRows = (castingId: number) => db.select().from(photos).where(eq(photos.castingId, castingId));
 
 /** A 600 × 400 JPEG whose EXIF says "rotate 90°" and carries a GPS position, as a phone writes it. */
@@ -67,7 +65,7 @@ describe("photo uploads", () => {
     expect(Math.max(thumbMeta.width!, thumbMeta.height!)).toBe(320);
     expect(thumbMeta.exif).toBeUndefined();
     // Stored under a random name, never the uploaded one.
-    expect(filesInUploads().some((f) => f.includes("IMG_0042"))).toBe(false);
+    expect((await objectsInStore()).some((f) => f.includes("IMG_0042"))).toBe(false);
   });
 
   it("accepts PNG and WebP by their content and re-encodes them as JPEG", async () => {
@@ -95,7 +93,7 @@ describe("photo uploads", () => {
   it("refuses a text file named .jpg (415) and stores no row and no file", async () => {
     const { caster } = await shopWithCrew("Text Photo Shop");
     const casting = await castingOf(caster);
-    const before = filesInUploads();
+    const before = await objectsInStore();
     const res = await caster.agent
       .post(`/api/photos/castings/${casting.id}`)
       .attach("photo", Buffer.from("pour log: 14 Jan, 700 C, misrun\n".repeat(50)), {
@@ -126,19 +124,19 @@ describe("photo uploads", () => {
     expect(none.status).toBe(400);
     expect(none.body.error.fields.photo).toBeDefined();
     expect(await photoRows(casting.id)).toHaveLength(0);
-    expect(filesInUploads()).toEqual(before);
+    expect(await objectsInStore()).toEqual(before);
   });
 
   it("refuses a photo over 15 MB with 413 and stores nothing", async () => {
     const { caster } = await shopWithCrew("Big Photo Shop");
     const casting = await castingOf(caster);
-    const before = filesInUploads();
+    const before = await objectsInStore();
     const big = Buffer.concat([await phoneJpeg(), Buffer.alloc(15 * 1024 * 1024 + 10)]);
     const res = await caster.agent.post(`/api/photos/castings/${casting.id}`).attach("photo", big, "huge.jpg");
     expect(res.status).toBe(413);
     expect(res.body.error.message).toMatch(/15 MB/);
     expect(await photoRows(casting.id)).toHaveLength(0);
-    expect(filesInUploads()).toEqual(before);
+    expect(await objectsInStore()).toEqual(before);
   });
 
   it("leaves nothing behind when the upload is cut off midway", async () => {
@@ -149,7 +147,7 @@ describe("photo uploads", () => {
       .set("Origin", ORIGIN)
       .send({ email: caster.email, password: caster.password });
     const cookie = (signIn.headers["set-cookie"] as unknown as string[]).map((c) => c.split(";")[0]).join("; ");
-    const before = filesInUploads();
+    const before = await objectsInStore();
     const server = http.createServer(app).listen(0, "127.0.0.1");
     await new Promise((r) => server.once("listening", r));
     const { port } = server.address() as AddressInfo;
@@ -173,17 +171,17 @@ describe("photo uploads", () => {
     await new Promise((r) => setTimeout(r, 500)); // let the server notice and clean up
     await new Promise((r) => server.close(r));
     expect(await photoRows(casting.id)).toHaveLength(0);
-    expect(filesInUploads()).toEqual(before);
+    expect(await objectsInStore()).toEqual(before);
   });
 
   it("keeps nothing when the client goes away while the photo is being stored", async () => {
     const { shopId, caster } = await shopWithCrew("Gone Photo Shop");
     const casting = await castingOf(caster);
-    const before = filesInUploads();
+    const before = await objectsInStore();
     const member = { shopId, userId: caster.userId, userName: "Gone caster", role: "caster" as const };
     await expect(storePhoto(member, casting.id, await phoneJpeg(), () => true)).rejects.toThrow(/cut off/);
     expect(await photoRows(casting.id)).toHaveLength(0);
-    expect(filesInUploads()).toEqual(before);
+    expect(await objectsInStore()).toEqual(before);
   });
 });
 
@@ -226,10 +224,10 @@ describe("photos belong to their shop", () => {
     ).toBe(403);
 
     const [row] = await photoRows(casting.id);
-    expect(filesInUploads()).toEqual(expect.arrayContaining([row.fileName, row.thumbName]));
+    expect(await objectsInStore()).toEqual(expect.arrayContaining([row.fileName, row.thumbName]));
     expect((await a.caster.agent.delete(`/api/photos/${photo.id}`)).status).toBe(204);
-    expect(filesInUploads()).not.toContain(row.fileName);
-    expect(filesInUploads()).not.toContain(row.thumbName);
+    expect(await objectsInStore()).not.toContain(row.fileName);
+    expect(await objectsInStore()).not.toContain(row.thumbName);
     const detail = await a.caster.agent.get(`/api/castings/${casting.id}`);
     expect(detail.body.photos).toHaveLength(0);
     expect(detail.body.marks.map((m: { photoId: number | null; x: number | null }) => [m.photoId, m.x])).toEqual([
@@ -237,5 +235,64 @@ describe("photos belong to their shop", () => {
       [null, null],
     ]);
     expect((await a.caster.agent.get(photo.imageUrl)).status).toBe(404);
+  });
+});
+
+describe("photos in the object store", () => {
+  it("serves one byte range (206), ignores a malformed one, and refuses one past the end (416)", async () => {
+    const { caster } = await shopWithCrew("Range Shop");
+    const casting = await castingOf(caster);
+    const photo = (
+      await caster.agent.post(`/api/photos/castings/${casting.id}`).attach("photo", await phoneJpeg(), "r.jpg")
+    ).body;
+    const whole = await caster.agent.get(photo.imageUrl).buffer(true);
+    expect(whole.status).toBe(200);
+    expect(whole.headers["accept-ranges"]).toBe("bytes");
+    expect(Number(whole.headers["content-length"])).toBe(whole.body.length);
+    const total = whole.body.length;
+
+    const part = await caster.agent.get(photo.imageUrl).set("Range", "bytes=0-99").buffer(true);
+    expect(part.status).toBe(206);
+    expect(part.headers["content-range"]).toBe(`bytes 0-99/${total}`);
+    expect(Buffer.compare(part.body, whole.body.subarray(0, 100))).toBe(0);
+    const rest = await caster.agent
+      .get(photo.imageUrl)
+      .set("Range", `bytes=${total - 10}-`)
+      .buffer(true);
+    expect(rest.status).toBe(206);
+    expect(Buffer.compare(rest.body, whole.body.subarray(total - 10))).toBe(0);
+
+    // Several ranges, a suffix, another unit, junk, an end before the start: the whole photo (RFC 9110 allows it).
+    for (const range of ["bytes=0-1,5-9", "bytes=-10", "lines=1-2", "bytes=abc", "bytes=50-10", "bytes=-0"]) {
+      const res = await caster.agent.get(photo.imageUrl).set("Range", range).buffer(true);
+      expect(res.status, range).toBe(200);
+      expect(res.body.length, range).toBe(total);
+    }
+    const beyond = await caster.agent.get(photo.imageUrl).set("Range", `bytes=${total + 10}-`);
+    expect(beyond.status).toBe(416);
+    expect(beyond.body.error.message).toMatch(/beyond the end/);
+  });
+
+  it("answers 404 with a plain message when the row's object is missing from the store", async () => {
+    const { caster } = await shopWithCrew("Missing Object Shop");
+    const casting = await castingOf(caster);
+    const photo = (
+      await caster.agent.post(`/api/photos/castings/${casting.id}`).attach("photo", await phoneJpeg(), "m.jpg")
+    ).body;
+    const [row] = await photoRows(casting.id);
+    await removeObject(row.fileName);
+    const res = await caster.agent.get(photo.imageUrl);
+    expect(res.status).toBe(404);
+    expect(res.body.error.message).toMatch(/missing from the photo store/);
+    expect((await caster.agent.get(photo.thumbUrl)).status).toBe(200);
+  });
+
+  it("removes both objects when the row cannot be written", async () => {
+    const { shopId, caster } = await shopWithCrew("No Row Shop");
+    const before = await objectsInStore();
+    const member = { shopId, userId: caster.userId, userName: "No-row caster", role: "caster" as const };
+    // No such casting: the objects are already in the store when the transaction refuses the row.
+    await expect(storePhoto(member, 2_000_000_000, await phoneJpeg())).rejects.toMatchObject({ status: 404 });
+    expect(await objectsInStore()).toEqual(before);
   });
 });

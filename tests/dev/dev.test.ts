@@ -21,13 +21,14 @@ const portInUse = (port: number) =>
 
 /**
  * This process's environment without the product's settings: the browser tests' global setup runs in
- * the same vitest process and sets PUBLIC_URL, SMTP_URL, MAIL_DIR and UPLOAD_DIR for its own server.
+ * the same vitest process and sets PUBLIC_URL, SMTP_URL, MAIL_DIR, UPLOAD_DIR and S3_* for its own server.
  * Inherited, they would point the dev server at that server's origin (so it refuses the browser's
  * sign-in as another site's) and at its mail catcher.
  */
 function ownConfiguration(): NodeJS.ProcessEnv {
   const env = { ...process.env };
   for (const key of ["PUBLIC_URL", "SMTP_URL", "MAIL_DIR", "UPLOAD_DIR", "PORT"]) delete env[key];
+  for (const key of Object.keys(env)) if (key.startsWith("S3_")) delete env[key];
   return env;
 }
 
@@ -51,6 +52,7 @@ describe("npm run dev", () => {
         METRO_PORT: String(ports.metro),
         LOCAL_PG_PORT: String(ports.pg),
         LOCAL_PG_DIR: join(dataParent, "pg"),
+        UPLOAD_DIR: join(dataParent, "uploads"), // its object store stand-in keeps the demo photos there
         NODE_ENV: "development",
       },
       stdio: ["ignore", "pipe", "pipe"],

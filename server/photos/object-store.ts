@@ -1,0 +1,106 @@
+import type { Readable } from "node:stream";
+import {
+  DeleteObjectCommand,
+  GetObjectCommand,
+  HeadObjectCommand,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
+} from "@aws-sdk/client-s3";
+import { env, requireObjectStoreEndpoint } from "../env";
+import { HttpError } from "../http/errors";
+
+/**
+ * Photos live in an S3-compatible object store (server/env.ts: S3_*), so every app server reads the
+ * same ones. This file is the only one that speaks to it; a store that does not answer becomes a 503
+ * with a plain message, never a 500.
+ */
+let client: S3Client | undefined;
+
+function store(): S3Client {
+  client ??= new S3Client({
+    endpoint: requireObjectStoreEndpoint(),
+    region: env.S3_REGION,
+    forcePathStyle: env.S3_FORCE_PATH_STYLE,
+    credentials:
+      env.S3_ACCESS_KEY_ID && env.S3_SECRET_ACCESS_KEY
+        ? { accessKeyId: env.S3_ACCESS_KEY_ID, secretAccessKey: env.S3_SECRET_ACCESS_KEY }
+        : undefined,
+    // Checksums only where the API demands them: not every S3-compatible store knows the newer headers.
+    requestChecksumCalculation: "WHEN_REQUIRED",
+    responseChecksumValidation: "WHEN_REQUIRED",
+    // A store that is away should be reported in seconds, not after the SDK's long default waits.
+    maxAttempts: 2,
+    requestHandler: { connectionTimeout: 2_000, requestTimeout: 15_000 },
+  });
+  return client;
+}
+
+export class StoreUnavailable extends HttpError {
+  constructor(doing: string, cause: unknown) {
+    super(503, `The photo store is not answering right now; ${doing}. Try again in a moment.`);
+    this.cause = cause;
+  }
+}
+
+const isMissing = (err: unknown) =>
+  err instanceof S3ServiceException &&
+  (err.name === "NoSuchKey" || err.name === "NotFound" || err.$metadata?.httpStatusCode === 404);
+
+/** Anything but "no such object" is the store's trouble (down, refusing our keys, full): logged and 503. */
+function unavailable(doing: string, err: unknown): StoreUnavailable {
+  console.error(`Object store: ${doing}:`, err instanceof Error ? `${err.name}: ${err.message}` : err);
+  return new StoreUnavailable(doing, err);
+}
+
+export async function putObject(key: string, body: Buffer, contentType: string) {
+  try {
+    await store().send(new PutObjectCommand({ Bucket: env.S3_BUCKET, Key: key, Body: body, ContentType: contentType }));
+  } catch (err) {
+    throw unavailable("nothing was saved", err);
+  }
+}
+
+export type StoredObject = {
+  body: Readable;
+  length?: number;
+  /** Set when a byte range was asked for and given: `bytes START-END/TOTAL`. */
+  contentRange?: string;
+};
+
+/**
+ * `range` must already be one well-formed `bytes=` range (server/photos/range.ts); one that starts
+ * beyond the end is "unsatisfiable" (the store's 416).
+ */
+export async function getObject(key: string, range?: string): Promise<StoredObject | "missing" | "unsatisfiable"> {
+  try {
+    const out = await store().send(new GetObjectCommand({ Bucket: env.S3_BUCKET, Key: key, Range: range }));
+    return { body: out.Body as Readable, length: out.ContentLength, contentRange: out.ContentRange };
+  } catch (err) {
+    if (isMissing(err)) return "missing";
+    if (err instanceof S3ServiceException && err.$metadata?.httpStatusCode === 416) return "unsatisfiable";
+    throw unavailable("the photo could not be read", err);
+  }
+}
+
+export async function objectExists(key: string): Promise<boolean> {
+  try {
+    await store().send(new HeadObjectCommand({ Bucket: env.S3_BUCKET, Key: key }));
+    return true;
+  } catch (err) {
+    if (isMissing(err)) return false;
+    throw unavailable("the photo could not be checked", err);
+  }
+}
+
+/** Best effort by design: callers use it to clean up, and a failure is logged, not thrown. */
+export async function deleteObjects(keys: string[]): Promise<boolean> {
+  try {
+    // One by one: the batch call needs a Content-MD5 that some S3-compatible stores check differently.
+    await Promise.all(keys.map((Key) => store().send(new DeleteObjectCommand({ Bucket: env.S3_BUCKET, Key }))));
+    return true;
+  } catch (err) {
+    console.error(`Object store: could not remove ${keys.join(", ")}:`, err instanceof Error ? err.message : err);
+    return false;
+  }
+}
