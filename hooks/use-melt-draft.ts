@@ -70,7 +70,8 @@ export function useMeltDraft(initial: Initial, units: Units) {
   const [errors, setErrors] = useState<Record<string, string>>({});
   const set = <K extends keyof MeltDraft>(key: K, value: MeltDraft[K]) => setDraft((d) => ({ ...d, [key]: value }));
 
-  function check(alloys: Alloy[]): MeltInput | undefined {
+  /** The input to send, or undefined; `errors` also carries "_", a message about the melt as a whole. */
+  function check(alloys: Alloy[]): { input?: MeltInput; errors: Record<string, string> } {
     const numbers = textToNumbers(MELT_NUMBERS, draft, units);
     const v = numbers.values;
     const input = {
@@ -102,7 +103,7 @@ export function useMeltDraft(initial: Initial, units: Units) {
       ...(draft.alloy ? {} : { alloy: "choose an alloy" }),
     };
     setErrors(found);
-    return parsed.success && Object.keys(found).length === 0 ? parsed.data : undefined;
+    return { input: parsed.success && Object.keys(found).length === 0 ? parsed.data : undefined, errors: found };
   }
 
   return { draft, set, errors, setErrors, check };

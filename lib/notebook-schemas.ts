@@ -79,10 +79,42 @@ export function alloyConflicts(m: MeltLike, alloy: { designation: string; solidu
   return out;
 }
 
+/**
+ * What makes a melt worth keeping: something observed at the furnace or the mould. The date, alloy,
+ * process and furnace do not count, because a new melt's form fills them in from the shop's defaults
+ * and the last melt, so a melt made of them alone is a tap on "Save" with nothing typed. A caster
+ * who logs a pour writes down at least a temperature, the charge, how the metal was cleaned, the day's
+ * weather, the mould, or a note; any one of these keeps the melt.
+ */
+export const MELT_OBSERVATIONS = [
+  "charge",
+  "meltTempC",
+  "pourTempC",
+  "degassing",
+  "degasMinutes",
+  "fluxed",
+  "skimmed",
+  "ambientTempC",
+  "humidityPct",
+  "sandMoisturePct",
+  "coatingApplied",
+  "coatingDried",
+  "coatingCoats",
+  "foamDensityKgM3",
+  "notes",
+] as const satisfies readonly (keyof MeltLike)[];
+export const EMPTY_MELT_MESSAGE =
+  "Nothing about this melt was recorded: add a temperature, the charge, the degassing, the mould or a note before saving.";
+export const meltIsEmpty = (m: MeltLike) =>
+  MELT_OBSERVATIONS.every((k) => m[k] == null || (typeof m[k] === "string" && m[k].trim() === ""));
+
 const addConflicts = (found: Record<string, string>, ctx: z.RefinementCtx) => {
   for (const [path, message] of Object.entries(found)) ctx.addIssue({ code: "custom", path: [path], message });
 };
-export const meltInput = meltFields.superRefine((m, ctx) => addConflicts(meltConflicts(m), ctx), always);
+export const meltInput = meltFields.superRefine((m, ctx) => {
+  addConflicts(meltConflicts(m), ctx);
+  if (meltIsEmpty(m)) ctx.addIssue({ code: "custom", path: [], message: EMPTY_MELT_MESSAGE });
+}, always);
 export const meltPatch = meltFields.partial();
 export type MeltInput = z.infer<typeof meltInput>;
 

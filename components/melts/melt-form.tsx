@@ -34,8 +34,9 @@ export function MeltForm({ initial, units, submitLabel, onSubmit }: Props) {
   const sectionProps = { draft, set, errors, units };
 
   async function submit() {
-    const input = check(alloys.data ?? []);
-    setFailure(input ? undefined : "Some values need fixing: see the messages by the fields.");
+    const { input, errors: found } = check(alloys.data ?? []);
+    // A message about the melt as a whole (nothing recorded) says itself; field messages sit by their fields.
+    setFailure(input ? undefined : (found._ ?? "Some values need fixing: see the messages by the fields."));
     if (!input) return;
     setBusy(true);
     try {
@@ -43,6 +44,7 @@ export function MeltForm({ initial, units, submitLabel, onSubmit }: Props) {
     } catch (e) {
       // The server checks again (the alloy table may have changed): its field messages land by the fields.
       if (e instanceof ApiError && Object.keys(e.fields).length) setErrors(e.fields);
+      // (The server words a whole-melt refusal as its message, so the notice below says it.)
       setFailure(e instanceof Error ? e.message : String(e));
     } finally {
       setBusy(false);
