@@ -111,7 +111,12 @@ export const meltIsEmpty = (m: MeltLike) =>
 const addConflicts = (found: Record<string, string>, ctx: z.RefinementCtx) => {
   for (const [path, message] of Object.entries(found)) ctx.addIssue({ code: "custom", path: [path], message });
 };
-export const meltInput = meltFields.superRefine((m, ctx) => {
+/**
+ * The client's id for one save (a UUID made when the form is first saved): the same save sent twice,
+ * from the offline queue or after a lost answer, makes one row. Not a column a PATCH can change.
+ */
+const idempotencyKey = opt(z.uuid({ error: "must be a UUID made by the app for this save" }));
+export const meltInput = meltFields.extend({ idempotencyKey }).superRefine((m, ctx) => {
   addConflicts(meltConflicts(m), ctx);
   if (meltIsEmpty(m)) ctx.addIssue({ code: "custom", path: [], message: EMPTY_MELT_MESSAGE });
 }, always);
@@ -169,6 +174,7 @@ export function castingConflicts(c: Partial<z.infer<typeof castingFields>>): Rec
 /** A new casting may carry marks; a photo comes after the casting exists, so these have none. */
 export const castingInput = castingFields
   .extend({
+    idempotencyKey,
     marks: z
       .array(markFields.omit({ photoId: true, x: true, y: true }).strict())
       .max(50)
@@ -203,6 +209,8 @@ export const castingListQuery = z.object({ ...pageQuery, sort: z.enum(CASTING_SO
 // ---- Answers (JSON: dates are ISO strings; shopId is never sent) ----
 export type PersonRef = { id: string; name: string };
 type Row = { id: number; createdBy: PersonRef; createdAt: string };
+/** Set while a melt or casting is archived: hidden from lists, its page says so, an owner can restore it. */
+export type Archived = { archivedAt: string | null; archivedBy: PersonRef | null };
 type Nullable<T> = { [K in keyof T]-?: Exclude<T[K], undefined> | null };
 export type Page<T> = { items: T[]; total: number; page: number; pageSize: number };
 
@@ -222,7 +230,8 @@ export type Alloy = {
   createdAt: string;
 };
 export type Melt = Row &
-  Nullable<Omit<MeltInput, "pouredOn" | "alloy" | "process">> & {
+  Archived &
+  Nullable<Omit<MeltInput, "pouredOn" | "alloy" | "process" | "idempotencyKey">> & {
     pouredOn: string;
     alloy: string;
     process: Process;
@@ -240,7 +249,8 @@ export type MeltSummary = Row & {
   scrapCount: number;
 };
 export type Casting = Row &
-  Nullable<Omit<CastingInput, "partName" | "marks">> & {
+  Archived &
+  Nullable<Omit<CastingInput, "partName" | "marks" | "idempotencyKey">> & {
     meltId: number;
     partName: string;
     outcome: Outcome | null;

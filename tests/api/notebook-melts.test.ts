@@ -53,7 +53,7 @@ describe("melts", () => {
   it("refuses a melt with nothing recorded beyond what the form fills in, and one emptied by a patch", async () => {
     const { caster, shopId } = await shopWithCrew("Empty Melt Shop");
     // The new-melt form fills in the date, alloy, process and furnace by itself: those alone are not a melt.
-    const filledIn = { pouredOn: "2026-01-14", alloy: "A356.0", process: "green-sand", furnace: "Pot #1" };
+    const filledIn = { pouredOn: "2026-01-14", alloy: "A356.0", process: "green-sand" as const, furnace: "Pot #1" };
     for (const body of [filledIn, { ...filledIn, notes: "   " }, { ...filledIn, charge: null, pourTempC: null }]) {
       const res = await caster.agent.post("/api/melts").send(body);
       expect(res.status).toBe(400);
