@@ -1,5 +1,6 @@
 import { useLocalSearchParams, useRouter } from "expo-router";
 import { StyleSheet, View } from "react-native";
+import { ArchiveControl } from "@/components/archive/archive-control";
 import { BackLink } from "@/components/ui/back-link";
 import { Button } from "@/components/ui/button";
 import { CalcLinks } from "@/components/calculators/calc-links";
@@ -38,6 +39,7 @@ export default function MeltScreen() {
         </Heading>
         <Button kind="plain" label="Change" onPress={() => router.push(`/melts/${id}/edit`)} />
       </View>
+      <ArchiveControl kind="melt" row={m} />
       <MeltFacts melt={m} units={u} />
       {m.notes ? <Notice>{m.notes}</Notice> : null}
       <CalcLinks
