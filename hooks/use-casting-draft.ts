@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { useStoredDraft } from "@/hooks/use-stored-draft";
 import { fieldErrors } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { castingInput, type CastingInput, type Outcome } from "@/lib/notebook-schemas";
@@ -21,6 +22,8 @@ export type CastingDraft = Record<NumberKey, string> & {
   hasRiser?: boolean;
   hasOverflow?: boolean;
   hasVents?: boolean;
+  /** The idempotency key of this new casting's save, made when it is first saved. */
+  saveId?: string;
 };
 export type CastingInitial = { [K in keyof CastingInput]?: CastingInput[K] | null };
 
@@ -39,13 +42,20 @@ function draftFrom(c: CastingInitial, units: Units): CastingDraft {
 }
 
 /** A casting form's values as typed, in the person's units, checked with the API's schema. */
-export function useCastingDraft(initial: CastingInitial, units: Units) {
-  const [draft, setDraft] = useState(() => draftFrom(initial, units));
+export function useCastingDraft(initial: CastingInitial, units: Units, form?: string) {
+  const [start] = useState(() => draftFrom(initial, units));
+  const [draft, setDraft] = useState(start);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const set = <K extends keyof CastingDraft>(key: K, value: CastingDraft[K]) =>
     setDraft((d) => ({ ...d, [key]: value }));
+  const stored = useStoredDraft(form, units, draft, start, setDraft);
+  const startOver = async () => {
+    await stored.discard();
+    setDraft(start);
+    setErrors({});
+  };
 
-  function check(): CastingInput | undefined {
+  function check(saveId?: string): CastingInput | undefined {
     const numbers = textToNumbers(CASTING_NUMBERS, draft, units);
     const input = {
       ...numbers.values,
@@ -57,6 +67,7 @@ export function useCastingDraft(initial: CastingInitial, units: Units) {
       hasRiser: draft.hasRiser ?? null,
       hasOverflow: draft.hasOverflow ?? null,
       hasVents: draft.hasVents ?? null,
+      ...(saveId ? { idempotencyKey: saveId } : {}),
     };
     const parsed = castingInput.safeParse(input);
     const found = { ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true })), ...numbers.errors };
@@ -64,8 +75,8 @@ export function useCastingDraft(initial: CastingInitial, units: Units) {
     return parsed.success && Object.keys(found).length === 0 ? parsed.data : undefined;
   }
 
-  /** Ready for the next casting of the same pour: same part and sizes, a fresh outcome and notes. */
-  const next = () => setDraft((d) => ({ ...d, outcome: null, notes: "" }));
+  /** Ready for the next casting of the same pour: same part and sizes, a fresh outcome, notes and save. */
+  const next = () => setDraft((d) => ({ ...d, outcome: null, notes: "", saveId: undefined }));
 
-  return { draft, set, errors, setErrors, check, next };
+  return { draft, set, errors, setErrors, check, next, restored: stored.restored, discard: stored.discard, startOver };
 }

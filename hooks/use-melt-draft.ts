@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { useStoredDraft } from "@/hooks/use-stored-draft";
 import { fieldErrors } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { alloyConflicts, meltInput, type Alloy, type MeltInput } from "@/lib/notebook-schemas";
@@ -30,6 +31,8 @@ export type MeltDraft = Record<NumberKey, string> & {
   coatingApplied?: boolean;
   coatingDried?: boolean;
   notes: string;
+  /** The idempotency key of this new melt's save, made when it is first saved and kept with the draft. */
+  saveId?: string;
 };
 
 type Initial = { [K in keyof MeltInput]?: MeltInput[K] | null };
@@ -65,13 +68,21 @@ function draftFrom(m: Initial, units: Units): MeltDraft {
  * A melt form's values as typed (numbers in the person's units), and their check: the shared zod
  * schema, the alloy's solidus, and plain messages for what zod would word for programmers.
  */
-export function useMeltDraft(initial: Initial, units: Units) {
-  const [draft, setDraft] = useState(() => draftFrom(initial, units));
+export function useMeltDraft(initial: Initial, units: Units, form?: string) {
+  const [start] = useState(() => draftFrom(initial, units));
+  const [draft, setDraft] = useState(start);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const set = <K extends keyof MeltDraft>(key: K, value: MeltDraft[K]) => setDraft((d) => ({ ...d, [key]: value }));
+  const stored = useStoredDraft(form, units, draft, start, setDraft);
+  /** Back to the form as it opened, forgetting the stored draft. */
+  const startOver = async () => {
+    await stored.discard();
+    setDraft(start);
+    setErrors({});
+  };
 
   /** The input to send, or undefined; `errors` also carries "_", a message about the melt as a whole. */
-  function check(alloys: Alloy[]): { input?: MeltInput; errors: Record<string, string> } {
+  function check(alloys: Alloy[], saveId?: string): { input?: MeltInput; errors: Record<string, string> } {
     const numbers = textToNumbers(MELT_NUMBERS, draft, units);
     const v = numbers.values;
     const input = {
@@ -92,6 +103,7 @@ export function useMeltDraft(initial: Initial, units: Units) {
       coatingApplied: draft.coatingApplied ?? null,
       coatingDried: draft.coatingApplied === false ? null : (draft.coatingDried ?? null),
       notes: draft.notes.trim() || null,
+      ...(saveId ? { idempotencyKey: saveId } : {}),
     };
     const parsed = meltInput.safeParse(input);
     const alloy = alloys.find((a) => a.designation === draft.alloy);
@@ -106,5 +118,5 @@ export function useMeltDraft(initial: Initial, units: Units) {
     return { input: parsed.success && Object.keys(found).length === 0 ? parsed.data : undefined, errors: found };
   }
 
-  return { draft, set, errors, setErrors, check };
+  return { draft, set, errors, setErrors, check, restored: stored.restored, discard: stored.discard, startOver };
 }

@@ -1,10 +1,12 @@
+import { onlineManager } from "@tanstack/react-query";
 import { useLocalSearchParams, useRouter } from "expo-router";
 import { StyleSheet, View } from "react-native";
 import { ArchiveControl } from "@/components/archive/archive-control";
 import { BackLink } from "@/components/ui/back-link";
 import { Button } from "@/components/ui/button";
 import { CalcLinks } from "@/components/calculators/calc-links";
-import { CastingForm } from "@/components/castings/casting-form";
+import { CastingForm, WAITING } from "@/components/castings/casting-form";
+import { WaitingCastings } from "@/components/castings/waiting-castings";
 import { CastingRow } from "@/components/castings/casting-row";
 import { Heading } from "@/components/ui/heading";
 import { MeltFacts } from "@/components/melts/melt-facts";
@@ -23,7 +25,7 @@ export default function MeltScreen() {
   const id = Number(useLocalSearchParams<{ id: string }>().id);
   const melt = useMelt(id);
   const units = useUnitsQuery();
-  const addCasting = useCreateCasting(id);
+  const addCasting = useCreateCasting();
   const router = useRouter();
   if (melt.isPending || units.isPending) return <Loading />;
   if (melt.error) return <LoadFailed error={melt.error} />;
@@ -59,13 +61,21 @@ export default function MeltScreen() {
       {m.castings.map((c) => (
         <CastingRow key={c.id} casting={c} />
       ))}
+      <WaitingCastings meltId={id} />
       <View style={styles.add}>
         <Heading level={3}>Add a casting</Heading>
         <CastingForm
           units={u}
           submitLabel="Save casting"
           keepOpen
-          onSubmit={(input) => addCasting.mutateAsync(input)}
+          isNew
+          draftName={`casting:new:${id}`}
+          onSubmit={async (input) => {
+            // Without a connection the save waits on the device and goes when the connection is back.
+            if (onlineManager.isOnline()) return addCasting.mutateAsync({ meltId: id, input });
+            addCasting.mutate({ meltId: id, input });
+            return WAITING;
+          }}
         />
       </View>
     </Screen>
