@@ -38,10 +38,32 @@ export const fromFile = (file: File): Candidate => ({
 });
 
 /**
- * Take a photo, or choose several. On web expo-image-picker refuses a whole selection that holds a
- * file it cannot read as an image (a PDF); that becomes the same message as any other refused file.
+ * The browser's own file chooser, several at once. expo-image-picker's web picker rejects a whole
+ * selection that holds one file it cannot read as an image (a PDF) and does not say which file, so on
+ * web the files come straight from the input and each refused one is named in its message.
  */
+function chooseOnWeb(camera: boolean): Promise<Picked> {
+  return new Promise((resolve) => {
+    const input = document.createElement("input");
+    input.type = "file";
+    input.accept = "image/*";
+    input.multiple = !camera;
+    if (camera) input.setAttribute("capture", "environment");
+    input.style.display = "none";
+    const done = () => {
+      input.remove();
+      resolve({ candidates: Array.from(input.files ?? []).map(fromFile), refused: [] });
+    };
+    input.addEventListener("change", done, { once: true });
+    input.addEventListener("cancel", done, { once: true });
+    document.body.appendChild(input);
+    input.click();
+  });
+}
+
+/** Take a photo, or choose several (expo-image-picker on a phone, the browser's chooser on web). */
 export async function pickPhotos(from: "camera" | "library"): Promise<Picked> {
+  if (Platform.OS === "web") return chooseOnWeb(from === "camera");
   if (from === "camera") {
     const permission = await ImagePicker.requestCameraPermissionsAsync();
     if (!permission.granted)
@@ -67,6 +89,7 @@ export async function pickPhotos(from: "camera" | "library"): Promise<Picked> {
     if (result.canceled || !result.assets?.length) return { candidates: [], refused: [] };
     return { candidates: result.assets.map(fromAsset), refused: [] };
   } catch {
+    // The picker could not read what was chosen as an image.
     return { candidates: [], refused: [refusalMessage("type")] };
   }
 }

@@ -105,7 +105,7 @@ describe("the notebook at phone size (390 px)", () => {
     const fake = join(files, "not-a-photo.jpg");
     writeFileSync(fake, "just some text, not an image\n".repeat(20));
     await choosePhoto(page, fake);
-    await seen(page, "That file is not a photo we can read. Send a JPEG, PNG, WebP or HEIC picture.");
+    await seen(page, /“not-a-photo\.jpg” is not a photo we can read\. Send a JPEG, PNG, WebP or HEIC picture\./);
 
     await choosePhoto(page, photoPath);
     await expect.poll(() => page.getByTestId("casting-photo").count(), { timeout: 20000 }).toBe(1);

@@ -35,7 +35,8 @@ export default function NewMeltScreen() {
         onSubmit={async (input) => {
           if (!onlineManager.isOnline()) {
             create.mutate(input);
-            router.replace("/melts");
+            // Back to the melts list already under this screen, where the waiting melt shows.
+            router.dismissTo("/melts");
             return;
           }
           const melt = await create.mutateAsync(input);
