@@ -15,6 +15,7 @@ import { LoadFailed, Loading } from "@/components/ui/query-state";
 import { Screen } from "@/components/ui/screen";
 import { card, space } from "@/constants/theme";
 import { useCreateCasting } from "@/hooks/use-castings";
+import { useWaitingSaves, type CastingSave } from "@/hooks/use-offline-saves";
 import { useMelt } from "@/hooks/use-melts";
 import { useUnitsQuery } from "@/hooks/use-units";
 import { formatDay } from "@/lib/dates";
@@ -26,6 +27,7 @@ export default function MeltScreen() {
   const melt = useMelt(id);
   const units = useUnitsQuery();
   const addCasting = useCreateCasting();
+  const waiting = useWaitingSaves<CastingSave>("casting").filter((c) => c.meltId === id).length;
   const router = useRouter();
   if (melt.isPending || units.isPending) return <Loading />;
   if (melt.error) return <LoadFailed error={melt.error} />;
@@ -57,27 +59,30 @@ export default function MeltScreen() {
         }}
       />
       <Heading level={2}>Castings from this melt</Heading>
-      {m.castings.length === 0 ? <Notice>No castings logged from this melt yet.</Notice> : null}
+      {m.castings.length === 0 && !waiting ? <Notice>No castings logged from this melt yet.</Notice> : null}
       {m.castings.map((c) => (
         <CastingRow key={c.id} casting={c} />
       ))}
       <WaitingCastings meltId={id} />
-      <View style={styles.add}>
-        <Heading level={3}>Add a casting</Heading>
-        <CastingForm
-          units={u}
-          submitLabel="Save casting"
-          keepOpen
-          isNew
-          draftName={`casting:new:${id}`}
-          onSubmit={async (input) => {
-            // Without a connection the save waits on the device and goes when the connection is back.
-            if (onlineManager.isOnline()) return addCasting.mutateAsync({ meltId: id, input });
-            addCasting.mutate({ meltId: id, input });
-            return WAITING;
-          }}
-        />
-      </View>
+      {/* An archived melt takes no new castings until it is restored. */}
+      {m.archivedAt ? null : (
+        <View style={styles.add}>
+          <Heading level={3}>Add a casting</Heading>
+          <CastingForm
+            units={u}
+            submitLabel="Save casting"
+            keepOpen
+            isNew
+            draftName={`casting:new:${id}`}
+            onSubmit={async (input) => {
+              // Without a connection the save waits on the device and goes when the connection is back.
+              if (onlineManager.isOnline()) return addCasting.mutateAsync({ meltId: id, input });
+              addCasting.mutate({ meltId: id, input });
+              return WAITING;
+            }}
+          />
+        </View>
+      )}
     </Screen>
   );
 }
