@@ -149,10 +149,19 @@ describe("the notebook at wide size (1280 px)", () => {
     const firstAlloy = () => page.getByRole("row").nth(1).getByRole("cell").nth(1).textContent();
     await page.getByRole("columnheader", { name: /Alloy/ }).click();
     await expect.poll(() => page.getByRole("columnheader", { name: /Alloy ↑/ }).count()).toBe(1);
-    const alloys = await page
-      .getByRole("row")
-      .evaluateAll((rows) => rows.slice(1).map((r) => r.children[1]?.textContent ?? ""));
-    expect(alloys).toEqual([...alloys].sort());
+    // The header turns at once; the rows follow when the sorted page arrives (the last page stays meanwhile).
+    const rowAlloys = () =>
+      page.getByRole("row").evaluateAll((rows) => rows.slice(1).map((r) => r.children[1]?.textContent ?? ""));
+    await expect
+      .poll(
+        async () => {
+          const a = await rowAlloys();
+          return a.join("|") === [...a].sort().join("|");
+        },
+        { timeout: 10000 },
+      )
+      .toBe(true);
+    const alloys = await rowAlloys();
     expect(await firstAlloy()).toBe(alloys[0]);
     await shot(page, "wide-melt-table");
 
