@@ -141,6 +141,29 @@ describe("nothing lost at the bench", () => {
     await page.context().close();
   });
 
+  it("keeps a half-typed casting through a reload of its melt's page", async () => {
+    const page = await signedIn(PHONE);
+    await openNewMelt(page);
+    await page.getByLabel("Notes").fill(uniqueNote("Casting draft melt"));
+    await page.getByTestId("save-melt").click();
+    await seen(page, "Castings from this melt");
+    await page.getByLabel("Part").fill("Half-typed pulley");
+    await page.getByLabel("Thinnest section (mm)").fill("6");
+    await page.waitForTimeout(300);
+    await page.reload();
+    await expect.poll(() => page.getByTestId("draft-restored").count(), { timeout: 15000 }).toBe(1);
+    expect(await page.getByLabel("Part").inputValue()).toBe("Half-typed pulley");
+    expect(await page.getByLabel("Thinnest section (mm)").inputValue()).toBe("6");
+    // "Start over" forgets it, here and after another reload.
+    await page.getByRole("button", { name: "Start over" }).click();
+    expect(await page.getByLabel("Part").inputValue()).toBe("");
+    await page.reload();
+    await expect.poll(() => page.getByLabel("Part").count(), { timeout: 15000 }).toBe(1);
+    expect(await page.getByTestId("draft-restored").count()).toBe(0);
+    expect(await page.getByLabel("Part").inputValue()).toBe("");
+    await page.context().close();
+  });
+
   it("archives a melt with an undo, hidden from the melts list meanwhile", async () => {
     const page = await signedIn(WIDE);
     await openNewMelt(page);
