@@ -4,6 +4,7 @@ import { Stack } from "expo-router";
 import { useState } from "react";
 import { ActivityIndicator, Platform, StyleSheet, Text, View } from "react-native";
 import { colors, fontSize, space } from "@/constants/theme";
+import { setSaveDefaults, usePersistedSaves } from "@/hooks/use-offline-saves";
 import { authClient } from "@/lib/auth-client";
 
 /** The web loads WOFF2 (a third of the TTF's bytes); native builds keep the TTF. */
@@ -24,13 +25,19 @@ const LORA = {
   },
 };
 
-/** Fonts, one QueryClient, and the guard: signed-in people see (app), everyone else (auth). */
+/**
+ * Fonts, one QueryClient (with the person's saves that wait for a connection kept on the device), and
+ * the guard: signed-in people see (app), everyone else (auth).
+ */
 export default function RootLayout() {
-  const [queryClient] = useState(
-    () => new QueryClient({ defaultOptions: { queries: { retry: 1, staleTime: 30_000 } } }),
-  );
+  const [queryClient] = useState(() => {
+    const client = new QueryClient({ defaultOptions: { queries: { retry: 1, staleTime: 30_000 } } });
+    setSaveDefaults(client);
+    return client;
+  });
   const [fontsLoaded] = useFonts(LORA);
   const { data: session, isPending } = authClient.useSession();
+  usePersistedSaves(queryClient, session?.user.id);
 
   // On the web the page does not wait for Lora: headings show in the fallback serif and swap in.
   if ((!fontsLoaded && Platform.OS !== "web") || isPending) {

@@ -50,6 +50,17 @@ const createdBy = () =>
 const createdAt = () => timestamp("created_at", { withTimezone: true }).defaultNow().notNull();
 const updatedAt = () => timestamp("updated_at", { withTimezone: true }).defaultNow().notNull();
 
+/**
+ * Archiving hides a melt or casting from lists instead of deleting it, so an owner can bring it back
+ * (archived_at null: in use). The idempotency key is the client's UUID for one save: a save sent again
+ * after a lost answer or from the offline queue finds the row it already made (unique per shop).
+ */
+const archiveAndRetry = () => ({
+  archivedAt: timestamp("archived_at", { withTimezone: true }),
+  archivedBy: text("archived_by").references(() => user.id),
+  idempotencyKey: text("idempotency_key"),
+});
+
 /** Built-in alloys (from rules/alloys.ts) have no shop and no author; a shop adds its own. */
 export const alloys = pgTable(
   "alloys",
@@ -124,8 +135,10 @@ export const melts = pgTable(
     createdBy: createdBy(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
+    ...archiveAndRetry(),
   },
   (t) => [
+    unique("melts_shop_idempotency_uq").on(t.shopId, t.idempotencyKey),
     index("melts_shop_poured_idx").on(t.shopId, t.pouredOn, t.id),
     index("melts_shop_created_idx").on(t.shopId, t.createdAt),
     check("melts_pour_temp_ck", sql`${t.pourTempC} is null or ${t.pourTempC} <= 1700`),
@@ -161,8 +174,10 @@ export const castings = pgTable(
     createdBy: createdBy(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
+    ...archiveAndRetry(),
   },
   (t) => [
+    unique("castings_shop_idempotency_uq").on(t.shopId, t.idempotencyKey),
     index("castings_shop_created_idx").on(t.shopId, t.createdAt),
     index("castings_melt_idx").on(t.meltId),
     index("castings_shop_part_idx").on(t.shopId, t.partName),

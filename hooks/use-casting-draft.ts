@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { useStoredDraft } from "@/hooks/use-stored-draft";
 import { fieldErrors } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { CASTING_CONDITIONS } from "@/lib/condition-fields";
@@ -25,6 +26,8 @@ export type CastingDraft = Record<NumberKey, string> & {
   hasVents?: boolean;
   /** The gating beyond the sprue height (lib/condition-fields.ts). */
   conditions: ConditionDraft;
+  /** The idempotency key of this new casting's save, made when it is first saved. */
+  saveId?: string;
 };
 export type CastingInitial = { [K in keyof CastingInput]?: CastingInput[K] | null };
 
@@ -44,13 +47,20 @@ function draftFrom(c: CastingInitial, units: Units): CastingDraft {
 }
 
 /** A casting form's values as typed, in the person's units, checked with the API's schema. */
-export function useCastingDraft(initial: CastingInitial, units: Units) {
-  const [draft, setDraft] = useState(() => draftFrom(initial, units));
+export function useCastingDraft(initial: CastingInitial, units: Units, form?: string) {
+  const [start] = useState(() => draftFrom(initial, units));
+  const [draft, setDraft] = useState(start);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const set = <K extends keyof CastingDraft>(key: K, value: CastingDraft[K]) =>
     setDraft((d) => ({ ...d, [key]: value }));
+  const stored = useStoredDraft(form, units, draft, start, setDraft);
+  const startOver = async () => {
+    await stored.discard();
+    setDraft(start);
+    setErrors({});
+  };
 
-  function check(): CastingInput | undefined {
+  function check(saveId?: string): CastingInput | undefined {
     const numbers = textToNumbers(CASTING_NUMBERS, draft, units);
     // The gating applies to every process (lost foam too: its rules read the gating but not the free fall).
     const conditions = conditionsFromDraft(CASTING_CONDITIONS, draft.conditions, { process: null }, units);
@@ -65,6 +75,7 @@ export function useCastingDraft(initial: CastingInitial, units: Units) {
       hasRiser: draft.hasRiser ?? null,
       hasOverflow: draft.hasOverflow ?? null,
       hasVents: draft.hasVents ?? null,
+      ...(saveId ? { idempotencyKey: saveId } : {}),
     };
     const parsed = castingInput.safeParse(input);
     const found = {
@@ -76,8 +87,8 @@ export function useCastingDraft(initial: CastingInitial, units: Units) {
     return parsed.success && Object.keys(found).length === 0 ? parsed.data : undefined;
   }
 
-  /** Ready for the next casting of the same pour: same part and sizes, a fresh outcome and notes. */
-  const next = () => setDraft((d) => ({ ...d, outcome: null, notes: "" }));
+  /** Ready for the next casting of the same pour: same part and sizes, a fresh outcome, notes and save. */
+  const next = () => setDraft((d) => ({ ...d, outcome: null, notes: "", saveId: undefined }));
 
-  return { draft, set, errors, setErrors, check, next };
+  return { draft, set, errors, setErrors, check, next, restored: stored.restored, discard: stored.discard, startOver };
 }

@@ -1,4 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { SAVE_KEYS, type CastingSave } from "@/hooks/use-offline-saves";
 import { api } from "@/lib/api";
 import type { Casting, CastingDetail, CastingInput } from "@/lib/notebook-schemas";
 
@@ -25,12 +26,9 @@ export function useRefreshCasting() {
     ]);
 }
 
-export function useCreateCasting(meltId: number) {
-  const refresh = useRefreshCasting();
-  return useMutation({
-    mutationFn: (input: CastingInput) => api<Casting>(`/castings/melts/${meltId}`, { method: "POST", body: input }),
-    onSuccess: () => refresh(),
-  });
+/** Its function is a default of the QueryClient (hooks/use-offline-saves.ts), so a save made offline waits and goes later. */
+export function useCreateCasting() {
+  return useMutation<Casting, Error, CastingSave>({ mutationKey: SAVE_KEYS.casting });
 }
 
 export function useUpdateCasting(id: number) {

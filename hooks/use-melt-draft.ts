@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { useStoredDraft } from "@/hooks/use-stored-draft";
 import { fieldErrors } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { MELT_CONDITIONS, type ConditionContext } from "@/lib/condition-fields";
@@ -35,6 +36,8 @@ export type MeltDraft = Record<NumberKey, string> & {
   /** Melt treatment, sand, mould and foam beyond the everyday fields (lib/condition-fields.ts). */
   conditions: ConditionDraft;
   notes: string;
+  /** The idempotency key of this new melt's save, made when it is first saved and kept with the draft. */
+  saveId?: string;
 };
 
 type Initial = { [K in keyof MeltInput]?: MeltInput[K] | null };
@@ -77,12 +80,21 @@ export function meltContext(draft: MeltDraft, alloys: Alloy[]): ConditionContext
  * A melt form's values as typed (numbers in the person's units), and their check: the shared zod
  * schema, the alloy's solidus, and plain messages for what zod would word for programmers.
  */
-export function useMeltDraft(initial: Initial, units: Units) {
-  const [draft, setDraft] = useState(() => draftFrom(initial, units));
+export function useMeltDraft(initial: Initial, units: Units, form?: string) {
+  const [start] = useState(() => draftFrom(initial, units));
+  const [draft, setDraft] = useState(start);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const set = <K extends keyof MeltDraft>(key: K, value: MeltDraft[K]) => setDraft((d) => ({ ...d, [key]: value }));
+  const stored = useStoredDraft(form, units, draft, start, setDraft);
+  /** Back to the form as it opened, forgetting the stored draft. */
+  const startOver = async () => {
+    await stored.discard();
+    setDraft(start);
+    setErrors({});
+  };
 
-  function check(alloys: Alloy[]): MeltInput | undefined {
+  /** The input to send, or undefined; `errors` also carries "_", a message about the melt as a whole. */
+  function check(alloys: Alloy[], saveId?: string): { input?: MeltInput; errors: Record<string, string> } {
     const numbers = textToNumbers(MELT_NUMBERS, draft, units);
     const conditions = conditionsFromDraft(MELT_CONDITIONS, draft.conditions, meltContext(draft, alloys), units);
     const v = numbers.values;
@@ -105,6 +117,7 @@ export function useMeltDraft(initial: Initial, units: Units) {
       coatingApplied: draft.coatingApplied ?? null,
       coatingDried: draft.coatingApplied === false ? null : (draft.coatingDried ?? null),
       notes: draft.notes.trim() || null,
+      ...(saveId ? { idempotencyKey: saveId } : {}),
     };
     const parsed = meltInput.safeParse(input);
     const alloy = alloys.find((a) => a.designation === draft.alloy);
@@ -117,8 +130,8 @@ export function useMeltDraft(initial: Initial, units: Units) {
       ...(draft.alloy ? {} : { alloy: "choose an alloy" }),
     };
     setErrors(found);
-    return parsed.success && Object.keys(found).length === 0 ? parsed.data : undefined;
+    return { input: parsed.success && Object.keys(found).length === 0 ? parsed.data : undefined, errors: found };
   }
 
-  return { draft, set, errors, setErrors, check };
+  return { draft, set, errors, setErrors, check, restored: stored.restored, discard: stored.discard, startOver };
 }

@@ -1,5 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { castingKeys } from "@/hooks/use-castings";
+import { SAVE_KEYS } from "@/hooks/use-offline-saves";
 import { api } from "@/lib/api";
 import type { Alloy, Melt, MeltDetail, MeltInput, MeltSummary, Page, MELT_SORTS } from "@/lib/notebook-schemas";
 
@@ -55,12 +56,9 @@ export function useMeltDefaults() {
   });
 }
 
+/** Its function is a default of the QueryClient (hooks/use-offline-saves.ts), so a save made offline waits and goes later. */
 export function useCreateMelt() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (input: MeltInput) => api<Melt>("/melts", { method: "POST", body: input }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: meltKeys.all }),
-  });
+  return useMutation<Melt, Error, MeltInput>({ mutationKey: SAVE_KEYS.melt });
 }
 
 export function useUpdateMelt(id: number) {

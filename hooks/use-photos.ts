@@ -4,28 +4,31 @@ import { useRefreshCasting } from "@/hooks/use-castings";
 import { ApiError } from "@/lib/api";
 import { apiBaseUrl } from "@/lib/client-env";
 import type { Photo } from "@/lib/notebook-schemas";
+import { MAX_PHOTO_BYTES, refusalMessage } from "@/lib/photo-files";
+import { shrinkPhoto, sortOut, type Picked } from "@/hooks/use-photo-picker";
 
 /** A photo to send: on web a real File (picked, dropped or from expo-image-picker's `file`); on a phone a local uri. */
 export type PhotoSource = { file: Blob; name?: string } | { uri: string; name: string; type: string };
 
-/** Plain words for what the server refuses; its own message for anything else. */
-function uploadError(status: number, body: string): ApiError {
-  if (status === 413)
-    return new ApiError(
-      413,
-      "That photo is larger than 15 MB. Send a smaller one (most phones can share a reduced size).",
-    );
-  if (status === 415)
-    return new ApiError(415, "That file is not a photo we can read. Send a JPEG, PNG, WebP or HEIC picture.");
+/** Plain words for what the server refuses (the same as the app's own refusals); its own message for anything else. */
+function uploadError(status: number, body: string, name?: string): ApiError {
+  if (status === 413) return new ApiError(413, refusalMessage("size", name));
+  if (status === 415) {
+    // A HEIC the server cannot convert, or a damaged photo, has its own explanation.
+    const own = parsedMessage(body);
+    return new ApiError(415, own && !/not a JPEG, PNG/.test(own) ? own : refusalMessage("type", name));
+  }
   if (status === 0)
     return new ApiError(0, "The upload stopped: the server cannot be reached. Check the connection and try again.");
-  let message = `The server answered ${status}.`;
+  return new ApiError(status, parsedMessage(body) ?? `The server answered ${status}.`);
+}
+
+function parsedMessage(body: string): string | undefined {
   try {
-    message = JSON.parse(body)?.error?.message ?? message;
+    return JSON.parse(body)?.error?.message;
   } catch {
-    // Not JSON (a proxy's page, say): keep the status line.
+    return undefined; // Not JSON (a proxy's page, say).
   }
-  return new ApiError(status, message);
 }
 
 /**
@@ -48,9 +51,9 @@ export function sendPhoto(
     xhr.upload.onprogress = (e) => e.lengthComputable && onProgress(e.loaded / e.total);
     xhr.onload = () => {
       if (xhr.status >= 200 && xhr.status < 300) resolve(JSON.parse(xhr.responseText) as Photo);
-      else reject(uploadError(xhr.status, xhr.responseText));
+      else reject(uploadError(xhr.status, xhr.responseText, source.name));
     };
-    xhr.onerror = () => reject(uploadError(0, ""));
+    xhr.onerror = () => reject(uploadError(0, "", source.name));
     xhr.send(form);
   });
 }
@@ -66,6 +69,35 @@ export function useUploadPhoto(castingId: number) {
     onSuccess: () => refresh(castingId),
   });
   return { ...mutation, progress };
+}
+
+/**
+ * Photos from any path (chosen, several at once; dropped; the camera): each refused file gets its
+ * message, the rest are shrunk on the device and sent one after another.
+ */
+export function usePhotoIntake(castingId: number) {
+  const upload = useUploadPhoto(castingId);
+  const [messages, setMessages] = useState<string[]>([]);
+  const [preparing, setPreparing] = useState(false);
+
+  async function add(picked: Picked) {
+    const { candidates, refused } = sortOut(picked.candidates);
+    const found = [...picked.refused, ...refused];
+    setMessages(found);
+    setPreparing(true);
+    try {
+      for (const c of candidates) {
+        const source = await shrinkPhoto(c);
+        const size = "file" in source ? source.file.size : c.size;
+        if ((size ?? 0) > MAX_PHOTO_BYTES) found.push(refusalMessage("size", c.name));
+        else await upload.mutateAsync(source).catch((e: Error) => found.push(e.message));
+        setMessages([...found]);
+      }
+    } finally {
+      setPreparing(false);
+    }
+  }
+  return { add, busy: preparing || upload.isPending, progress: upload.progress, messages };
 }
 
 export function useDeletePhoto(castingId: number) {

@@ -81,10 +81,49 @@ export function alloyConflicts(m: MeltLike, alloy: { designation: string; solidu
   return out;
 }
 
+/**
+ * What makes a melt worth keeping: something observed at the furnace or the mould. The date, alloy,
+ * process and furnace do not count, because a new melt's form fills them in from the shop's defaults
+ * and the last melt, so a melt made of them alone is a tap on "Save" with nothing typed. A caster
+ * who logs a pour writes down at least a temperature, the charge, how the metal was cleaned, the day's
+ * weather, the mould, or a note; any one of these keeps the melt.
+ */
+export const MELT_OBSERVATIONS = [
+  "charge",
+  "meltTempC",
+  "pourTempC",
+  "degassing",
+  "degasMinutes",
+  "fluxed",
+  "skimmed",
+  "ambientTempC",
+  "humidityPct",
+  "sandMoisturePct",
+  "coatingApplied",
+  "coatingDried",
+  "coatingCoats",
+  "foamDensityKgM3",
+  "notes",
+  // Every pour condition beyond the everyday ones is something observed too (lib/condition-fields.ts).
+  ...(Object.keys(meltConditionFields) as (keyof typeof meltConditionFields)[]),
+] as const satisfies readonly (keyof MeltLike)[];
+export const EMPTY_MELT_MESSAGE =
+  "Nothing about this melt was recorded: add a temperature, the charge, the degassing, the mould or a note before saving.";
+export const meltIsEmpty = (m: MeltLike) =>
+  MELT_OBSERVATIONS.every((k) => m[k] == null || (typeof m[k] === "string" && m[k].trim() === ""));
+
 const addConflicts = (found: Record<string, string>, ctx: z.RefinementCtx) => {
   for (const [path, message] of Object.entries(found)) ctx.addIssue({ code: "custom", path: [path], message });
 };
-export const meltInput = meltFields.superRefine((m, ctx) => addConflicts(meltConflicts(m), ctx), always);
+/**
+ * The client's id for one save (a UUID made when the form is first saved): the same save sent twice,
+ * from the offline queue or after a lost answer, makes one row. Not a column a PATCH can change.
+ */
+const idempotencyKey = opt(z.uuid({ error: "must be a UUID made by the app for this save" }));
+export const meltInput = meltFields.extend({ idempotencyKey }).superRefine((m, ctx) => {
+  addConflicts(meltConflicts(m), ctx);
+  if (meltIsEmpty(m)) ctx.addIssue({ code: "custom", path: [], message: EMPTY_MELT_MESSAGE });
+}, always);
 export const meltPatch = meltFields.partial();
 export type MeltInput = z.infer<typeof meltInput>;
 
@@ -140,6 +179,7 @@ export function castingConflicts(c: Partial<z.infer<typeof castingFields>>): Rec
 /** A new casting may carry marks; a photo comes after the casting exists, so these have none. */
 export const castingInput = castingFields
   .extend({
+    idempotencyKey,
     marks: z
       .array(markFields.omit({ photoId: true, x: true, y: true }).strict())
       .max(50)
@@ -174,6 +214,8 @@ export const castingListQuery = z.object({ ...pageQuery, sort: z.enum(CASTING_SO
 // ---- Answers (JSON: dates are ISO strings; shopId is never sent) ----
 export type PersonRef = { id: string; name: string };
 type Row = { id: number; createdBy: PersonRef; createdAt: string };
+/** Set while a melt or casting is archived: hidden from lists, its page says so, an owner can restore it. */
+export type Archived = { archivedAt: string | null; archivedBy: PersonRef | null };
 type Nullable<T> = { [K in keyof T]-?: Exclude<T[K], undefined> | null };
 export type Page<T> = { items: T[]; total: number; page: number; pageSize: number };
 
@@ -193,7 +235,8 @@ export type Alloy = {
   createdAt: string;
 };
 export type Melt = Row &
-  Nullable<Omit<MeltInput, "pouredOn" | "alloy" | "process">> & {
+  Archived &
+  Nullable<Omit<MeltInput, "pouredOn" | "alloy" | "process" | "idempotencyKey">> & {
     pouredOn: string;
     alloy: string;
     process: Process;
@@ -211,7 +254,8 @@ export type MeltSummary = Row & {
   scrapCount: number;
 };
 export type Casting = Row &
-  Nullable<Omit<CastingInput, "partName" | "marks">> & {
+  Archived &
+  Nullable<Omit<CastingInput, "partName" | "marks" | "idempotencyKey">> & {
     meltId: number;
     partName: string;
     outcome: Outcome | null;

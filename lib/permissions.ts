@@ -8,7 +8,8 @@ import { defaultStatements, ownerAc } from "better-auth/plugins/organization/acc
  */
 export const statements = {
   ...defaultStatements,
-  casebook: ["read", "write", "comment", "request-review"],
+  /** Anyone who writes archives their own melts and castings; "archive-any" is anyone's, "restore" brings one back. */
+  casebook: ["read", "write", "comment", "request-review", "archive-any", "restore"],
   review: ["confirm"],
   rule: ["read", "write", "publish", "retire"],
   shop: ["settings", "export", "invite"],
@@ -23,6 +24,7 @@ const casterCan = {
 
 const mentorCan = {
   ...casterCan,
+  casebook: [...casterCan.casebook, "archive-any"],
   review: ["confirm"],
   rule: ["read", "write", "publish", "retire"],
 } as const;
@@ -33,6 +35,7 @@ export const roles = {
   owner: ac.newRole({
     ...ownerAc.statements,
     ...mentorCan,
+    casebook: [...mentorCan.casebook, "restore"],
     shop: ["settings", "export", "invite"],
   }),
 };

@@ -8,7 +8,13 @@ import { NumberField } from "@/components/ui/number-field";
 import { OutcomeChips } from "@/components/castings/outcome-chips";
 import { TextField } from "@/components/ui/text-field";
 import { colors, fontSize, space } from "@/constants/theme";
+import { DraftRestored } from "@/components/ui/draft-restored";
 import { useCastingDraft, type CastingInitial } from "@/hooks/use-casting-draft";
+import { newSaveId } from "@/lib/save-id";
+
+/** What onSubmit answers for a save that waits for the connection. */
+export const WAITING = { waiting: true } as const;
+const isWaiting = (a: unknown) => typeof a === "object" && a !== null && "waiting" in a;
 import { ApiError } from "@/lib/api";
 import { OUTCOME_LABELS } from "@/lib/labels";
 import type { CastingInput } from "@/lib/notebook-schemas";
@@ -21,12 +27,29 @@ type Props = {
   onSubmit: (input: CastingInput) => Promise<unknown>;
   /** Quick logging: after a save the form stays, keeping the part and sizes for the next casting. */
   keepOpen?: boolean;
+  /** Where the draft is kept on the device ("casting:new:12"). */
+  draftName?: string;
+  /** A new casting's save carries an idempotency key, so sending it twice makes one casting. */
+  isNew?: boolean;
   startExpanded?: boolean;
 };
 
 /** A casting: the part and how it came out first (quick on a phone), the gating and sizes when wanted. */
-export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOpen, startExpanded }: Props) {
-  const { draft, set, errors, setErrors, check, next } = useCastingDraft(initial, units);
+export function CastingForm({
+  initial = {},
+  units,
+  submitLabel,
+  onSubmit,
+  keepOpen,
+  startExpanded,
+  draftName,
+  isNew,
+}: Props) {
+  const { draft, set, errors, setErrors, check, next, restored, discard, startOver } = useCastingDraft(
+    initial,
+    units,
+    draftName,
+  );
   const [more, setMore] = useState(!!startExpanded);
   const [busy, setBusy] = useState(false);
   const [failure, setFailure] = useState<string>();
@@ -34,16 +57,22 @@ export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOp
   const mm = unitLabel("length", units);
 
   async function submit() {
-    const input = check();
+    const saveId = isNew ? (draft.saveId ?? newSaveId()) : undefined;
+    if (saveId !== draft.saveId) set("saveId", saveId);
+    const input = check(saveId);
     setSaved(undefined);
     setFailure(input ? undefined : "Some values need fixing: see the messages by the fields.");
     if (!input) return;
     setBusy(true);
     try {
-      await onSubmit(input);
+      const answer = await onSubmit(input);
+      await discard();
       if (keepOpen) {
+        const what = `${input.partName}${input.outcome ? ` (${OUTCOME_LABELS[input.outcome]})` : ""}`;
         setSaved(
-          `Saved ${input.partName}${input.outcome ? ` (${OUTCOME_LABELS[input.outcome]})` : ""}. Ready for the next one.`,
+          isWaiting(answer)
+            ? `Kept ${what} on this device: waiting to send. Ready for the next one.`
+            : `Saved ${what}. Ready for the next one.`,
         );
         next();
       }
@@ -57,6 +86,7 @@ export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOp
 
   return (
     <View style={styles.form}>
+      {restored ? <DraftRestored onStartOver={startOver} /> : null}
       <TextField
         label="Part"
         value={draft.partName}

@@ -43,6 +43,7 @@ export function CastingSummary({
           units={units}
           startExpanded
           submitLabel="Save changes"
+          draftName={`casting:${casting.id}`}
           onSubmit={async (input) => {
             await update.mutateAsync(input);
             setEditing(false);

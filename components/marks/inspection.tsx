@@ -9,7 +9,8 @@ import { PhotoDropZone } from "@/components/photos/photo-drop-zone";
 import { PhotoPanel } from "@/components/photos/photo-panel";
 import { colors, fontSize, space } from "@/constants/theme";
 import { useInspection } from "@/hooks/use-inspection";
-import { useUploadPhoto } from "@/hooks/use-photos";
+import { fromFile } from "@/hooks/use-photo-picker";
+import { usePhotoIntake } from "@/hooks/use-photos";
 import type { CastingDetail } from "@/lib/notebook-schemas";
 
 /**
@@ -18,7 +19,7 @@ import type { CastingDetail } from "@/lib/notebook-schemas";
  */
 export function Inspection({ casting, wide }: { casting: CastingDetail; wide: boolean }) {
   const ins = useInspection(casting);
-  const upload = useUploadPhoto(casting.id);
+  const intake = usePhotoIntake(casting.id);
   const photoNumbers = new Map(casting.photos.map((p, i) => [p.id, i + 1]));
   const { mode } = ins;
   const editing = mode.kind === "edit" ? ins.pins.find((p) => p.mark.id === mode.markId) : undefined;
@@ -42,14 +43,8 @@ export function Inspection({ casting, wide }: { casting: CastingDetail; wide: bo
   const moving = mode.kind === "move" ? ins.pins.find((p) => p.mark.id === mode.markId) : undefined;
 
   const photos = (
-    <PhotoDropZone enabled={wide} onFile={(file) => upload.mutate({ file, name: file.name })}>
-      <PhotoAdd
-        upload={upload.mutate}
-        busy={upload.isPending}
-        progress={upload.progress}
-        error={upload.error}
-        wide={wide}
-      />
+    <PhotoDropZone enabled={wide} onFiles={(files) => intake.add({ candidates: files.map(fromFile), refused: [] })}>
+      <PhotoAdd add={intake.add} busy={intake.busy} progress={intake.progress} messages={intake.messages} wide={wide} />
       {moving ? (
         <Text style={styles.moving} role="status">
           Tap the new spot for mark {moving.number}.

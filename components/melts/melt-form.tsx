@@ -11,6 +11,8 @@ import { space } from "@/constants/theme";
 import { ConditionGroups } from "@/components/conditions/condition-groups";
 import { meltContext, useMeltDraft } from "@/hooks/use-melt-draft";
 import { MELT_CONDITIONS } from "@/lib/condition-fields";
+import { DraftRestored } from "@/components/ui/draft-restored";
+import { newSaveId } from "@/lib/save-id";
 import { useAlloys } from "@/hooks/use-melts";
 import { ApiError } from "@/lib/api";
 import { PROCESS_LABELS } from "@/lib/labels";
@@ -25,26 +27,39 @@ type Props = {
   units: Units;
   submitLabel: string;
   onSubmit: (input: MeltInput) => Promise<unknown>;
+  /** Where the draft is kept on the device ("melt:new", "melt:12"). */
+  draftName: string;
+  /** A new melt's save carries an idempotency key, so sending it twice makes one melt. */
+  isNew?: boolean;
 };
 
 /** Every condition of a melt, checked here with the API's own schema before anything is sent. */
-export function MeltForm({ initial, units, submitLabel, onSubmit }: Props) {
+export function MeltForm({ initial, units, submitLabel, onSubmit, draftName, isNew }: Props) {
   const alloys = useAlloys();
-  const { draft, set, errors, setErrors, check } = useMeltDraft(initial, units);
+  const { draft, set, errors, setErrors, check, restored, discard, startOver } = useMeltDraft(
+    initial,
+    units,
+    draftName,
+  );
   const [busy, setBusy] = useState(false);
   const [failure, setFailure] = useState<string>();
   const sectionProps = { draft, set, errors, units };
 
   async function submit() {
-    const input = check(alloys.data ?? []);
-    setFailure(input ? undefined : "Some values need fixing: see the messages by the fields.");
+    const saveId = isNew ? (draft.saveId ?? newSaveId()) : undefined;
+    if (saveId !== draft.saveId) set("saveId", saveId);
+    const { input, errors: found } = check(alloys.data ?? [], saveId);
+    // A message about the melt as a whole (nothing recorded) says itself; field messages sit by their fields.
+    setFailure(input ? undefined : (found._ ?? "Some values need fixing: see the messages by the fields."));
     if (!input) return;
     setBusy(true);
     try {
       await onSubmit(input);
+      await discard();
     } catch (e) {
       // The server checks again (the alloy table may have changed): its field messages land by the fields.
       if (e instanceof ApiError && Object.keys(e.fields).length) setErrors(e.fields);
+      // (The server words a whole-melt refusal as its message, so the notice below says it.)
       setFailure(e instanceof Error ? e.message : String(e));
     } finally {
       setBusy(false);
@@ -54,6 +69,7 @@ export function MeltForm({ initial, units, submitLabel, onSubmit }: Props) {
   const alloyChoices = (alloys.data ?? []).map((a) => ({ value: a.designation, label: a.designation }));
   return (
     <View style={styles.form}>
+      {restored ? <DraftRestored onStartOver={startOver} /> : null}
       <TextField
         label="Poured on"
         value={draft.pouredOn}

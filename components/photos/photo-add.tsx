@@ -1,24 +1,15 @@
-import { useState } from "react";
 import { Platform, StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { UploadProgress } from "@/components/ui/upload-progress";
 import { colors, fontSize, space } from "@/constants/theme";
-import { pickPhoto } from "@/hooks/use-photo-picker";
-import type { PhotoSource } from "@/hooks/use-photos";
+import { pickPhotos, type Picked } from "@/hooks/use-photo-picker";
 
-type Props = { upload: (s: PhotoSource) => void; busy: boolean; progress: number; error: Error | null; wide: boolean };
+type Props = { add: (p: Picked) => void; busy: boolean; progress: number; messages: string[]; wide: boolean };
 
-/** Take a photo or choose one (or, wide, drop one here), and watch it go up. */
-export function PhotoAdd({ upload, busy, progress, error, wide }: Props) {
-  const [refused, setRefused] = useState<string>();
-
-  async function pick(from: "camera" | "library") {
-    setRefused(undefined);
-    const picked = await pickPhoto(from);
-    if (picked && "refused" in picked) setRefused(picked.refused);
-    else if (picked) upload(picked);
-  }
+/** Take a photo or choose several (or, wide, drop them here), and watch them go up. */
+export function PhotoAdd({ add, busy, progress, messages, wide }: Props) {
+  const pick = async (from: "camera" | "library") => add(await pickPhotos(from));
 
   return (
     <View style={styles.wrap}>
@@ -28,21 +19,25 @@ export function PhotoAdd({ upload, busy, progress, error, wide }: Props) {
         ) : null}
         <Button
           kind={wide ? "primary" : "plain"}
-          label="Choose a photo"
+          label="Choose photos"
           onPress={() => pick("library")}
           busy={busy}
           testID="choose-photo"
         />
       </View>
       {wide && Platform.OS === "web" ? (
-        <Text style={styles.hint}>…or drag a photo from your computer onto this area.</Text>
+        <Text style={styles.hint}>…or drag photos from your computer onto this area.</Text>
       ) : null}
       <Text style={styles.hint}>
-        JPEG, PNG, WebP or HEIC, up to 15 MB. Location and camera details are removed when it is stored.
+        JPEG, PNG, WebP or HEIC, up to 15 MB; large photos are made smaller before they are sent. Location and camera
+        details are removed when they are stored.
       </Text>
       {busy ? <UploadProgress fraction={progress} /> : null}
-      {refused ? <Notice tone="error">{refused}</Notice> : null}
-      {error && !busy ? <Notice tone="error">{error.message}</Notice> : null}
+      {messages.map((m, i) => (
+        <Notice key={i} tone="error">
+          {m}
+        </Notice>
+      ))}
     </View>
   );
 }

@@ -2,17 +2,17 @@ import { useEffect, useRef, useState, type ReactNode } from "react";
 import { Platform, StyleSheet, View } from "react-native";
 import { colors, radius } from "@/constants/theme";
 
-type Props = { onFile: (file: File) => void; enabled: boolean; children: ReactNode };
+type Props = { onFiles: (files: File[]) => void; enabled: boolean; children: ReactNode };
 
 /**
  * On a wide web screen a photo can be dragged from the desktop onto the photo area. React Native
  * has no drag-and-drop events, so the listeners go on the DOM node underneath the View.
  */
-export function PhotoDropZone({ onFile, enabled, children }: Props) {
+export function PhotoDropZone({ onFiles, enabled, children }: Props) {
   const ref = useRef<View>(null);
   const [over, setOver] = useState(false);
-  const onFileRef = useRef(onFile);
-  onFileRef.current = onFile;
+  const onFilesRef = useRef(onFiles);
+  onFilesRef.current = onFiles;
 
   useEffect(() => {
     if (Platform.OS !== "web" || !enabled) return;
@@ -26,8 +26,8 @@ export function PhotoDropZone({ onFile, enabled, children }: Props) {
     const drop = (e: DragEvent) => {
       e.preventDefault();
       setOver(false);
-      const file = e.dataTransfer?.files?.[0];
-      if (file) onFileRef.current(file);
+      const files = Array.from(e.dataTransfer?.files ?? []);
+      if (files.length) onFilesRef.current(files);
     };
     node.addEventListener("dragover", dragOver);
     node.addEventListener("dragleave", leave);

@@ -12,13 +12,14 @@ import { castingInShop, toCasting } from "./lookup";
 /** The casting page in one answer: the casting, its melt, photos, marks, comments and latest diagnosis. */
 export async function castingDetail(shopId: string, id: number): Promise<CastingDetail> {
   const c = await castingInShop(shopId, id);
-  const [[who], melt, photos, marks, comments, diagnosis] = await Promise.all([
+  const [[who], [archiver], melt, photos, marks, comments, diagnosis] = await Promise.all([
     db.select({ name: user.name }).from(user).where(eq(user.id, c.createdBy)),
+    c.archivedBy ? db.select({ name: user.name }).from(user).where(eq(user.id, c.archivedBy)) : [undefined],
     getMelt(shopId, c.meltId),
     photosOf(id),
     marksOf([id]),
     commentsOf(id),
     latestSnapshot(shopId, id),
   ]);
-  return { ...toCasting(c, who.name), melt, photos, marks, comments, diagnosis };
+  return { ...toCasting(c, who.name, archiver?.name), melt, photos, marks, comments, diagnosis };
 }

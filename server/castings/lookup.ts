@@ -18,9 +18,12 @@ export async function castingInShop(shopId: string, id: number, tx: Tx | typeof 
   return row;
 }
 
-export function toCasting(c: CastingRow, byName: string): Casting {
+/** `archiverName` is the name of whoever archived it, when it is archived. */
+export function toCasting(c: CastingRow, byName: string, archiverName = ""): Casting {
   return {
-    ...omit(c, ["shopId", "createdBy", "createdAt", "updatedAt"]),
+    ...omit(c, ["shopId", "createdBy", "createdAt", "updatedAt", "archivedAt", "archivedBy", "idempotencyKey"]),
+    archivedAt: c.archivedAt ? iso(c.archivedAt) : null,
+    archivedBy: c.archivedBy ? personRef(c.archivedBy, archiverName) : null,
     outcome: c.outcome,
     createdBy: personRef(c.createdBy, byName),
     createdAt: iso(c.createdAt),

@@ -4,7 +4,7 @@ import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
 import { idParam } from "../notebook/shared";
 import { castingDetail } from "./detail";
-import { createCasting, listCastings, patchCasting } from "./service";
+import { archiveCasting, createCasting, listCastings, patchCasting, restoreCasting } from "./service";
 
 export const castingsRouter = Router();
 const read = [requireShopMember, allow({ casebook: ["read"] })];
@@ -27,4 +27,13 @@ castingsRouter.get("/:id", ...read, async (req, res) => {
 castingsRouter.patch("/:id", ...write, async (req, res) => {
   const id = idParam(req.params.id, "No such casting");
   res.json(await patchCasting(currentMember(req), id, parseOr400(castingPatch, req.body)));
+});
+
+/** Archive and restore: who may is decided in server/notebook/archive.ts (author, mentor, owner). */
+castingsRouter.post("/:id/archive", ...write, async (req, res) => {
+  res.json(await archiveCasting(currentMember(req), idParam(req.params.id, "No such casting")));
+});
+
+castingsRouter.post("/:id/restore", ...write, async (req, res) => {
+  res.json(await restoreCasting(currentMember(req), idParam(req.params.id, "No such casting")));
 });

@@ -1,4 +1,4 @@
-import { and, asc, count, desc, eq, inArray, sql, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, eq, inArray, isNull, sql, type SQL } from "drizzle-orm";
 import { db } from "../db";
 import { alloys, castings, melts, photos, user } from "../../db/schema";
 import {
@@ -12,6 +12,7 @@ import {
 import type { ShopMember } from "../auth/shop-access";
 import { notFound, parseOr400 } from "../http/errors";
 import { insertMarks, marksOf } from "../marks/service";
+import { checkMayArchive, checkMayRestore } from "../notebook/archive";
 import { changedOnly, groupBy, iso, offsetOf, personRef, withoutNulls } from "../notebook/shared";
 import { photoUrls } from "../photos/urls";
 import { castingInShop, toCasting } from "./lookup";
@@ -23,7 +24,10 @@ const castingValues = (input: CastingInput) =>
     "shopId" | "meltId" | "createdBy"
   >;
 
-/** The casting and the marks it came with are stored in one transaction: both or neither. */
+/**
+ * The casting and the marks it came with are stored in one transaction: both or neither. A save sent
+ * again with the same idempotency key answers with the casting the first one made, and adds no marks.
+ */
 export async function createCasting(m: ShopMember, meltId: number, input: CastingInput): Promise<Casting> {
   return db.transaction(async (tx) => {
     const [melt] = await tx
@@ -31,10 +35,20 @@ export async function createCasting(m: ShopMember, meltId: number, input: Castin
       .from(melts)
       .where(and(eq(melts.shopId, m.shopId), eq(melts.id, meltId)));
     if (!melt) throw notFound("No such melt");
+    const key = input.idempotencyKey ?? null;
     const [row] = await tx
       .insert(castings)
-      .values({ ...castingValues(input), shopId: m.shopId, meltId, createdBy: m.userId })
+      .values({ ...castingValues(input), shopId: m.shopId, meltId, createdBy: m.userId, idempotencyKey: key })
+      .onConflictDoNothing({ target: [castings.shopId, castings.idempotencyKey] })
       .returning();
+    if (!row) {
+      const [first] = await tx
+        .select()
+        .from(castings)
+        .where(and(eq(castings.shopId, m.shopId), eq(castings.idempotencyKey, key!)));
+      const [who] = await tx.select({ name: user.name }).from(user).where(eq(user.id, first.createdBy));
+      return toCasting(first, who.name);
+    }
     await insertMarks(
       tx,
       m,
@@ -57,6 +71,30 @@ export async function patchCasting(m: ShopMember, id: number, patch: Partial<Cas
   return toCasting(row, who.name);
 }
 
+/** Hides the casting from the lists; nothing is deleted. */
+export async function archiveCasting(m: ShopMember, id: number): Promise<Casting> {
+  checkMayArchive(m, await castingInShop(m.shopId, id), "casting");
+  const [row] = await db
+    .update(castings)
+    .set({ archivedAt: new Date(), archivedBy: m.userId })
+    .where(and(eq(castings.shopId, m.shopId), eq(castings.id, id)))
+    .returning();
+  return toCasting(row, (await nameOf(row.createdBy)) ?? "", m.userName);
+}
+
+export async function restoreCasting(m: ShopMember, id: number): Promise<Casting> {
+  checkMayRestore(m, await castingInShop(m.shopId, id), "casting");
+  const [row] = await db
+    .update(castings)
+    .set({ archivedAt: null, archivedBy: null })
+    .where(and(eq(castings.shopId, m.shopId), eq(castings.id, id)))
+    .returning();
+  return toCasting(row, (await nameOf(row.createdBy)) ?? "");
+}
+
+const nameOf = async (userId: string) =>
+  (await db.select({ name: user.name }).from(user).where(eq(user.id, userId)))[0]?.name;
+
 const outcomeRank = sql`case ${castings.outcome} when 'scrap' then 0 when 'rework' then 1 when 'good' then 2 else 3 end`;
 const CASTING_ORDER = {
   "date-desc": [desc(melts.pouredOn), desc(castings.id)],
@@ -71,8 +109,11 @@ export async function castingSummaries(
   shopId: string,
   opts: { meltId?: number; sort: CastingSort; limit?: number; offset?: number },
 ) {
-  const where: SQL[] = [eq(castings.shopId, shopId)];
+  // Archived castings are hidden everywhere; an archived melt's castings are hidden from the shop-wide
+  // list but still shown on that melt's own page, where an owner may restore it.
+  const where: SQL[] = [eq(castings.shopId, shopId), isNull(castings.archivedAt)];
   if (opts.meltId) where.push(eq(castings.meltId, opts.meltId));
+  else where.push(isNull(melts.archivedAt));
   let query = db
     .select({
       c: castings,
@@ -129,6 +170,10 @@ export async function listCastings(
   q: { page: number; pageSize: number; sort: CastingSort },
 ): Promise<Page<CastingSummary>> {
   const items = await castingSummaries(shopId, { sort: q.sort, limit: q.pageSize, offset: offsetOf(q) });
-  const [{ total }] = await db.select({ total: count() }).from(castings).where(eq(castings.shopId, shopId));
+  const [{ total }] = await db
+    .select({ total: count() })
+    .from(castings)
+    .innerJoin(melts, eq(melts.id, castings.meltId))
+    .where(and(eq(castings.shopId, shopId), isNull(castings.archivedAt), isNull(melts.archivedAt)));
   return { items, total, page: q.page, pageSize: q.pageSize };
 }

@@ -24,7 +24,11 @@ export { fieldErrors };
 /** Parses with a zod schema or throws a 400 that lists each field's problem. */
 export function parseOr400<T extends z.ZodType>(schema: T, data: unknown): z.infer<T> {
   const result = schema.safeParse(data);
-  if (!result.success) throw new HttpError(400, "Some values need fixing.", fieldErrors(result.error));
+  if (!result.success) {
+    const fields = fieldErrors(result.error);
+    // A problem with the input as a whole ("_", such as an empty melt) is the message itself.
+    throw new HttpError(400, fields._ ?? "Some values need fixing.", fields);
+  }
   return result.data;
 }
 

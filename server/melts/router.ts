@@ -4,7 +4,7 @@ import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
 import { castingSummaries } from "../castings/service";
 import { idParam } from "../notebook/shared";
-import { createMelt, getMelt, listMelts, meltDefaults, patchMelt } from "./service";
+import { archiveMelt, createMelt, getMelt, listMelts, meltDefaults, patchMelt, restoreMelt } from "./service";
 
 export const meltsRouter = Router();
 const read = [requireShopMember, allow({ casebook: ["read"] })];
@@ -34,4 +34,13 @@ meltsRouter.get("/:id", ...read, async (req, res) => {
 meltsRouter.patch("/:id", ...write, async (req, res) => {
   const id = idParam(req.params.id, "No such melt");
   res.json(await patchMelt(currentMember(req), id, parseOr400(meltPatch, req.body)));
+});
+
+/** Archive and restore: who may is decided in server/notebook/archive.ts (author, mentor, owner). */
+meltsRouter.post("/:id/archive", ...write, async (req, res) => {
+  res.json(await archiveMelt(currentMember(req), idParam(req.params.id, "No such melt")));
+});
+
+meltsRouter.post("/:id/restore", ...write, async (req, res) => {
+  res.json(await restoreMelt(currentMember(req), idParam(req.params.id, "No such melt")));
 });

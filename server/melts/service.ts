@@ -1,4 +1,4 @@
-import { asc, count, desc, eq, and, sql } from "drizzle-orm";
+import { asc, count, desc, eq, and, isNull, sql } from "drizzle-orm";
 import { db } from "../db";
 import { alloys, castings, melts, shopSettings, user } from "../../db/schema";
 import {
@@ -14,13 +14,15 @@ import type { Process } from "../../rules/case";
 import type { ShopMember } from "../auth/shop-access";
 import { notFound, parseOr400 } from "../http/errors";
 import { requireAlloy } from "../alloys/service";
+import { checkMayArchive, checkMayRestore } from "../notebook/archive";
 import { iso, offsetOf, omit, personRef, refuseIfAny, withoutNulls, changedOnly } from "../notebook/shared";
 
 type MeltRow = typeof melts.$inferSelect;
 /** The melt's own columns that a MeltInput sets one to one (the alloy goes through the alloy table). */
 const MELT_COLUMNS = Object.keys(meltFields.shape).filter((k) => k !== "alloy") as Exclude<keyof MeltInput, "alloy">[];
 
-const meltSelect = { m: melts, alloy: alloys.designation, byName: user.name };
+const archiverName = sql<string | null>`(select ${user.name} from ${user} where ${user.id} = ${melts.archivedBy})`;
+const meltSelect = { m: melts, alloy: alloys.designation, byName: user.name, archiverName };
 const meltQuery = () =>
   db
     .select(meltSelect)
@@ -28,9 +30,21 @@ const meltQuery = () =>
     .innerJoin(alloys, eq(alloys.id, melts.alloyId))
     .innerJoin(user, eq(user.id, melts.createdBy));
 
-export function toMelt({ m, alloy, byName }: { m: MeltRow; alloy: string; byName: string }): Melt {
+type MeltRead = { m: MeltRow; alloy: string; byName: string; archiverName?: string | null };
+export function toMelt({ m, alloy, byName, archiverName }: MeltRead): Melt {
   return {
-    ...omit(m, ["shopId", "alloyId", "createdBy", "createdAt", "updatedAt"]),
+    ...omit(m, [
+      "shopId",
+      "alloyId",
+      "createdBy",
+      "createdAt",
+      "updatedAt",
+      "archivedAt",
+      "archivedBy",
+      "idempotencyKey",
+    ]),
+    archivedAt: m.archivedAt ? iso(m.archivedAt) : null,
+    archivedBy: m.archivedBy ? personRef(m.archivedBy, archiverName ?? "") : null,
     alloy,
     process: m.process,
     charge: m.charge,
@@ -57,13 +71,49 @@ async function meltValues(shopId: string, input: MeltInput) {
   >;
 }
 
+/** A save sent again with the same idempotency key answers with the melt the first one made. */
 export async function createMelt(m: ShopMember, input: MeltInput): Promise<Melt> {
   const values = await meltValues(m.shopId, input);
+  const key = input.idempotencyKey ?? null;
   const [row] = await db
     .insert(melts)
-    .values({ ...values, shopId: m.shopId, createdBy: m.userId })
-    .returning();
-  return getMelt(m.shopId, row.id);
+    .values({ ...values, shopId: m.shopId, createdBy: m.userId, idempotencyKey: key })
+    .onConflictDoNothing({ target: [melts.shopId, melts.idempotencyKey] })
+    .returning({ id: melts.id });
+  if (row) return getMelt(m.shopId, row.id);
+  const [first] = await db
+    .select({ id: melts.id })
+    .from(melts)
+    .where(and(eq(melts.shopId, m.shopId), eq(melts.idempotencyKey, key!)));
+  return getMelt(m.shopId, first.id);
+}
+
+async function archiveState(shopId: string, id: number) {
+  const [row] = await db
+    .select({ createdBy: melts.createdBy, archivedAt: melts.archivedAt, archivedBy: melts.archivedBy })
+    .from(melts)
+    .where(and(eq(melts.shopId, shopId), eq(melts.id, id)));
+  if (!row) throw notFound("No such melt");
+  return row;
+}
+
+/** Hides the melt (and with it its castings) from the lists; nothing is deleted. */
+export async function archiveMelt(m: ShopMember, id: number): Promise<Melt> {
+  checkMayArchive(m, await archiveState(m.shopId, id), "melt");
+  await db
+    .update(melts)
+    .set({ archivedAt: new Date(), archivedBy: m.userId })
+    .where(and(eq(melts.shopId, m.shopId), eq(melts.id, id), isNull(melts.archivedAt)));
+  return getMelt(m.shopId, id);
+}
+
+export async function restoreMelt(m: ShopMember, id: number): Promise<Melt> {
+  checkMayRestore(m, await archiveState(m.shopId, id), "melt");
+  await db
+    .update(melts)
+    .set({ archivedAt: null, archivedBy: null })
+    .where(and(eq(melts.shopId, m.shopId), eq(melts.id, id)));
+  return getMelt(m.shopId, id);
 }
 
 /** A PATCH is checked as the whole melt it makes, so a new alloy re-checks the stored pour temperature. */
@@ -78,8 +128,9 @@ export async function patchMelt(m: ShopMember, id: number, patch: Partial<MeltIn
   return getMelt(m.shopId, id);
 }
 
-const castingCount = sql<number>`(select count(*)::int from ${castings} where ${castings.meltId} = ${melts.id})`;
-const scrapCount = sql<number>`(select count(*)::int from ${castings} where ${castings.meltId} = ${melts.id} and ${castings.outcome} = 'scrap')`;
+// Archived castings are not counted: the list shows what is in use.
+const castingCount = sql<number>`(select count(*)::int from ${castings} where ${castings.meltId} = ${melts.id} and ${castings.archivedAt} is null)`;
+const scrapCount = sql<number>`(select count(*)::int from ${castings} where ${castings.meltId} = ${melts.id} and ${castings.archivedAt} is null and ${castings.outcome} = 'scrap')`;
 const MELT_ORDER = {
   "date-desc": [desc(melts.pouredOn), desc(melts.id)],
   "date-asc": [asc(melts.pouredOn), asc(melts.id)],
@@ -91,16 +142,17 @@ export async function listMelts(
   shopId: string,
   q: { page: number; pageSize: number; sort: keyof typeof MELT_ORDER },
 ): Promise<Page<MeltSummary>> {
+  const inUse = and(eq(melts.shopId, shopId), isNull(melts.archivedAt));
   const rows = await db
     .select({ ...meltSelect, castingCount, scrapCount })
     .from(melts)
     .innerJoin(alloys, eq(alloys.id, melts.alloyId))
     .innerJoin(user, eq(user.id, melts.createdBy))
-    .where(eq(melts.shopId, shopId))
+    .where(inUse)
     .orderBy(...MELT_ORDER[q.sort])
     .limit(q.pageSize)
     .offset(offsetOf(q));
-  const [{ total }] = await db.select({ total: count() }).from(melts).where(eq(melts.shopId, shopId));
+  const [{ total }] = await db.select({ total: count() }).from(melts).where(inUse);
   const items = rows.map(({ m, alloy, byName, castingCount, scrapCount }) => ({
     id: m.id,
     pouredOn: m.pouredOn,
@@ -120,7 +172,7 @@ export async function listMelts(
 export async function meltDefaults(shopId: string): Promise<Partial<MeltInput>> {
   const [settings] = await db.select().from(shopSettings).where(eq(shopSettings.shopId, shopId));
   const [last] = await meltQuery()
-    .where(eq(melts.shopId, shopId))
+    .where(and(eq(melts.shopId, shopId), isNull(melts.archivedAt)))
     .orderBy(desc(melts.createdAt), desc(melts.id))
     .limit(1);
   const out: Partial<MeltInput> = {};

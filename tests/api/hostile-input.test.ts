@@ -142,7 +142,7 @@ function withLeaf(body: unknown, path: (string | number)[], value: unknown): unk
 describe("hostile input at the edge", () => {
   it("has a hostile-input case for every JSON write route", () => {
     const bodiless =
-      /\/(publish|retire|resend|cancel|make-owner)$|^\/api\/people\/leave$|^\/api\/diagnosis\/castings\/|^\/api\/photos\//;
+      /\/(publish|retire|resend|cancel|make-owner|archive|restore)$|^\/api\/people\/leave$|^\/api\/diagnosis\/castings\/|^\/api\/photos\//;
     const routes = apiRoutes().filter((r) => r.method !== "GET" && r.method !== "DELETE" && !bodiless.test(r.path));
     for (const r of routes) {
       const pattern = new RegExp(`^${r.path.replace(/:\w+/g, "[^/]+")}$`);

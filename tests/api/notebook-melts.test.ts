@@ -50,6 +50,31 @@ describe("melts", () => {
     expect((await shopCounts(shopId)).melts).toBe(0);
   });
 
+  it("refuses a melt with nothing recorded beyond what the form fills in, and one emptied by a patch", async () => {
+    const { caster, shopId } = await shopWithCrew("Empty Melt Shop");
+    // The new-melt form fills in the date, alloy, process and furnace by itself: those alone are not a melt.
+    const filledIn = { pouredOn: "2026-01-14", alloy: "A356.0", process: "green-sand" as const, furnace: "Pot #1" };
+    for (const body of [filledIn, { ...filledIn, notes: "   " }, { ...filledIn, charge: null, pourTempC: null }]) {
+      const res = await caster.agent.post("/api/melts").send(body);
+      expect(res.status).toBe(400);
+      expect(res.body.error.message).toMatch(/Nothing about this melt was recorded/);
+      expect(res.body.error.fields._).toMatch(/temperature, the charge/);
+    }
+    expect((await shopCounts(shopId)).melts).toBe(0);
+    // Any one observation keeps it: a pour temperature, a "no" to fluxing, a note.
+    for (const extra of [{ pourTempC: 745 }, { fluxed: false }, { notes: "test pour" }])
+      expect((await caster.agent.post("/api/melts").send({ ...filledIn, ...extra })).status).toBe(201);
+    const only = await newMelt(caster, {
+      ...Object.fromEntries(Object.keys(coldLostFoamMelt).map((k) => [k, null])),
+      ...filledIn,
+      pourTempC: 745,
+    });
+    const emptied = await caster.agent.patch(`/api/melts/${only.id}`).send({ pourTempC: null });
+    expect(emptied.status).toBe(400);
+    expect(emptied.body.error.message).toMatch(/Nothing about this melt was recorded/);
+    expect((await caster.agent.get(`/api/melts/${only.id}`)).body.pourTempC).toBe(745);
+  });
+
   it("patches a melt, checking the whole melt it makes", async () => {
     const { caster } = await shopWithCrew("Patch Melt Shop");
     const melt = await newMelt(caster);

@@ -105,7 +105,7 @@ describe("the notebook at phone size (390 px)", () => {
     const fake = join(files, "not-a-photo.jpg");
     writeFileSync(fake, "just some text, not an image\n".repeat(20));
     await choosePhoto(page, fake);
-    await seen(page, "That file is not a photo we can read. Send a JPEG, PNG, WebP or HEIC picture.");
+    await seen(page, /“not-a-photo\.jpg” is not a photo we can read\. Send a JPEG, PNG, WebP or HEIC picture\./);
 
     await choosePhoto(page, photoPath);
     await expect.poll(() => page.getByTestId("casting-photo").count(), { timeout: 20000 }).toBe(1);
@@ -149,10 +149,19 @@ describe("the notebook at wide size (1280 px)", () => {
     const firstAlloy = () => page.getByRole("row").nth(1).getByRole("cell").nth(1).textContent();
     await page.getByRole("columnheader", { name: /Alloy/ }).click();
     await expect.poll(() => page.getByRole("columnheader", { name: /Alloy ↑/ }).count()).toBe(1);
-    const alloys = await page
-      .getByRole("row")
-      .evaluateAll((rows) => rows.slice(1).map((r) => r.children[1]?.textContent ?? ""));
-    expect(alloys).toEqual([...alloys].sort());
+    // The header turns at once; the rows follow when the sorted page arrives (the last page stays meanwhile).
+    const rowAlloys = () =>
+      page.getByRole("row").evaluateAll((rows) => rows.slice(1).map((r) => r.children[1]?.textContent ?? ""));
+    await expect
+      .poll(
+        async () => {
+          const a = await rowAlloys();
+          return a.join("|") === [...a].sort().join("|");
+        },
+        { timeout: 10000 },
+      )
+      .toBe(true);
+    const alloys = await rowAlloys();
     expect(await firstAlloy()).toBe(alloys[0]);
     await shot(page, "wide-melt-table");
 

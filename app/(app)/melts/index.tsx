@@ -6,6 +6,7 @@ import { ChoiceChips } from "@/components/ui/choice-chips";
 import { Heading } from "@/components/ui/heading";
 import { MeltCard } from "@/components/melts/melt-card";
 import { MeltTable } from "@/components/melts/melt-table";
+import { WaitingMelts } from "@/components/melts/waiting-melts";
 import { Notice } from "@/components/ui/notice";
 import { Pager } from "@/components/ui/pager";
 import { Loading } from "@/components/ui/query-state";
@@ -46,6 +47,7 @@ export default function MeltsScreen() {
       {!wide ? (
         <ChoiceChips label="Order" options={ORDER} value={sort} onChange={(s) => resort(s as MeltSort)} />
       ) : null}
+      <WaitingMelts />
       {melts.isPending ? <Loading /> : null}
       {melts.error ? <Notice tone="error">{melts.error.message}</Notice> : null}
       {melts.data && melts.data.total === 0 ? (

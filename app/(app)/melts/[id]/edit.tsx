@@ -27,6 +27,7 @@ export default function EditMeltScreen() {
         initial={melt.data}
         units={units.data ?? SI_UNITS}
         submitLabel="Save changes"
+        draftName={`melt:${id}`}
         onSubmit={async (input) => {
           await update.mutateAsync(input);
           router.replace(`/melts/${id}`);

@@ -1,9 +1,12 @@
+import { onlineManager } from "@tanstack/react-query";
 import { useLocalSearchParams, useRouter } from "expo-router";
 import { StyleSheet, View } from "react-native";
+import { ArchiveControl } from "@/components/archive/archive-control";
 import { BackLink } from "@/components/ui/back-link";
 import { Button } from "@/components/ui/button";
 import { CalcLinks } from "@/components/calculators/calc-links";
-import { CastingForm } from "@/components/castings/casting-form";
+import { CastingForm, WAITING } from "@/components/castings/casting-form";
+import { WaitingCastings } from "@/components/castings/waiting-castings";
 import { CastingRow } from "@/components/castings/casting-row";
 import { Heading } from "@/components/ui/heading";
 import { MeltFacts } from "@/components/melts/melt-facts";
@@ -12,6 +15,7 @@ import { LoadFailed, Loading } from "@/components/ui/query-state";
 import { Screen } from "@/components/ui/screen";
 import { card, space } from "@/constants/theme";
 import { useCreateCasting } from "@/hooks/use-castings";
+import { useWaitingSaves, type CastingSave } from "@/hooks/use-offline-saves";
 import { useMelt } from "@/hooks/use-melts";
 import { useUnitsQuery } from "@/hooks/use-units";
 import { formatDay } from "@/lib/dates";
@@ -22,7 +26,8 @@ export default function MeltScreen() {
   const id = Number(useLocalSearchParams<{ id: string }>().id);
   const melt = useMelt(id);
   const units = useUnitsQuery();
-  const addCasting = useCreateCasting(id);
+  const addCasting = useCreateCasting();
+  const waiting = useWaitingSaves<CastingSave>("casting").filter((c) => c.meltId === id).length;
   const router = useRouter();
   if (melt.isPending || units.isPending) return <Loading />;
   if (melt.error) return <LoadFailed error={melt.error} />;
@@ -38,6 +43,7 @@ export default function MeltScreen() {
         </Heading>
         <Button kind="plain" label="Change" onPress={() => router.push(`/melts/${id}/edit`)} />
       </View>
+      <ArchiveControl kind="melt" row={m} />
       <MeltFacts melt={m} units={u} />
       {m.notes ? <Notice>{m.notes}</Notice> : null}
       <CalcLinks
@@ -53,19 +59,30 @@ export default function MeltScreen() {
         }}
       />
       <Heading level={2}>Castings from this melt</Heading>
-      {m.castings.length === 0 ? <Notice>No castings logged from this melt yet.</Notice> : null}
+      {m.castings.length === 0 && !waiting ? <Notice>No castings logged from this melt yet.</Notice> : null}
       {m.castings.map((c) => (
         <CastingRow key={c.id} casting={c} />
       ))}
-      <View style={styles.add}>
-        <Heading level={3}>Add a casting</Heading>
-        <CastingForm
-          units={u}
-          submitLabel="Save casting"
-          keepOpen
-          onSubmit={(input) => addCasting.mutateAsync(input)}
-        />
-      </View>
+      <WaitingCastings meltId={id} />
+      {/* An archived melt takes no new castings until it is restored. */}
+      {m.archivedAt ? null : (
+        <View style={styles.add}>
+          <Heading level={3}>Add a casting</Heading>
+          <CastingForm
+            units={u}
+            submitLabel="Save casting"
+            keepOpen
+            isNew
+            draftName={`casting:new:${id}`}
+            onSubmit={async (input) => {
+              // Without a connection the save waits on the device and goes when the connection is back.
+              if (onlineManager.isOnline()) return addCasting.mutateAsync({ meltId: id, input });
+              addCasting.mutate({ meltId: id, input });
+              return WAITING;
+            }}
+          />
+        </View>
+      )}
     </Screen>
   );
 }

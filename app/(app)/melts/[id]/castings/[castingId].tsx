@@ -1,4 +1,5 @@
 import { useLocalSearchParams } from "expo-router";
+import { ArchiveControl } from "@/components/archive/archive-control";
 import { CalcLinks } from "@/components/calculators/calc-links";
 import { gatingPrefill } from "@/lib/calculator-fields";
 import { BackLink } from "@/components/ui/back-link";
@@ -39,7 +40,9 @@ export default function CastingScreen() {
   return (
     <Screen wide={wide}>
       <BackLink href={`/melts/${c.meltId}`} label={`${c.melt.alloy} melt of ${formatDay(c.melt.pouredOn)}`} />
+      {c.melt.archivedAt ? <ArchiveControl kind="melt" row={c.melt} /> : null}
       <CastingSummary casting={c} units={units} mayEdit={mayWrite} />
+      <ArchiveControl kind="casting" row={c} />
       <Heading level={2}>Photos and marks</Heading>
       <Inspection casting={c} wide={wide} />
       <DiagnosisView casting={c} units={units} mayRun={mayWrite} />
