@@ -4,6 +4,7 @@ import type { CauseRecord } from "../rules/calibration";
 import type { RankedCause } from "../rules/rank";
 import { requiredText, rowId, text } from "./fields";
 import type { Outcome, PersonRef } from "./notebook-schemas";
+import type { CauseOption } from "./rulebook-schemas";
 
 /**
  * Review, confirmed causes and follow-ups (core loop step 5): inputs for the casting-page panels
@@ -13,14 +14,24 @@ const note = (max: number) => text(max).optional();
 
 export const reviewRequestInput = z.object({ note: note(1000) });
 
-/** A mentor confirms one of the listed causes (causeId) or names another (causeText), with a note. */
+/**
+ * A mentor confirms a cause of the rulebook (causeId) or names another (causeText), with a note. A named
+ * cause can be added to the shop's rulebook at once (`makeShopCause`, with the fix to try for it), so
+ * later rules can point at it and its record is kept.
+ */
 export const confirmationInput = z
   .object({
     causeId: requiredText("choose a cause", 100).optional(),
-    causeText: text(300).optional(),
+    causeText: text(200).optional(),
+    makeShopCause: z.boolean({ error: "true or false" }).optional(),
+    newCauseFix: text(300).optional(),
     note: note(2000),
   })
   .superRefine((c, ctx) => {
+    if (c.makeShopCause && !c.causeText)
+      ctx.addIssue({ code: "custom", path: ["causeText"], message: "name the cause to add it" });
+    if (c.makeShopCause && !c.newCauseFix)
+      ctx.addIssue({ code: "custom", path: ["newCauseFix"], message: "give one fix to try for it" });
     if (!c.causeId && !c.causeText)
       ctx.addIssue({ code: "custom", path: ["causeId"], message: "choose a cause, or name another" });
     if (c.causeId && c.causeText)
@@ -103,6 +114,9 @@ export type FixTried = {
 /** One casting of the part in the chain of fixes, oldest first; `current` marks the casting on screen. */
 export type ChainLink = { casting: CastingRef; fixes: FixTried[]; current: boolean };
 export type Followups = { fixes: FixTried[]; chain: ChainLink[]; candidates: CastingRef[] };
+
+/** Every cause of the shop's rulebook, with its fixes for this casting's metal: what a mentor may confirm. */
+export type CastingCauses = { causes: CauseOption[] };
 
 /** A ranked cause as the shop's diagnosis returns it: with its record among confirmed cases here. */
 export type CauseWithRecord = RankedCause & { record?: CauseRecord | null };

@@ -133,7 +133,7 @@ export async function backtest({ cases, base, rule, cause, weightFactor }: Backt
       out.fired++;
       if (comparable) {
         out.firedConfirmed++;
-        if (agrees(rule, confirmedId)) out.agreed++;
+        if (agrees(rule, comparable)) out.agreed++;
       }
     }
     // A rule that did not fire cannot change the ranking; only confirmed cases need the diagnosis then.
