@@ -59,6 +59,12 @@ const workedNeedsNext = (f: { nextCastingId?: number | null; worked?: Worked | n
 };
 export const fixInput = fixFields.superRefine(workedNeedsNext);
 export const fixPatch = fixFields.partial();
+/** Ticking a fix to try on a casting's likely causes (or taking the tick off). */
+export const fixTickInput = z.object({
+  fix: requiredText("say which fix", 500),
+  ticked: z.boolean({ error: "true or false" }),
+});
+export type FixTickInput = z.infer<typeof fixTickInput>;
 export type FixInput = z.infer<typeof fixInput>;
 export type FixPatch = z.infer<typeof fixPatch>;
 
@@ -113,7 +119,8 @@ export type FixTried = {
 };
 /** One casting of the part in the chain of fixes, oldest first; `current` marks the casting on screen. */
 export type ChainLink = { casting: CastingRef; fixes: FixTried[]; current: boolean };
-export type Followups = { fixes: FixTried[]; chain: ChainLink[]; candidates: CastingRef[] };
+/** `ticked`: the fixes to try ticked on this casting's likely causes. */
+export type Followups = { fixes: FixTried[]; chain: ChainLink[]; candidates: CastingRef[]; ticked: string[] };
 
 /** Every cause of the shop's rulebook, with its fixes for this casting's metal: what a mentor may confirm. */
 export type CastingCauses = { causes: CauseOption[] };

@@ -155,3 +155,25 @@ describe("a diagnosis whose marks or conditions changed", () => {
     expect(await freshness(caster, c.id)).toEqual({ snapshotId: again.id, stale: false, changed: [] });
   });
 });
+
+describe("fixes to try, ticked on the casting", () => {
+  it("keeps the ticks with the casting for everyone in the shop, once each, and takes them off", async () => {
+    const { caster, mentor } = await shopWithCrew("Loop Ticks");
+    const away = await shopWithCrew("Loop Ticks Away");
+    const c = await newCasting(caster, (await newMelt(caster)).id, { marks: misrun });
+    const tick = (p: Person, body: object) => p.agent.put(`/api/followups/castings/${c.id}/ticks`).send(body);
+    expect((await tick(caster, { fix: "Pour hotter", ticked: true })).body).toEqual({ ticked: ["Pour hotter"] });
+    expect((await tick(mentor, { fix: "Pour hotter", ticked: true })).body).toEqual({ ticked: ["Pour hotter"] });
+    await tick(caster, { fix: "Shorten the pour", ticked: true });
+    const seen = await mentor.agent.get(`/api/followups/castings/${c.id}`);
+    expect(seen.body.ticked).toEqual(["Pour hotter", "Shorten the pour"]);
+    expect((await tick(mentor, { fix: "Pour hotter", ticked: false })).body).toEqual({ ticked: ["Shorten the pour"] });
+
+    expect((await tick(away.caster, { fix: "Pour hotter", ticked: true })).status).toBe(404);
+    for (const bad of [{ fix: "", ticked: true }, { fix: "Pour hotter" }, { fix: "x".repeat(501), ticked: true }]) {
+      const res = await tick(caster, bad);
+      expect(res.status).toBe(400);
+    }
+    expect((await caster.agent.get(`/api/followups/castings/${c.id}`)).body.ticked).toEqual(["Shorten the pour"]);
+  });
+});
