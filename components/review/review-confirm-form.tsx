@@ -1,32 +1,45 @@
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { FieldError } from "@/components/ui/field-error";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
 import { CauseRecordLine } from "@/components/rulebook/rule-record";
+import { CauseOption } from "@/components/review/cause-option";
+import { RulebookCauseSearch } from "@/components/review/rulebook-cause-search";
 import { TextField } from "@/components/ui/text-field";
-import { card, colors, fontSize, radius, space } from "@/constants/theme";
-import { useConfirmCause } from "@/hooks/use-review";
+import { card, colors, fontSize, space } from "@/constants/theme";
+import { useCastingCauses, useConfirmCause } from "@/hooks/use-review";
 import { ApiError } from "@/lib/api";
 import { fieldErrors } from "@/lib/field-errors";
 import { confirmationInput, type CauseWithRecord } from "@/lib/review-schemas";
 
 const OTHER = "__other";
 
-/** A mentor confirms one of the ranked causes, or names another, with a note for whoever reads the case later. */
+/**
+ * A mentor confirms one of the ranked causes, any other cause of the rulebook (found by a few words),
+ * or names one the rulebook lacks, which can join the shop's rulebook with a fix to try. A note says
+ * what settles it for whoever reads the case later.
+ */
 type Props = { castingId: number; causes: CauseWithRecord[]; title: string; onDone?: () => void };
 
 export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
   const [choice, setChoice] = useState<string | null>(null);
   const [other, setOther] = useState("");
+  const [makeShopCause, setMakeShopCause] = useState(false);
+  const [fix, setFix] = useState("");
   const [note, setNote] = useState("");
   const [errors, setErrors] = useState<Record<string, string>>({});
+  const rulebook = useCastingCauses(castingId);
   const confirm = useConfirmCause(castingId);
+  const isOther = choice === OTHER;
+  const listed = useMemo(() => new Set(causes.map((c) => c.id)), [causes]);
   const submit = () => {
     const input = {
-      causeId: choice && choice !== OTHER ? choice : undefined,
-      causeText: choice === OTHER ? other.trim() || undefined : undefined,
+      causeId: choice && !isOther ? choice : undefined,
+      causeText: isOther ? other.trim() || undefined : undefined,
+      makeShopCause: isOther && makeShopCause ? true : undefined,
+      newCauseFix: isOther && makeShopCause ? fix.trim() || undefined : undefined,
       note: note || undefined,
     };
     const parsed = confirmationInput.safeParse(input);
@@ -36,47 +49,79 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
       onSuccess: () => {
         setChoice(null);
         setOther("");
+        setMakeShopCause(false);
+        setFix("");
         setNote("");
         onDone?.();
       },
       onError: (e) => setErrors(e instanceof ApiError ? e.fields : {}),
     });
   };
-  const options = [
-    ...causes.map((c) => ({ id: c.id, title: c.title, cause: c })),
-    { id: OTHER, title: "Something else", cause: null },
-  ];
+  const choose = (id: string) => {
+    setChoice(id);
+    setErrors({});
+  };
   return (
     <View style={styles.wrap}>
       <Heading level={3}>{title}</Heading>
       <Text style={styles.label}>What caused it</Text>
-      <View role="radiogroup" aria-label="What caused it" style={styles.list}>
-        {options.map((o) => (
-          <Pressable
-            key={o.id}
-            role="radio"
-            aria-checked={choice === o.id}
-            aria-label={o.title}
-            onPress={() => setChoice(o.id)}
-            style={[styles.option, choice === o.id && styles.on]}
-          >
-            <Text style={styles.title}>
-              {choice === o.id ? "● " : "○ "}
-              {o.title}
-            </Text>
-            {o.cause ? <CauseRecordLine cause={o.cause} /> : null}
-          </Pressable>
-        ))}
+      {causes.length ? (
+        <View role="radiogroup" aria-label="Causes the diagnosis listed" style={styles.list}>
+          {causes.map((c) => (
+            <CauseOption key={c.id} title={c.title} on={choice === c.id} onPress={() => choose(c.id)}>
+              <CauseRecordLine cause={c} />
+            </CauseOption>
+          ))}
+        </View>
+      ) : null}
+      {rulebook.data ? (
+        <View role="radiogroup" aria-label="Causes found in the rulebook">
+          <RulebookCauseSearch
+            causes={rulebook.data}
+            listed={listed}
+            choice={choice}
+            onChoose={(c) => choose(c.id)}
+          />
+        </View>
+      ) : rulebook.error ? (
+        <Notice tone="error">{rulebook.error.message}</Notice>
+      ) : null}
+      <View role="radiogroup" aria-label="A cause the rulebook lacks">
+        <CauseOption title="Something else (not in the rulebook)" on={isOther} onPress={() => choose(OTHER)} />
       </View>
       <FieldError message={errors.causeId} />
-      {choice === OTHER ? (
-        <TextField
-          label="What it was"
-          value={other}
-          onChangeText={setOther}
-          error={errors.causeText}
-          placeholder="e.g. Ladle lip froze over"
-        />
+      {isOther ? (
+        <View style={styles.other}>
+          <TextField
+            label="What it was"
+            value={other}
+            onChangeText={setOther}
+            error={errors.causeText}
+            placeholder="e.g. Ladle lip froze over"
+          />
+          <Pressable
+            role="checkbox"
+            aria-checked={makeShopCause}
+            onPress={() => setMakeShopCause((v) => !v)}
+            style={styles.check}
+          >
+            <View style={[styles.box, makeShopCause && styles.boxOn]}>
+              {makeShopCause ? <Text style={styles.tick}>✓</Text> : null}
+            </View>
+            <Text style={styles.checkText}>
+              Add it to the shop’s rulebook as a cause, so rules can point at it and its record is kept
+            </Text>
+          </Pressable>
+          {makeShopCause ? (
+            <TextField
+              label="A fix to try for it"
+              value={fix}
+              onChangeText={setFix}
+              error={errors.newCauseFix}
+              placeholder="e.g. Preheat the ladle lip before tapping"
+            />
+          ) : null}
+        </View>
       ) : null}
       <TextField
         label="Note (optional)"
@@ -97,15 +142,20 @@ const styles = StyleSheet.create({
   wrap: { ...card, gap: space.sm, padding: space.md },
   label: { fontSize: fontSize.detail, fontWeight: "600", color: colors.ink },
   list: { gap: space.xs },
-  option: {
-    gap: 2,
-    padding: space.sm,
-    borderRadius: radius.sm,
-    borderWidth: 1,
-    borderColor: colors.line,
-    backgroundColor: colors.background,
+  other: { gap: space.sm },
+  check: { flexDirection: "row", gap: space.sm, alignItems: "flex-start", minHeight: 32 },
+  box: {
+    width: 22,
+    height: 22,
+    borderRadius: 4,
+    borderWidth: 2,
+    borderColor: colors.steel,
+    alignItems: "center",
+    justifyContent: "center",
+    marginTop: 1,
   },
-  on: { borderColor: colors.steel, backgroundColor: "#E7EFEF" },
-  title: { fontSize: fontSize.body, color: colors.ink },
+  boxOn: { backgroundColor: colors.steel },
+  tick: { color: "#FFFFFF", fontSize: fontSize.detail, fontWeight: "700", lineHeight: 16 },
+  checkText: { flex: 1, fontSize: fontSize.detail, lineHeight: 20, color: colors.ink },
   multi: { minHeight: 64, paddingVertical: space.sm, textAlignVertical: "top" },
 });
