@@ -32,7 +32,7 @@ export function usePatchFix() {
   );
 }
 
-/** Ticks a fix to try on the casting; the ticks show at once and are put right if the server says otherwise. */
+/** Ticks a fix to try on the casting; the tick shows at once, and the server's list is read back after. */
 export function useTickFix(castingId: number) {
   const queryClient = useQueryClient();
   const key = followupKeys.casting(castingId);
@@ -46,6 +46,7 @@ export function useTickFix(castingId: number) {
       );
     },
     onSuccess: ({ ticked }) => queryClient.setQueryData<Followups>(key, (f) => (f ? { ...f, ticked } : f)),
-    onError: () => queryClient.invalidateQueries({ queryKey: key }),
+    // A tap while the follow-ups were still loading cancelled that load: fetch them again either way.
+    onSettled: () => queryClient.invalidateQueries({ queryKey: key }),
   });
 }
