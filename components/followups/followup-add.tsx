@@ -77,7 +77,7 @@ export function FollowupAdd({ castingId, candidates, suggestions, ticked }: Prop
       {confirmed?.fixes.length ? (
         <View style={styles.suggestions} testID="fixes-for-confirmed">
           <Text style={styles.label}>
-            For the confirmed cause{confirmed.title ? `, ${confirmed.title.toLowerCase()}` : ""} (tap to use)
+            For the confirmed cause{confirmed.title ? `, “${confirmed.title}”` : ""} (tap to use)
           </Text>
           {confirmed.fixes.map(chip)}
         </View>

@@ -46,6 +46,10 @@ describe("the learning loop on a casting", () => {
     const found = mentor.getByRole("radiogroup", { name: "Causes found in the rulebook" });
     await found.getByRole("radio", { name: hydrogen.title }).click();
     await shot(mentor, "wide-confirm-rulebook-cause");
+    await mentor.setViewportSize(PHONE);
+    await found.getByRole("radio", { name: hydrogen.title }).scrollIntoViewIfNeeded();
+    await shot(mentor, "phone-confirm-rulebook-cause");
+    await mentor.setViewportSize(WIDE);
     await mentor.getByTestId("confirm-cause").click();
     await expect.poll(() => mentor.getByTestId("confirmed-cause").textContent(), { timeout: 10000 }).toContain(hydrogen.title);
 
@@ -57,6 +61,14 @@ describe("the learning loop on a casting", () => {
       hydrogen.fixes.length + (hydrogen.fixesByMetal?.aluminium?.length ?? 0),
     );
     await longShot(mentor, "wide-casting-confirmed-unlisted");
+    // A cause the rulebook lacks can join the shop's rulebook, with a fix to try (looked at, not sent).
+    await mentor.setViewportSize(PHONE);
+    await mentor.getByRole("button", { name: "Correct the cause" }).click();
+    await mentor.getByRole("radio", { name: "Something else (not in the rulebook)" }).click();
+    await mentor.getByLabel("What it was").fill("Ladle lip froze over");
+    await mentor.getByRole("checkbox", { name: /Add it to the shop’s rulebook/ }).click();
+    await mentor.getByLabel("A fix to try for it").scrollIntoViewIfNeeded();
+    await shot(mentor, "phone-confirm-new-shop-cause");
     await mentor.goto(`${baseUrl}/rulebook/${coldRule.id}`);
     await expect
       .poll(() => mentor.getByText(recordWords({ confirmed: after!.fired, right: after!.agreed })!).count(), {
@@ -86,6 +98,7 @@ describe("the learning loop on a casting", () => {
     await expect.poll(() => caster.getByTestId("diagnosis-stale").count(), { timeout: 15000 }).toBe(1);
     expect(await caster.getByTestId("diagnosis-stale").textContent()).toMatch(/pour temperature/i);
     expect(await caster.getByTestId("cause-1").count()).toBe(1); // the old answer stays readable
+    await caster.getByTestId("diagnosis-stale").scrollIntoViewIfNeeded();
     await shot(caster, "phone-diagnosis-stale");
     await caster.getByRole("button", { name: "Work it out again" }).click();
     await expect.poll(() => caster.getByTestId("diagnosis-stale").count(), { timeout: 15000 }).toBe(0);
@@ -94,7 +107,7 @@ describe("the learning loop on a casting", () => {
 
   it("keeps the fixes ticked on a cause and offers them chosen in record a fix; missing inputs open their field", async () => {
     const caster = await signedIn("caster", WIDE);
-    const { url } = await diagnosedCasting(caster, "Test handle, ribbed", 690);
+    const { meltId, url } = await diagnosedCasting(caster, "Test handle, ribbed", 690);
     await caster.goto(url);
     const firstFix = caster.getByTestId("cause-1").getByRole("checkbox").first();
     await expect.poll(() => firstFix.count(), { timeout: 15000 }).toBe(1);
@@ -122,6 +135,13 @@ describe("the learning loop on a casting", () => {
       .poll(() => caster.evaluate(() => document.activeElement?.getAttribute("aria-label") ?? ""), { timeout: 15000 })
       .toMatch(new RegExp(`^(${labels.join("|")})`));
     await shot(caster, "wide-sharpen-field");
+    // A melt input opens the melt's form at it, with the way back to the casting.
+    await caster.goto(`${baseUrl}/melts/${meltId}/edit?field=humidityPct&back=${encodeURIComponent(new URL(url).pathname)}`);
+    await expect
+      .poll(() => caster.evaluate(() => document.activeElement?.getAttribute("aria-label") ?? ""), { timeout: 15000 })
+      .toMatch(/^Humidity/);
+    expect(await caster.getByText("Back to the casting").count()).toBe(1);
+    await shot(caster, "wide-sharpen-melt-field");
     await caster.context().close();
   });
 });
