@@ -42,7 +42,9 @@ export function useTickFix(castingId: number) {
     onMutate: async ({ fix, ticked }) => {
       await queryClient.cancelQueries({ queryKey: key });
       queryClient.setQueryData<Followups>(key, (f) =>
-        f ? { ...f, ticked: ticked ? [...f.ticked.filter((t) => t !== fix), fix] : f.ticked.filter((t) => t !== fix) } : f,
+        f
+          ? { ...f, ticked: ticked ? [...f.ticked.filter((t) => t !== fix), fix] : f.ticked.filter((t) => t !== fix) }
+          : f,
       );
     },
     onSuccess: ({ ticked }) => queryClient.setQueryData<Followups>(key, (f) => (f ? { ...f, ticked } : f)),

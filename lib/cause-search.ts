@@ -17,7 +17,10 @@ const OPTIONS = {
 export function causeFinder(causes: CauseOption[]) {
   const fuse = new Fuse(causes, OPTIONS);
   return (query: string, limit = 6): CauseOption[] => {
-    const words = query.trim().split(/\s+/).filter((w) => w.length >= 2);
+    const words = query
+      .trim()
+      .split(/\s+/)
+      .filter((w) => w.length >= 2);
     if (!words.length) return [];
     // Every word must match: the causes each word finds, kept in the order of the first word's scores.
     const sets = words.map((w) => new Set(fuse.search(w).map((r) => r.item.id)));

@@ -38,7 +38,11 @@ export const fieldOfFact = (fact: string): FactField | undefined => FIELDS[fact]
 /** The diagnosis contract's fields as a person reads them, for "changed since: pour temperature, the marks". */
 export function caseFieldWords(fields: string[]): string {
   const words = fields.map((f) =>
-    f === "defects" ? "the marks" : f === "coating" ? "the coating" : (factSpec(f)?.label ?? f.replace(/[A-Z]/g, (c) => ` ${c.toLowerCase()}`)),
+    f === "defects"
+      ? "the marks"
+      : f === "coating"
+        ? "the coating"
+        : (factSpec(f)?.label ?? f.replace(/[A-Z]/g, (c) => ` ${c.toLowerCase()}`)),
   );
   return [...new Set(words)].join(", ");
 }

@@ -36,7 +36,8 @@ export function DiagnosisView({ casting, units, mayRun }: { casting: CastingDeta
             <Text style={styles.staleHead}>Out of date</Text>
             <Text style={styles.staleText}>
               Changed since these causes were worked out: {caseFieldWords(stale.changed)}. The answer below is the old
-              one, kept for reference{mayRun && !noMarks ? "; work it out again to see what the change makes of it." : "."}
+              one, kept for reference
+              {mayRun && !noMarks ? "; work it out again to see what the change makes of it." : "."}
             </Text>
           </Notice>
         </View>

@@ -70,7 +70,10 @@ export function FollowupAdd({ castingId, candidates, suggestions, ticked }: Prop
     </Pressable>
   );
   // Ticked fixes stay in view however far down the list they are.
-  const shownOthers = [...others.slice(0, OTHERS_SHOWN), ...others.slice(OTHERS_SHOWN).filter((s) => chosen.includes(s))];
+  const shownOthers = [
+    ...others.slice(0, OTHERS_SHOWN),
+    ...others.slice(OTHERS_SHOWN).filter((s) => chosen.includes(s)),
+  ];
   return (
     <View style={styles.card}>
       <Heading level={3}>Record a fix</Heading>

@@ -15,7 +15,13 @@ export function CauseOption({
   children?: ReactNode;
 }) {
   return (
-    <Pressable role="radio" aria-checked={on} aria-label={title} onPress={onPress} style={[styles.option, on && styles.on]}>
+    <Pressable
+      role="radio"
+      aria-checked={on}
+      aria-label={title}
+      onPress={onPress}
+      style={[styles.option, on && styles.on]}
+    >
       <Text style={styles.title}>
         {on ? "● " : "○ "}
         {title}

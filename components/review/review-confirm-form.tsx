@@ -76,12 +76,7 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
       ) : null}
       {rulebook.data ? (
         <View role="radiogroup" aria-label="Causes found in the rulebook">
-          <RulebookCauseSearch
-            causes={rulebook.data}
-            listed={listed}
-            choice={choice}
-            onChoose={(c) => choose(c.id)}
-          />
+          <RulebookCauseSearch causes={rulebook.data} listed={listed} choice={choice} onChoose={(c) => choose(c.id)} />
         </View>
       ) : rulebook.error ? (
         <Notice tone="error">{rulebook.error.message}</Notice>

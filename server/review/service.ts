@@ -159,7 +159,13 @@ export async function confirmCause(m: ShopMember, castingId: number, input: Conf
     if (newCause)
       await tx
         .insert(shopCauses)
-        .values({ shopId: m.shopId, causeId: newCause.id, title: newCause.title, fixes: newCause.fixes, createdBy: m.userId })
+        .values({
+          shopId: m.shopId,
+          causeId: newCause.id,
+          title: newCause.title,
+          fixes: newCause.fixes,
+          createdBy: m.userId,
+        })
         // The same words added twice at once: the first stores the cause, both confirm it.
         .onConflictDoNothing();
     await tx.insert(confirmations).values({

@@ -91,7 +91,11 @@ describe("confirming any cause of the rulebook", () => {
       shop: true,
     });
     // Adding the same words again confirms the cause already there instead of a second one.
-    const again = await confirm(mentor, c.id, { causeText: "ladle lip froze over", makeShopCause: true, newCauseFix: "x" });
+    const again = await confirm(mentor, c.id, {
+      causeText: "ladle lip froze over",
+      makeShopCause: true,
+      newCauseFix: "x",
+    });
     expect((again.body as CaseReview).current?.causeId).toBe("shop-ladle-lip-froze-over");
     expect(await db.$count(shopCauses, eq(shopCauses.shopId, shopId))).toBe(1);
   });
@@ -127,7 +131,9 @@ describe("a diagnosis whose marks or conditions changed", () => {
     expect(await freshness(caster, c.id)).toEqual({ snapshotId: snap.id, stale: false, changed: [] });
 
     // Notes, the furnace and the part name are not part of the case the diagnosis reads.
-    expect((await caster.agent.patch(`/api/melts/${melt.id}`).send({ notes: "Pot relined", furnace: "Pot #3" })).status).toBe(200);
+    expect(
+      (await caster.agent.patch(`/api/melts/${melt.id}`).send({ notes: "Pot relined", furnace: "Pot #3" })).status,
+    ).toBe(200);
     expect((await caster.agent.patch(`/api/castings/${c.id}`).send({ partName: "Ribbed lid" })).status).toBe(200);
     expect(await freshness(mentor, c.id)).toEqual({ snapshotId: snap.id, stale: false, changed: [] });
 

@@ -13,12 +13,24 @@ const signedIn = (role: string, size: { width: number; height: number }) => sign
 /** A melt and one marked casting of an invented part, through the API the pages use, then diagnosed. */
 async function diagnosedCasting(page: Page, partName: string, pourTempC: number) {
   const melt = await page.request.post(`${baseUrl}/api/melts`, {
-    data: { pouredOn: "2026-11-20", alloy: "A356.0", process: "green-sand", charge: "ingot", meltTempC: 780, pourTempC },
+    data: {
+      pouredOn: "2026-11-20",
+      alloy: "A356.0",
+      process: "green-sand",
+      charge: "ingot",
+      meltTempC: 780,
+      pourTempC,
+    },
   });
   expect(melt.status()).toBe(201);
   const meltId = (await melt.json()).id as number;
   const casting = await page.request.post(`${baseUrl}/api/castings/melts/${meltId}`, {
-    data: { partName, minSectionMm: 3, maxSectionMm: 10, marks: [{ type: "misrun", location: "far-from-gate", severity: 3 }] },
+    data: {
+      partName,
+      minSectionMm: 3,
+      maxSectionMm: 10,
+      marks: [{ type: "misrun", location: "far-from-gate", severity: 3 }],
+    },
   });
   expect(casting.status()).toBe(201);
   const castingId = (await casting.json()).id as number;
@@ -51,15 +63,17 @@ describe("the learning loop on a casting", () => {
     await shot(mentor, "phone-confirm-rulebook-cause");
     await mentor.setViewportSize(WIDE);
     await mentor.getByTestId("confirm-cause").click();
-    await expect.poll(() => mentor.getByTestId("confirmed-cause").textContent(), { timeout: 10000 }).toContain(hydrogen.title);
+    await expect
+      .poll(() => mentor.getByTestId("confirmed-cause").textContent(), { timeout: 10000 })
+      .toContain(hydrogen.title);
 
     const after = await recordOf(mentor, coldRule.id);
     expect(after).toEqual({ fired: before.fired + 1, agreed: before.agreed });
     // The confirmed cause's fixes (with the aluminium ones, rules/kb/gas.json) come first in "record a fix".
     const forConfirmed = mentor.getByTestId("fixes-for-confirmed");
-    await expect.poll(() => forConfirmed.getByRole("checkbox").count(), { timeout: 10000 }).toBe(
-      hydrogen.fixes.length + (hydrogen.fixesByMetal?.aluminium?.length ?? 0),
-    );
+    await expect
+      .poll(() => forConfirmed.getByRole("checkbox").count(), { timeout: 10000 })
+      .toBe(hydrogen.fixes.length + (hydrogen.fixesByMetal?.aluminium?.length ?? 0));
     await longShot(mentor, "wide-casting-confirmed-unlisted");
     // A cause the rulebook lacks can join the shop's rulebook, with a fix to try (looked at, not sent).
     await mentor.setViewportSize(PHONE);
@@ -124,9 +138,9 @@ describe("the learning loop on a casting", () => {
     await longShot(caster, "wide-casting-ticks");
 
     // Each "would sharpen the answer" item the notebook has a field for opens that field.
-    const ids = await caster.locator('[data-testid^="sharpen-"]').evaluateAll((els) =>
-      els.map((e) => e.getAttribute("data-testid")!.slice("sharpen-".length)),
-    );
+    const ids = await caster
+      .locator('[data-testid^="sharpen-"]')
+      .evaluateAll((els) => els.map((e) => e.getAttribute("data-testid")!.slice("sharpen-".length)));
     expect(ids.length).toBeGreaterThan(0);
     const fact = ids[0];
     await caster.getByTestId(`sharpen-${fact}`).click();
@@ -136,7 +150,9 @@ describe("the learning loop on a casting", () => {
       .toMatch(new RegExp(`^(${labels.join("|")})`));
     await shot(caster, "wide-sharpen-field");
     // A melt input opens the melt's form at it, with the way back to the casting.
-    await caster.goto(`${baseUrl}/melts/${meltId}/edit?field=humidityPct&back=${encodeURIComponent(new URL(url).pathname)}`);
+    await caster.goto(
+      `${baseUrl}/melts/${meltId}/edit?field=humidityPct&back=${encodeURIComponent(new URL(url).pathname)}`,
+    );
     await expect
       .poll(() => caster.evaluate(() => document.activeElement?.getAttribute("aria-label") ?? ""), { timeout: 15000 })
       .toMatch(/^Humidity/);

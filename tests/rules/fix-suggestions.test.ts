@@ -18,7 +18,12 @@ describe("fixes offered when recording a fix", () => {
   });
 
   it("offers each fix once, ticked ones before the rest of the likely causes'", () => {
-    const s = fixSuggestions({ confirmedCauseId: "cold-pour", rulebook, ranked, ticked: ["Vent the cope", "Pour hotter"] });
+    const s = fixSuggestions({
+      confirmedCauseId: "cold-pour",
+      rulebook,
+      ranked,
+      ticked: ["Vent the cope", "Pour hotter"],
+    });
     expect(s.confirmed?.fixes).toEqual(["Pour hotter", "Shorten the carry"]);
     expect(s.others).toEqual(["Vent the cope", "Shorten the drop"]);
   });

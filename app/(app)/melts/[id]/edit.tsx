@@ -1,4 +1,4 @@
-import { useLocalSearchParams, useRouter } from "expo-router";
+import { useLocalSearchParams, useRouter, type Href } from "expo-router";
 import { BackLink } from "@/components/ui/back-link";
 import { Heading } from "@/components/ui/heading";
 import { MeltForm } from "@/components/melts/melt-form";
@@ -22,14 +22,16 @@ export default function EditMeltScreen() {
   const units = useUnitsQuery();
   const update = useUpdateMelt(id);
   const router = useRouter();
-  const back = params.back?.startsWith("/melts/") ? params.back : `/melts/${id}`;
+  // Only a casting page of this app: the parameter comes from a link and must not send anyone elsewhere.
+  const toCasting = /^\/melts\/\d+\/castings\/\d+$/.test(params.back ?? "");
+  const back = (toCasting ? params.back : `/melts/${id}`) as Href;
   useFocusField(params.field ? fieldOfFact(params.field)?.labels : undefined, melt.isSuccess && units.isSuccess);
   if (melt.isPending || units.isPending) return <Loading />;
   if (melt.error) return <LoadFailed error={melt.error} />;
 
   return (
     <Screen>
-      <BackLink href={back} label={back === `/melts/${id}` ? "Back to the melt" : "Back to the casting"} />
+      <BackLink href={back} label={toCasting ? "Back to the casting" : "Back to the melt"} />
       <Heading>Change the melt of {formatDay(melt.data.pouredOn)}</Heading>
       <MeltForm
         initial={melt.data}
@@ -37,7 +39,7 @@ export default function EditMeltScreen() {
         submitLabel="Save changes"
         onSubmit={async (input) => {
           await update.mutateAsync(input);
-          router.replace(back as `/melts/${string}`);
+          router.replace(back);
         }}
       />
     </Screen>
