@@ -8,11 +8,13 @@ import { CauseRecordLine } from "@/components/rulebook/rule-record";
 import { CauseOption } from "@/components/review/cause-option";
 import { RulebookCauseSearch } from "@/components/review/rulebook-cause-search";
 import { TextField } from "@/components/ui/text-field";
-import { card, colors, fontSize, space } from "@/constants/theme";
+import { card, colors, fontSize, radius, space } from "@/constants/theme";
 import { useCastingCauses, useConfirmCause } from "@/hooks/use-review";
 import { ApiError } from "@/lib/api";
+import { causeFinder } from "@/lib/cause-search";
 import { fieldErrors } from "@/lib/field-errors";
 import { confirmationInput, type CauseWithRecord } from "@/lib/review-schemas";
+import type { CauseOption as CauseOptionType } from "@/lib/rulebook-schemas";
 
 const OTHER = "__other";
 
@@ -25,6 +27,7 @@ type Props = { castingId: number; causes: CauseWithRecord[]; title: string; onDo
 
 export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
   const [choice, setChoice] = useState<string | null>(null);
+  const [picked, setPicked] = useState<CauseOptionType | null>(null);
   const [other, setOther] = useState("");
   const [makeShopCause, setMakeShopCause] = useState(false);
   const [fix, setFix] = useState("");
@@ -34,6 +37,9 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
   const confirm = useConfirmCause(castingId);
   const isOther = choice === OTHER;
   const listed = useMemo(() => new Set(causes.map((c) => c.id)), [causes]);
+  const find = useMemo(() => causeFinder(rulebook.data ?? []), [rulebook.data]);
+  // Words that sound like a rulebook cause: offer it, so the case counts for the rules that name it.
+  const lookAlikes = isOther ? find(other, 3) : [];
   const submit = () => {
     const input = {
       causeId: choice && !isOther ? choice : undefined,
@@ -76,7 +82,16 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
       ) : null}
       {rulebook.data ? (
         <View role="radiogroup" aria-label="Causes found in the rulebook">
-          <RulebookCauseSearch causes={rulebook.data} listed={listed} choice={choice} onChoose={(c) => choose(c.id)} />
+          <RulebookCauseSearch
+            causes={rulebook.data}
+            listed={listed}
+            choice={choice}
+            picked={picked}
+            onChoose={(c) => {
+              setPicked(c);
+              choose(c.id);
+            }}
+          />
         </View>
       ) : rulebook.error ? (
         <Notice tone="error">{rulebook.error.message}</Notice>
@@ -94,6 +109,27 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
             error={errors.causeText}
             placeholder="e.g. Ladle lip froze over"
           />
+          {lookAlikes.length ? (
+            <View style={styles.lookAlikes} testID="cause-look-alikes">
+              <Text style={styles.checkText}>
+                Is it one of these rulebook causes? Tap it to confirm that one instead.
+              </Text>
+              {lookAlikes.map((c) => (
+                <Pressable
+                  key={c.id}
+                  role="button"
+                  aria-label={`Use the rulebook cause: ${c.title}`}
+                  onPress={() => {
+                    setPicked(c);
+                    choose(c.id);
+                  }}
+                  style={styles.lookAlike}
+                >
+                  <Text style={styles.lookAlikeText}>{c.title}</Text>
+                </Pressable>
+              ))}
+            </View>
+          ) : null}
           <Pressable
             role="checkbox"
             aria-checked={makeShopCause}
@@ -152,5 +188,14 @@ const styles = StyleSheet.create({
   boxOn: { backgroundColor: colors.steel },
   tick: { color: "#FFFFFF", fontSize: fontSize.detail, fontWeight: "700", lineHeight: 16 },
   checkText: { flex: 1, fontSize: fontSize.detail, lineHeight: 20, color: colors.ink },
+  lookAlikes: { gap: space.xs },
+  lookAlike: {
+    padding: space.sm,
+    borderRadius: radius.sm,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.surface,
+  },
+  lookAlikeText: { fontSize: fontSize.detail, lineHeight: 20, color: colors.accent, fontWeight: "600" },
   multi: { minHeight: 64, paddingVertical: space.sm, textAlignVertical: "top" },
 });

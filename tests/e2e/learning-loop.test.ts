@@ -79,7 +79,14 @@ describe("the learning loop on a casting", () => {
     await mentor.setViewportSize(PHONE);
     await mentor.getByRole("button", { name: "Correct the cause" }).click();
     await mentor.getByRole("radio", { name: "Something else (not in the rulebook)" }).click();
+    // Words that sound like a rulebook cause offer it instead.
+    await mentor.getByLabel("What it was").fill("hydrogen pick up");
+    const alike = mentor.getByTestId("cause-look-alikes");
+    await expect
+      .poll(() => alike.getByRole("button", { name: new RegExp(hydrogen.title.slice(0, 20)) }).count())
+      .toBe(1);
     await mentor.getByLabel("What it was").fill("Ladle lip froze over");
+    expect(await alike.count()).toBe(0);
     await mentor.getByRole("checkbox", { name: /Add it to the shop’s rulebook/ }).click();
     await mentor.getByLabel("A fix to try for it").scrollIntoViewIfNeeded();
     await shot(mentor, "phone-confirm-new-shop-cause");
