@@ -123,6 +123,7 @@ describe("the learning loop on a casting", () => {
     await shot(caster, "phone-diagnosis-stale");
     await caster.getByRole("button", { name: "Work it out again" }).click();
     await expect.poll(() => caster.getByTestId("diagnosis-stale").count(), { timeout: 15000 }).toBe(0);
+    await longShot(caster, "phone-casting-loop");
     await caster.context().close();
   });
 
