@@ -48,7 +48,8 @@ export type Worked = (typeof WORKED)[number];
 export const WORKED_LABELS: Record<Worked, string> = { yes: "it worked", partly: "partly", no: "it did not work" };
 
 const fixFields = z.object({
-  fix: requiredText("say what was changed", 500),
+  // Room for several of the rulebook's fixes chosen together (the longest is about 200 characters).
+  fix: requiredText("say what was changed", 2000),
   nextCastingId: rowId("must be the id of a casting").nullable().optional(),
   worked: z.enum(WORKED, { error: "yes, partly or no" }).nullable().optional(),
 });

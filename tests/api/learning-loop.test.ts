@@ -183,3 +183,18 @@ describe("fixes to try, ticked on the casting", () => {
     expect((await caster.agent.get(`/api/followups/castings/${c.id}`)).body.ticked).toEqual(["Shorten the pour"]);
   });
 });
+
+describe("a fix recorded from several suggestions", () => {
+  it("takes the longest rulebook fixes chosen together, and still refuses an endless one", async () => {
+    const { caster } = await shopWithCrew("Loop Long Fix");
+    const c = await newCasting(caster, (await newMelt(caster)).id, { marks: misrun });
+    const longest = BUILT_IN_RULE_SET.causes
+      .flatMap((x) => [...x.fixes, ...Object.values(x.fixesByMetal ?? {}).flat()])
+      .sort((a, b) => b.length - a.length)
+      .slice(0, 4);
+    const ok = await caster.agent.post(`/api/followups/castings/${c.id}/fixes`).send({ fix: longest.join("; ") });
+    expect(ok.status).toBe(201);
+    const endless = await caster.agent.post(`/api/followups/castings/${c.id}/fixes`).send({ fix: "x".repeat(2001) });
+    expect(endless.status).toBe(400);
+  });
+});
