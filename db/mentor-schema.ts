@@ -99,6 +99,22 @@ export const fixesTried = pgTable(
   (t) => [index("fixes_tried_casting_idx").on(t.castingId), index("fixes_tried_next_idx").on(t.nextCastingId)],
 );
 
+/**
+ * A fix to try that someone ticked on a casting's likely causes, kept with the casting so the next
+ * visit (and "record a fix") sees it. Ticking off removes the row: a tick is a note, not a record.
+ */
+export const fixTicks = pgTable(
+  "fix_ticks",
+  {
+    shopId: shopId(),
+    castingId: castingId(),
+    fix: text("fix").notNull(),
+    createdBy: createdBy(),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ name: "fix_ticks_pk", columns: [t.castingId, t.fix] })],
+);
+
 /** A rule written in the shop; its rule id in the engine is `shop-<id>`. Its content lives in versions. */
 export const shopRules = pgTable("shop_rules", {
   id: serial("id").primaryKey(),

@@ -1,7 +1,7 @@
-import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { castingKeys } from "@/hooks/use-castings";
 import { api } from "@/lib/api";
-import type { DiagnosisSnapshot } from "@/lib/notebook-schemas";
+import type { DiagnosisFreshness, DiagnosisSnapshot } from "@/lib/notebook-schemas";
 
 /**
  * Runs the diagnosis on the stored casting. The answer is kept as the casting's latest snapshot,
@@ -12,5 +12,17 @@ export function useRunDiagnosis(castingId: number) {
   return useMutation({
     mutationFn: () => api<Omit<DiagnosisSnapshot, "createdBy">>(`/diagnosis/castings/${castingId}`, { method: "POST" }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: castingKeys.detail(castingId) }),
+  });
+}
+
+/**
+ * Whether the marks or conditions changed since the latest diagnosis. Kept under the casting's key, so
+ * whatever refreshes the casting (a mark, the melt's conditions, a new diagnosis) asks again.
+ */
+export function useDiagnosisFreshness(castingId: number, enabled: boolean) {
+  return useQuery({
+    queryKey: [...castingKeys.detail(castingId), "freshness"],
+    queryFn: () => api<DiagnosisFreshness>(`/diagnosis/castings/${castingId}/freshness`),
+    enabled,
   });
 }

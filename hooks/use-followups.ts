@@ -1,6 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { api } from "@/lib/api";
-import type { FixInput, FixPatch, FixTried, Followups } from "@/lib/review-schemas";
+import type { FixInput, FixPatch, FixTickInput, FixTried, Followups } from "@/lib/review-schemas";
 
 /** A fix links two castings, so every casting's follow-ups may change with it: they are refetched together. */
 export const followupKeys = { all: ["followups"] as const, casting: (id: number) => ["followups", id] as const };
@@ -30,4 +30,25 @@ export function usePatchFix() {
   return useFixChange(({ id, ...patch }: FixPatch & { id: number }) =>
     api<FixTried>(`/followups/fixes/${id}`, { method: "PATCH", body: patch }),
   );
+}
+
+/** Ticks a fix to try on the casting; the tick shows at once, and the server's list is read back after. */
+export function useTickFix(castingId: number) {
+  const queryClient = useQueryClient();
+  const key = followupKeys.casting(castingId);
+  return useMutation({
+    mutationFn: (input: FixTickInput) =>
+      api<{ ticked: string[] }>(`/followups/castings/${castingId}/ticks`, { method: "PUT", body: input }),
+    onMutate: async ({ fix, ticked }) => {
+      await queryClient.cancelQueries({ queryKey: key });
+      queryClient.setQueryData<Followups>(key, (f) =>
+        f
+          ? { ...f, ticked: ticked ? [...f.ticked.filter((t) => t !== fix), fix] : f.ticked.filter((t) => t !== fix) }
+          : f,
+      );
+    },
+    onSuccess: ({ ticked }) => queryClient.setQueryData<Followups>(key, (f) => (f ? { ...f, ticked } : f)),
+    // A tap while the follow-ups were still loading cancelled that load: fetch them again either way.
+    onSettled: () => queryClient.invalidateQueries({ queryKey: key }),
+  });
 }

@@ -2,12 +2,21 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { castingKeys } from "@/hooks/use-castings";
 import { rulebookKeys } from "@/hooks/use-rulebook";
 import { api } from "@/lib/api";
-import type { CaseReview, ConfirmationInput, QueueItem } from "@/lib/review-schemas";
+import type { CaseReview, CastingCauses, ConfirmationInput, QueueItem } from "@/lib/review-schemas";
 
 export const reviewKeys = {
   queue: ["review", "queue"] as const,
   casting: (id: number) => ["review", "casting", id] as const,
+  causes: (id: number) => ["review", "causes", id] as const,
 };
+
+/** Every cause of the shop's rulebook, with its fixes for this casting's metal. */
+export function useCastingCauses(castingId: number) {
+  return useQuery({
+    queryKey: reviewKeys.causes(castingId),
+    queryFn: () => api<CastingCauses>(`/review/castings/${castingId}/causes`).then((r) => r.causes),
+  });
+}
 
 export function useCaseReview(castingId: number) {
   return useQuery({
@@ -53,6 +62,7 @@ export function useConfirmCause(castingId: number) {
     castingId,
     (input: ConfirmationInput) =>
       api<CaseReview>(`/review/castings/${castingId}/confirmations`, { method: "POST", body: input }),
-    [rulebookKeys.all, castingKeys.detail(castingId)],
+    // A cause added from the form joins the rulebook's list of causes.
+    [rulebookKeys.all, castingKeys.detail(castingId), ["review", "causes"]],
   );
 }

@@ -293,6 +293,11 @@ export type DiagnosisSnapshot = {
   ruleSetVersion: string;
   result: DiagnosisResult;
 };
+/**
+ * Whether the latest diagnosis still fits the casting: `changed` names the diagnosis contract's fields
+ * that differ from what it read ("defects" for the marks).
+ */
+export type DiagnosisFreshness = { snapshotId: number | null; stale: boolean; changed: string[] };
 export type CastingDetail = Casting & {
   melt: Melt;
   photos: Photo[];

@@ -4,6 +4,7 @@ import type { CauseRecord } from "../rules/calibration";
 import type { RankedCause } from "../rules/rank";
 import { requiredText, rowId, text } from "./fields";
 import type { Outcome, PersonRef } from "./notebook-schemas";
+import type { CauseOption } from "./rulebook-schemas";
 
 /**
  * Review, confirmed causes and follow-ups (core loop step 5): inputs for the casting-page panels
@@ -13,14 +14,24 @@ const note = (max: number) => text(max).optional();
 
 export const reviewRequestInput = z.object({ note: note(1000) });
 
-/** A mentor confirms one of the listed causes (causeId) or names another (causeText), with a note. */
+/**
+ * A mentor confirms a cause of the rulebook (causeId) or names another (causeText), with a note. A named
+ * cause can be added to the shop's rulebook at once (`makeShopCause`, with the fix to try for it), so
+ * later rules can point at it and its record is kept.
+ */
 export const confirmationInput = z
   .object({
     causeId: requiredText("choose a cause", 100).optional(),
-    causeText: text(300).optional(),
+    causeText: text(200).optional(),
+    makeShopCause: z.boolean({ error: "true or false" }).optional(),
+    newCauseFix: text(300).optional(),
     note: note(2000),
   })
   .superRefine((c, ctx) => {
+    if (c.makeShopCause && !c.causeText)
+      ctx.addIssue({ code: "custom", path: ["causeText"], message: "name the cause to add it" });
+    if (c.makeShopCause && !c.newCauseFix)
+      ctx.addIssue({ code: "custom", path: ["newCauseFix"], message: "give one fix to try for it" });
     if (!c.causeId && !c.causeText)
       ctx.addIssue({ code: "custom", path: ["causeId"], message: "choose a cause, or name another" });
     if (c.causeId && c.causeText)
@@ -37,7 +48,8 @@ export type Worked = (typeof WORKED)[number];
 export const WORKED_LABELS: Record<Worked, string> = { yes: "it worked", partly: "partly", no: "it did not work" };
 
 const fixFields = z.object({
-  fix: requiredText("say what was changed", 500),
+  // Room for several of the rulebook's fixes chosen together (the longest is about 200 characters).
+  fix: requiredText("say what was changed", 2000),
   nextCastingId: rowId("must be the id of a casting").nullable().optional(),
   worked: z.enum(WORKED, { error: "yes, partly or no" }).nullable().optional(),
 });
@@ -48,6 +60,12 @@ const workedNeedsNext = (f: { nextCastingId?: number | null; worked?: Worked | n
 };
 export const fixInput = fixFields.superRefine(workedNeedsNext);
 export const fixPatch = fixFields.partial();
+/** Ticking a fix to try on a casting's likely causes (or taking the tick off). */
+export const fixTickInput = z.object({
+  fix: requiredText("say which fix", 500),
+  ticked: z.boolean({ error: "true or false" }),
+});
+export type FixTickInput = z.infer<typeof fixTickInput>;
 export type FixInput = z.infer<typeof fixInput>;
 export type FixPatch = z.infer<typeof fixPatch>;
 
@@ -102,7 +120,11 @@ export type FixTried = {
 };
 /** One casting of the part in the chain of fixes, oldest first; `current` marks the casting on screen. */
 export type ChainLink = { casting: CastingRef; fixes: FixTried[]; current: boolean };
-export type Followups = { fixes: FixTried[]; chain: ChainLink[]; candidates: CastingRef[] };
+/** `ticked`: the fixes to try ticked on this casting's likely causes. */
+export type Followups = { fixes: FixTried[]; chain: ChainLink[]; candidates: CastingRef[]; ticked: string[] };
+
+/** Every cause of the shop's rulebook, with its fixes for this casting's metal: what a mentor may confirm. */
+export type CastingCauses = { causes: CauseOption[] };
 
 /** A ranked cause as the shop's diagnosis returns it: with its record among confirmed cases here. */
 export type CauseWithRecord = RankedCause & { record?: CauseRecord | null };

@@ -16,8 +16,8 @@ export type StoredCase = {
   pouredOn: string;
   case: DiagnosisCase;
   alloy: AlloySpec;
-  /** The confirmed cause: a cause id, or null when the mentor named a cause the rulebook lacks. */
-  confirmed?: { causeId: string | null } | null;
+  /** The confirmed cause: a cause id, or null and the mentor's words for a cause the rulebook lacks. */
+  confirmed?: { causeId: string | null; causeText?: string | null } | null;
 };
 
 const locationFits = (rule: KbRule, type: DefectType, at: DefectLocation) =>
@@ -42,6 +42,28 @@ export async function firedRules(
         out.add(rule.id);
   }
   return out;
+}
+
+const plainWords = (s: string) =>
+  s
+    .toLowerCase()
+    .normalize("NFKD")
+    .replace(/[^a-z0-9]+/g, " ")
+    .trim();
+
+/**
+ * The rulebook cause a confirmation names: its id, or the cause whose title the mentor typed word for
+ * word (case and punctuation aside). Null when the words name no cause of this rulebook: such a case
+ * cannot say whether a rule was right, so it counts for no rule, neither as a hit nor as a miss.
+ */
+export function comparableCause(
+  confirmed: StoredCase["confirmed"],
+  causes: Pick<KbCause, "id" | "title">[],
+): string | null {
+  if (!confirmed) return null;
+  if (confirmed.causeId) return causes.some((c) => c.id === confirmed.causeId) ? confirmed.causeId : null;
+  const words = confirmed.causeText ? plainWords(confirmed.causeText) : "";
+  return (words && causes.find((c) => plainWords(c.title) === words)?.id) || null;
 }
 
 /** A supporting rule agrees when the confirmed cause is its cause; a weakening one when it is not. */
@@ -104,19 +126,21 @@ export async function backtest({ cases, base, rule, cause, weightFactor }: Backt
   };
   for (const s of cases) {
     const fired = (await firedRules(s.case, s.alloy, only)).has(rule.id);
-    const confirmedId = s.confirmed ? s.confirmed.causeId : undefined;
+    // A confirmed cause the rulebook lacks cannot tell a rule right from wrong: it is not counted.
+    const comparable = s.confirmed ? comparableCause(s.confirmed, after.causes) : null;
+    const confirmedId = s.confirmed ? comparable : undefined;
     if (fired) {
       out.fired++;
-      if (confirmedId !== undefined) {
+      if (comparable) {
         out.firedConfirmed++;
-        if (agrees(rule, confirmedId)) out.agreed++;
+        if (agrees(rule, comparable)) out.agreed++;
       }
     }
     // A rule that did not fire cannot change the ranking; only confirmed cases need the diagnosis then.
     if (!fired && confirmedId === undefined) continue;
     const b = top(await diagnose(s.case, { alloy: s.alloy, ruleSet: base, weightFactor }));
     const a = fired ? top(await diagnose(s.case, { alloy: s.alloy, ruleSet: after, weightFactor })) : b;
-    if (confirmedId !== undefined) {
+    if (comparable) {
       out.confirmedCases++;
       if (b && b.id === confirmedId) out.topRightBefore++;
       if (a && a.id === confirmedId) out.topRightAfter++;

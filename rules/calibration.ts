@@ -1,4 +1,4 @@
-import { agrees, firedRules, type StoredCase } from "./backtest";
+import { agrees, comparableCause, firedRules, type StoredCase } from "./backtest";
 import { compiledRuleSet } from "./engine";
 import type { KbRule, RuleSet } from "./kb-schema";
 
@@ -25,15 +25,17 @@ export const smoothedAgreement = ({ fired, agreed }: RuleRecord, prior = PRIOR) 
 export const weightFactorOf = (r: RuleRecord | undefined) =>
   r ? FACTOR_MIN + (FACTOR_MAX - FACTOR_MIN) * smoothedAgreement(r) : 1;
 
-/** For one confirmed case: the confirmed cause and the rules that fired on it. */
-export type Firing = { causeId: string | null; fired: Set<string> };
+/** For one confirmed case: the confirmed cause (a rulebook cause id) and the rules that fired on it. */
+export type Firing = { causeId: string; fired: Set<string> };
 
-/** Runs the rules (their conditions only: weights do not decide firing) on every confirmed case. */
+/** Runs the rules (their conditions only: weights do not decide firing) on every comparable confirmed case. */
 export async function confirmedFirings(cases: StoredCase[], rs: RuleSet): Promise<Firing[]> {
   const compiled = compiledRuleSet(rs);
   const out: Firing[] = [];
-  for (const s of cases)
-    if (s.confirmed) out.push({ causeId: s.confirmed.causeId, fired: await firedRules(s.case, s.alloy, compiled) });
+  for (const s of cases) {
+    const causeId = comparableCause(s.confirmed, rs.causes);
+    if (causeId) out.push({ causeId, fired: await firedRules(s.case, s.alloy, compiled) });
+  }
   return out;
 }
 

@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { CastingFacts } from "@/components/castings/casting-facts";
@@ -8,6 +8,8 @@ import { Notice } from "@/components/ui/notice";
 import { OutcomeChips } from "@/components/castings/outcome-chips";
 import { colors, fontSize, space } from "@/constants/theme";
 import { useUpdateCasting } from "@/hooks/use-castings";
+import { useFocusField } from "@/hooks/use-focus-field";
+import { fieldOfFact } from "@/lib/fact-fields";
 import { PROCESS_LABELS } from "@/lib/labels";
 import type { CastingDetail } from "@/lib/notebook-schemas";
 import { formatValue, type Units } from "@/lib/units";
@@ -17,13 +19,23 @@ export function CastingSummary({
   casting,
   units,
   mayEdit,
+  editField,
 }: {
   casting: CastingDetail;
   units: Units;
   mayEdit: boolean;
+  /** A diagnosis input to fill in: the form opens with that field in view. */
+  editField?: string;
 }) {
   const update = useUpdateCasting(casting.id);
-  const [editing, setEditing] = useState(false);
+  const field = editField ? fieldOfFact(editField) : undefined;
+  const opens = mayEdit && field?.form === "casting";
+  const [editing, setEditing] = useState(opens);
+  // The link is followed on this same page: open the form when it names a field.
+  useEffect(() => {
+    if (opens) setEditing(true);
+  }, [opens, editField]);
+  useFocusField(editing ? field?.labels : undefined, editing);
   const m = casting.melt;
   return (
     <View style={styles.wrap}>

@@ -10,17 +10,18 @@ import type { Units } from "@/lib/units";
 /** A ranked cause; `record` says how often it was right in this shop's confirmed cases. */
 type Cause = CauseWithRecord;
 
-/** One likely cause: how strongly it is pointed at, the fixes to try (tick them off), and why. */
-export function CauseCard({ cause, rank, units }: { cause: Cause; rank: number; units: Units }) {
-  const [done, setDone] = useState<ReadonlySet<number>>(new Set());
+type Props = {
+  cause: Cause;
+  rank: number;
+  units: Units;
+  /** The fixes ticked on this casting (kept with it); `onTick` is absent for those who may not tick. */
+  ticked: ReadonlySet<string>;
+  onTick?: (fix: string, ticked: boolean) => void;
+};
+
+/** One likely cause: how strongly it is pointed at, the fixes to try (tick the ones to try), and why. */
+export function CauseCard({ cause, rank, units, ticked, onTick }: Props) {
   const [why, setWhy] = useState(false);
-  const toggle = (i: number) =>
-    setDone((d) => {
-      const n = new Set(d);
-      if (n.has(i)) n.delete(i);
-      else n.add(i);
-      return n;
-    });
 
   return (
     <View style={styles.card} testID={`cause-${rank}`}>
@@ -30,14 +31,25 @@ export function CauseCard({ cause, rank, units }: { cause: Cause; rank: number; 
       <ScoreBar score={cause.score} />
       <CauseRecordLine cause={cause} />
       <Text style={styles.sub}>
-        Fixes to try <Text style={styles.subNote}>(ticks help you keep track here; they are not saved)</Text>
+        Fixes to try{" "}
+        <Text style={styles.subNote}>
+          {onTick ? "(tick the ones to try: they are kept with the casting and offered when you record a fix)" : ""}
+        </Text>
       </Text>
-      {cause.fixes.map((f, i) => (
-        <Pressable key={f} role="checkbox" aria-checked={done.has(i)} onPress={() => toggle(i)} style={styles.fix}>
-          <View style={[styles.box, done.has(i) && styles.boxOn]}>
-            {done.has(i) ? <Text style={styles.tick}>✓</Text> : null}
+      {cause.fixes.map((f) => (
+        <Pressable
+          key={f}
+          role="checkbox"
+          aria-checked={ticked.has(f)}
+          aria-label={f}
+          disabled={!onTick}
+          onPress={() => onTick?.(f, !ticked.has(f))}
+          style={styles.fix}
+        >
+          <View style={[styles.box, ticked.has(f) && styles.boxOn]}>
+            {ticked.has(f) ? <Text style={styles.tick}>✓</Text> : null}
           </View>
-          <Text style={[styles.fixText, done.has(i) && styles.fixDone]}>{f}</Text>
+          <Text style={styles.fixText}>{f}</Text>
         </Pressable>
       ))}
       <Pressable role="button" aria-expanded={why} onPress={() => setWhy((w) => !w)}>
@@ -77,7 +89,6 @@ const styles = StyleSheet.create({
   boxOn: { backgroundColor: colors.steel },
   tick: { color: "#FFFFFF", fontSize: fontSize.detail, fontWeight: "700", lineHeight: 16 },
   fixText: { flex: 1, fontSize: fontSize.body, lineHeight: 22, color: colors.ink },
-  fixDone: { color: colors.muted, textDecorationLine: "line-through" },
   toggle: { fontSize: fontSize.body, fontWeight: "600", color: colors.accent, paddingVertical: space.xs },
   why: { gap: space.xs, paddingLeft: space.sm, borderLeftWidth: 3, borderLeftColor: colors.line },
   reason: { fontSize: fontSize.detail, lineHeight: 21, color: colors.ink },

@@ -1,26 +1,49 @@
+import { Link } from "expo-router";
 import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
 import { colors, fontSize, space } from "@/constants/theme";
 import { formatFact } from "@/lib/fact-display";
+import { fieldOfFact } from "@/lib/fact-fields";
 import type { Units } from "@/lib/units";
 import type { DiagnosisResult } from "@/rules/rank";
 
-/** Under the causes: what was not logged, the values worked out from the log, and the cautions. */
-export function DiagnosisExtras({ result, units }: { result: DiagnosisResult; units: Units }) {
+type Props = { result: DiagnosisResult; units: Units; meltId: number; castingId: number };
+
+/**
+ * Under the causes: what was not logged (each opens the melt's or casting's form at its field), the
+ * values worked out from the log, and the cautions.
+ */
+export function DiagnosisExtras({ result, units, meltId, castingId }: Props) {
   const [showFacts, setShowFacts] = useState(false);
+  const casting = `/melts/${meltId}/castings/${castingId}`;
+  const hrefOf = (fact: string) => {
+    const field = fieldOfFact(fact);
+    if (!field) return null;
+    return field.form === "melt"
+      ? { pathname: "/melts/[id]/edit" as const, params: { id: meltId, field: fact, back: casting } }
+      : { pathname: "/melts/[id]/castings/[castingId]" as const, params: { id: meltId, castingId, edit: fact } };
+  };
   const facts = Object.entries(result.facts).map(([name, v]) => ({ name, ...formatFact(name, v, units) }));
   return (
     <View style={styles.wrap}>
       {result.missing.length ? (
         <View style={styles.block}>
           <Heading level={3}>Would sharpen the answer</Heading>
-          {result.missing.map((m) => (
-            <Text key={m.fact} style={styles.line}>
-              • {m.note}
-            </Text>
-          ))}
+          {result.missing.map((m) => {
+            const href = hrefOf(m.fact);
+            // Inputs the notebook has no field for yet stay as words.
+            return href ? (
+              <Link key={m.fact} href={href} style={[styles.line, styles.link]} testID={`sharpen-${m.fact}`}>
+                • {m.note} <Text style={styles.go}>(fill it in ›)</Text>
+              </Link>
+            ) : (
+              <Text key={m.fact} style={styles.line}>
+                • {m.note}
+              </Text>
+            );
+          })}
         </View>
       ) : null}
       {facts.length ? (
@@ -58,6 +81,8 @@ const styles = StyleSheet.create({
   block: { gap: space.xs },
   line: { fontSize: fontSize.detail, lineHeight: 21, color: colors.ink },
   value: { fontWeight: "700" },
+  link: { color: colors.accent, paddingVertical: 2 },
+  go: { fontWeight: "700", color: colors.accent },
   toggle: { fontSize: fontSize.body, fontWeight: "600", color: colors.accent, paddingVertical: space.xs },
   cautionHead: { fontSize: fontSize.body, fontWeight: "700", color: colors.ink },
 });

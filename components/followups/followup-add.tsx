@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { ChoiceChips } from "@/components/ui/choice-chips";
@@ -8,51 +8,98 @@ import { TextField } from "@/components/ui/text-field";
 import { card, colors, fontSize, radius, space } from "@/constants/theme";
 import { useAddFix } from "@/hooks/use-followups";
 import { ApiError } from "@/lib/api";
+import type { FixSuggestions } from "@/lib/fix-suggestions";
 import { fixInput, type CastingRef } from "@/lib/review-schemas";
 
-type Props = { castingId: number; candidates: CastingRef[]; suggestions: string[] };
+type Props = { castingId: number; candidates: CastingRef[]; suggestions: FixSuggestions; ticked: string[] };
+const OTHERS_SHOWN = 4;
 
-/** Record what was changed for the next pour: typed, or one tap on a fix the rulebook suggests. */
-export function FollowupAdd({ castingId, candidates, suggestions }: Props) {
+/**
+ * Record what was changed for the next pour: typed, or built from the fixes the rulebook suggests (the
+ * confirmed cause's first), tapped in or out. The fixes ticked on the likely causes start chosen.
+ */
+export function FollowupAdd({ castingId, candidates, suggestions, ticked }: Props) {
   const add = useAddFix(castingId);
-  const [fix, setFix] = useState("");
+  const [chosen, setChosen] = useState<string[]>(ticked);
+  const [fix, setFix] = useState(ticked.join("; "));
+  const [typed, setTyped] = useState(false);
   const [next, setNext] = useState<string | null>(null);
   const [error, setError] = useState<string>();
+  const tickedKey = ticked.join("\n");
+  // Ticks made on the causes above while this form is open join it, until the person types their own words.
+  useEffect(() => {
+    if (typed) return;
+    const now = tickedKey ? tickedKey.split("\n") : [];
+    setChosen(now);
+    setFix(now.join("; "));
+  }, [tickedKey, typed]);
+  const toggle = (s: string) => {
+    const list = chosen.includes(s) ? chosen.filter((x) => x !== s) : [...chosen, s];
+    setChosen(list);
+    setFix(list.join("; "));
+    setTyped(false);
+  };
   const submit = () => {
     const parsed = fixInput.safeParse({ fix, nextCastingId: next ? Number(next) : null });
     if (!parsed.success) return setError(parsed.error.issues[0].message);
     setError(undefined);
     add.mutate(parsed.data, {
       onSuccess: () => {
+        setChosen([]);
         setFix("");
+        setTyped(true);
         setNext(null);
       },
       onError: (e) => setError(e instanceof ApiError ? (Object.values(e.fields)[0] ?? e.message) : e.message),
     });
   };
+  const { confirmed, others } = suggestions;
+  const chip = (s: string) => (
+    <Pressable
+      key={s}
+      role="checkbox"
+      aria-checked={chosen.includes(s)}
+      aria-label={`Use: ${s}`}
+      onPress={() => toggle(s)}
+      style={[styles.suggestion, chosen.includes(s) && styles.on]}
+    >
+      <Text style={styles.suggestionText}>
+        {chosen.includes(s) ? "✓ " : ""}
+        {s}
+      </Text>
+    </Pressable>
+  );
+  // Ticked fixes stay in view however far down the list they are.
+  const shownOthers = [
+    ...others.slice(0, OTHERS_SHOWN),
+    ...others.slice(OTHERS_SHOWN).filter((s) => chosen.includes(s)),
+  ];
   return (
     <View style={styles.card}>
       <Heading level={3}>Record a fix</Heading>
-      {suggestions.length ? (
-        <View style={styles.suggestions}>
-          <Text style={styles.label}>Suggested by the rulebook (tap to use)</Text>
-          {suggestions.slice(0, 4).map((s) => (
-            <Pressable
-              key={s}
-              role="button"
-              aria-label={`Use: ${s}`}
-              onPress={() => setFix(s)}
-              style={[styles.suggestion, fix === s && styles.on]}
-            >
-              <Text style={styles.suggestionText}>{s}</Text>
-            </Pressable>
-          ))}
+      {confirmed?.fixes.length ? (
+        <View style={styles.suggestions} testID="fixes-for-confirmed">
+          <Text style={styles.label}>
+            For the confirmed cause{confirmed.title ? `, “${confirmed.title}”` : ""} (tap to use)
+          </Text>
+          {confirmed.fixes.map(chip)}
+        </View>
+      ) : null}
+      {shownOthers.length ? (
+        <View style={styles.suggestions} testID="fixes-others">
+          <Text style={styles.label}>
+            {confirmed ? "Other fixes the rulebook suggests" : "Suggested by the rulebook (tap to use)"}
+          </Text>
+          {shownOthers.map(chip)}
         </View>
       ) : null}
       <TextField
         label="What was changed for the next pour"
         value={fix}
-        onChangeText={setFix}
+        onChangeText={(v) => {
+          setFix(v);
+          setTyped(true);
+        }}
         error={error}
         placeholder="e.g. Poured 40 °C hotter"
       />

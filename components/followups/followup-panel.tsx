@@ -7,19 +7,30 @@ import { Notice } from "@/components/ui/notice";
 import { Loading } from "@/components/ui/query-state";
 import { colors, fontSize, space } from "@/constants/theme";
 import { useFollowups } from "@/hooks/use-followups";
+import { useCaseReview, useCastingCauses } from "@/hooks/use-review";
 import { useMay } from "@/hooks/use-rulebook";
+import { fixSuggestions } from "@/lib/fix-suggestions";
+import type { CauseWithRecord } from "@/lib/review-schemas";
 
 /**
  * The casting page's follow-up panel: the fixes tried after this casting, the next casting of the
- * same part each was tried on, whether it worked, and the whole chain. `suggestions` (the confirmed
- * or top cause's fixes) fill the text with one tap.
+ * same part each was tried on, whether it worked, and the whole chain. The confirmed cause's fixes are
+ * offered first, then the ticked and the other likely causes' (`causes`: the latest diagnosis's).
  */
-export function FollowupPanel({ castingId, suggestions = [] }: { castingId: number; suggestions?: string[] }) {
+export function FollowupPanel({ castingId, causes }: { castingId: number; causes: CauseWithRecord[] }) {
   const data = useFollowups(castingId);
+  const review = useCaseReview(castingId);
+  const rulebook = useCastingCauses(castingId);
   const mayWrite = useMay({ casebook: ["write"] });
   if (data.isPending) return <Loading />;
   if (data.error) return <Notice tone="error">{data.error.message}</Notice>;
-  const { fixes, chain, candidates } = data.data;
+  const { fixes, chain, candidates, ticked } = data.data;
+  const suggestions = fixSuggestions({
+    confirmedCauseId: review.data?.current?.causeId,
+    rulebook: rulebook.data,
+    ranked: causes,
+    ticked,
+  });
   return (
     <View style={styles.wrap} testID="followup-panel">
       <Heading level={2}>Fixes tried</Heading>
@@ -28,7 +39,9 @@ export function FollowupPanel({ castingId, suggestions = [] }: { castingId: numb
       {fixes.map((f) => (
         <FollowupFix key={f.id} fix={f} candidates={candidates} mayWrite={mayWrite} />
       ))}
-      {mayWrite ? <FollowupAdd castingId={castingId} candidates={candidates} suggestions={suggestions} /> : null}
+      {mayWrite ? (
+        <FollowupAdd castingId={castingId} candidates={candidates} suggestions={suggestions} ticked={ticked} />
+      ) : null}
     </View>
   );
 }

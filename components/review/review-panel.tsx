@@ -14,7 +14,8 @@ import type { CauseWithRecord } from "@/lib/review-schemas";
 
 /**
  * The casting page's review panel: ask a mentor to look, see who confirmed what, and (mentors and
- * owners) confirm one of the ranked causes or name another. `causes` are the latest diagnosis's.
+ * owners) confirm a ranked cause, any other of the rulebook, or name another. `causes` are the latest
+ * diagnosis's.
  */
 export function ReviewPanel({ castingId, causes }: { castingId: number; causes: CauseWithRecord[] }) {
   const review = useCaseReview(castingId);

@@ -1,6 +1,7 @@
 import { Router } from "express";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { idParam } from "../notebook/shared";
+import { diagnosisFreshness } from "./freshness";
 import { diagnoseCase, diagnoseCasting } from "./service";
 
 export const diagnosisRouter = Router();
@@ -13,4 +14,10 @@ diagnosisRouter.post("/", requireShopMember, allow({ casebook: ["read"] }), asyn
 diagnosisRouter.post("/castings/:id", requireShopMember, allow({ casebook: ["write"] }), async (req, res) => {
   const castingId = idParam(req.params.id, "No such casting");
   res.status(201).json(await diagnoseCasting(currentMember(req), castingId));
+});
+
+/** Whether the marks or conditions changed since the latest diagnosis (anyone in the shop reads it). */
+diagnosisRouter.get("/castings/:id/freshness", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
+  const castingId = idParam(req.params.id, "No such casting");
+  res.json(await diagnosisFreshness(currentMember(req).shopId, castingId));
 });

@@ -1,9 +1,10 @@
 import { Router } from "express";
-import { fixInput, fixPatch } from "../../lib/review-schemas";
+import { fixInput, fixPatch, fixTickInput } from "../../lib/review-schemas";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
 import { idParam } from "../notebook/shared";
 import { addFix, followups, patchFix } from "./service";
+import { setTick } from "./ticks";
 
 /** Fixes tried and the next casting of the part: recorded by anyone who logs castings. */
 export const followupsRouter = Router();
@@ -22,4 +23,10 @@ followupsRouter.post("/castings/:id/fixes", ...write, async (req, res) => {
 followupsRouter.patch("/fixes/:id", ...write, async (req, res) => {
   const id = idParam(req.params.id, "No such fix");
   res.json(await patchFix(currentMember(req), id, parseOr400(fixPatch, req.body)));
+});
+
+/** A fix to try ticked on the likely causes; answers the casting's ticks as they are now. */
+followupsRouter.put("/castings/:id/ticks", ...write, async (req, res) => {
+  const castingId = idParam(req.params.id, "No such casting");
+  res.json({ ticked: await setTick(currentMember(req), castingId, parseOr400(fixTickInput, req.body)) });
 });

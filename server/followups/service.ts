@@ -6,6 +6,7 @@ import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
 import { HttpError, notFound } from "../http/errors";
 import { changedOnly, iso, personRef } from "../notebook/shared";
+import { ticksOf } from "./ticks";
 
 /**
  * Fixes tried after a casting and the next casting of the same part they were tried on. Linked
@@ -135,8 +136,12 @@ async function chainOf(shopId: string, castingId: number): Promise<ChainLink[]> 
 
 export async function followups(shopId: string, castingId: number): Promise<Followups> {
   const candidates = await laterOfPart(shopId, castingId);
-  const [fixes, chain] = await Promise.all([fixesOf(shopId, [castingId]).then(toFixes), chainOf(shopId, castingId)]);
-  return { fixes, chain, candidates };
+  const [fixes, chain, ticked] = await Promise.all([
+    fixesOf(shopId, [castingId]).then(toFixes),
+    chainOf(shopId, castingId),
+    ticksOf(shopId, castingId),
+  ]);
+  return { fixes, chain, candidates, ticked };
 }
 
 /** The next casting must be this shop's, of the same part, from a later melt. */

@@ -4,7 +4,7 @@ import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
 import { idParam } from "../notebook/shared";
 import { noticeCauseConfirmed, noticeReviewRequested, openRequestersOf } from "../people/notices";
-import { caseReview, confirmCause, requestReview, reviewQueue } from "./service";
+import { caseReview, castingCauses, confirmCause, requestReview, reviewQueue } from "./service";
 
 /** Review of a casting: anyone in the shop asks and reads; mentors and owners see the queue and confirm. */
 export const reviewRouter = Router();
@@ -12,6 +12,11 @@ const castingId = (v: unknown) => idParam(v, "No such casting");
 
 reviewRouter.get("/castings/:id", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
   res.json(await caseReview(currentMember(req).shopId, castingId(req.params.id)));
+});
+
+/** The whole rulebook's causes for this casting: the confirm form searches them, "record a fix" offers their fixes. */
+reviewRouter.get("/castings/:id/causes", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
+  res.json(await castingCauses(currentMember(req).shopId, castingId(req.params.id)));
 });
 
 reviewRouter.post(

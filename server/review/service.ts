@@ -8,16 +8,28 @@ import {
   diagnosisSnapshots,
   melts,
   reviewRequests,
+  shopCauses,
   user,
 } from "../../db/schema";
-import type { CaseReview, Confirmation, ConfirmationInput, QueueItem, ReviewRequest } from "../../lib/review-schemas";
+import type {
+  CaseReview,
+  CastingCauses,
+  Confirmation,
+  ConfirmationInput,
+  QueueItem,
+  ReviewRequest,
+} from "../../lib/review-schemas";
+import { metalOf } from "../../rules/alloys";
+import { comparableCause } from "../../rules/backtest";
 import type { DiagnosisResult } from "../../rules/engine";
 import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
+import { fixesFor } from "../../rules/rank";
 import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
 import { HttpError } from "../http/errors";
 import { iso, personRef } from "../notebook/shared";
 import { causesOf } from "../rulebook/context";
+import { newCauseId } from "../rulebook/draft";
 
 /** Review: a caster asks, the case waits in the mentors' queue (oldest first), a mentor confirms its cause. */
 type RequestRow = typeof reviewRequests.$inferSelect;
@@ -34,6 +46,50 @@ async function nameOf(ids: (string | null)[]) {
 async function causeTitles(shopId: string) {
   const all = [...BUILT_IN_RULE_SET.causes, ...(await causesOf(shopId))];
   return new Map(all.map((c) => [c.id, c.title]));
+}
+
+/** The metal of a casting's melt (from the alloy row it points at): fixes differ by metal. */
+async function metalOfCasting(meltId: number) {
+  const [row] = await db
+    .select({ family: alloys.family })
+    .from(melts)
+    .innerJoin(alloys, eq(alloys.id, melts.alloyId))
+    .where(eq(melts.id, meltId));
+  return metalOf(row.family);
+}
+
+/** Every built-in and shop cause, with the fixes that apply to this casting's metal. */
+export async function castingCauses(shopId: string, castingId: number): Promise<CastingCauses> {
+  const casting = await castingInShop(shopId, castingId);
+  const [metal, own] = await Promise.all([metalOfCasting(casting.meltId), causesOf(shopId)]);
+  const facts = { metal };
+  return {
+    causes: [
+      ...BUILT_IN_RULE_SET.causes.map((c) => ({ id: c.id, title: c.title, fixes: fixesFor(c, facts), shop: false })),
+      ...own.map((c) => ({ id: c.id, title: c.title, fixes: fixesFor(c, facts), shop: true })),
+    ],
+  };
+}
+
+/**
+ * What a confirmation stores as its cause: the chosen id; or, for words that are the title of a cause
+ * already in the rulebook, that cause; or, when asked, a new shop cause named by the words; else the words.
+ */
+async function causeOfConfirmation(m: ShopMember, input: ConfirmationInput) {
+  const known = [...BUILT_IN_RULE_SET.causes, ...(await causesOf(m.shopId))];
+  if (input.causeId) {
+    if (!known.some((c) => c.id === input.causeId))
+      throw new HttpError(400, "Some values need fixing.", {
+        causeId: "not a cause in this rulebook: choose one, or name another",
+      });
+    return { causeId: input.causeId, causeText: null, newCause: null };
+  }
+  const text = input.causeText ?? "";
+  const named = comparableCause({ causeId: null, causeText: text }, known);
+  if (named) return { causeId: named, causeText: null, newCause: null };
+  if (!input.makeShopCause) return { causeId: null, causeText: text, newCause: null };
+  const id = newCauseId(text, known);
+  return { causeId: id, causeText: null, newCause: { id, title: text, fixes: [input.newCauseFix ?? ""] } };
 }
 
 export async function caseReview(shopId: string, castingId: number): Promise<CaseReview> {
@@ -98,16 +154,25 @@ export async function requestReview(
 
 export async function confirmCause(m: ShopMember, castingId: number, input: ConfirmationInput): Promise<CaseReview> {
   await castingInShop(m.shopId, castingId);
-  if (input.causeId && !(await causeTitles(m.shopId)).has(input.causeId))
-    throw new HttpError(400, "Some values need fixing.", {
-      causeId: "not a cause in this rulebook: choose one, or name another",
-    });
+  const { causeId, causeText, newCause } = await causeOfConfirmation(m, input);
   await db.transaction(async (tx) => {
+    if (newCause)
+      await tx
+        .insert(shopCauses)
+        .values({
+          shopId: m.shopId,
+          causeId: newCause.id,
+          title: newCause.title,
+          fixes: newCause.fixes,
+          createdBy: m.userId,
+        })
+        // The same words added twice at once: the first stores the cause, both confirm it.
+        .onConflictDoNothing();
     await tx.insert(confirmations).values({
       shopId: m.shopId,
       castingId,
-      causeId: input.causeId ?? null,
-      causeText: input.causeId ? null : (input.causeText ?? null),
+      causeId,
+      causeText,
       note: input.note || null,
       createdBy: m.userId,
     });

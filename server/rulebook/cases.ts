@@ -67,7 +67,7 @@ export async function storedCases(shopId: string, opts: { confirmedOnly?: boolea
       pouredOn: m.pouredOn,
       case: kase,
       alloy: toAlloySpec(a),
-      confirmed: conf ? { causeId: conf.causeId } : null,
+      confirmed: conf ? { causeId: conf.causeId, causeText: conf.causeText } : null,
     });
   }
   return out;

@@ -41,10 +41,15 @@ async function causeFor(shopId: string, d: RuleDraftParsed): Promise<KbCause> {
     if (!found) throw bad({ "cause.id": "not a cause in this rulebook: choose one from the list" });
     return found;
   }
-  const base = `shop-${slug(d.cause.title)}`;
+  return { id: newCauseId(d.cause.title, known), title: d.cause.title, fixes: d.cause.fixes };
+}
+
+/** A new shop cause's id: "shop-<words of its title>", numbered when the rulebook already has it. */
+export function newCauseId(title: string, known: { id: string }[]) {
+  const base = `shop-${slug(title)}`;
   let id = base;
   for (let i = 2; known.some((c) => c.id === id); i++) id = `${base}-${i}`;
-  return { id, title: d.cause.title, fixes: d.cause.fixes };
+  return id;
 }
 
 /** The form's checks again, then the knowledge base's own (checkRule), each problem on its field. */

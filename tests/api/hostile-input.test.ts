@@ -90,6 +90,7 @@ beforeAll(async () => {
       path: `/api/followups/castings/${casting.id}/fixes`,
       body: { fix: "Pour hotter", nextCastingId: next.id },
     },
+    { method: "PUT", path: `/api/followups/castings/${casting.id}/ticks`, body: { fix: "Pour hotter", ticked: true } },
     {
       method: "PATCH",
       path: `/api/followups/fixes/${fix.body.id}`,

@@ -39,7 +39,10 @@ describe("a casting's review and thread", () => {
     await shot(mentor, "wide-review-queue");
     await mentor.goto(url);
     await expect.poll(() => mentor.getByText("Pinholes only on the cope side").count(), { timeout: 10000 }).toBe(1);
-    const firstCause = mentor.getByRole("radiogroup", { name: "What caused it" }).getByRole("radio").first();
+    const firstCause = mentor
+      .getByRole("radiogroup", { name: "Causes the diagnosis listed" })
+      .getByRole("radio")
+      .first();
     await firstCause.click();
     await mentor.getByTestId("confirm-cause").click();
     await expect.poll(() => mentor.getByTestId("confirmed-cause").count(), { timeout: 10000 }).toBe(1);

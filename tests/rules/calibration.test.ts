@@ -12,8 +12,8 @@ import {
 } from "../../rules/calibration";
 import { caseSchema } from "../../rules/case";
 import { diagnose } from "../../rules/engine";
-import { withRule } from "../../rules/backtest";
-import { base, casebook, draft } from "./casebook-fixture";
+import { backtest, comparableCause, withRule, type StoredCase } from "../../rules/backtest";
+import { alloy, base, casebook, causes, draft } from "./casebook-fixture";
 
 describe("weight calibration from confirmed cases", () => {
   it("leaves a rule with no record at its author's weight", () => {
@@ -84,5 +84,62 @@ describe("weight calibration from confirmed cases", () => {
     expect(learned.causes[0].score).toBeGreaterThan(plain.causes[0].score);
     expect(learned.causes[1].score).toBeLessThan(plain.causes[1].score);
     expect(learned.causes[0].score).toBeLessThanOrEqual(1);
+  });
+
+  describe("a cause typed in words", () => {
+    // Both rules fire on a misrun poured at 650 °C down a 300 mm drop (hand-checked against the
+    // fixture's thresholds: below 680 °C, above 250 mm).
+    const both = { alloy: "A356.0", process: "green-sand", pourTempC: 650, sprueHeightMm: 300 };
+    const typed = (castingId: number, causeText: string): StoredCase => ({
+      castingId,
+      meltId: castingId,
+      partName: `typed ${castingId}`,
+      pouredOn: "2026-02-01",
+      case: caseSchema.parse({ ...both, defects: [{ type: "misrun", location: "throughout", severity: 2 }] }),
+      alloy,
+      confirmed: { causeId: null, causeText },
+    });
+
+    it("names a rulebook cause when the words are its title, case and punctuation aside", () => {
+      expect(comparableCause({ causeId: null, causeText: "turbulent fill." }, causes)).toBe("turbulent-fill");
+      expect(comparableCause({ causeId: null, causeText: "  Metal poured   too cold" }, causes)).toBe("cold-pour");
+      expect(comparableCause({ causeId: null, causeText: "Ladle lip froze over" }, causes)).toBeNull();
+      expect(comparableCause({ causeId: "cold-pour" }, causes)).toBe("cold-pour");
+      // An id the rulebook no longer has cannot be compared either.
+      expect(comparableCause({ causeId: "gone-cause" }, causes)).toBeNull();
+      expect(comparableCause(null, causes)).toBeNull();
+    });
+
+    it("counts for no rule when it names no rulebook cause", async () => {
+      const rs = withRule(base, draft);
+      // Fixture cases 1, 2, 4 as above, plus one "Ladle lip froze over" on which both rules fired.
+      const firings = await confirmedFirings([...casebook, typed(6, "Ladle lip froze over")], rs);
+      expect(firings).toHaveLength(3);
+      const rules = ruleRecords(firings, rs.rules);
+      // Unchanged from the fixture alone: 3 fired / 2 agreed and 2 fired / 1 agreed, not 4/2 and 3/1.
+      expect(rules.get("misrun-cold")).toEqual({ fired: 3, agreed: 2 });
+      expect(rules.get("shop-draft")).toEqual({ fired: 2, agreed: 1 });
+      expect(causeRecords(firings, rs.rules).get("turbulent-fill")).toEqual({ confirmed: 2, right: 1 });
+    });
+
+    it("counts as that cause when the words name one", async () => {
+      const rs = withRule(base, draft);
+      const firings = await confirmedFirings([...casebook, typed(6, "Turbulent fill")], rs);
+      expect(firings).toHaveLength(4);
+      const rules = ruleRecords(firings, rs.rules);
+      // Case 6 adds one firing to each: the draft was right (2 of 3), cold pour wrong (2 of 4).
+      expect(rules.get("shop-draft")).toEqual({ fired: 3, agreed: 2 });
+      expect(rules.get("misrun-cold")).toEqual({ fired: 4, agreed: 2 });
+    });
+
+    it("is left out of a rule's trial on past cases too", async () => {
+      const plain = await backtest({ cases: casebook, base, rule: draft });
+      const more = await backtest({ cases: [...casebook, typed(6, "Ladle lip froze over")], base, rule: draft });
+      // The draft fires on case 6 (it counts as a firing) but no agreement or miss is added.
+      expect(more.fired).toBe(plain.fired + 1);
+      expect(more.firedConfirmed).toBe(plain.firedConfirmed);
+      expect(more.agreed).toBe(plain.agreed);
+      expect(more.confirmedCases).toBe(plain.confirmedCases);
+    });
   });
 });

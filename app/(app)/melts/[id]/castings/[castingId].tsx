@@ -26,7 +26,7 @@ import type { CauseWithRecord } from "@/lib/review-schemas";
  * mentor's review, the fix tried and the next casting, the most similar past cases, and the thread of notes.
  */
 export default function CastingScreen() {
-  const params = useLocalSearchParams<{ id: string; castingId: string }>();
+  const params = useLocalSearchParams<{ id: string; castingId: string; edit?: string }>();
   const casting = useCasting(Number(params.castingId));
   const units = useUnits();
   const wide = useIsWide();
@@ -41,13 +41,13 @@ export default function CastingScreen() {
     <Screen wide={wide}>
       <BackLink href={`/melts/${c.meltId}`} label={`${c.melt.alloy} melt of ${formatDay(c.melt.pouredOn)}`} />
       {c.melt.archivedAt ? <ArchiveControl kind="melt" row={c.melt} /> : null}
-      <CastingSummary casting={c} units={units} mayEdit={mayWrite} />
+      <CastingSummary casting={c} units={units} mayEdit={mayWrite} editField={params.edit} />
       <ArchiveControl kind="casting" row={c} />
       <Heading level={2}>Photos and marks</Heading>
       <Inspection casting={c} wide={wide} />
       <DiagnosisView casting={c} units={units} mayRun={mayWrite} />
       <ReviewPanel castingId={c.id} causes={causes} />
-      <FollowupPanel castingId={c.id} suggestions={causes[0]?.fixes} />
+      <FollowupPanel castingId={c.id} causes={causes} />
       <CalcLinks
         target={{ meltId: c.meltId, castingId: c.id }}
         prefill={{
