@@ -1,5 +1,5 @@
 import { useState } from "react";
-import { fieldErrors } from "@/lib/field-errors";
+import { fieldErrors, messagesInUnits } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { alloyConflicts, meltInput, type Alloy, type MeltInput } from "@/lib/notebook-schemas";
 import type { Units } from "@/lib/units";
@@ -95,8 +95,8 @@ export function useMeltDraft(initial: Initial, units: Units) {
     const parsed = meltInput.safeParse(input);
     const alloy = alloys.find((a) => a.designation === draft.alloy);
     const found = {
-      ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true })),
-      ...(alloy ? alloyConflicts(input as Initial as MeltInput, alloy) : {}),
+      ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true, units })),
+      ...(alloy ? messagesInUnits(alloyConflicts(input as Initial as MeltInput, alloy), units) : {}),
       ...numbers.errors,
       ...(draft.process ? {} : { process: "choose a process" }),
       ...(draft.alloy ? {} : { alloy: "choose an alloy" }),

@@ -1,6 +1,6 @@
 import { PROCESSES } from "../rules/case";
 import type { CalcQuantity, CalculatorKind } from "../rules/calculators";
-import { fromField, fromSi, toField, unitLabel, type Quantity, type Units } from "./units";
+import { fromField, fromSi, takesInchFractions, toField, unitLabel, type Quantity, type Units } from "./units";
 
 /** What each calculator asks for, in the order a caster has the figures to hand. */
 export type CalcField =
@@ -120,6 +120,8 @@ export function calcUnit(q: CalcQuantity, u: Units): string {
   const p = PERSON_UNITS[q];
   return p ? unitLabel(p, u) : SI_LABELS[q];
 }
+/** A length in inches takes fractions (1 1/2), and so a keyboard with / and a space. */
+export const calcTakesFractions = (q: CalcQuantity, u: Units) => takesInchFractions(PERSON_UNITS[q] ?? null, u);
 export function calcToField(q: CalcQuantity, si: number | undefined, u: Units): string {
   const p = PERSON_UNITS[q];
   if (si === undefined || !Number.isFinite(si)) return "";

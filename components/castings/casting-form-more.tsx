@@ -3,7 +3,7 @@ import { NumberField } from "@/components/ui/number-field";
 import { TextField } from "@/components/ui/text-field";
 import { YesNoChips } from "@/components/ui/yes-no-chips";
 import type { CastingDraft } from "@/hooks/use-casting-draft";
-import { unitLabel, type Units } from "@/lib/units";
+import { takesInchFractions, unitLabel, type Units } from "@/lib/units";
 
 type Props = {
   draft: CastingDraft;
@@ -20,6 +20,7 @@ export function CastingMore({ draft, set, errors, units }: Props) {
         <NumberField
           label="Sprue height"
           unit={unitLabel("length", units)}
+          fractions={takesInchFractions("length", units)}
           value={draft.sprueHeightMm}
           onChangeText={(v) => set("sprueHeightMm", v)}
           error={errors.sprueHeightMm}

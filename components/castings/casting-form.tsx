@@ -12,7 +12,7 @@ import { useCastingDraft, type CastingInitial } from "@/hooks/use-casting-draft"
 import { ApiError } from "@/lib/api";
 import { OUTCOME_LABELS } from "@/lib/labels";
 import type { CastingInput } from "@/lib/notebook-schemas";
-import { unitLabel, type Units } from "@/lib/units";
+import { takesInchFractions, unitLabel, type Units } from "@/lib/units";
 
 type Props = {
   initial?: CastingInitial;
@@ -32,6 +32,7 @@ export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOp
   const [failure, setFailure] = useState<string>();
   const [saved, setSaved] = useState<string>();
   const mm = unitLabel("length", units);
+  const inches = takesInchFractions("length", units);
 
   async function submit() {
     const input = check();
@@ -48,7 +49,7 @@ export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOp
         next();
       }
     } catch (e) {
-      if (e instanceof ApiError && Object.keys(e.fields).length) setErrors(e.fields);
+      if (e instanceof ApiError && Object.keys(e.fields).length) setErrors(e.fieldsIn(units));
       setFailure(e instanceof Error ? e.message : String(e));
     } finally {
       setBusy(false);
@@ -70,6 +71,7 @@ export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOp
         <NumberField
           label="Thinnest section"
           unit={mm}
+          fractions={inches}
           value={draft.minSectionMm}
           onChangeText={(v) => set("minSectionMm", v)}
           error={errors.minSectionMm}
@@ -77,6 +79,7 @@ export function CastingForm({ initial = {}, units, submitLabel, onSubmit, keepOp
         <NumberField
           label="Thickest section"
           unit={mm}
+          fractions={inches}
           value={draft.maxSectionMm}
           onChangeText={(v) => set("maxSectionMm", v)}
           error={errors.maxSectionMm}

@@ -42,7 +42,7 @@ export function MeltForm({ initial, units, submitLabel, onSubmit }: Props) {
       await onSubmit(input);
     } catch (e) {
       // The server checks again (the alloy table may have changed): its field messages land by the fields.
-      if (e instanceof ApiError && Object.keys(e.fields).length) setErrors(e.fields);
+      if (e instanceof ApiError && Object.keys(e.fields).length) setErrors(e.fieldsIn(units));
       setFailure(e instanceof Error ? e.message : String(e));
     } finally {
       setBusy(false);
