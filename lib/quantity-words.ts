@@ -29,3 +29,7 @@ export function quantityWords(token: QuantityToken, units: Units): string {
 
 /** "raise the pour temperature by {20-30 K}" -> "... by 36-54 °F" for a °F person. */
 export const textInUnits = (text: string, units: Units) => replaceQuantities(text, (t) => quantityWords(t, units));
+
+/** A ranked cause's fixes in the person's units; results saved before templates carry only the SI sentences. */
+export const fixesInUnits = (cause: { fixes: string[]; fixTemplates?: string[] }, units: Units) =>
+  cause.fixTemplates?.map((t) => textInUnits(t, units)) ?? cause.fixes;

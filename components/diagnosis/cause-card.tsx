@@ -3,7 +3,7 @@ import { Pressable, StyleSheet, Text, View } from "react-native";
 import { CauseRecordLine } from "@/components/rulebook/rule-record";
 import { ScoreBar } from "@/components/ui/score-bar";
 import { card, colors, fontSize, space } from "@/constants/theme";
-import { textInUnits } from "@/lib/quantity-words";
+import { fixesInUnits } from "@/lib/quantity-words";
 import { reasonInUnits } from "@/lib/reason-text";
 import type { CauseWithRecord } from "@/lib/review-schemas";
 import type { Units } from "@/lib/units";
@@ -33,8 +33,7 @@ export function CauseCard({ cause, rank, units }: { cause: Cause; rank: number; 
       <Text style={styles.sub}>
         Fixes to try <Text style={styles.subNote}>(ticks help you keep track here; they are not saved)</Text>
       </Text>
-      {/* Older saved results carry only the SI sentences. */}
-      {(cause.fixTemplates?.map((t) => textInUnits(t, units)) ?? cause.fixes).map((f, i) => (
+      {fixesInUnits(cause, units).map((f, i) => (
         <Pressable key={f} role="checkbox" aria-checked={done.has(i)} onPress={() => toggle(i)} style={styles.fix}>
           <View style={[styles.box, done.has(i) && styles.boxOn]}>
             {done.has(i) ? <Text style={styles.tick}>✓</Text> : null}

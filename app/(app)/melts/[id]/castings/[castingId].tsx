@@ -16,6 +16,7 @@ import { useIsWide } from "@/hooks/use-layout";
 import { useMe } from "@/hooks/use-me";
 import { useUnits } from "@/hooks/use-units";
 import { formatDay } from "@/lib/dates";
+import { fixesInUnits } from "@/lib/quantity-words";
 import { roleCan } from "@/lib/permissions";
 import type { CauseWithRecord } from "@/lib/review-schemas";
 
@@ -43,7 +44,7 @@ export default function CastingScreen() {
       <Inspection casting={c} wide={wide} />
       <DiagnosisView casting={c} units={units} mayRun={mayWrite} />
       <ReviewPanel castingId={c.id} causes={causes} />
-      <FollowupPanel castingId={c.id} suggestions={causes[0]?.fixes} />
+      <FollowupPanel castingId={c.id} suggestions={causes[0] && fixesInUnits(causes[0], units)} />
       <CalcLinks
         target={{ meltId: c.meltId, castingId: c.id }}
         prefill={{
