@@ -59,7 +59,10 @@ export function useCastingDraft(initial: CastingInitial, units: Units) {
       hasVents: draft.hasVents ?? null,
     };
     const parsed = castingInput.safeParse(input);
-    const found = { ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true, units })), ...numbers.errors };
+    const found = {
+      ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true, units })),
+      ...numbers.errors,
+    };
     setErrors(found);
     return parsed.success && Object.keys(found).length === 0 ? parsed.data : undefined;
   }

@@ -34,7 +34,10 @@ export async function api<T>(path: string, init: { method?: string; body?: unkno
   }
   const data = await res.json().catch(() => undefined);
   if (!res.ok) {
-    throw new ApiError(res.status, data?.error?.message ?? `The server answered ${res.status}.`, data?.error?.fields,
+    throw new ApiError(
+      res.status,
+      data?.error?.message ?? `The server answered ${res.status}.`,
+      data?.error?.fields,
       data?.error?.fieldTemplates,
     );
   }

@@ -1,6 +1,6 @@
 import { PROCESSES } from "../rules/case";
 import type { CalcQuantity, CalculatorKind } from "../rules/calculators";
-import { fromField, fromSi, takesInchFractions, toField, unitLabel, type Quantity, type Units } from "./units";
+import { fromField, readingNumber, takesInchFractions, toField, unitLabel, type Quantity, type Units } from "./units";
 
 /** What each calculator asks for, in the order a caster has the figures to hand. */
 export type CalcField =
@@ -134,13 +134,9 @@ export function calcFromField(q: CalcQuantity, text: string, u: Units): number |
   if (t === "") return undefined;
   return Number.isFinite(Number(t)) ? Number(t) : Number.NaN;
 }
-/** A result for reading: "760 °C", "5.65 kg", "0.75 cm³/100 g". */
+/** A result for reading, rounded as a caster writes it (lib/units.ts): "760 °C", "5.9 in", "12.5 lb", "0.75 cm³/100 g". */
 export function calcFormat(q: CalcQuantity, si: number, u: Units): string {
   const p = PERSON_UNITS[q];
-  if (p) {
-    const v = fromSi(p, si, u);
-    const digits = p.startsWith("temperature") ? 0 : Math.abs(v) < 10 ? 2 : 1;
-    return `${Number(v.toFixed(digits))} ${unitLabel(p, u)}`;
-  }
+  if (p) return `${readingNumber(p, si, u)} ${unitLabel(p, u)}`;
   return `${Number(si.toPrecision(3))} ${SI_LABELS[q]}`;
 }

@@ -36,7 +36,9 @@ export function textToNumbers<S extends NumberSpec<string>>(
     const t = text[key] ?? "";
     const n = q ? fromField(q, t, units) : t.trim() === "" ? undefined : Number(decimalText(t));
     if (n !== undefined && Number.isNaN(n))
-      errors[key] = takesInchFractions(q, units) ? `${INCH_HINT}, or leave it empty` : "type a number, or leave it empty";
+      errors[key] = takesInchFractions(q, units)
+        ? `${INCH_HINT}, or leave it empty`
+        : "type a number, or leave it empty";
     values[key] = n === undefined || Number.isNaN(n) ? null : n;
   }
   return { values, errors };

@@ -11,7 +11,14 @@ import { useSaveCalculation, type CalcTarget } from "@/hooks/use-calculations";
 import { useAlloys } from "@/hooks/use-melts";
 import { useUnits } from "@/hooks/use-units";
 import { ApiError } from "@/lib/api";
-import { CALCULATOR_FIELDS, CALCULATOR_TITLES, calcFromField, calcTakesFractions, calcToField, calcUnit } from "@/lib/calculator-fields";
+import {
+  CALCULATOR_FIELDS,
+  CALCULATOR_TITLES,
+  calcFromField,
+  calcTakesFractions,
+  calcToField,
+  calcUnit,
+} from "@/lib/calculator-fields";
 import { calculatorInputSchemas } from "@/lib/calculator-schemas";
 import { fieldErrors } from "@/lib/field-errors";
 import { CalcInputError, needsAlloy, runCalculator, type CalcResult, type CalculatorKind } from "@/rules/calculators";
@@ -114,7 +121,11 @@ export function CalculatorForm({ kind, prefill, target, targetLabel }: Props) {
         )
       ) : null}
       {saveError ? (
-        <Notice tone="error">{[saveError.message, ...Object.values(saveError instanceof ApiError ? saveError.fieldsIn(units) : {})].join(" ")}</Notice>
+        <Notice tone="error">
+          {[saveError.message, ...Object.values(saveError instanceof ApiError ? saveError.fieldsIn(units) : {})].join(
+            " ",
+          )}
+        </Notice>
       ) : null}
     </View>
   );

@@ -27,7 +27,9 @@ function keyboard({ whole, signed, fractions }: Pick<Props, "whole" | "signed" |
     if (Platform.OS === "web") return { inputMode: "text", autoCapitalize: "none", autoCorrect: false };
     return { keyboardType: Platform.OS === "ios" ? "numbers-and-punctuation" : "default", autoCorrect: false };
   }
-  return whole ? { inputMode: "numeric", keyboardType: "number-pad" } : { inputMode: "decimal", keyboardType: "decimal-pad" };
+  return whole
+    ? { inputMode: "numeric", keyboardType: "number-pad" }
+    : { inputMode: "decimal", keyboardType: "decimal-pad" };
 }
 
 /** A number typed in the person's units, with the unit beside it and the error line under it. */

@@ -1,5 +1,5 @@
 import { describe, expect, inject, it } from "vitest";
-import { longShot, PHONE, seen, shot, signedInAs, useBrowser, WIDE } from "./browser";
+import { longShot, PHONE, seen, signedInAs, useBrowser, WIDE } from "./browser";
 
 const baseUrl = inject("baseUrl");
 const browser = useBrowser();
@@ -57,7 +57,9 @@ describe("units in a °F/in/lb person's reasons, fixes and errors", () => {
       const list = await (await page.request.get(`${baseUrl}/api/castings?pageSize=50`)).json();
       const target = list.items.find((c: { partName: string }) => c.partName === "Vent cover");
       const mark = { type: "misrun", location: "thin-section", severity: 3 };
-      expect((await page.request.post(`${baseUrl}/api/marks/castings/${target.id}`, { data: mark })).status()).toBe(201);
+      expect((await page.request.post(`${baseUrl}/api/marks/castings/${target.id}`, { data: mark })).status()).toBe(
+        201,
+      );
       expect((await page.request.post(`${baseUrl}/api/diagnosis/castings/${target.id}`)).status()).toBe(201);
 
       await page.goto(`${baseUrl}/melts/${target.meltId}/castings/${target.id}`);
@@ -67,9 +69,10 @@ describe("units in a °F/in/lb person's reasons, fixes and errors", () => {
       // The fixes (tick boxes) and the reasons (bullets) of each cause; its sources are quoted as published.
       const cards = page.locator('[data-testid^="cause-"]');
       const causes = async () =>
-        [...(await cards.getByRole("checkbox").allTextContents()), ...(await cards.getByText(/^• /).allTextContents())].join(
-          " ",
-        );
+        [
+          ...(await cards.getByRole("checkbox").allTextContents()),
+          ...(await cards.getByText(/^• /).allTextContents()),
+        ].join(" ");
       // The thin wall in inches, and the rule's own figure too: 3-4 mm is 0.12-0.16 in.
       await expect.poll(causes, { timeout: 10000 }).toMatch(/Thinnest wall 0\.13 in, under the 0\.12-0\.16 in/);
       // The cold-pour fix's rise: 20-30 °C is 36-54 °F (9/5 per degree, no offset).
@@ -91,7 +94,7 @@ describe("units in a °F/in/lb person's reasons, fixes and errors", () => {
       await page.getByLabel("Air temperature (°F)").fill("150");
       await page.getByTestId("save-melt").click();
       await seen(page, "above 140 °F");
-      await shot(page, "wide-units-melt-limit");
+      await longShot(page, "wide-units-melt-limit");
     } finally {
       await page.request.put(`${baseUrl}/api/people/me/units`, {
         data: { temperature: "C", length: "mm", mass: "kg" },

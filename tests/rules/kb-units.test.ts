@@ -105,7 +105,11 @@ describe("quantities in braces", () => {
       against: false,
       values: { minSectionMm: 3, process: "green-sand" },
     };
-    expect(reasonInUnits(reason, US)).toBe("Thinnest wall 0.12 in, under the 0.12-0.16 in that green sand usually runs in aluminium");
-    expect(reasonInUnits(reason, SI)).toBe("Thinnest wall 3 mm, under the 3-4 mm that green sand usually runs in aluminium");
+    expect(reasonInUnits(reason, US)).toBe(
+      "Thinnest wall 0.12 in, under the 0.12-0.16 in that green sand usually runs in aluminium",
+    );
+    expect(reasonInUnits(reason, SI)).toBe(
+      "Thinnest wall 3 mm, under the 3-4 mm that green sand usually runs in aluminium",
+    );
   });
 });

@@ -9,8 +9,7 @@ const SI: Units = { temperature: "C", length: "mm", mass: "kg" };
 const US: Units = { temperature: "F", length: "in", mass: "lb" };
 
 describe("limits in a form's messages, in the person's units", () => {
-  const melt = (v: Record<string, unknown>) =>
-    meltFields.partial().safeParse({ ...v }).error!;
+  const melt = (v: Record<string, unknown>) => meltFields.partial().safeParse({ ...v }).error!;
 
   it("says the temperature scale's top in °F", () => {
     // 1,700 °C × 9/5 + 32 = 3,092 °F (the Fahrenheit scale's definition, NIST SP 811).
@@ -42,9 +41,14 @@ describe("limits in a form's messages, in the person's units", () => {
   });
 
   it("says a server's limits in the person's units", () => {
-    const err = new ApiError(400, "Some values need fixing.", { pourTempC: "above 1,700 °C", notes: "too long" }, {
-      pourTempC: "above {1700 °C}",
-    });
+    const err = new ApiError(
+      400,
+      "Some values need fixing.",
+      { pourTempC: "above 1,700 °C", notes: "too long" },
+      {
+        pourTempC: "above {1700 °C}",
+      },
+    );
     expect(err.fieldsIn(US)).toEqual({ pourTempC: "above 3,092 °F", notes: "too long" });
   });
 
