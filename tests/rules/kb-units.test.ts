@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { textInUnits } from "../../lib/quantity-words";
+import { superheatBandInUnits } from "../../lib/trends-schemas";
 import { reasonInUnits } from "../../lib/reason-text";
 import type { Units } from "../../lib/units";
 import { factSpec } from "../../rules/fact-catalog";
@@ -111,5 +112,15 @@ describe("quantities in braces", () => {
     expect(reasonInUnits(reason, SI)).toBe(
       "Thinnest wall 3 mm, under the 3-4 mm that green sand usually runs in aluminium",
     );
+  });
+});
+
+describe("trend bands", () => {
+  it("says superheat bands in °F as differences", () => {
+    // A superheat is a difference: 40-60 °C is 72-108 °F (9/5 per degree, no offset).
+    expect(superheatBandInUnits("40-60 °C", US)).toBe("72-108 °F");
+    expect(superheatBandInUnits("100 °C and over", US)).toBe("180 °F and over");
+    expect(superheatBandInUnits("not logged", US)).toBe("not logged");
+    expect(superheatBandInUnits("under 40 °C", SI)).toBe("under 40 °C");
   });
 });

@@ -11,7 +11,8 @@ import { TextField } from "@/components/ui/text-field";
 import { colors, fontSize, space } from "@/constants/theme";
 import { useTrends } from "@/hooks/use-trends";
 import { isDay } from "@/lib/casebook-filters";
-import type { TrendsQuery } from "@/lib/trends-schemas";
+import { superheatBandInUnits, type TrendsQuery } from "@/lib/trends-schemas";
+import { useUnits } from "@/hooks/use-units";
 import { PROCESSES, type Process } from "@/rules/case";
 
 /** What the shop's castings say: defect, scrap and rework rates, filtered by date and process. */
@@ -25,6 +26,7 @@ export default function TrendsScreen() {
     process: (process || undefined) as Process | undefined,
   };
   const trends = useTrends(q);
+  const units = useUnits();
   const t = trends.data;
   return (
     <Screen>
@@ -52,7 +54,11 @@ export default function TrendsScreen() {
           <Text style={styles.meta}>
             {t.castings} castings. A bar is the share with at least one defect marked (or scrapped, reworked).
           </Text>
-          <RateBars title="Defects by superheat" what="had defects" points={t.defectBySuperheat} />
+          <RateBars
+            title="Defects by superheat"
+            what="had defects"
+            points={t.defectBySuperheat.map((p) => ({ ...p, key: superheatBandInUnits(p.key, units) }))}
+          />
           <RateBars
             title="Defects by process"
             what="had defects"
