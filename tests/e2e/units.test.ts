@@ -95,6 +95,34 @@ describe("units in a °F/in/lb person's reasons, fixes and errors", () => {
       await page.getByTestId("save-melt").click();
       await seen(page, "above 140 °F");
       await longShot(page, "wide-units-melt-limit");
+
+      // A calculator takes inch fractions and answers in inches, rounded as a caster writes them.
+      await page.setViewportSize(PHONE);
+      await page.goto(`${baseUrl}/melts/calculators/riser?shape=plate`);
+      await page.getByLabel("Length (in)").fill("5");
+      await page.getByLabel("Width (in)").fill("3");
+      const thickness = page.getByLabel(/^Thickness \(in\)/);
+      expect(await thickness.getAttribute("inputmode")).toBe("text");
+      await thickness.fill("3/4");
+      await page.getByRole("button", { name: "Work it out" }).click();
+      await seen(page, "Riser diameter = height");
+      const result = await page.getByText("Riser diameter = height").locator("..").innerText();
+      expect(result).toMatch(/\d in/);
+      expect(result).not.toMatch(/\d\.\d{3} in/);
+      expect(result).not.toMatch(METRIC_FIGURE);
+      await longShot(page, "phone-units-riser");
+      await page.setViewportSize(WIDE);
+      await longShot(page, "wide-units-riser");
+
+      // Trends: superheat bands are differences, 40-60 °C is 72-108 °F.
+      await page.setViewportSize(PHONE);
+      await page.goto(`${baseUrl}/trends`);
+      await seen(page, "Defects by superheat");
+      await seen(page, /^(under )?\d+(-\d+)? °F/);
+      expect(await page.getByText(/^(under )?\d+(-\d+)? °C/).count()).toBe(0);
+      await longShot(page, "phone-units-trends");
+      await page.setViewportSize(WIDE);
+      await longShot(page, "wide-units-trends");
     } finally {
       await page.request.put(`${baseUrl}/api/people/me/units`, {
         data: { temperature: "C", length: "mm", mass: "kg" },
