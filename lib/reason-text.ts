@@ -48,3 +48,17 @@ export function reasonInUnits(reason: Reason, units: Units): string {
   );
   return reason.against ? `Against: ${text}` : text;
 }
+
+/**
+ * A rule's reason as its template, for the rulebook: figures in the reader's units and the unit after
+ * each placeholder swapped to theirs ("{minSectionMm} in, under the 0.12-0.16 in"), placeholders kept.
+ */
+export function reasonTemplateInUnits(template: string, units: Units): string {
+  return textInUnits(template, units).replace(
+    PLACEHOLDER_AND_UNIT,
+    (whole, name: string, gap: string, token?: string) => {
+      const q = quantityOf(name);
+      return q && token && token === SI_TOKEN[q] ? `{${name}}${gap}${unitLabel(q, units)}` : whole;
+    },
+  );
+}

@@ -234,6 +234,7 @@ export type RuleVersion = {
 export type RuleSwitch = { off: boolean; createdBy: PersonRef | null; createdAt: string };
 export type RuleDetail = RuleRow & {
   rule: KbRule;
+  /** The cause's fixes as templates (quantities in braces): say them with lib/quantity-words.ts. */
   causeFixes: string[];
   sources: string[];
   versions: RuleVersion[];

@@ -95,7 +95,7 @@ export async function ruleDetail(shopId: string, ruleId: string): Promise<RuleDe
   return {
     ...base,
     rule,
-    causeFixes: (l.base.causes.find((c) => c.id === rule.cause)?.fixes ?? []).map(siText),
+    causeFixes: l.base.causes.find((c) => c.id === rule.cause)?.fixes ?? [],
     sources: rule.sources,
     versions,
     switches: switches.map((s) => ({ off: s.off, createdBy: who(s.createdBy), createdAt: iso(s.createdAt) })),

@@ -123,6 +123,22 @@ describe("units in a °F/in/lb person's reasons, fixes and errors", () => {
       await longShot(page, "phone-units-trends");
       await page.setViewportSize(WIDE);
       await longShot(page, "wide-units-trends");
+
+      // A rule's page: its cause's fixes and its reason's figures in °F and inches, placeholders kept
+      // (its sources are quoted as published).
+      const pointsTo = () => page.getByText("It points to").locator("..").innerText();
+      await page.setViewportSize(PHONE);
+      await page.goto(`${baseUrl}/rulebook/misrun-thin-wall-sand`);
+      await seen(page, /Reason shown: “Thinnest wall \{minSectionMm\} in, under the 0\.12-0\.16 in/);
+      expect(await pointsTo()).not.toMatch(METRIC_FIGURE);
+      await page.goto(`${baseUrl}/rulebook/fill-below-window`);
+      await seen(page, /Reason shown: “Poured at \{pourTempC\} °F/);
+      await seen(page, /raise the pour temperature by 36-54 °F/);
+      await seen(page, /For walls of 0\.16 in or less/);
+      expect(await pointsTo()).not.toMatch(METRIC_FIGURE);
+      await longShot(page, "phone-units-rule");
+      await page.setViewportSize(WIDE);
+      await longShot(page, "wide-units-rule");
     } finally {
       await page.request.put(`${baseUrl}/api/people/me/units`, {
         data: { temperature: "C", length: "mm", mass: "kg" },

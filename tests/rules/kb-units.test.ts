@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { textInUnits } from "../../lib/quantity-words";
 import { superheatBandInUnits } from "../../lib/trends-schemas";
-import { reasonInUnits } from "../../lib/reason-text";
+import { reasonInUnits, reasonTemplateInUnits } from "../../lib/reason-text";
 import type { Units } from "../../lib/units";
 import { factSpec } from "../../rules/fact-catalog";
 import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
@@ -122,5 +122,18 @@ describe("trend bands", () => {
     expect(superheatBandInUnits("100 °C and over", US)).toBe("180 °F and over");
     expect(superheatBandInUnits("not logged", US)).toBe("not logged");
     expect(superheatBandInUnits("under 40 °C", SI)).toBe("under 40 °C");
+  });
+});
+
+describe("a rule's reason as the rulebook shows it", () => {
+  it("keeps the placeholders and says the figures and units in the reader's", () => {
+    // 3-4 mm = 0.12-0.16 in (1 in = 25.4 mm exactly).
+    const t = "Thinnest wall {minSectionMm} mm, under the {3-4 mm} that {process} usually runs";
+    expect(reasonTemplateInUnits(t, US)).toBe(
+      "Thinnest wall {minSectionMm} in, under the 0.12-0.16 in that {process} usually runs",
+    );
+    expect(reasonTemplateInUnits(t, SI)).toBe(
+      "Thinnest wall {minSectionMm} mm, under the 3-4 mm that {process} usually runs",
+    );
   });
 });
