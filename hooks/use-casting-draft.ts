@@ -79,7 +79,7 @@ export function useCastingDraft(initial: CastingInitial, units: Units, form?: st
     };
     const parsed = castingInput.safeParse(input);
     const found = {
-      ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true })),
+      ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true, units })),
       ...numbers.errors,
       ...conditions.errors,
     };

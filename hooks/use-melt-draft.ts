@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { useStoredDraft } from "@/hooks/use-stored-draft";
-import { fieldErrors } from "@/lib/field-errors";
+import { fieldErrors, messagesInUnits } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { MELT_CONDITIONS, type ConditionContext } from "@/lib/condition-fields";
 import { conditionsFromDraft, conditionsToDraft, type ConditionDraft } from "@/lib/condition-drafts";
@@ -122,8 +122,8 @@ export function useMeltDraft(initial: Initial, units: Units, form?: string) {
     const parsed = meltInput.safeParse(input);
     const alloy = alloys.find((a) => a.designation === draft.alloy);
     const found = {
-      ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true })),
-      ...(alloy ? alloyConflicts(input as Initial as MeltInput, alloy) : {}),
+      ...(parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true, units })),
+      ...(alloy ? messagesInUnits(alloyConflicts(input as Initial as MeltInput, alloy), units) : {}),
       ...numbers.errors,
       ...conditions.errors,
       ...(draft.process ? {} : { process: "choose a process" }),

@@ -1,4 +1,6 @@
 import { apiBaseUrl } from "./client-env";
+import { messagesInUnits } from "./field-errors";
+import type { Units } from "./units";
 
 /** A failed API call, with the server's message and, for bad input, a message per field. */
 export class ApiError extends Error {
@@ -6,8 +8,15 @@ export class ApiError extends Error {
     readonly status: number,
     message: string,
     readonly fields: Record<string, string> = {},
+    /** The messages that quote a limit, as templates ("above {1700 °C}"): `fieldsIn` says them in a person's units. */
+    readonly fieldTemplates: Record<string, string> = {},
   ) {
     super(message);
+  }
+
+  /** The field messages with their limits in the person's units. */
+  fieldsIn(units: Units): Record<string, string> {
+    return { ...this.fields, ...messagesInUnits(this.fieldTemplates, units) };
   }
 }
 
@@ -25,7 +34,12 @@ export async function api<T>(path: string, init: { method?: string; body?: unkno
   }
   const data = await res.json().catch(() => undefined);
   if (!res.ok) {
-    throw new ApiError(res.status, data?.error?.message ?? `The server answered ${res.status}.`, data?.error?.fields);
+    throw new ApiError(
+      res.status,
+      data?.error?.message ?? `The server answered ${res.status}.`,
+      data?.error?.fields,
+      data?.error?.fieldTemplates,
+    );
   }
   return data as T;
 }

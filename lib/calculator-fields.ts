@@ -1,7 +1,7 @@
 import type { CalcQuantity, CalculatorKind } from "../rules/calculators";
 import { GATING_POSITIONS, PROCESSES } from "../rules/case";
 import { GATING_RATIOS } from "../rules/calculators/gating";
-import { fromField, fromSi, toField, unitLabel, type Quantity, type Units } from "./units";
+import { fromField, readingNumber, takesInchFractions, toField, unitLabel, type Quantity, type Units } from "./units";
 
 /** What each calculator asks for, in the order a caster has the figures to hand. */
 export type CalcField =
@@ -164,6 +164,8 @@ export function calcUnit(q: CalcQuantity, u: Units): string {
   const p = PERSON_UNITS[q];
   return p ? unitLabel(p, u) : SI_LABELS[q];
 }
+/** A length in inches takes fractions (1 1/2), and so a keyboard with / and a space. */
+export const calcTakesFractions = (q: CalcQuantity, u: Units) => takesInchFractions(PERSON_UNITS[q] ?? null, u);
 export function calcToField(q: CalcQuantity, si: number | undefined, u: Units): string {
   const p = PERSON_UNITS[q];
   if (si === undefined || !Number.isFinite(si)) return "";
@@ -176,14 +178,10 @@ export function calcFromField(q: CalcQuantity, text: string, u: Units): number |
   if (t === "") return undefined;
   return Number.isFinite(Number(t)) ? Number(t) : Number.NaN;
 }
-/** A result for reading: "760 °C", "5.65 kg", "0.75 cm³/100 g". */
+/** A result for reading, rounded as a caster writes it (lib/units.ts): "760 °C", "5.9 in", "12.5 lb", "0.75 cm³/100 g". */
 export function calcFormat(q: CalcQuantity, si: number, u: Units): string {
   const p = PERSON_UNITS[q];
-  if (p) {
-    const v = fromSi(p, si, u);
-    const digits = p.startsWith("temperature") ? 0 : Math.abs(v) < 10 ? 2 : 1;
-    return `${Number(v.toFixed(digits))} ${unitLabel(p, u)}`;
-  }
+  if (p) return `${readingNumber(p, si, u)} ${unitLabel(p, u)}`;
   return `${Number(si.toPrecision(3))} ${SI_LABELS[q]}`;
 }
 

@@ -19,8 +19,8 @@ export const calculatorInputSchemas = {
     alloy,
     process: z.enum(PROCESSES, { error: "choose a process" }),
     minSectionMm: positive("the thinnest section").optional(),
-    plannedPourC: z.number({ error: "the planned temperature is a number" }).max(1400, "at most 1400 °C").optional(),
-    transferLossC: z.number({ error: "the transfer loss is a number" }).min(0, "0 or more").max(300, "at most 300 °C"),
+    plannedPourC: z.number({ error: "the planned temperature is a number" }).max(1400, "at most {1400 °C}").optional(),
+    transferLossC: z.number({ error: "the transfer loss is a number" }).min(0, "0 or more").max(300, "at most {300 K}"),
   }),
   metal: z.strictObject({
     alloy,
@@ -62,7 +62,7 @@ export const calculatorInputSchemas = {
   }),
   hydrogen: z.strictObject({
     alloy,
-    meltTempC: z.number({ error: "the melt temperature is a number" }).max(1400, "at most 1400 °C"),
+    meltTempC: z.number({ error: "the melt temperature is a number" }).max(1400, "at most {1400 °C}"),
     humidityPct: pct("the humidity").optional(),
     airTempC: z.number({ error: "the air temperature is a number" }).min(-40).max(50).optional(),
   }),

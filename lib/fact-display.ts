@@ -3,19 +3,19 @@ import { formatValue, type Quantity, type Units } from "./units";
 
 /** Units of the quantities that no person's choice changes. */
 const FIXED: Partial<Record<FactQuantity, string>> = {
-  velocity: "m/s",
   time: "s",
   minutes: "min",
   percent: "%",
   hydrogen: "cm³ per 100 g",
   pressure: "kPa",
-  area: "mm²",
 };
 const CONVERTED: Partial<Record<FactQuantity, Quantity>> = {
   temperature: "temperature",
   "temperature-difference": "temperature-difference",
   length: "length",
   density: "density",
+  velocity: "velocity",
+  area: "area",
 };
 
 /** A derived fact as a person reads it: its label and its value in their units ("superheat at pouring: 171 °F"). */

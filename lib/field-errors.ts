@@ -1,16 +1,17 @@
 import type { z } from "zod";
+import { textInUnits } from "./quantity-words";
+import { SI_UNITS, type Units } from "./units";
 
 type Issue = Pick<z.core.$ZodIssue, "path" | "message">;
+type Options = { topLevel?: boolean };
 
 /**
  * The one mapping from zod's issues to a message per field, used by the server's 400 answers and by
  * every form. Keys are dotted paths as the server names them ("conditions.0.fact"); `topLevel` keys a
  * form's flat fields by the first segment instead. The first issue of a field wins; "_" is the whole input.
+ * Messages are templates: a limit is a quantity in braces ("above {1700 °C}", rules/quantity-text.ts).
  */
-export function fieldErrors(
-  issues: z.ZodError | readonly Issue[],
-  { topLevel = false }: { topLevel?: boolean } = {},
-): Record<string, string> {
+export function fieldMessages(issues: z.ZodError | readonly Issue[], { topLevel = false }: Options = {}) {
   const list = "issues" in issues ? issues.issues : issues;
   const out: Record<string, string> = {};
   for (const i of list) {
@@ -18,4 +19,16 @@ export function fieldErrors(
     out[key] ??= i.message;
   }
   return out;
+}
+
+/** Field messages with their limits in the person's units (SI when none are given). */
+export const messagesInUnits = (messages: Record<string, string>, units: Units = SI_UNITS) =>
+  Object.fromEntries(Object.entries(messages).map(([k, m]) => [k, textInUnits(m, units)]));
+
+/** What a form shows: one message per field, its limits in the person's units. */
+export function fieldErrors(
+  issues: z.ZodError | readonly Issue[],
+  { units, ...options }: Options & { units?: Units } = {},
+): Record<string, string> {
+  return messagesInUnits(fieldMessages(issues, options), units);
 }

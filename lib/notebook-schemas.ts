@@ -9,6 +9,8 @@ import { calendarDate, requiredText, rowId, text } from "./fields";
 /**
  * The notebook's input schemas and answer shapes (docs/notebook-api.md), shared by the forms and the
  * API. Values are SI: °C, mm, kg/m³, s, %. Bundled into the web app: keep server-only imports out.
+ * Limits in messages are quantities in braces ("above {1700 °C}", rules/quantity-text.ts): the server
+ * answers them in SI and as templates, and a form says them in the person's units (lib/field-errors.ts).
  * Optional fields accept null so a form can clear them on PATCH.
  */
 const list = (values: readonly string[]) => values.join(", ");
@@ -17,8 +19,8 @@ const isNum = (v: unknown): v is number => typeof v === "number" && Number.isFin
 /** Cross-field checks run even when a single field is already wrong, so a form shows every problem at once. */
 const always = { when: (p: { value: unknown }) => typeof p.value === "object" && p.value !== null };
 /** The scale tops out at 1,700 °C, as the diagnosis does: iron pours at 1,300-1,450 °C (docs/gating-and-copper-facts.md "Iron"). */
-const tempC = z.number().gt(0, "must be above 0 °C").max(1700, "above 1,700 °C");
-const sectionMm = z.number().positive("must be above 0 mm").max(5000, "above 5 m");
+const tempC = z.number().gt(0, "must be above {0 °C}").max(1700, "above {1700 °C}");
+const sectionMm = z.number().positive("must be above {0 mm}").max(5000, "above {5000 mm}");
 
 export const alloyInput = z
   .object({
@@ -26,7 +28,7 @@ export const alloyInput = z
     family: z.enum(ALLOY_FAMILIES, { error: `family must be one of: ${list(ALLOY_FAMILIES)}` }),
     solidusC: tempC,
     liquidusC: tempC,
-    densityKgM3: z.number().min(1000, "below 1,000 kg/m³").max(20000, "above 20,000 kg/m³"),
+    densityKgM3: z.number().min(1000, "below {1000 kg/m³}").max(20000, "above {20000 kg/m³}"),
     shrinkAllowancePct: z.number().min(0, "cannot be negative").max(5, "above 5 %"),
     siliconPct: opt(z.number().min(0, "cannot be negative").max(30, "above 30 %")),
     sources: requiredText("say where the figures come from (or 'shop measurement')", 1000),
@@ -46,13 +48,13 @@ export const meltFields = z.object({
   degasMinutes: opt(z.number().min(0, "cannot be negative").max(240, "above 4 hours")),
   fluxed: opt(z.boolean()),
   skimmed: opt(z.boolean()),
-  ambientTempC: opt(z.number().min(-40, "below -40 °C").max(60, "above 60 °C")),
+  ambientTempC: opt(z.number().min(-40, "below {-40 °C}").max(60, "above {60 °C}")),
   humidityPct: opt(z.number().min(0, "0 to 100 %").max(100, "0 to 100 %")),
   sandMoisturePct: opt(z.number().min(0, "0 to 100 %").max(100, "0 to 100 %")),
   coatingApplied: opt(z.boolean()),
   coatingDried: opt(z.boolean()),
   coatingCoats: opt(z.number().int("whole coats").min(0, "cannot be negative").max(20)),
-  foamDensityKgM3: opt(z.number().positive("must be above 0 kg/m³").max(200, "above 200 kg/m³")),
+  foamDensityKgM3: opt(z.number().positive("must be above {0 kg/m³}").max(200, "above {200 kg/m³}")),
   ...meltConditionFields,
   notes: opt(text(4000)),
 });
@@ -75,9 +77,9 @@ export function meltConflicts(m: MeltLike): Record<string, string> {
 export function alloyConflicts(m: MeltLike, alloy: { designation: string; solidusC: number }): Record<string, string> {
   const out: Record<string, string> = {};
   if (isNum(m.pourTempC) && m.pourTempC <= alloy.solidusC)
-    out.pourTempC = `at or below ${alloy.designation}'s solidus (${alloy.solidusC} °C): the metal would be solid`;
+    out.pourTempC = `at or below ${alloy.designation}'s solidus ({${alloy.solidusC} °C}): the metal would be solid`;
   if (isNum(m.meltTempC) && m.meltTempC <= alloy.solidusC)
-    out.meltTempC = `at or below ${alloy.designation}'s solidus (${alloy.solidusC} °C): it never melted`;
+    out.meltTempC = `at or below ${alloy.designation}'s solidus ({${alloy.solidusC} °C}): it never melted`;
   return out;
 }
 

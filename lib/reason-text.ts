@@ -1,6 +1,8 @@
 import { factSpec } from "../rules/fact-catalog";
+import { FACT_PLACEHOLDER } from "../rules/quantity-text";
 import type { Reason } from "../rules/rank";
-import { fromSi, unitLabel, type Quantity, type Units } from "./units";
+import { textInUnits } from "./quantity-words";
+import { readingNumber, unitLabel, type Quantity, type Units } from "./units";
 
 /** Fact quantities a person may see in their own units, with the SI unit the rule texts write after them. */
 const SI_TOKEN: Partial<Record<Quantity, string>> = {
@@ -8,6 +10,8 @@ const SI_TOKEN: Partial<Record<Quantity, string>> = {
   "temperature-difference": "°C",
   length: "mm",
   density: "kg/m³",
+  velocity: "m/s",
+  area: "mm²",
 };
 
 function quantityOf(name: string): Quantity | undefined {
@@ -16,31 +20,45 @@ function quantityOf(name: string): Quantity | undefined {
   return q && q in SI_TOKEN ? (q as Quantity) : undefined;
 }
 
-const decimals = (q: Quantity, u: Units) =>
-  q === "length" && u.length === "in" ? 2 : q === "density" && u.mass === "lb" ? 2 : 0;
-
 function plain(value: Reason["values"][string]): string {
   if (value === null || value === undefined) return "unknown";
   if (typeof value === "boolean") return value ? "yes" : "no";
   return typeof value === "string" ? value.replace(/-/g, " ") : String(value);
 }
 
+const PLACEHOLDER_AND_UNIT = new RegExp(`${FACT_PLACEHOLDER.source}(\\s*)(°C|mm²|mm|kg/m³|m/s)?`, "g");
+
 /**
- * A rule's reason in the person's units: each quoted temperature, size or density is converted, and the
- * SI unit written right after it in the rule's sentence is swapped for theirs ("{pourTempC} °C" -> "1373 °F").
+ * A rule's reason in the person's units: the figures the rule's author wrote ({3-4 mm}) and each quoted
+ * temperature, size, density or velocity are converted, and the SI unit written right after a quoted
+ * value is swapped for theirs ("{pourTempC} °C" -> "1373 °F"). SI values stay as the engine rounded them.
  */
 export function reasonInUnits(reason: Reason, units: Units): string {
-  const text = reason.template.replace(
-    /\{([^}]+)\}(\s*)(°C|mm|kg\/m³)?/g,
+  const text = textInUnits(reason.template, units).replace(
+    PLACEHOLDER_AND_UNIT,
     (whole, name: string, gap: string, token?: string) => {
       const value = reason.values[name];
       const q = quantityOf(name);
       if (!q || typeof value !== "number") return plain(value) + gap + (token ?? "");
-      const inSi = unitLabel(q, units) === SI_TOKEN[q] || (q === "density" && units.mass === "kg");
-      const shown = inSi ? value : Number(fromSi(q, value, units).toFixed(decimals(q, units)));
+      const inSi = unitLabel(q, units) === SI_TOKEN[q];
+      const shown = inSi ? value : readingNumber(q, value, units);
       const unit = token && token === SI_TOKEN[q] ? unitLabel(q, units) : token;
       return String(shown) + gap + (unit ?? "");
     },
   );
   return reason.against ? `Against: ${text}` : text;
+}
+
+/**
+ * A rule's reason as its template, for the rulebook: figures in the reader's units and the unit after
+ * each placeholder swapped to theirs ("{minSectionMm} in, under the 0.12-0.16 in"), placeholders kept.
+ */
+export function reasonTemplateInUnits(template: string, units: Units): string {
+  return textInUnits(template, units).replace(
+    PLACEHOLDER_AND_UNIT,
+    (whole, name: string, gap: string, token?: string) => {
+      const q = quantityOf(name);
+      return q && token && token === SI_TOKEN[q] ? `{${name}}${gap}${unitLabel(q, units)}` : whole;
+    },
+  );
 }

@@ -3,8 +3,8 @@ import { SI_UNIT, type NumberFact, type ValueFormat } from "../rules/rule-words"
 import { fromField, toField, unitLabel, type Quantity, type Units } from "./units";
 
 /**
- * The rule form's numbers in the person's units (lib/units.ts). Temperatures, lengths and densities
- * follow the person's choice; velocities, times, percentages and the rest have one unit for
+ * The rule form's numbers in the person's units (lib/units.ts). Temperatures, lengths, densities,
+ * velocities and areas follow the person's choice; times, percentages and the rest have one unit for
  * everyone and stay as the rules store them.
  */
 const CONVERTED: Partial<Record<FactQuantity, Quantity>> = {
@@ -12,6 +12,8 @@ const CONVERTED: Partial<Record<FactQuantity, Quantity>> = {
   "temperature-difference": "temperature-difference",
   length: "length",
   density: "density",
+  velocity: "velocity",
+  area: "area",
 };
 
 export const factUnit = (spec: NumberFact, u: Units) => {

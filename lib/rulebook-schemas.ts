@@ -1,3 +1,4 @@
+import { FACT_PLACEHOLDER, strayBraces } from "../rules/quantity-text";
 import { z } from "zod";
 import { DEFECT_LOCATIONS, DEFECT_TYPES, type DefectLocation, type DefectType } from "../rules/case";
 import { FACTS, factSpec, type FactSpec } from "../rules/fact-catalog";
@@ -109,8 +110,8 @@ export const ruleDraftInput = z.object({
     .gt(0, "weight must be above 0")
     .lte(1, "weight is at most 1"),
   because: line("say in a sentence why", 500).refine(
-    (s) => [...s.matchAll(/\{([^}]*)\}/g)].every(([, name]) => factSpec(name)),
-    "text in {braces} must be a fact name; leave braces out",
+    (s) => [...s.matchAll(FACT_PLACEHOLDER)].every(([, name]) => factSpec(name)) && strayBraces(s).length === 0,
+    "text in braces must be a fact name, or a figure and its SI unit (3-4 mm, 730 °C)",
   ),
   sources: z
     .array(line("write the source or remove the line", 300))
@@ -220,7 +221,8 @@ export type RuleRow = {
   record: RuleRecord | null;
   factor: number;
 };
-export type CauseOption = { id: string; title: string; fixes: string[]; shop: boolean };
+/** `fixes` in SI words; `fixTemplates` with their quantities in braces, for lib/quantity-words.ts. */
+export type CauseOption = { id: string; title: string; fixes: string[]; fixTemplates?: string[]; shop: boolean };
 export type Rulebook = { rules: RuleRow[]; causes: CauseOption[]; confirmedCases: number };
 export type RuleVersion = {
   version: number;
@@ -232,6 +234,7 @@ export type RuleVersion = {
 export type RuleSwitch = { off: boolean; createdBy: PersonRef | null; createdAt: string };
 export type RuleDetail = RuleRow & {
   rule: KbRule;
+  /** The cause's fixes as templates (quantities in braces): say them with lib/quantity-words.ts. */
   causeFixes: string[];
   sources: string[];
   versions: RuleVersion[];

@@ -5,7 +5,7 @@ import { calendarDate, text } from "./fields";
 import { DEGASSING_LABELS, PROCESS_LABELS } from "./labels";
 import type { Outcome, PersonRef } from "./notebook-schemas";
 import type { Worked } from "./review-schemas";
-import { fromSi, SI_UNITS, unitLabel, type Units } from "./units";
+import { fromSi, readingNumber, SI_UNITS, unitLabel, type Units } from "./units";
 
 /**
  * The casebook search (GET /api/search) and "cases like this one" (GET /api/search/castings/:id/similar):
@@ -173,8 +173,7 @@ export function reasonText(parts: ReasonPart[], units: Units = SI_UNITS): string
           ? "not degassed either"
           : `${DEGASSING_LABELS[p.method as keyof typeof DEGASSING_LABELS] ?? p.method} degassing`;
       case "section": {
-        const mm = fromSi("length", p.minSectionMm, units);
-        return `similar ${Number(mm.toFixed(units.length === "in" ? 2 : 0))} ${units.length} section`;
+        return `similar ${readingNumber("length", p.minSectionMm, units)} ${unitLabel("length", units)} section`;
       }
     }
   };

@@ -1,5 +1,7 @@
 import { z } from "zod";
 import { PROCESSES } from "../rules/case";
+import { textInUnits } from "./quantity-words";
+import type { Units } from "./units";
 
 const day = z.iso.date({ error: "a date as YYYY-MM-DD" });
 
@@ -40,3 +42,13 @@ export type Trends = {
 
 /** Superheat bands in °C (pour − liquidus); below 40 °C misruns rise in thin walls (common practice). */
 export const SUPERHEAT_BANDS_C = [40, 60, 100] as const;
+/** The bands as the server names them (server/trends/service.ts), and as templates for a person's units. */
+const SUPERHEAT_BAND_TEMPLATES: Record<string, string> = {
+  "under 40 °C": "under {40 K}",
+  "40-60 °C": "{40-60 K}",
+  "60-100 °C": "{60-100 K}",
+  "100 °C and over": "{100 K} and over",
+};
+/** "40-60 °C" -> "72-108 °F" for a °F person: a superheat is a difference, so no +32. */
+export const superheatBandInUnits = (key: string, units: Units) =>
+  SUPERHEAT_BAND_TEMPLATES[key] ? textInUnits(SUPERHEAT_BAND_TEMPLATES[key], units) : key;

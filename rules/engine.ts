@@ -156,7 +156,7 @@ export async function diagnose(c: DiagnosisCase, options: DiagnoseOptions = {}):
   return {
     causes,
     facts: displayFacts(facts),
-    cautions: safetyCautions(
+    ...safetyCautions(
       c,
       facts,
       causes.slice(0, 3).flatMap((x) => causeCautionsFor(compiled.causes.get(x.id)!, facts)),

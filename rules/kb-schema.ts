@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { DEFECT_LOCATIONS, DEFECT_TYPES } from "./case";
 import { factSpec, METALS, type FactSpec } from "./fact-catalog";
+import { FACT_PLACEHOLDER, strayBraces } from "./quantity-text";
 
 /**
  * The rule file format (rules/kb/<family>.json) and its load-time checks. A rule that would
@@ -26,15 +27,19 @@ const topConditionSchema = z.union([
 ]);
 
 const text = z.string().trim().min(1);
+/** A fix or caution: its figures are quantities in braces (rules/quantity-text.ts), and nothing else is. */
+const sentence = text.refine((t) => strayBraces(t).length === 0 && t.search(FACT_PLACEHOLDER) < 0, {
+  message: "braces hold only a quantity such as {730-790 °C}, {20-30 K} or {4 mm}",
+});
 export const causeSchema = z.strictObject({
   id: z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, "ids are lower-case words joined by hyphens"),
   title: text,
   /** Fixes for every metal: they name no metal. */
-  fixes: z.array(text).min(1, "a cause needs at least one fix"),
-  cautions: z.array(text).optional(),
+  fixes: z.array(sentence).min(1, "a cause needs at least one fix"),
+  cautions: z.array(sentence).optional(),
   /** Practice that belongs to one metal (aluminium, copper, iron): shown only for cases of that metal. */
-  fixesByMetal: z.partialRecord(z.enum(METALS), z.array(text).min(1)).optional(),
-  cautionsByMetal: z.partialRecord(z.enum(METALS), z.array(text).min(1)).optional(),
+  fixesByMetal: z.partialRecord(z.enum(METALS), z.array(sentence).min(1)).optional(),
+  cautionsByMetal: z.partialRecord(z.enum(METALS), z.array(sentence).min(1)).optional(),
 });
 export const ruleSchema = z.strictObject({
   id: z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, "ids are lower-case words joined by hyphens"),
@@ -145,8 +150,10 @@ export function checkRule(rule: KbRule, causeIds: ReadonlySet<string>): string[]
   const out: string[] = [];
   checkCondition(rule.conditions, "conditions", out);
   if (!causeIds.has(rule.cause)) out.push(`cause: "${rule.cause}" is not a defined cause id`);
-  for (const [, name] of rule.because.matchAll(/\{([^}]*)\}/g))
+  for (const [, name] of rule.because.matchAll(FACT_PLACEHOLDER))
     if (!factSpec(name)) out.push(`because: placeholder {${name}} is not a fact name`);
+  for (const stray of strayBraces(rule.because))
+    out.push(`because: ${stray} is neither a fact name nor a quantity such as {3-4 mm}`);
   return out.map((p) => `rule "${rule.id}" ${p}`);
 }
 

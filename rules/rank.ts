@@ -1,6 +1,7 @@
 import { FACTS, factSpec, type Facts, type METALS } from "./fact-catalog";
 import { roundFact } from "./facts";
 import { conditionLeaves, evaluateLeaf, type Condition, type KbCause, type KbRule } from "./kb-schema";
+import { FACT_PLACEHOLDER, siText } from "./quantity-text";
 
 /**
  * A reason as data as well as words: the rule's sentence template and the (rounded, SI) values of the
@@ -11,7 +12,9 @@ export type RankedCause = {
   id: string;
   title: string;
   score: number;
+  /** The fixes in SI words; `fixTemplates` the same sentences with their quantities in braces (rules/quantity-text.ts). */
   fixes: string[];
+  fixTemplates: string[];
   because: string[];
   reasons: Reason[];
   sources: string[];
@@ -21,6 +24,8 @@ export type DiagnosisResult = {
   causes: RankedCause[];
   facts: Record<string, number | boolean | string>;
   cautions: string[];
+  /** The cautions with their quantities in braces, for saying them in a person's units. */
+  cautionTemplates: string[];
   missing: MissingInput[];
   /** What a caster should know about the answer itself (an alloy diagnosed by its family, causes by prior). */
   notes: string[];
@@ -39,11 +44,11 @@ const display = (name: string, facts: Facts) => {
   return typeof v === "string" ? v.replace(/-/g, " ") : String(v);
 };
 export const fillBecause = (template: string, facts: Facts) =>
-  template.replace(/\{([^}]+)\}/g, (_, name: string) => display(name, facts));
+  siText(template).replace(FACT_PLACEHOLDER, (_, name: string) => display(name, facts));
 
 const reasonOf = (template: string, against: boolean, facts: Facts): Reason => {
   const values: Reason["values"] = {};
-  for (const [, name] of template.matchAll(/\{([^}]+)\}/g)) values[name] = roundFact(name, facts[name]) ?? null;
+  for (const [, name] of template.matchAll(FACT_PLACEHOLDER)) values[name] = roundFact(name, facts[name]) ?? null;
   return { template, against, values };
 };
 
@@ -75,7 +80,7 @@ export function rankCauses(
       id,
       title: cause.title,
       score,
-      fixes: fixesFor(cause, facts),
+      ...fixesOf(cause, facts),
       because: [
         ...pro.map((h) => fillBecause(h.rule.because, facts)),
         ...con.map((h) => `Against: ${fillBecause(h.rule.because, facts)}`),
@@ -92,6 +97,12 @@ export function rankCauses(
 
 type Metal = (typeof METALS)[number];
 const metalOfFacts = (facts: Facts) => facts.metal as Metal | undefined;
+
+/** The fixes in SI words and as templates. */
+const fixesOf = (cause: KbCause, facts: Facts) => {
+  const fixTemplates = fixesFor(cause, facts);
+  return { fixes: fixTemplates.map(siText), fixTemplates };
+};
 
 /** A cause's fixes for this case: the general ones, then those of the case's metal only. */
 export const fixesFor = (cause: KbCause, facts: Facts) => {
@@ -137,7 +148,7 @@ export function priorCauses(
         id,
         title: cause.title,
         score: Math.round(p * PRIOR_SCALE * 1000) / 1000,
-        fixes: fixesFor(cause, facts),
+        ...fixesOf(cause, facts),
         because: [
           "Ranked by how often this cause lies behind the defect in this process and metal; nothing logged decides it",
         ],

@@ -1,10 +1,12 @@
 import type { DiagnosisCase } from "./case";
 import type { Facts } from "./fact-catalog";
+import { siText } from "./quantity-text";
 
 /**
  * Cautions around melting and pouring, by alloy and practice. Each names the source family it rests on
  * (docs/gating-and-copper-facts.md "Safety" lists the figures and their tags) and none replaces local
  * codes, the suppliers' safety data sheets (SDS) or trained practice: DEFER says so, always last.
+ * Figures are quantities in braces (rules/quantity-text.ts), so each person reads them in their units.
  */
 export type Caution = { id: string; text: string; source: string };
 
@@ -33,7 +35,7 @@ export const CAUTIONS = {
   ),
   zincFume: c(
     "zinc-fume",
-    "Brass and other zinc-bearing alloys give off zinc oxide fume, worst when overheated (zinc boils near 907 °C, below brass pouring heat): it causes metal fume fever hours later. Melt with local exhaust or outdoors and keep the melt no hotter than needed.",
+    "Brass and other zinc-bearing alloys give off zinc oxide fume, worst when overheated (zinc boils near {907 °C}, below brass pouring heat): it causes metal fume fever hours later. Melt with local exhaust or outdoors and keep the melt no hotter than needed.",
     "OSHA and NIOSH exposure limits for zinc oxide fume (5 mg/m³); metal fume fever literature",
   ),
   lead: c(
@@ -83,7 +85,7 @@ export const CAUTIONS = {
   ),
 } as const;
 
-/** The same list as plain sentences, for the pouring screens (source in brackets). */
+/** The same list as sentence templates, for the pouring screens (source in brackets). */
 export const GENERAL_CAUTIONS = [CAUTIONS.steam, CAUTIONS.ppe, CAUTIONS.inertGas, CAUTIONS.foam, CAUTIONS.defer].map(
   (x) => (x.id === "defer" ? x.text : `${x.text} (${x.source})`),
 );
@@ -92,8 +94,20 @@ export const GENERAL_CAUTIONS = [CAUTIONS.steam, CAUTIONS.ppe, CAUTIONS.inertGas
 const LEADED = new Set(["C83600", "C84400", "C85700", "C92200", "C93200"]);
 const ZINC_BEARING = new Set(["red-brass", "yellow-brass", "manganese-bronze", "tin-bronze", "copper-base"]);
 
-/** The cautions for one case: the top causes' own, then those of its alloy and practice, ending with the deferral. */
-export function safetyCautions(c: DiagnosisCase, facts: Facts, causeCautions: string[]): string[] {
+/**
+ * The cautions for one case: the top causes' own, then those of its alloy and practice, ending with the
+ * deferral; in SI words and as templates (the same order).
+ */
+export function safetyCautions(
+  c: DiagnosisCase,
+  facts: Facts,
+  causeCautions: string[],
+): { cautions: string[]; cautionTemplates: string[] } {
+  const cautionTemplates = pickCautions(c, facts, causeCautions);
+  return { cautions: cautionTemplates.map(siText), cautionTemplates };
+}
+
+function pickCautions(c: DiagnosisCase, facts: Facts, causeCautions: string[]): string[] {
   const family = String(facts.alloyFamily);
   const designation = c.alloy.trim().toUpperCase();
   const picked: Caution[] = [CAUTIONS.steam, CAUTIONS.ppe];

@@ -11,8 +11,16 @@ import { useSaveCalculation, type CalcTarget } from "@/hooks/use-calculations";
 import { useAlloys } from "@/hooks/use-melts";
 import { useUnits } from "@/hooks/use-units";
 import { ApiError } from "@/lib/api";
-import { CALCULATOR_FIELDS, CALCULATOR_TITLES, calcFromField, calcToField, calcUnit } from "@/lib/calculator-fields";
+import {
+  CALCULATOR_FIELDS,
+  CALCULATOR_TITLES,
+  calcFromField,
+  calcTakesFractions,
+  calcToField,
+  calcUnit,
+} from "@/lib/calculator-fields";
 import { calculatorInputSchemas } from "@/lib/calculator-schemas";
+import { fieldErrors } from "@/lib/field-errors";
 import { CalcInputError, needsAlloy, runCalculator, type CalcResult, type CalculatorKind } from "@/rules/calculators";
 
 type Props = { kind: CalculatorKind; prefill: Record<string, string>; target: CalcTarget; targetLabel?: string };
@@ -44,7 +52,7 @@ export function CalculatorForm({ kind, prefill, target, targetLabel }: Props) {
     }
     const parsed = calculatorInputSchemas[kind].safeParse(raw);
     if (!parsed.success) {
-      setErrors(Object.fromEntries(parsed.error.issues.map((i) => [String(i.path[0] ?? "_"), i.message])));
+      setErrors(fieldErrors(parsed.error, { topLevel: true, units }));
       setResult(undefined);
       return;
     }
@@ -71,6 +79,9 @@ export function CalculatorForm({ kind, prefill, target, targetLabel }: Props) {
             key={f.key}
             label={f.label}
             unit={calcUnit(f.quantity, units)}
+            fractions={calcTakesFractions(f.quantity, units)}
+            // Only the air can be below zero.
+            signed={f.key === "airTempC"}
             value={text[f.key]}
             onChangeText={(t) => setText({ ...text, [f.key]: t })}
             error={errors[f.key]}
@@ -110,7 +121,11 @@ export function CalculatorForm({ kind, prefill, target, targetLabel }: Props) {
         )
       ) : null}
       {saveError ? (
-        <Notice tone="error">{[saveError.message, ...Object.values(saveError.fields ?? {})].join(" ")}</Notice>
+        <Notice tone="error">
+          {[saveError.message, ...Object.values(saveError instanceof ApiError ? saveError.fieldsIn(units) : {})].join(
+            " ",
+          )}
+        </Notice>
       ) : null}
     </View>
   );

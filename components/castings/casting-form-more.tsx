@@ -5,7 +5,7 @@ import { TextField } from "@/components/ui/text-field";
 import { YesNoChips } from "@/components/ui/yes-no-chips";
 import type { CastingDraft } from "@/hooks/use-casting-draft";
 import { CASTING_CONDITIONS } from "@/lib/condition-fields";
-import { unitLabel, type Units } from "@/lib/units";
+import { takesInchFractions, unitLabel, type Units } from "@/lib/units";
 
 type Props = {
   draft: CastingDraft;
@@ -22,6 +22,7 @@ export function CastingMore({ draft, set, errors, units }: Props) {
         <NumberField
           label="Sprue height"
           unit={unitLabel("length", units)}
+          fractions={takesInchFractions("length", units)}
           value={draft.sprueHeightMm}
           onChangeText={(v) => set("sprueHeightMm", v)}
           error={errors.sprueHeightMm}

@@ -18,7 +18,7 @@ const isWaiting = (a: unknown) => typeof a === "object" && a !== null && "waitin
 import { ApiError } from "@/lib/api";
 import { OUTCOME_LABELS } from "@/lib/labels";
 import type { CastingInput } from "@/lib/notebook-schemas";
-import { unitLabel, type Units } from "@/lib/units";
+import { takesInchFractions, unitLabel, type Units } from "@/lib/units";
 
 type Props = {
   initial?: CastingInitial;
@@ -55,6 +55,7 @@ export function CastingForm({
   const [failure, setFailure] = useState<string>();
   const [saved, setSaved] = useState<string>();
   const mm = unitLabel("length", units);
+  const inches = takesInchFractions("length", units);
 
   async function submit() {
     const saveId = isNew ? (draft.saveId ?? newSaveId()) : undefined;
@@ -77,7 +78,7 @@ export function CastingForm({
         next();
       }
     } catch (e) {
-      if (e instanceof ApiError && Object.keys(e.fields).length) setErrors(e.fields);
+      if (e instanceof ApiError && Object.keys(e.fields).length) setErrors(e.fieldsIn(units));
       setFailure(e instanceof Error ? e.message : String(e));
     } finally {
       setBusy(false);
@@ -100,6 +101,7 @@ export function CastingForm({
         <NumberField
           label="Thinnest section"
           unit={mm}
+          fractions={inches}
           value={draft.minSectionMm}
           onChangeText={(v) => set("minSectionMm", v)}
           error={errors.minSectionMm}
@@ -107,6 +109,7 @@ export function CastingForm({
         <NumberField
           label="Thickest section"
           unit={mm}
+          fractions={inches}
           value={draft.maxSectionMm}
           onChangeText={(v) => set("maxSectionMm", v)}
           error={errors.maxSectionMm}

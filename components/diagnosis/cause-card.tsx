@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, Text, View } from "react-native";
 import { CauseRecordLine } from "@/components/rulebook/rule-record";
 import { ScoreBar } from "@/components/ui/score-bar";
 import { card, colors, fontSize, space } from "@/constants/theme";
+import { fixesInUnits } from "@/lib/quantity-words";
 import { reasonInUnits } from "@/lib/reason-text";
 import type { CauseWithRecord } from "@/lib/review-schemas";
 import type { Units } from "@/lib/units";
@@ -22,6 +23,8 @@ type Props = {
 /** One likely cause: how strongly it is pointed at, the fixes to try (tick the ones to try), and why. */
 export function CauseCard({ cause, rank, units, ticked, onTick }: Props) {
   const [why, setWhy] = useState(false);
+  // A tick is kept by the fix's own (SI) text, so it holds whichever units the person reads it in.
+  const shown = fixesInUnits(cause, units);
 
   return (
     <View style={styles.card} testID={`cause-${rank}`}>
@@ -36,12 +39,12 @@ export function CauseCard({ cause, rank, units, ticked, onTick }: Props) {
           {onTick ? "(tick the ones to try: they are kept with the casting and offered when you record a fix)" : ""}
         </Text>
       </Text>
-      {cause.fixes.map((f) => (
+      {cause.fixes.map((f, i) => (
         <Pressable
           key={f}
           role="checkbox"
           aria-checked={ticked.has(f)}
-          aria-label={f}
+          aria-label={shown[i] ?? f}
           disabled={!onTick}
           onPress={() => onTick?.(f, !ticked.has(f))}
           style={styles.fix}
@@ -49,7 +52,7 @@ export function CauseCard({ cause, rank, units, ticked, onTick }: Props) {
           <View style={[styles.box, ticked.has(f) && styles.boxOn]}>
             {ticked.has(f) ? <Text style={styles.tick}>✓</Text> : null}
           </View>
-          <Text style={styles.fixText}>{f}</Text>
+          <Text style={styles.fixText}>{shown[i] ?? f}</Text>
         </Pressable>
       ))}
       <Pressable role="button" aria-expanded={why} onPress={() => setWhy((w) => !w)}>

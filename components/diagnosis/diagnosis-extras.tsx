@@ -6,6 +6,7 @@ import { Notice } from "@/components/ui/notice";
 import { colors, fontSize, space } from "@/constants/theme";
 import { formatFact } from "@/lib/fact-display";
 import { fieldOfFact } from "@/lib/fact-fields";
+import { textInUnits } from "@/lib/quantity-words";
 import type { Units } from "@/lib/units";
 import type { DiagnosisResult } from "@/rules/rank";
 
@@ -65,7 +66,8 @@ export function DiagnosisExtras({ result, units, meltId, castingId }: Props) {
       {result.cautions.length ? (
         <Notice tone="caution">
           <Text style={styles.cautionHead}>Before you change the next pour</Text>
-          {result.cautions.map((c) => (
+          {/* Older saved results carry only the SI sentences. */}
+          {(result.cautionTemplates?.map((t) => textInUnits(t, units)) ?? result.cautions).map((c) => (
             <Text key={c} style={styles.line}>
               • {c}
             </Text>

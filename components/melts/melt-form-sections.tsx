@@ -95,6 +95,7 @@ export function DaySection({ draft, set, errors, units }: SectionProps) {
         <NumberField
           label="Air temperature"
           unit={unitLabel("temperature", units)}
+          signed
           value={draft.ambientTempC}
           onChangeText={(v) => set("ambientTempC", v)}
           error={errors.ambientTempC}

@@ -58,7 +58,7 @@ export function MeltForm({ initial, units, submitLabel, onSubmit, draftName, isN
       await discard();
     } catch (e) {
       // The server checks again (the alloy table may have changed): its field messages land by the fields.
-      if (e instanceof ApiError && Object.keys(e.fields).length) setErrors(e.fields);
+      if (e instanceof ApiError && Object.keys(e.fields).length) setErrors(e.fieldsIn(units));
       // (The server words a whole-melt refusal as its message, so the notice below says it.)
       setFailure(e instanceof Error ? e.message : String(e));
     } finally {

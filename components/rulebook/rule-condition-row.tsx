@@ -25,6 +25,12 @@ type Props = {
 export function RuleConditionRow({ index, row, units, errors, onChange, onRemove }: Props) {
   const spec = factSpec(row.fact);
   const unit = spec?.kind === "number" ? factUnit(spec, units) : undefined;
+  const number = spec?.kind === "number" ? spec : undefined;
+  // Inches take fractions (1 1/2); air temperatures and differences (superheat) can be below zero.
+  const keys = {
+    fractions: number?.quantity === "length" && units.length === "in",
+    signed: number?.quantity === "temperature-difference" || row.fact === "ambientTempC",
+  };
   const comparisons = spec ? comparisonsFor(spec).map((c) => ({ value: c, label: COMPARISON_WORDS[c] })) : [];
   return (
     <View style={styles.card} testID={`condition-${index}`}>
@@ -66,6 +72,7 @@ export function RuleConditionRow({ index, row, units, errors, onChange, onRemove
         <NumberField
           label="Value"
           unit={unit}
+          {...keys}
           value={row.low}
           onChangeText={(low) => onChange({ low })}
           error={errors.value}
@@ -74,8 +81,14 @@ export function RuleConditionRow({ index, row, units, errors, onChange, onRemove
       {spec && row.comparison === "between" ? (
         <>
           <View style={styles.pair}>
-            <NumberField label="From" unit={unit} value={row.low} onChangeText={(low) => onChange({ low })} />
-            <NumberField label="To" unit={unit} value={row.high} onChangeText={(high) => onChange({ high })} />
+            <NumberField label="From" unit={unit} {...keys} value={row.low} onChangeText={(low) => onChange({ low })} />
+            <NumberField
+              label="To"
+              unit={unit}
+              {...keys}
+              value={row.high}
+              onChangeText={(high) => onChange({ high })}
+            />
           </View>
           <FieldError message={errors.value} />
         </>

@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from "express";
-import { fieldErrors } from "../../lib/field-errors";
+import { fieldErrors, fieldMessages, messagesInUnits } from "../../lib/field-errors";
+import { hasQuantities } from "../../rules/quantity-text";
 import { z } from "zod";
 
 /**
@@ -7,12 +8,20 @@ import { z } from "zod";
  * `fields` maps a field path ("pourTempC", "defects.0.type") to what is wrong with it.
  */
 export class HttpError extends Error {
+  /** Per field, in SI words ("above 1,700 °C"). */
+  readonly fields?: Record<string, string>;
+  /** The messages that quote a limit, as templates ("above {1700 °C}"), for the app to say in a person's units. */
+  readonly fieldTemplates?: Record<string, string>;
   constructor(
     readonly status: number,
     message: string,
-    readonly fields?: Record<string, string>,
+    fields?: Record<string, string>,
   ) {
     super(message);
+    if (!fields) return;
+    this.fields = messagesInUnits(fields);
+    const templates = Object.entries(fields).filter(([, m]) => hasQuantities(m));
+    if (templates.length) this.fieldTemplates = Object.fromEntries(templates);
   }
 }
 
@@ -25,9 +34,9 @@ export { fieldErrors };
 export function parseOr400<T extends z.ZodType>(schema: T, data: unknown): z.infer<T> {
   const result = schema.safeParse(data);
   if (!result.success) {
-    const fields = fieldErrors(result.error);
+    const fields = fieldMessages(result.error);
     // A problem with the input as a whole ("_", such as an empty melt) is the message itself.
-    throw new HttpError(400, fields._ ?? "Some values need fixing.", fields);
+    throw new HttpError(400, fields._ ? messagesInUnits({ _: fields._ })._ : "Some values need fixing.", fields);
   }
   return result.data;
 }
@@ -64,7 +73,9 @@ export function isDatabaseUnavailable(err: unknown): boolean {
 
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (err instanceof HttpError) {
-    res.status(err.status).json({ error: { message: err.message, fields: err.fields } });
+    res
+      .status(err.status)
+      .json({ error: { message: err.message, fields: err.fields, fieldTemplates: err.fieldTemplates } });
     return;
   }
   if (isDatabaseUnavailable(err)) {

@@ -1,3 +1,4 @@
+import { siText } from "../../rules/quantity-text";
 import { and, desc, eq, inArray } from "drizzle-orm";
 import { db } from "../db";
 import { ruleSwitches, user } from "../../db/schema";
@@ -54,7 +55,8 @@ export async function rulebook(shopId: string): Promise<Rulebook> {
     causes: l.base.causes.map((c) => ({
       id: c.id,
       title: c.title,
-      fixes: c.fixes,
+      fixes: c.fixes.map(siText),
+      fixTemplates: c.fixes,
       shop: !BUILT_IN_CAUSE_IDS.has(c.id),
     })),
     confirmedCases: l.confirmedCases,

@@ -38,10 +38,14 @@ describe("melts", () => {
     expect(Object.keys(bad.body.error.fields)).toEqual(
       expect.arrayContaining(["pourTempC", "humidityPct", "degasMinutes", "sandMoisturePct", "process"]),
     );
+    // The limit in SI words, and as a template the app says in a person's units.
+    expect(bad.body.error.fields.pourTempC).toBe("above 1,700 °C");
+    expect(bad.body.error.fieldTemplates).toEqual({ pourTempC: "above {1700 °C}" });
     // Below A356.0's solidus (555 °C [mem] ASM Vol. 2): the metal would be solid.
     const solid = await caster.agent.post("/api/melts").send({ ...coldLostFoamMelt, pourTempC: 540, meltTempC: 560 });
     expect(solid.status).toBe(400);
     expect(solid.body.error.fields.pourTempC).toMatch(/solidus/);
+    expect(solid.body.error.fieldTemplates.pourTempC).toMatch(/solidus \(\{\d+(\.\d+)? °C\}\)/);
     const unknown = await caster.agent.post("/api/melts").send({ ...coldLostFoamMelt, alloy: "Unobtainium" });
     expect(unknown.status).toBe(400);
     expect(unknown.body.error.fields.alloy).toMatch(/A356\.0/);

@@ -5,7 +5,7 @@ import { NumberField } from "@/components/ui/number-field";
 
 afterEach(cleanup);
 
-function Controlled(props: { unit?: string; whole?: boolean; error?: string }) {
+function Controlled(props: { unit?: string; whole?: boolean; signed?: boolean; fractions?: boolean; error?: string }) {
   const [value, setValue] = useState("");
   return (
     <>
@@ -31,6 +31,22 @@ describe("NumberField", () => {
     cleanup();
     render(<Controlled whole />);
     expect(screen.getByLabelText("Pour temperature").getAttribute("inputmode")).toBe("numeric");
+  });
+
+  it("asks for a keyboard with a minus, slash and inch mark where iOS's number pads have none", () => {
+    // iOS's decimal and numeric pads lack "-" and "/": signed numbers and inch fractions get the text keyboard.
+    render(<Controlled unit="°F" signed />);
+    const air = screen.getByLabelText("Pour temperature (°F)");
+    expect(air.getAttribute("inputmode")).toBe("text");
+    fireEvent.change(air, { target: { value: "-4" } });
+    expect(screen.getByTestId("echo").textContent).toBe("-4");
+    cleanup();
+    render(<Controlled unit="in" fractions />);
+    const wall = screen.getByLabelText("Pour temperature (in)");
+    expect(wall.getAttribute("inputmode")).toBe("text");
+    expect(wall.getAttribute("placeholder")).toBe("e.g. 1 1/2");
+    fireEvent.change(wall, { target: { value: '1-1/2"' } });
+    expect(screen.getByTestId("echo").textContent).toBe('1-1/2"');
   });
 
   it("shows the error as an alert and marks the box invalid only when there is one", () => {

@@ -230,7 +230,7 @@ describe("the notebook at wide size (1280 px)", () => {
     const whyButtons = page.getByRole("button", { name: /Why this cause/ });
     await expect.poll(() => whyButtons.count(), { timeout: 10000 }).toBeGreaterThan(0);
     while ((await whyButtons.count()) > 0) await whyButtons.first().click();
-    // Only the reasons inside the cause cards; fixes and cautions are fixed texts written in SI.
+    // Only the reasons inside the cause cards here; fixes and cautions: tests/e2e/units.test.ts.
     const reasons = () =>
       page
         .locator('[data-testid^="cause-"]')

@@ -19,12 +19,15 @@ describe("npm run diagnose", () => {
     );
     expect(out.status).toBe(0);
     const result = JSON.parse(out.stdout);
-    expect(Object.keys(result).sort()).toEqual(["causes", "cautions", "facts", "missing", "notes"]);
+    expect(Object.keys(result).sort()).toEqual(["causes", "cautionTemplates", "cautions", "facts", "missing", "notes"]);
     expect(result.causes[0]).toMatchObject({
       id: "cold-pour",
       because: ["Poured at 660 °C, 40 °C below the usual 700-760 °C for green sand"],
     });
     expect(result.facts.superheatC).toBe(45);
+    // The SI sentences carry no template braces; the templates keep them for the app to convert.
+    expect(result.causes[0].fixes.join(" ")).toMatch(/by 20-30 °C and/);
+    expect(result.causes[0].fixTemplates.join(" ")).toMatch(/by \{20-30 K\} and/);
   }, 60_000);
 
   it("refuses a bad case on stderr with exit code 2 and nothing on stdout", () => {

@@ -87,3 +87,64 @@ describe("form text", () => {
     expect(fromField("temperature", "hot", US)).toBeNaN();
   });
 });
+
+describe("velocity and area follow the length choice", () => {
+  it("converts m/s to in/s and mm² to in² from the exact inch", () => {
+    // 1 in = 25.4 mm exactly (1959 agreement): 1 m/s = 1000/25.4 in/s = 39.370... in/s; 1 in² = 645.16 mm².
+    expect(fromSi("velocity", 1, US)).toBeCloseTo(39.37007874, 7);
+    expect(toSi("area", 1, US)).toBeCloseTo(645.16, 10);
+    // convert-units 2.3.4 (its foot is 1/3.28084 m): 1 m/s in ft/s × 12, and mm² to in².
+    expect(fromSi("velocity", 0.5, US) / (convert(0.5).from("m/s").to("ft/s") * 12)).toBeCloseTo(1, 5);
+    expect(fromSi("area", 300, US) / convert(300).from("mm2").to("in2")).toBeCloseTo(1, 5);
+  });
+});
+
+describe("sizes rounded as a caster writes them", () => {
+  it("gives 0.12 in, not 0.118; 5.9 in, not 5.906; whole °F; lb to 0.1", () => {
+    // 3 mm / 25.4 = 0.1181 in; 150 mm / 25.4 = 5.9055 in (1 in = 25.4 mm exactly).
+    expect(formatValue("length", 3, US)).toBe("0.12 in");
+    expect(formatValue("length", 150, US)).toBe("5.9 in");
+    expect(formatValue("length", 25.4 * 120, US)).toBe("120 in");
+    // 740.3 °C × 9/5 + 32 = 1364.54 °F.
+    expect(formatValue("temperature", 740.3, US)).toBe("1365 °F");
+    // 2.5 kg / 0.45359237 = 5.5116 lb.
+    expect(formatValue("mass", 2.5, US)).toBe("5.5 lb");
+    // 20.8 kg/m³ / 16.0185 = 1.2985 lb/ft³.
+    expect(formatValue("density", 20.8, US)).toBe("1.3 lb/ft³");
+    expect(formatValue("length", 4.25, SI)).toBe("4.3 mm");
+  });
+
+  it("keeps form text fine enough that saving it again does not move the value", () => {
+    expect(toField("length", 3, US)).toBe("0.118");
+    expect(fromField("length", toField("length", 3, US), US)! - 3).toBeLessThan(0.02);
+  });
+});
+
+describe("inches as casters write them", () => {
+  const inches = (t: string) => fromField("length", t, US)! / 25.4;
+  it("reads fractions, mixed numbers and the inch mark", () => {
+    expect(inches("1/8")).toBeCloseTo(0.125, 10);
+    expect(inches('3/4"')).toBeCloseTo(0.75, 10);
+    expect(inches("1 1/2")).toBeCloseTo(1.5, 10);
+    expect(inches("1-1/2")).toBeCloseTo(1.5, 10);
+    expect(inches('1-1/2"')).toBeCloseTo(1.5, 10);
+    expect(inches("2 in")).toBeCloseTo(2, 10);
+    expect(inches(".5″")).toBeCloseTo(0.5, 10);
+    expect(inches("0,25")).toBeCloseTo(0.25, 10);
+  });
+
+  it("refuses what is not a size", () => {
+    for (const t of ["1/0", "1 3/2", "3/4/5", "1 1", "half", "1..5", "-1/2", '""', "1/2 mm"])
+      expect(fromField("length", t, US), t).toBeNaN();
+  });
+
+  it("leaves fractions to inches: in mm a fraction is not a number", () => {
+    expect(fromField("length", "1/8", SI)).toBeNaN();
+  });
+
+  it("reads grouped thousands as casters type a °F pour temperature", () => {
+    // 1,350 °F = (1350 - 32) × 5/9 = 732.2 °C.
+    expect(fromField("temperature", "1,350", US)).toBeCloseTo(732.22, 2);
+    expect(fromField("temperature", "-4", US)).toBeCloseTo(-20, 10);
+  });
+});

@@ -14,7 +14,8 @@ import { useTrends } from "@/hooks/use-trends";
 import { isDay } from "@/lib/casebook-filters";
 import { PROCESS_LABELS } from "@/lib/labels";
 import { casebookHrefFor } from "@/lib/trend-links";
-import type { TrendsQuery } from "@/lib/trends-schemas";
+import { superheatBandInUnits, type TrendsQuery } from "@/lib/trends-schemas";
+import { useUnits } from "@/hooks/use-units";
 import { PROCESSES, type Process } from "@/rules/case";
 
 /**
@@ -34,6 +35,7 @@ export default function TrendsScreen() {
     alloy: alloy || undefined,
   };
   const trends = useTrends(q);
+  const units = useUnits();
   const t = trends.data;
   // The alloys the shop poured in these filters, so the chips never offer an empty chart.
   const alloys = [...new Set([...(t?.defectByAlloy.map((a) => a.key) ?? []), ...(alloy ? [alloy] : [])])];
@@ -72,7 +74,11 @@ export default function TrendsScreen() {
             {t.castings} castings. A bar is the share with at least one defect marked (or scrapped, reworked); tap a bar
             to open its castings in the casebook.
           </Text>
-          <RateBars title="Defects by superheat" what="had defects" points={t.defectBySuperheat} />
+          <RateBars
+            title="Defects by superheat"
+            what="had defects"
+            points={t.defectBySuperheat.map((p) => ({ ...p, key: superheatBandInUnits(p.key, units) }))}
+          />
           <RateBars
             title="Defects by process"
             what="had defects"

@@ -15,6 +15,8 @@ import { card, colors, fontSize, space } from "@/constants/theme";
 import { useRule, useRulebook } from "@/hooks/use-rulebook";
 import { useUnits } from "@/hooks/use-units";
 import { formatMoment } from "@/lib/dates";
+import { textInUnits } from "@/lib/quantity-words";
+import { reasonTemplateInUnits } from "@/lib/reason-text";
 import { DEFECTS, LOCATION_LABELS } from "@/lib/defects";
 
 /** One rule in plain words: what it explains, when, what it points to, its record here, and its history. */
@@ -56,10 +58,11 @@ export default function RuleScreen() {
         <Text style={styles.strong}>{r.cause.title}</Text>
         {r.causeFixes.map((f) => (
           <Text key={f} style={styles.text}>
-            • {f}
+            • {textInUnits(f, units)}
           </Text>
         ))}
-        <Text style={styles.text}>Reason shown: “{r.rule.because}”</Text>
+        {/* Its figures in the reader's units; the {fact} placeholders stay, filled from each case. */}
+        <Text style={styles.text}>Reason shown: “{reasonTemplateInUnits(r.rule.because, units)}”</Text>
       </Block>
       <Block title="How much it counts here">
         <Text style={styles.text}>
