@@ -1,6 +1,7 @@
 import Fuse from "fuse.js";
 import type { Marked, MarkedField } from "../../lib/search-schemas";
-import { FUSE_OPTIONS, SEARCH_KEYS, type SearchFields } from "./fuzzy";
+import { SEARCH_KEYS, type SearchFields } from "./case-doc";
+import { FUSE_OPTIONS } from "./rerank";
 
 /**
  * The matched words of one page of results, marked for the screen. Fuse itself finds them, run on
