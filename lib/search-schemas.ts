@@ -67,10 +67,7 @@ export const searchQuery = z
     from: calendarDate().optional(),
     to: calendarDate().optional(),
     /** Keyset paging: the `next` of the previous answer (its last case's date and id, and rank). */
-    after: z
-      .string()
-      .regex(SEARCH_CURSOR, "after is the next value of a previous answer")
-      .optional(),
+    after: z.string().regex(SEARCH_CURSOR, "after is the next value of a previous answer").optional(),
     sort: z.enum(SEARCH_SORTS, { error: `sort is one of: ${SEARCH_SORTS.join(", ")}` }).optional(),
     page: z.coerce
       .number({ error: "a page number" })

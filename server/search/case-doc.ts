@@ -52,9 +52,7 @@ export const defectWords = (type: DefectType) => `${DEFECTS[type].label}${ALIASE
 export const defectPhrase = (type: DefectType, location: DefectLocation) =>
   `${defectWords(type)} (${LOCATION_LABELS[location]})`;
 export const degassingWords = (method: string | null) =>
-  method && method !== "none"
-    ? `${DEGASSING_LABELS[method as keyof typeof DEGASSING_LABELS] ?? method} degassing`
-    : "";
+  method && method !== "none" ? `${DEGASSING_LABELS[method as keyof typeof DEGASSING_LABELS] ?? method} degassing` : "";
 
 const joined = (parts: (string | null | undefined)[], sep: string) =>
   [...new Set(parts.filter((p): p is string => !!p?.trim()))].join(sep);
@@ -73,11 +71,7 @@ export const fieldsOf = (d: DocRow): SearchFields => ({
 });
 
 /** A result card; a confirmed cause's title is the rulebook's, where it knows the cause. */
-export const summaryOf = (
-  d: DocRow,
-  names: Map<string, string>,
-  causeTitles: Map<string, string>,
-): CaseSummary => ({
+export const summaryOf = (d: DocRow, names: Map<string, string>, causeTitles: Map<string, string>): CaseSummary => ({
   id: d.id,
   meltId: d.meltId,
   partName: d.partName,

@@ -37,8 +37,7 @@ export async function searchCases(shopId: string, p: SearchParams): Promise<Sear
         rank = sql`ts_rank(d.document, ${q})`;
       }
       const rows = (await tx.execute(matchStatement(shopId, p, sort, words, rank))).rows as unknown as (
-        | FacetRow
-        | PageRow
+        FacetRow | PageRow
       )[];
       const pageRows = rows.filter((r): r is PageRow => r.kind === "page");
       const ids = pageRows.map((r) => r.id);
@@ -61,7 +60,11 @@ export async function searchCases(shopId: string, p: SearchParams): Promise<Sear
   }
   const names = await namesOf(page.map((d) => d.createdBy));
   const marked = markPage(fields, terms.length ? p.q : "");
-  const items: CaseHit[] = page.map((d, i) => ({ ...summaryOf(d, names, titles), score: scores[i], marked: marked[i] }));
+  const items: CaseHit[] = page.map((d, i) => ({
+    ...summaryOf(d, names, titles),
+    score: scores[i],
+    marked: marked[i],
+  }));
   const last = pageRows[pageRows.length - 1];
   const total = Number(facetRows.find((r) => r.kind === "total")?.n ?? 0);
   const seen = p.after ? null : (p.page - 1) * p.pageSize + pageRows.length;
@@ -77,8 +80,7 @@ export async function searchCases(shopId: string, p: SearchParams): Promise<Sear
   };
 }
 
-const cursorOf = (sort: SearchSort, r: PageRow) =>
-  `${sort === "relevance" ? `${r.rank}_` : ""}${r.poured_on}_${r.id}`;
+const cursorOf = (sort: SearchSort, r: PageRow) => `${sort === "relevance" ? `${r.rank}_` : ""}${r.poured_on}_${r.id}`;
 
 /** One statement: the shop's matching documents, each chip's counts and the page's ids. */
 function matchStatement(shopId: string, p: SearchParams, sort: SearchSort, words: SQL, rank: SQL): SQL {

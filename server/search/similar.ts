@@ -96,4 +96,3 @@ function asInput(r: SimilarRow, titles: Map<string, string>): SimilarInput {
     minSectionMm: r.minSectionMm,
   };
 }
-

@@ -9,7 +9,10 @@ import type { DefectLocation, DefectType } from "../../rules/case";
  * enough, the ones whose cause a mentor confirmed and whose fix worked come first: those are the
  * ones that teach something. The weights are our judgement, not a published figure.
  */
-export type SimilarInput = Pick<CaseSummary, "id" | "pouredOn" | "defects" | "process" | "alloy" | "cause" | "fixWorked"> & {
+export type SimilarInput = Pick<
+  CaseSummary,
+  "id" | "pouredOn" | "defects" | "process" | "alloy" | "cause" | "fixWorked"
+> & {
   defectMask: number;
   /** Each mark as type index * 16 + location index (rules/case.ts lists), for quick comparing. */
   markCodes: number[];
