@@ -99,9 +99,13 @@ describe("keyset paging", () => {
     for (const query of [
       { sort: "date-desc" },
       { sort: "date-asc" },
-      { q: "plate porosity misrun", sort: "date-desc" },
-    ]) {
-      const byPage = ids(await search(book.caster, { ...query, pageSize: 50 }));
+      { q: "plate", sort: "date-desc" },
+      { q: "ribbed", sort: "date-asc" },
+      { q: "plate" },
+      { q: "porosity" },
+    ] as Record<string, string>[]) {
+      const byPage: number[] = [];
+      for (let page = 1; page <= 4; page++) byPage.push(...ids(await search(book.caster, { ...query, pageSize: 3, page })));
       const walked: number[] = [];
       let after: string | null = null;
       for (let i = 0; i < 10; i++) {
@@ -110,6 +114,7 @@ describe("keyset paging", () => {
         after = answer.next;
         if (!after) break;
       }
+      expect(byPage.length, JSON.stringify(query)).toBeGreaterThan(2);
       expect(walked, JSON.stringify(query)).toEqual(byPage);
     }
     const first = await search(book.caster, { q: "porosity", pageSize: 1 });
