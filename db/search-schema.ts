@@ -85,7 +85,9 @@ export const searchWords = pgTable(
   },
   (t) => [
     primaryKey({ name: "search_words_pk", columns: [t.shopId, t.word] }),
-    index("search_words_trgm_idx").using("gin", t.word.op("gin_trgm_ops")),
+    // GiST, not GIN: it answers "the nearest words first" (ORDER BY word <-> query LIMIT n) from the
+    // index itself, within one shop (btree_gist lets shop_id share the index).
+    index("search_words_nearest_idx").using("gist", t.shopId, t.word.op("gist_trgm_ops")),
   ],
 );
 

@@ -1,10 +1,13 @@
 -- Custom migration (drizzle-kit generate --custom): the casebook search moves into PostgreSQL.
--- pg_trgm (trigram index of each shop's words, for typos) and fuzzystrmatch (levenshtein, the
--- number of slips a widened word may carry) ship with Debian's PostgreSQL; both are trusted
--- extensions, so the database owner may create them.
+-- pg_trgm (trigram index of each shop's words, for typos), fuzzystrmatch (levenshtein, the
+-- number of slips a widened word may carry) and btree_gist ship with Debian's PostgreSQL; all
+-- three are trusted extensions, so the database owner may create them.
 CREATE EXTENSION IF NOT EXISTS pg_trgm;
 --> statement-breakpoint
 CREATE EXTENSION IF NOT EXISTS fuzzystrmatch;
+--> statement-breakpoint
+-- btree_gist: shop_id and the trigram of the word in one GiST index (nearest words of one shop).
+CREATE EXTENSION IF NOT EXISTS btree_gist;
 --> statement-breakpoint
 -- The in-process index and its change log go: their triggers first, then (next migration) the table.
 DROP TRIGGER IF EXISTS search_castings_ins ON castings;

@@ -215,7 +215,12 @@ export async function seedShop(db: Db, count: number, seed: number, shopId: stri
     const talk = ids
       .filter(() => r() < 0.25)
       .flatMap((castingId) =>
-        Array.from({ length: int(1, 3) }, () => ({ shopId, castingId, body: write(int(1, 2)), createdBy: pick(people) })),
+        Array.from({ length: int(1, 3) }, () => ({
+          shopId,
+          castingId,
+          body: write(int(1, 2)),
+          createdBy: pick(people),
+        })),
       );
     const diagnosed = ids.filter((_, i) => rows[i].outcome !== "good" && r() < 0.5);
     const snapshots = diagnosed.map((castingId) => ({

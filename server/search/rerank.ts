@@ -1,4 +1,4 @@
-import Fuse, { type IFuseOptions } from "fuse.js";
+import type { IFuseOptions } from "fuse.js";
 import { SEARCH_TOKEN } from "../../lib/search-schemas";
 import { SEARCH_KEYS, type SearchFields, type SearchKey } from "./case-doc";
 
@@ -6,7 +6,7 @@ import { SEARCH_KEYS, type SearchFields, type SearchKey } from "./case-doc";
  * The page's own order: PostgreSQL picks and orders the candidates (every query word or a similar
  * word present, ts_rank by field weight), then Fuse.js scores just that page (a few dozen cases),
  * so within a page the case whose words match best comes first, and the marked words are
- * exactly what Fuse matched (marks.ts).
+ * exactly what Fuse matched (marks.ts, one Fuse pass for both).
  */
 /** What a case is (part, defect, cause) outranks how it was poured, which outranks what was written. */
 const KEY_WEIGHTS: Record<SearchKey, number> = {
@@ -30,11 +30,3 @@ export const FUSE_OPTIONS = {
   includeScore: true,
   includeMatches: true,
 } satisfies IFuseOptions<SearchFields>;
-
-/** Fuse's score of each case of the page (lower is better), 1 where Fuse found no match of its own. */
-export function pageScores(page: SearchFields[], query: string): number[] {
-  const scores = page.map(() => 1);
-  if (!page.length) return scores;
-  for (const r of new Fuse(page, FUSE_OPTIONS).search(query)) scores[r.refIndex] = r.score ?? 1;
-  return scores;
-}

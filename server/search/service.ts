@@ -6,7 +6,6 @@ import { alloyKey, fieldsOf, summaryOf, type DocRow } from "./case-doc";
 import { markPage } from "./marks";
 import { causeTitles, checkNames, namesOf } from "./names";
 import { lookups, queryTerms, tsquery, tsqueryText } from "./query-words";
-import { pageScores } from "./rerank";
 
 /**
  * GET /api/search over `search_documents`, in one read-only transaction:
@@ -19,47 +18,35 @@ import { pageScores } from "./rerank";
  */
 type Hit = { kind: "page" | "total" | "defect" | "alloy" | "process" | "outcome" | "cause" };
 type FacetRow = Hit & { key: string | null; title: string | null; n: number };
-type PageRow = Hit & { id: number; rank: string; poured_on: string };
+type PageRow = Hit & { id: number; rank: string; poured_on: string; doc: DocRow };
 
 export async function searchCases(shopId: string, p: SearchParams): Promise<SearchAnswer> {
   const titles = await causeTitles(shopId);
   await checkNames(shopId, p, titles);
   const terms = queryTerms(p.q);
   const sort: SearchSort = terms.length ? (p.sort ?? "relevance") : p.sort === "date-asc" ? "date-asc" : "date-desc";
-  const { facetRows, pageRows, docs } = await db.transaction(
-    async (tx) => {
-      let words: SQL = sql`true`;
-      let rank: SQL = sql`0::real`;
-      if (terms.length) {
-        const similar = await similarWords(tx, shopId, terms);
-        const q = tsquery(tsqueryText(terms, similar));
-        words = sql`d.document @@ ${q}`;
-        rank = sql`ts_rank(d.document, ${q})`;
-      }
-      const rows = (await tx.execute(matchStatement(shopId, p, sort, words, rank))).rows as unknown as (
-        FacetRow | PageRow
-      )[];
-      const pageRows = rows.filter((r): r is PageRow => r.kind === "page");
-      const ids = pageRows.map((r) => r.id);
-      const docs = ids.length ? ((await tx.execute(docsStatement(ids))).rows as unknown as DocRow[]) : [];
-      return { facetRows: rows.filter((r): r is FacetRow => r.kind !== "page"), pageRows, docs };
-    },
-    { accessMode: "read only" },
-  );
-
-  const byId = new Map(docs.map((d) => [d.id, d]));
-  let page = pageRows.map((r) => byId.get(r.id)!).filter(Boolean);
-  const fields = page.map(fieldsOf);
-  let scores: (number | null)[] = page.map(() => null);
-  if (terms.length && sort === "relevance") {
-    const fuse = pageScores(fields, p.q);
-    const order = page.map((_, i) => i).sort((a, b) => fuse[a] - fuse[b] || a - b);
-    page = order.map((i) => page[i]);
-    scores = order.map((i) => fuse[i]);
-    fields.splice(0, fields.length, ...order.map((i) => fields[i]));
+  let words: SQL = sql`true`;
+  let rank: SQL = sql`0::real`;
+  if (terms.length) {
+    const q = tsquery(tsqueryText(terms, await similarWords(shopId, terms)));
+    words = sql`d.document @@ ${q}`;
+    rank = sql`ts_rank(d.document, ${q})`;
   }
+  const rows = (await db.execute(matchStatement(shopId, p, sort, words, rank))).rows as unknown as (
+    FacetRow | PageRow
+  )[];
+  const facetRows = rows.filter((r): r is FacetRow => r.kind !== "page");
+  const pageRows = rows.filter((r): r is PageRow => r.kind === "page");
+  const docs = pageRows.map((r) => r.doc);
+
+  // Fuse re-ranks the page (relevance only) and marks its matched words, in one pass.
+  const found = markPage(docs.map(fieldsOf), terms.length ? p.q : "");
+  let order = docs.map((_, i) => i);
+  if (terms.length && sort === "relevance") order = order.sort((a, b) => found.scores[a] - found.scores[b] || a - b);
+  const page = order.map((i) => docs[i]);
+  const scores = order.map((i) => (terms.length && sort === "relevance" ? found.scores[i] : null));
+  const marked = order.map((i) => found.marked[i]);
   const names = await namesOf(page.map((d) => d.createdBy));
-  const marked = markPage(fields, terms.length ? p.q : "");
   const items: CaseHit[] = page.map((d, i) => ({
     ...summaryOf(d, names, titles),
     score: scores[i],
@@ -105,10 +92,10 @@ function matchStatement(shopId: string, p: SearchParams, sort: SearchSort, words
   const desc = sort !== "date-asc";
   const order =
     sort === "relevance"
-      ? sql`rank DESC, poured_on DESC, casting_id DESC`
+      ? sql`h.rank DESC, h.poured_on DESC, h.casting_id DESC`
       : desc
-        ? sql`poured_on DESC, casting_id DESC`
-        : sql`poured_on ASC, casting_id ASC`;
+        ? sql`h.poured_on DESC, h.casting_id DESC`
+        : sql`h.poured_on ASC, h.casting_id ASC`;
   const keyset = p.after ? afterCondition(sort, p.after) : sql`true`;
   const offset = p.after ? 0 : (p.page - 1) * p.pageSize;
   return sql`
@@ -119,27 +106,29 @@ function matchStatement(shopId: string, p: SearchParams, sort: SearchSort, words
         ${cause} AS f_cause
       FROM search_documents d WHERE ${where}
     )
-    SELECT 'total' AS kind, NULL AS key, NULL AS title, count(*)::int AS n, NULL::int AS id, NULL AS rank, NULL AS poured_on
+    SELECT 'total' AS kind, NULL AS key, NULL AS title, count(*)::int AS n, NULL::int AS id, NULL AS rank,
+        NULL AS poured_on, NULL::json AS doc
       FROM hits WHERE f_defect AND f_alloy AND f_process AND f_outcome AND f_cause
     UNION ALL
-    SELECT 'defect', t::text, NULL, count(*)::int, NULL, NULL, NULL
+    SELECT 'defect', t::text, NULL, count(*)::int, NULL, NULL, NULL, NULL
       FROM hits, unnest(defect_types) t WHERE f_alloy AND f_process AND f_outcome AND f_cause GROUP BY t
     UNION ALL
-    SELECT 'alloy', alloy_key, min(alloy), count(*)::int, NULL, NULL, NULL
+    SELECT 'alloy', alloy_key, min(alloy), count(*)::int, NULL, NULL, NULL, NULL
       FROM hits WHERE f_defect AND f_process AND f_outcome AND f_cause GROUP BY alloy_key
     UNION ALL
-    SELECT 'process', process::text, NULL, count(*)::int, NULL, NULL, NULL
+    SELECT 'process', process::text, NULL, count(*)::int, NULL, NULL, NULL, NULL
       FROM hits WHERE f_defect AND f_alloy AND f_outcome AND f_cause GROUP BY process
     UNION ALL
-    SELECT 'outcome', outcome::text, NULL, count(*)::int, NULL, NULL, NULL
+    SELECT 'outcome', outcome::text, NULL, count(*)::int, NULL, NULL, NULL, NULL
       FROM hits WHERE outcome IS NOT NULL AND f_defect AND f_alloy AND f_process AND f_cause GROUP BY outcome
     UNION ALL
-    SELECT 'cause', cause_id, min(cause_title), count(*)::int, NULL, NULL, NULL
+    SELECT 'cause', cause_id, min(cause_title), count(*)::int, NULL, NULL, NULL, NULL
       FROM hits WHERE cause_id IS NOT NULL AND f_defect AND f_alloy AND f_process AND f_outcome GROUP BY cause_id
     UNION ALL
     SELECT * FROM (
-      SELECT 'page', NULL, NULL, NULL::int, casting_id, rank::text, poured_on::text
-      FROM hits WHERE f_defect AND f_alloy AND f_process AND f_outcome AND f_cause AND ${keyset}
+      SELECT 'page', NULL, NULL, NULL::int, h.casting_id, h.rank::text, h.poured_on::text, ${DOC_JSON}
+      FROM hits h JOIN search_documents d USING (casting_id)
+      WHERE f_defect AND f_alloy AND f_process AND f_outcome AND f_cause AND ${keyset}
       ORDER BY ${order} LIMIT ${p.pageSize} OFFSET ${offset}
     ) page`;
 }
@@ -153,44 +142,38 @@ function afterCondition(sort: SearchSort, after: string): SQL {
   if (Number.isNaN(Date.parse(`${day}T00:00:00Z`)) || Number(id) > 2_147_483_647)
     throw new HttpError(400, "Some values need fixing.", { after: "after is the next value of a previous answer" });
   if (sort === "relevance")
-    return sql`(rank, poured_on, casting_id) < (${parts[0]}::real, ${day}::date, ${Number(id)}::int)`;
+    return sql`(h.rank, h.poured_on, h.casting_id) < (${parts[0]}::real, ${day}::date, ${Number(id)}::int)`;
   return sort === "date-asc"
-    ? sql`(poured_on, casting_id) > (${day}::date, ${Number(id)}::int)`
-    : sql`(poured_on, casting_id) < (${day}::date, ${Number(id)}::int)`;
+    ? sql`(h.poured_on, h.casting_id) > (${day}::date, ${Number(id)}::int)`
+    : sql`(h.poured_on, h.casting_id) < (${day}::date, ${Number(id)}::int)`;
 }
 
-type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
-
 /**
- * Each widenable query word's similar words in this shop: trigram candidates from the index (a low
- * similarity threshold, so short words keep their one slip), kept when within the word's slips.
+ * Each widenable query word's similar words in this shop: the nearest words by trigram distance,
+ * straight from the GiST index, kept when within the word's slips.
  */
-async function similarWords(tx: Tx, shopId: string, terms: ReturnType<typeof queryTerms>) {
+async function similarWords(shopId: string, terms: ReturnType<typeof queryTerms>) {
   const { words, slips } = lookups(terms);
   const out = new Map<string, string[]>();
   if (!words.length) return out;
-  await tx.execute(sql`SET LOCAL pg_trgm.similarity_threshold = 0.2`);
   const rows = (
-    await tx.execute(sql`
+    await db.execute(sql`
       SELECT q.w, v.word FROM unnest(${sql.param(words)}::text[], ${sql.param(slips)}::int[]) AS q(w, k)
       CROSS JOIN LATERAL (
-        SELECT word FROM search_words
-        WHERE shop_id = ${shopId} AND word % q.w AND levenshtein(word, q.w) <= q.k
-        ORDER BY word <-> q.w LIMIT 12
-      ) v`)
+        SELECT word FROM search_words WHERE shop_id = ${shopId} ORDER BY word <-> q.w LIMIT 24
+      ) v
+      WHERE levenshtein(v.word, q.w) <= q.k`)
   ).rows as { w: string; word: string }[];
   for (const r of rows) (out.get(r.w) ?? out.set(r.w, []).get(r.w)!).push(r.word);
   return out;
 }
 
-function docsStatement(ids: number[]): SQL {
-  return sql`
-    SELECT casting_id AS "id", melt_id AS "meltId", part_name AS "partName", pattern, poured_on::text AS "pouredOn",
-      alloy, process, degassing, outcome, marks, cause_id AS "causeId", cause_title AS "causeTitle",
-      cause_confirmed AS "causeConfirmed", fix_worked AS "fixWorked", created_by AS "createdBy",
-      causes_text AS "causesText", notes_text AS "notesText", comments_text AS "commentsText"
-    FROM search_documents WHERE casting_id = ANY(${sql.param(ids)}::int[])`;
-}
+/** A page row's document, as the page reads it (case-doc.ts DocRow). */
+const DOC_JSON = sql`json_build_object('id', d.casting_id, 'meltId', d.melt_id, 'partName', d.part_name,
+  'pattern', d.pattern, 'pouredOn', d.poured_on, 'alloy', d.alloy, 'process', d.process, 'degassing', d.degassing,
+  'outcome', d.outcome, 'marks', d.marks, 'causeId', d.cause_id, 'causeTitle', d.cause_title,
+  'causeConfirmed', d.cause_confirmed, 'fixWorked', d.fix_worked, 'createdBy', d.created_by,
+  'causesText', d.causes_text, 'notesText', d.notes_text, 'commentsText', d.comments_text)`;
 
 function facetsOf(rows: FacetRow[], titles: Map<string, string>): SearchFacets {
   const out: SearchFacets = { defect: {}, alloy: {}, process: {}, outcome: {}, cause: {} };

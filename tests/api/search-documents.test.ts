@@ -105,7 +105,8 @@ describe("keyset paging", () => {
       { q: "porosity" },
     ] as Record<string, string>[]) {
       const byPage: number[] = [];
-      for (let page = 1; page <= 4; page++) byPage.push(...ids(await search(book.caster, { ...query, pageSize: 3, page })));
+      for (let page = 1; page <= 4; page++)
+        byPage.push(...ids(await search(book.caster, { ...query, pageSize: 3, page })));
       const walked: number[] = [];
       let after: string | null = null;
       for (let i = 0; i < 10; i++) {
@@ -200,16 +201,14 @@ describe("cases like this one, in SQL", () => {
     );
     await db.insert(defectMarks).values(marks);
     const confirmed = castRows.filter(() => r() < 0.1);
-    await db
-      .insert(confirmations)
-      .values(
-        confirmed.map((c) => ({
-          shopId: crew.shopId,
-          castingId: c.id,
-          causeId: "cold-pour",
-          createdBy: crew.mentor.userId,
-        })),
-      );
+    await db.insert(confirmations).values(
+      confirmed.map((c) => ({
+        shopId: crew.shopId,
+        castingId: c.id,
+        causeId: "cold-pour",
+        createdBy: crew.mentor.userId,
+      })),
+    );
     const fixed = confirmed.filter(() => r() < 0.5);
     await db.insert(fixesTried).values(
       fixed.map((c) => ({
