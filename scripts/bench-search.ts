@@ -9,7 +9,7 @@
  */
 import { spawn, type ChildProcess } from "node:child_process";
 import { mkdtempSync, readFileSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
+import { availableParallelism, loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
 import { performance } from "node:perf_hooks";
 import { fileURLToPath } from "node:url";
@@ -159,6 +159,17 @@ async function shopOf(count: number, seed: number) {
 }
 
 async function bench(shop: Awaited<ReturnType<typeof shopOf>>) {
+  // What any signed-in request costs here (session and shop checks, one small query), for scale.
+  const floor: number[] = [];
+  for (let i = 0; i < 40; i++) {
+    const t0 = performance.now();
+    await call(shop.cookie, "/api/shops/current");
+    floor.push(performance.now() - t0);
+  }
+  const f = stats(floor);
+  console.log(
+    `for scale, GET /api/shops/current: p50 ${ms(f.p50)}, p95 ${ms(f.p95)}; load average ${loadavg()[0].toFixed(1)} on ${availableParallelism()} cores`,
+  );
   const all: number[] = [];
   for (const [name, queries] of [
     ["text", TEXT],

@@ -1,7 +1,7 @@
 import { eq, sql } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { alloys, castings, confirmations, defectMarks, fixesTried, melts, searchDocuments } from "../../db/schema";
-import { DEFECTS, LOCATION_LABELS } from "../../lib/defects";
+import { LOCATION_LABELS } from "../../lib/defects";
 import { DEGASSING_LABELS, PROCESS_LABELS } from "../../lib/labels";
 import type { SearchAnswer, SimilarAnswer } from "../../lib/search-schemas";
 import { DEFECT_LOCATIONS, DEFECT_TYPES, PROCESSES, type DefectLocation, type DefectType } from "../../rules/case";
