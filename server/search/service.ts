@@ -36,7 +36,8 @@ export async function searchCases(shopId: string, p: SearchParams): Promise<Sear
     FacetRow | PageRow
   )[];
   const facetRows = rows.filter((r): r is FacetRow => r.kind !== "page");
-  const pageRows = rows.filter((r): r is PageRow => r.kind === "page");
+  // The join after LIMIT keeps the page's order only in PostgreSQL's plan of the day: sort again.
+  const pageRows = rows.filter((r): r is PageRow => r.kind === "page").sort(pageOrder(sort));
   const docs = pageRows.map((r) => r.doc);
 
   // Fuse re-ranks the page (relevance only) and marks its matched words, in one pass.
@@ -66,6 +67,13 @@ export async function searchCases(shopId: string, p: SearchParams): Promise<Sear
     facets: facetsOf(facetRows, titles),
   };
 }
+
+/** The statement's ORDER BY, in JavaScript. */
+const pageOrder = (sort: SearchSort) => (a: PageRow, b: PageRow) => {
+  const date = a.poured_on < b.poured_on ? -1 : a.poured_on > b.poured_on ? 1 : a.id - b.id;
+  if (sort === "date-asc") return date;
+  return (sort === "relevance" ? Number(b.rank) - Number(a.rank) : 0) || -date;
+};
 
 const cursorOf = (sort: SearchSort, r: PageRow) => `${sort === "relevance" ? `${r.rank}_` : ""}${r.poured_on}_${r.id}`;
 
@@ -125,12 +133,12 @@ function matchStatement(shopId: string, p: SearchParams, sort: SearchSort, words
     SELECT 'cause', cause_id, min(cause_title), count(*)::int, NULL, NULL, NULL, NULL
       FROM hits WHERE cause_id IS NOT NULL AND f_defect AND f_alloy AND f_process AND f_outcome GROUP BY cause_id
     UNION ALL
-    SELECT * FROM (
-      SELECT 'page', NULL, NULL, NULL::int, h.casting_id, h.rank::text, h.poured_on::text, ${DOC_JSON}
-      FROM hits h JOIN search_documents d USING (casting_id)
+    SELECT 'page', NULL, NULL, NULL::int, p.casting_id, p.rank::text, p.poured_on::text, ${DOC_JSON}
+    FROM (
+      SELECT h.casting_id, h.rank, h.poured_on FROM hits h
       WHERE f_defect AND f_alloy AND f_process AND f_outcome AND f_cause AND ${keyset}
       ORDER BY ${order} LIMIT ${p.pageSize} OFFSET ${offset}
-    ) page`;
+    ) p JOIN search_documents d USING (casting_id)`;
 }
 
 /** The rows after the previous page's last one, in the same order (row comparison on the sort key). */
