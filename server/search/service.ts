@@ -109,7 +109,7 @@ function matchStatement(shopId: string, p: SearchParams, sort: SearchSort, words
   return sql`
     WITH hits AS MATERIALIZED (
       SELECT d.casting_id, d.poured_on, d.defect_types, d.alloy_key, d.alloy, d.process, d.outcome,
-        d.cause_id, d.cause_title, ${rank} AS rank,
+        d.cause_id, ${rank} AS rank,
         ${defect} AS f_defect, ${alloy} AS f_alloy, ${process} AS f_process, ${outcome} AS f_outcome,
         ${cause} AS f_cause
       FROM search_documents d WHERE ${where}
@@ -130,7 +130,7 @@ function matchStatement(shopId: string, p: SearchParams, sort: SearchSort, words
     SELECT 'outcome', outcome::text, NULL, count(*)::int, NULL, NULL, NULL, NULL
       FROM hits WHERE outcome IS NOT NULL AND f_defect AND f_alloy AND f_process AND f_cause GROUP BY outcome
     UNION ALL
-    SELECT 'cause', cause_id, min(cause_title), count(*)::int, NULL, NULL, NULL, NULL
+    SELECT 'cause', cause_id, NULL, count(*)::int, NULL, NULL, NULL, NULL
       FROM hits WHERE cause_id IS NOT NULL AND f_defect AND f_alloy AND f_process AND f_outcome GROUP BY cause_id
     UNION ALL
     SELECT 'page', NULL, NULL, NULL::int, p.casting_id, p.rank::text, p.poured_on::text, ${DOC_JSON}
