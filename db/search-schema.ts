@@ -1,21 +1,108 @@
-import { bigint, bigserial, index, integer, pgTable, text, timestamp } from "drizzle-orm/pg-core";
+import {
+  boolean,
+  customType,
+  date,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  primaryKey,
+  text,
+  timestamp,
+} from "drizzle-orm/pg-core";
+import { organization } from "./auth-schema";
+import { alloyFamilyEnum, defectTypeEnum, degassingEnum, outcomeEnum, processEnum, workedEnum } from "./enums";
+import { castings } from "./notebook-schema";
 
 /**
- * The casebook search keeps each shop's cases in memory (server/search/index-cache.ts). Triggers on
- * the notebook's tables (drizzle/*_search-triggers.sql) log here which casting a write touched and
- * in which transaction, so a search reads only what changed since it last looked: one indexed
- * lookup per search instead of counting every table. No foreign keys: deleting a shop cascades
- * deletes that log here too, and the rows age out (see index-cache.ts).
+ * The casebook search, in PostgreSQL. One row per casting (`search_documents`), rebuilt by the
+ * function `search_refresh(ids)` (drizzle/*_search-documents-sql.sql) that triggers on the
+ * notebook's tables call in the transaction of the write itself. Triggers rather than the service
+ * layer: every write path (castings, melts, marks, comments, diagnoses, confirmations, fixes,
+ * alloys, shop causes) is covered without each service remembering to, and the bench measures
+ * the cost of the two side by side (scripts/bench-search.ts, "keeping documents current").
  */
-export const searchChanges = pgTable(
-  "search_changes",
+const tsvector = customType<{ data: string }>({ dataType: () => "tsvector" });
+
+export const searchDocuments = pgTable(
+  "search_documents",
   {
-    id: bigserial("id", { mode: "number" }).primaryKey(),
-    shopId: text("shop_id").notNull(),
-    castingId: integer("casting_id").notNull(),
-    /** pg_current_xact_id() of the writing transaction: readers compare it to their snapshot's xmin. */
-    xid: bigint("xid", { mode: "number" }).notNull(),
-    loggedAt: timestamp("logged_at", { withTimezone: true }).defaultNow().notNull(),
+    castingId: integer("casting_id")
+      .primaryKey()
+      .references(() => castings.id, { onDelete: "cascade" }),
+    shopId: text("shop_id")
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    meltId: integer("melt_id").notNull(),
+    partName: text("part_name").notNull(),
+    pattern: text("pattern"),
+    pouredOn: date("poured_on", { mode: "string" }).notNull(),
+    alloy: text("alloy").notNull(),
+    /** The alloy table's key (upper case, no spaces): what the alloy filter compares. */
+    alloyKey: text("alloy_key").notNull(),
+    alloyFamily: alloyFamilyEnum("alloy_family").notNull(),
+    process: processEnum("process").notNull(),
+    degassing: degassingEnum("degassing"),
+    outcome: outcomeEnum("outcome"),
+    /** Each defect type once, for the filter and its chip counts. */
+    defectTypes: defectTypeEnum("defect_types").array().notNull(),
+    /** The marks in the order they were made: [{ type, location, severity }]. */
+    marks: jsonb("marks").$type<{ type: string; location: string; severity: number }[]>().notNull(),
+    /** Each mark as "type@location", for "cases like this one". */
+    markPlaces: text("mark_places").array().notNull(),
+    /** The mentor's confirmed cause, else the latest diagnosis's first cause. */
+    causeId: text("cause_id"),
+    causeTitle: text("cause_title"),
+    causeConfirmed: boolean("cause_confirmed").notNull(),
+    fixWorked: workedEnum("fix_worked"),
+    superheatC: doublePrecision("superheat_c"),
+    minSectionMm: doublePrecision("min_section_mm"),
+    createdBy: text("created_by").notNull(),
+    /** Texts the page's re-ranking and marked words read (the screen's "causes", "notes", "comments"). */
+    causesText: text("causes_text").notNull(),
+    notesText: text("notes_text").notNull(),
+    commentsText: text("comments_text").notNull(),
+    /** Every word, weighted: part and defects A, causes and fixes B, conditions C, notes and comments D. */
+    document: tsvector("document").notNull(),
+    refreshedAt: timestamp("refreshed_at", { withTimezone: true }).defaultNow().notNull(),
   },
-  (t) => [index("search_changes_shop_xid_idx").on(t.shopId, t.xid), index("search_changes_logged_idx").on(t.loggedAt)],
+  (t) => [
+    index("search_documents_shop_date_idx").on(t.shopId, t.pouredOn.desc(), t.castingId.desc()),
+    index("search_documents_document_idx").using("gin", t.document),
+    index("search_documents_defects_idx").using("gin", t.defectTypes),
+  ],
+);
+
+/** Each shop's distinct words, trigram-indexed: a query word is widened to the shop's words like it. */
+export const searchWords = pgTable(
+  "search_words",
+  {
+    shopId: text("shop_id")
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    word: text("word").notNull(),
+  },
+  (t) => [
+    primaryKey({ name: "search_words_pk", columns: [t.shopId, t.word] }),
+    // GiST, not GIN: it answers "the nearest words first" (ORDER BY word <-> query LIMIT n) from the
+    // index itself, within one shop (btree_gist lets shop_id share the index).
+    index("search_words_nearest_idx").using("gist", t.shopId, t.word.op("gist_trgm_ops")),
+  ],
+);
+
+/**
+ * The words a person reads for a stored code (lib/defects.ts, lib/labels.ts), so the documents hold
+ * "metal in the sand" for metal-penetration. Written by a migration; tests/api/search-labels.test.ts
+ * fails when the app's labels and these differ (a changed label needs a migration that updates
+ * this table and calls search_refresh for the shop's castings).
+ */
+export const searchLabels = pgTable(
+  "search_labels",
+  {
+    kind: text("kind").notNull(),
+    code: text("code").notNull(),
+    words: text("words").notNull(),
+  },
+  (t) => [primaryKey({ name: "search_labels_pk", columns: [t.kind, t.code] })],
 );

@@ -23,6 +23,9 @@ export const OUTCOMES = ["good", "rework", "scrap"] as const;
 export const SEARCH_TOKEN = /[\p{L}\p{N}]+(?:\.[\p{L}\p{N}]+)*/gu;
 export const searchWords = (q: string) => q.toLowerCase().match(SEARCH_TOKEN) ?? [];
 
+/** "2026-03-01_42" (date order) or "0.0608_2026-03-01_42" (relevance: rank first). */
+export const SEARCH_CURSOR = /^(?:\d{1,4}(?:\.\d{1,12})?(?:e-\d{1,2})?_)?\d{4}-\d{2}-\d{2}_\d{1,10}$/;
+
 /** A list in a query string: "a,b", or the parameter repeated; blanks dropped. */
 const splitList = (v: unknown) =>
   v === undefined
@@ -63,6 +66,8 @@ export const searchQuery = z
     by: names(64),
     from: calendarDate().optional(),
     to: calendarDate().optional(),
+    /** Keyset paging: the `next` of the previous answer (its last case's date and id, and rank). */
+    after: z.string().regex(SEARCH_CURSOR, "after is the next value of a previous answer").optional(),
     sort: z.enum(SEARCH_SORTS, { error: `sort is one of: ${SEARCH_SORTS.join(", ")}` }).optional(),
     page: z.coerce
       .number({ error: "a page number" })
@@ -119,6 +124,8 @@ export type SearchAnswer = {
   page: number;
   pageSize: number;
   sort: SearchSort;
+  /** Pass as `after` for the page after this one (keyset paging); null on the last page. */
+  next: string | null;
   /** Counts for each filter's chips, with every other filter applied. */
   facets: SearchFacets;
 };

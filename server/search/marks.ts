@@ -1,6 +1,7 @@
 import Fuse from "fuse.js";
 import type { Marked, MarkedField } from "../../lib/search-schemas";
-import { FUSE_OPTIONS, SEARCH_KEYS, type SearchFields } from "./fuzzy";
+import { SEARCH_KEYS, type SearchFields } from "./case-doc";
+import { FUSE_OPTIONS } from "./rerank";
 
 /**
  * The matched words of one page of results, marked for the screen. Fuse itself finds them, run on
@@ -60,16 +61,24 @@ export function snippet(text: string, ranges: readonly Range[]): Marked {
   return runs;
 }
 
-/** For each case of the page, its fields with the words that matched `query` marked. */
-export function markPage(page: SearchFields[], query: string): Partial<Record<MarkedField, Marked>>[] {
-  const out = page.map(() => ({}) as Partial<Record<MarkedField, Marked>>);
-  if (!page.length || !query.trim()) return out;
+/**
+ * One Fuse pass over the page: each case's score (lower is better; 1 where Fuse found no match of
+ * its own) and its fields with the words that matched `query` marked.
+ */
+export function markPage(
+  page: SearchFields[],
+  query: string,
+): { scores: number[]; marked: Partial<Record<MarkedField, Marked>>[] } {
+  const marked = page.map(() => ({}) as Partial<Record<MarkedField, Marked>>);
+  const scores = page.map(() => 1);
+  if (!page.length || !query.trim()) return { scores, marked };
   for (const result of new Fuse(page, FUSE_OPTIONS).search(query)) {
+    scores[result.refIndex] = result.score ?? 1;
     for (const m of result.matches ?? []) {
       const key = m.key as MarkedField;
       if (!m.value || !SEARCH_KEYS.includes(key)) continue;
-      out[result.refIndex][key] = LONG.has(key) ? snippet(m.value, m.indices) : markRuns(m.value, m.indices);
+      marked[result.refIndex][key] = LONG.has(key) ? snippet(m.value, m.indices) : markRuns(m.value, m.indices);
     }
   }
-  return out;
+  return { scores, marked };
 }

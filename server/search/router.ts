@@ -3,7 +3,8 @@ import { searchQuery } from "../../lib/search-schemas";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
 import { idParam } from "../notebook/shared";
-import { searchCases, similarTo } from "./service";
+import { searchCases } from "./service";
+import { similarTo } from "./similar";
 
 /** The casebook: search the active shop's cases, and the cases most like one casting. */
 export const searchRouter = Router();

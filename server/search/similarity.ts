@@ -1,6 +1,7 @@
 import type { ReasonPart } from "../../lib/search-schemas";
 import { DEFECT_LOCATIONS, DEFECT_TYPES } from "../../rules/case";
-import type { CaseDoc } from "./case-doc";
+import type { CaseSummary } from "../../lib/search-schemas";
+import type { DefectLocation, DefectType } from "../../rules/case";
 
 /**
  * "Cases like this one": past castings with the same defects (type, then location) poured under
@@ -9,22 +10,21 @@ import type { CaseDoc } from "./case-doc";
  * ones that teach something. The weights are our judgement, not a published figure.
  */
 export type SimilarInput = Pick<
-  CaseDoc,
-  | "id"
-  | "pouredOn"
-  | "defects"
-  | "defectMask"
-  | "markCodes"
-  | "process"
-  | "alloyKey"
-  | "alloy"
-  | "alloyFamily"
-  | "superheatC"
-  | "degassing"
-  | "minSectionMm"
-  | "cause"
-  | "fixWorked"
->;
+  CaseSummary,
+  "id" | "pouredOn" | "defects" | "process" | "alloy" | "cause" | "fixWorked"
+> & {
+  defectMask: number;
+  /** Each mark as type index * 16 + location index (rules/case.ts lists), for quick comparing. */
+  markCodes: number[];
+  alloyKey: string;
+  alloyFamily: string;
+  superheatC: number | null;
+  degassing: string | null;
+  minSectionMm: number | null;
+};
+export const defectBit = (t: DefectType) => 1 << DEFECT_TYPES.indexOf(t);
+export const markCode = (t: DefectType, l: DefectLocation) =>
+  DEFECT_TYPES.indexOf(t) * 16 + DEFECT_LOCATIONS.indexOf(l);
 export type Similar<T> = { doc: T; similarity: number; parts: ReasonPart[] };
 
 const WEIGHTS = { defects: 0.5, process: 0.15, alloy: 0.1, superheat: 0.1, degassing: 0.05, section: 0.1 };
@@ -143,7 +143,7 @@ export function keepBest<T extends Pick<SimilarInput, "pouredOn" | "id">>(
 /**
  * The `limit` cases most like `target`. When it has marked defects, only cases sharing one of
  * them qualify (the point is the same defect coming back); without marks, conditions alone rank.
- * The shop index runs the same rule over its columns (shop-index.ts, `similarTo`).
+ * The casebook runs the same rule in SQL over the typed columns (similar.ts); this is its reference.
  */
 export function similarCases<T extends SimilarInput>(
   target: SimilarInput,

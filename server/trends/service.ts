@@ -8,7 +8,8 @@ import { causeTitles } from "../rulebook/cause-titles";
  * scoped by shop_id, so another shop's castings never enter a count.
  */
 function where(shopId: string, q: TrendsQuery): SQL {
-  const parts = [sql`c.shop_id = ${shopId}`];
+  // Archived castings (or those of an archived melt) are out of the counts, as they are out of the lists.
+  const parts = [sql`c.shop_id = ${shopId}`, sql`c.archived_at is null`, sql`m.archived_at is null`];
   if (q.from) parts.push(sql`m.poured_on >= ${q.from}`);
   if (q.to) parts.push(sql`m.poured_on <= ${q.to}`);
   if (q.process) parts.push(sql`m.process = ${q.process}`);

@@ -166,3 +166,24 @@ describe("a save sent twice (idempotency key)", () => {
 });
 
 const thin = () => ({ partName: "Retry plate", minSectionMm: 4, outcome: "scrap" });
+
+describe("archived cases and the casebook search", () => {
+  it("an archived casting, or one of an archived melt, is not found; restored, it is found again", async () => {
+    const { owner, caster } = await shopWithCrew("Archive Search Shop");
+    const melt = await newMelt(caster);
+    const casting = await newCasting(caster, melt.id, { partName: "Quenchwheel sprocket" });
+    const found = async () =>
+      ((await caster.agent.get("/api/search").query({ q: "quenchwheel" })).body.items as { id: number }[]).map(
+        (i) => i.id,
+      );
+    expect(await found()).toEqual([casting.id]);
+    expect((await caster.agent.post(`/api/castings/${casting.id}/archive`)).status).toBe(200);
+    expect(await found()).toEqual([]);
+    expect((await owner.agent.post(`/api/castings/${casting.id}/restore`)).status).toBe(200);
+    expect(await found()).toEqual([casting.id]);
+    expect((await owner.agent.post(`/api/melts/${melt.id}/archive`)).status).toBe(200);
+    expect(await found()).toEqual([]);
+    expect((await owner.agent.post(`/api/melts/${melt.id}/restore`)).status).toBe(200);
+    expect(await found()).toEqual([casting.id]);
+  });
+});

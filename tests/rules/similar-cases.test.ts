@@ -1,10 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { reasonText } from "../../lib/search-schemas";
-import { DEFECT_LOCATIONS, DEFECT_TYPES, PROCESSES } from "../../rules/case";
-import { caseDocs, defectBit, markCode, type CastingRow } from "../../server/search/case-doc";
-import { ShopIndex } from "../../server/search/shop-index";
-import { similarInIndex } from "../../server/search/similar-scan";
-import { similarCases, type SimilarInput } from "../../server/search/similarity";
+import { defectBit, markCode, similarCases, type SimilarInput } from "../../server/search/similarity";
 
 /** Hand-built cases around a cold lost-foam misrun at the top of a 4 mm wall (superheat 85 °C). */
 const base: SimilarInput = {
@@ -100,62 +96,5 @@ describe("cases like this one", () => {
     const found = similarCases(unmarked, [greenSand, ...many]);
     expect(found).toHaveLength(5);
     expect(found.map((f) => f.doc.id)).toEqual([10, 11, 12, 13, 14]);
-  });
-});
-
-describe("the shop index's scan", () => {
-  it("finds exactly what the case-by-case rule finds", () => {
-    let seed = 11;
-    const r = () => (seed = (seed * 16807) % 2147483647) / 2147483647;
-    const pick = <T>(xs: readonly T[]) => xs[Math.floor(r() * xs.length)];
-    const castings: CastingRow[] = Array.from({ length: 400 }, (_, i) => ({
-      id: i + 1,
-      meltId: 1 + (i >> 2),
-      partName: "Part",
-      pattern: null,
-      outcome: pick(["good", "scrap", null]),
-      notes: null,
-      createdBy: "u1",
-      minSectionMm: r() < 0.8 ? pick([3, 4, 5, 8, 12]) : null,
-      pouredOn: `2025-0${1 + (i % 9)}-1${i % 10}`,
-      process: pick(PROCESSES),
-      degassing: pick([null, "none", "rotary", "argon-lance"]),
-      pourTempC: r() < 0.8 ? 650 + Math.floor(r() * 150) : null,
-      meltNotes: null,
-      alloy: pick(["A356.0", "319.0", "356.0"]),
-      alloyFamily: "al-si",
-      liquidusC: 615,
-    }));
-    castings.forEach((c) => (c.alloyFamily = c.alloy === "319.0" ? "al-si-cu" : "al-si"));
-    const marks = castings.flatMap((c) =>
-      Array.from({ length: Math.floor(r() * 3) }, () => ({
-        castingId: c.id,
-        type: pick(DEFECT_TYPES.slice(0, 5)),
-        location: pick(DEFECT_LOCATIONS.slice(0, 4)),
-        severity: 2,
-        note: null,
-      })),
-    );
-    const confirmations = castings
-      .filter(() => r() < 0.1)
-      .map((c) => ({ castingId: c.id, causeId: "cold-pour", causeText: null }));
-    const fixes = confirmations
-      .filter(() => r() < 0.5)
-      .map((c) => ({ castingId: c.castingId, fix: "hotter", worked: "yes" }));
-    const docs = caseDocs({
-      castings,
-      marks,
-      comments: [],
-      diagnoses: [],
-      confirmations,
-      fixes,
-      causeTitles: new Map(),
-    });
-    const index = new ShopIndex(docs);
-    const cases = index.live();
-    for (const target of cases.slice(0, 60)) {
-      const plain = similarCases(target, cases).map((s) => [s.doc.id, s.similarity, s.parts]);
-      expect(similarInIndex(index, target).map((s) => [s.doc.id, s.similarity, s.parts])).toEqual(plain);
-    }
   });
 });
