@@ -8,6 +8,7 @@ import { apiNotFound, errorHandler } from "./http/errors";
 import { apiBodies, authBodies, readablePath } from "./http/edge";
 import { sameOriginWrites } from "./http/same-origin";
 import { shopsRouter } from "./shops/router";
+import { sheetRouter } from "./sheet/router";
 import { searchRouter } from "./search/router";
 import { alloysRouter } from "./alloys/router";
 import { castingsRouter } from "./castings/router";
@@ -35,6 +36,8 @@ export const API_ROUTERS: [string, express.Router][] = [
   ["/melts", meltsRouter],
   ["/calculations", calculationsRouter],
   ["/trends", trendsRouter],
+  // The case sheet beside the casting it prints (server/sheet), before the casting routes.
+  ["/castings", sheetRouter],
   ["/castings", castingsRouter],
   ["/photos", photosRouter],
   ["/marks", marksRouter],

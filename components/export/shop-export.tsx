@@ -18,8 +18,8 @@ export function ShopExport() {
   return (
     <>
       <Text style={styles.meta}>
-        Every casting with its melt conditions, marks, the likely and the confirmed cause, and the fixes tried, one
-        row per casting. Each column names its unit.
+        Every casting with its melt conditions, marks, the likely and the confirmed cause, and the fixes tried, one row
+        per casting. Each column names its unit.
       </Text>
       <ChoiceChips label="Units in the file" options={UNIT_OPTIONS} value={units} onChange={setUnits} />
       <Button

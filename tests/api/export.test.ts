@@ -117,21 +117,29 @@ describe("CSV export", () => {
   it("adds the mentor's confirmed cause, the fixes tried and whether they worked", async () => {
     const { owner, mentor, caster } = await shopWithCrew("Export Learning Shop");
     const melt = await newMelt(caster);
-    const plate = await newCasting(caster, melt.id, { marks: [{ type: "misrun", location: "far-from-gate", severity: 3 }] });
+    const plate = await newCasting(caster, melt.id, {
+      marks: [{ type: "misrun", location: "far-from-gate", severity: 3 }],
+    });
     const untouched = await newCasting(caster, melt.id, { partName: "Bracket", outcome: "good" });
     const said = await mentor.agent
       .post(`/api/review/castings/${plate.id}/confirmations`)
       .send({ causeText: "=Ladle lip froze over" });
     expect(said.status).toBe(201);
-    const first = await caster.agent.post(`/api/followups/castings/${plate.id}/fixes`).send({ fix: "Pour 60 °C hotter" });
+    const first = await caster.agent
+      .post(`/api/followups/castings/${plate.id}/fixes`)
+      .send({ fix: "Pour 60 °C hotter" });
     expect(first.status).toBe(201);
     // Whether a fix worked is judged on the next casting of the part, from a later melt.
-    const next = await newCasting(caster, (await newMelt(caster, { pouredOn: "2026-02-02" })).id, { outcome: "rework" });
+    const next = await newCasting(caster, (await newMelt(caster, { pouredOn: "2026-02-02" })).id, {
+      outcome: "rework",
+    });
     const judged = await caster.agent
       .patch(`/api/followups/fixes/${first.body.id}`)
       .send({ nextCastingId: next.id, worked: "partly" });
     expect(judged.status).toBe(200);
-    expect((await caster.agent.post(`/api/followups/castings/${plate.id}/fixes`).send({ fix: "Vent the far end" })).status).toBe(201);
+    expect(
+      (await caster.agent.post(`/api/followups/castings/${plate.id}/fixes`).send({ fix: "Vent the far end" })).status,
+    ).toBe(201);
 
     const rows = await csvOf(await owner.agent.get("/api/export/castings.csv"));
     const row = rows.find((r) => r.casting_id === String(plate.id))!;
@@ -148,9 +156,16 @@ describe("CSV export", () => {
     const melt = await newMelt(owner);
     await newCasting(owner, melt.id);
     const si = (await csvOf(await owner.agent.get("/api/export/castings.csv")))[0];
-    expect(si).toMatchObject({ pour_temp_c: "700", min_section_mm: "4", sprue_height_mm: "200", foam_density_kg_m3: "20" });
+    expect(si).toMatchObject({
+      pour_temp_c: "700",
+      min_section_mm: "4",
+      sprue_height_mm: "200",
+      foam_density_kg_m3: "20",
+    });
 
-    expect((await owner.agent.put("/api/people/me/units").send({ temperature: "F", length: "in", mass: "lb" })).status).toBe(200);
+    expect(
+      (await owner.agent.put("/api/people/me/units").send({ temperature: "F", length: "in", mass: "lb" })).status,
+    ).toBe(200);
     const mine = (await csvOf(await owner.agent.get("/api/export/castings.csv?units=mine")))[0];
     // Exact definitions (lib/units.ts): °F = °C × 9/5 + 32, 1 in = 25.4 mm, 1 lb = 0.45359237 kg, 1 ft = 0.3048 m.
     expect(mine).toMatchObject({
