@@ -2,6 +2,7 @@ import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { CauseRecordLine } from "@/components/rulebook/rule-record";
 import { ScoreBar } from "@/components/ui/score-bar";
+import { usePrinting } from "@/hooks/use-printing";
 import { card, colors, fontSize, space } from "@/constants/theme";
 import { reasonInUnits } from "@/lib/reason-text";
 import type { CauseWithRecord } from "@/lib/review-schemas";
@@ -14,6 +15,9 @@ type Cause = CauseWithRecord;
 export function CauseCard({ cause, rank, units }: { cause: Cause; rank: number; units: Units }) {
   const [done, setDone] = useState<ReadonlySet<number>>(new Set());
   const [why, setWhy] = useState(false);
+  // On paper there is nothing to tap, so the reasons are always there.
+  const printing = usePrinting();
+  const open = why || printing;
   const toggle = (i: number) =>
     setDone((d) => {
       const n = new Set(d);
@@ -43,7 +47,7 @@ export function CauseCard({ cause, rank, units }: { cause: Cause; rank: number; 
       <Pressable role="button" aria-expanded={why} onPress={() => setWhy((w) => !w)}>
         <Text style={styles.toggle}>{why ? "▾ Hide why" : "▸ Why this cause"}</Text>
       </Pressable>
-      {why ? (
+      {open ? (
         <View style={styles.why}>
           {/* Older saved results carry only the SI sentences. */}
           {(cause.reasons ? cause.reasons.map((r) => reasonInUnits(r, units)) : cause.because).map((b) => (

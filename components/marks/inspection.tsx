@@ -7,6 +7,7 @@ import { MarkList } from "@/components/marks/mark-list";
 import { PhotoAdd } from "@/components/photos/photo-add";
 import { PhotoDropZone } from "@/components/photos/photo-drop-zone";
 import { PhotoPanel } from "@/components/photos/photo-panel";
+import { PrintHidden, printHidden, printStacked } from "@/components/ui/print";
 import { colors, fontSize, space } from "@/constants/theme";
 import { useInspection } from "@/hooks/use-inspection";
 import { useUploadPhoto } from "@/hooks/use-photos";
@@ -43,19 +44,23 @@ export function Inspection({ casting, wide }: { casting: CastingDetail; wide: bo
 
   const photos = (
     <PhotoDropZone enabled={wide} onFile={(file) => upload.mutate({ file, name: file.name })}>
-      <PhotoAdd
-        upload={upload.mutate}
-        busy={upload.isPending}
-        progress={upload.progress}
-        error={upload.error}
-        wide={wide}
-      />
+      <PrintHidden>
+        <PhotoAdd
+          upload={upload.mutate}
+          busy={upload.isPending}
+          progress={upload.progress}
+          error={upload.error}
+          wide={wide}
+        />
+      </PrintHidden>
       {moving ? (
         <Text style={styles.moving} role="status">
           Tap the new spot for mark {moving.number}.
         </Text>
       ) : casting.photos.length ? (
-        <Text style={styles.hint}>Tap a photo where you see a defect to mark it.</Text>
+        <Text style={styles.hint} {...printHidden}>
+          Tap a photo where you see a defect to mark it.
+        </Text>
       ) : null}
       {casting.photos.map((p) => (
         <View key={p.id} style={styles.photo}>
@@ -91,7 +96,7 @@ export function Inspection({ casting, wide }: { casting: CastingDetail; wide: bo
     </View>
   );
   return wide ? (
-    <View style={styles.twoPane}>
+    <View style={styles.twoPane} {...printStacked}>
       <View style={styles.left}>{photos}</View>
       {marks}
     </View>
