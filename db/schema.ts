@@ -25,3 +25,4 @@ export * from "./mentor-schema";
 export * from "./search-schema";
 export * from "./people-schema";
 export * from "./calculator-schema";
+export * from "./import-schema";

@@ -11,7 +11,7 @@ export const statements = {
   casebook: ["read", "write", "comment", "request-review"],
   review: ["confirm"],
   rule: ["read", "write", "publish", "retire"],
-  shop: ["settings", "export", "invite"],
+  shop: ["settings", "export", "import", "invite"],
 } as const;
 
 export const ac = createAccessControl(statements);
@@ -33,7 +33,7 @@ export const roles = {
   owner: ac.newRole({
     ...ownerAc.statements,
     ...mentorCan,
-    shop: ["settings", "export", "invite"],
+    shop: ["settings", "export", "import", "invite"],
   }),
 };
 

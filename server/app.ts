@@ -15,6 +15,7 @@ import { castingsRouter } from "./castings/router";
 import { commentsRouter } from "./comments/router";
 import { diagnosisRouter } from "./diagnosis/router";
 import { exportRouter } from "./export/router";
+import { importRouter } from "./import/router";
 import { marksRouter } from "./marks/router";
 import { meltsRouter } from "./melts/router";
 import { peopleRouter } from "./people/router";
@@ -43,6 +44,7 @@ export const API_ROUTERS: [string, express.Router][] = [
   ["/marks", marksRouter],
   ["/comments", commentsRouter],
   ["/export", exportRouter],
+  ["/import", importRouter],
   ["/diagnosis", diagnosisRouter],
   // Mentors (docs/mentor-api.md): review, follow-ups and the shop's rulebook; then the casebook search.
   ["/review", reviewRouter],
