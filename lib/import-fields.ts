@@ -195,3 +195,29 @@ export function guessMapping(headers: string[]): ImportMapping {
   });
   return out;
 }
+
+// ---- Answers (server/import/service.ts) ----
+export type RowStatus = "new" | "already-imported" | "repeated-in-file" | "refused";
+export type PreviewRow = {
+  line: number;
+  status: RowStatus;
+  partName: string | null;
+  pouredOn: string | null;
+  problems: Record<string, string>;
+};
+/** What an import would do, row by row; `mappingProblems` when the columns are not mapped well enough to try. */
+export type ImportPreview = {
+  headers: string[];
+  /** The first row's cells, to show beside each header. */
+  sample: string[];
+  mapping: ImportMapping;
+  mappingProblems: string[];
+  rows: PreviewRow[];
+  counts: Record<RowStatus, number>;
+};
+export type ImportResult = {
+  imported: number;
+  melts: number;
+  counts: Record<RowStatus, number>;
+  refused: PreviewRow[];
+};

@@ -1,7 +1,14 @@
 import { and, eq, inArray } from "drizzle-orm";
 import { db } from "../db";
 import { castings, importedRows, melts } from "../../db/schema";
-import { guessMapping, importMapping, type ImportMapping } from "../../lib/import-fields";
+import {
+  guessMapping,
+  importMapping,
+  type ImportMapping,
+  type ImportPreview,
+  type ImportResult,
+  type RowStatus,
+} from "../../lib/import-fields";
 import {
   alloyConflicts,
   castingFields,
@@ -14,22 +21,6 @@ import type { ShopMember } from "../auth/shop-access";
 import { HttpError } from "../http/errors";
 import { readCsv } from "./parse";
 import { readRow, type ReadRow } from "./rows";
-
-export type RowStatus = "new" | "already-imported" | "repeated-in-file" | "refused";
-export type PreviewRow = {
-  line: number;
-  status: RowStatus;
-  partName: string | null;
-  pouredOn: string | null;
-  problems: Record<string, string>;
-};
-export type ImportPreview = {
-  headers: string[];
-  mapping: ImportMapping;
-  mappingProblems: string[];
-  rows: PreviewRow[];
-  counts: Record<RowStatus, number>;
-};
 
 type Checked = { row: ReadRow; status: RowStatus; alloyId?: number };
 
@@ -87,11 +78,12 @@ export async function previewImport(shopId: string, bytes: Buffer, mapping: unkn
   if (!parsed.success) {
     const mappingProblems = parsed.error.issues.map((i) => i.message);
     const guess = Array.isArray(wanted) ? (wanted as ImportMapping) : guessMapping(headers);
-    return { headers, mapping: guess, mappingProblems, rows: [], counts: counted([]) };
+    return { headers, sample: rows[0], mapping: guess, mappingProblems, rows: [], counts: counted([]) };
   }
   const checked = await checkRows(shopId, rows, parsed.data);
   return {
     headers,
+    sample: rows[0],
     mapping: parsed.data,
     mappingProblems: [],
     counts: counted(checked),
@@ -109,13 +101,6 @@ const MELT_COLUMNS = Object.keys(meltFields.shape).filter((k) => k !== "alloy") 
 const CASTING_COLUMNS = Object.keys(castingFields.shape) as (keyof typeof castingFields.shape)[];
 const pick = <T extends object>(input: T, keys: readonly string[]) =>
   Object.fromEntries(keys.map((k) => [k, (input as Record<string, unknown>)[k] ?? null]));
-
-export type ImportResult = {
-  imported: number;
-  melts: number;
-  counts: Record<RowStatus, number>;
-  refused: PreviewRow[];
-};
 
 /**
  * The new rows in one transaction: all of them or none. Rows with the same melt conditions share one melt.
