@@ -54,8 +54,6 @@ export function PourLogImport() {
       {preview.error ? <Notice tone="error">{preview.error.message}</Notice> : null}
       {p && mapping && log ? (
         <>
-          <Heading level={3}>Columns</Heading>
-          <ColumnMapper headers={p.headers} sample={p.sample} mapping={mapping} onChange={remap} />
           <Heading level={3}>What would happen</Heading>
           <ImportPreviewView preview={p} />
           {ready ? (
@@ -66,14 +64,16 @@ export function PourLogImport() {
               testID="import-run"
             />
           ) : null}
+          {run.error ? <Notice tone="error">{run.error.message}</Notice> : null}
+          {run.data ? (
+            <Notice>
+              {`Imported ${run.data.imported} casting${run.data.imported === 1 ? "" : "s"} in ${run.data.melts} melt${run.data.melts === 1 ? "" : "s"}.` +
+                (run.data.refused.length ? ` ${run.data.refused.length} refused, listed above.` : "")}
+            </Notice>
+          ) : null}
+          <Heading level={3}>Which column is which</Heading>
+          <ColumnMapper headers={p.headers} sample={p.sample} mapping={mapping} onChange={remap} />
         </>
-      ) : null}
-      {run.error ? <Notice tone="error">{run.error.message}</Notice> : null}
-      {run.data ? (
-        <Notice>
-          {`Imported ${run.data.imported} casting${run.data.imported === 1 ? "" : "s"} in ${run.data.melts} melt${run.data.melts === 1 ? "" : "s"}.` +
-            (run.data.refused.length ? ` ${run.data.refused.length} refused, listed above.` : "")}
-        </Notice>
       ) : null}
     </>
   );

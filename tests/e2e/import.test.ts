@@ -1,5 +1,5 @@
 import { describe, expect, inject, it } from "vitest";
-import { PHONE, seen, shot, signedInAs, useBrowser, WIDE } from "./browser";
+import { longShot, PHONE, seen, shot, signedInAs, useBrowser, WIDE } from "./browser";
 
 const baseUrl = inject("baseUrl");
 const browser = useBrowser();
@@ -17,6 +17,8 @@ describe("importing a pour log in the browser", () => {
   it("the owner maps the columns, sees the refused rows and why, imports the rest once", async () => {
     const page = await signedInAs(browser(), baseUrl, WIDE, "owner");
     await page.goto(`${baseUrl}/more`);
+    await seen(page, "Units in the file");
+    await longShot(page, "wide-more-owner");
     await page.getByTestId("import-link").click();
     await seen(page, "Import a pour log");
     const chooser = page.waitForEvent("filechooser");
@@ -55,18 +57,21 @@ describe("importing a pour log in the browser", () => {
     const list = await (await page.request.get(`${baseUrl}/api/castings?pageSize=100&sort=date-asc`)).json();
     const ours = list.items.filter((c: { partName: string }) => c.partName.startsWith("Old "));
     expect(ours.map((c: { partName: string }) => c.partName)).toEqual(["Old tiller bracket", "Old hinge leaf"]);
-    await shot(page, "wide-import-done");
+    await longShot(page, "wide-import-done");
     await page.context().close();
   });
 
   it("fits a phone, and is not offered to a caster", async () => {
     const page = await signedInAs(browser(), baseUrl, PHONE, "owner");
+    await page.goto(`${baseUrl}/more`);
+    await seen(page, "Units in the file");
+    await longShot(page, "phone-more-owner");
     await page.goto(`${baseUrl}/more/import`);
     const chooser = page.waitForEvent("filechooser");
     await page.getByTestId("import-choose").click();
     await (await chooser).setFiles({ name: "old-log.csv", mimeType: "text/csv", buffer: Buffer.from(LOG) });
     await expect.poll(() => page.getByTestId("import-preview").count(), { timeout: 15000 }).toBe(1);
-    await shot(page, "phone-import-preview");
+    await longShot(page, "phone-import-preview");
     await page.context().close();
 
     const caster = await signedInAs(browser(), baseUrl, PHONE, "caster");
