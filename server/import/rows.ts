@@ -2,7 +2,7 @@ import { createHash } from "node:crypto";
 import { castingInput, meltInput, type CastingInput, type MeltInput } from "../../lib/notebook-schemas";
 import { importFieldOf, type ImportField, type ImportMapping } from "../../lib/import-fields";
 import { fieldErrors } from "../http/errors";
-import { toSi, type Units } from "../../lib/units";
+import { fromField, type Units } from "../../lib/units";
 
 /** One row of the file read through the mapping: the melt and casting it makes, or why it is refused. */
 export type ReadRow =
@@ -33,9 +33,9 @@ function cellValue(f: ImportField, cell: string, unit: string | undefined): { va
       return iso ? { value: iso } : { problem: `"${cell}" is not a date as YYYY-MM-DD` };
     }
     case "number": {
-      const n = Number(cell.replace(",", "."));
-      if (!Number.isFinite(n)) return { problem: `"${cell}" is not a number` };
-      return { value: f.quantity ? toSi(f.quantity, n, unitsFrom(unit)) : n };
+      // A measured value is read as the forms read typed text (lib/units.ts fromField), in this column's unit.
+      const n = f.quantity ? fromField(f.quantity, cell, unitsFrom(unit)) : Number(cell.replace(",", "."));
+      return n !== undefined && Number.isFinite(n) ? { value: n } : { problem: `"${cell}" is not a number` };
     }
     case "yes-no": {
       const w = cell.toLowerCase();

@@ -7,7 +7,7 @@ const browser = useBrowser();
 // Invented parts poured long before the demo shop's own melts; the third row has no part name.
 const LOG = [
   "Poured on,Alloy,Process,Pour temp (F),Thinnest section (in),Part name,Outcome",
-  "2019-05-04,A356.0,green sand,1350,1/4,Old tiller bracket,good",
+  "2019-05-04,A356.0,green sand,1350,thin,Old tiller bracket,good",
   "2019-05-04,A356.0,green sand,1350,0.25,Old tiller bracket,good",
   "2019-05-04,A356.0,green sand,1350,0.3,,scrap",
   "2019-05-04,A356.0,green sand,1350,0.3,Old hinge leaf,rework",
@@ -25,11 +25,11 @@ describe("importing a pour log in the browser", () => {
     await page.getByTestId("import-choose").click();
     await (await chooser).setFiles({ name: "old-log.csv", mimeType: "text/csv", buffer: Buffer.from(LOG) });
 
-    // Line 2 writes the size as "1/4", which the import does not read (decimals only): refused with line 4.
+    // Line 2 gives the section in words, line 4 no part name: both refused, each with its reason.
     await expect.poll(() => page.getByTestId("import-preview").count(), { timeout: 15000 }).toBe(1);
     await seen(page, "2 to import · 2 refused");
     await seen(page, "Part name: name the part");
-    await seen(page, 'Thinnest section: "1/4" is not a number');
+    await seen(page, 'Thinnest section: "thin" is not a number');
     expect(await page.getByTestId("refused-line-4").count()).toBe(1);
     // The header said °F and inches; the owner can see and change each column's unit.
     const pourUnit = page.getByRole("radiogroup", { name: "Unit of Pour temp (F)" });
