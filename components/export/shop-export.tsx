@@ -9,7 +9,7 @@ import { apiBaseUrl } from "@/lib/client-env";
 const UNIT_OPTIONS = [
   { value: "si", label: "SI (°C, mm, kg)" },
   { value: "mine", label: "My units" },
-  { value: "shop", label: "Shop defaults" },
+  { value: "shop", label: "The shop's default units" },
 ] as const;
 
 /** The owner's export: every casting with its melt conditions, marks and what was learned, as CSV for a spreadsheet. */
