@@ -26,3 +26,4 @@ export * from "./search-schema";
 export * from "./people-schema";
 export * from "./calculator-schema";
 export * from "./revision-schema";
+export * from "./import-schema";

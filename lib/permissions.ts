@@ -12,7 +12,7 @@ export const statements = {
   casebook: ["read", "write", "comment", "request-review", "archive-any", "restore"],
   review: ["confirm"],
   rule: ["read", "write", "publish", "retire"],
-  shop: ["settings", "export", "invite"],
+  shop: ["settings", "export", "import", "invite"],
 } as const;
 
 export const ac = createAccessControl(statements);
@@ -36,7 +36,7 @@ export const roles = {
     ...ownerAc.statements,
     ...mentorCan,
     casebook: [...mentorCan.casebook, "restore"],
-    shop: ["settings", "export", "invite"],
+    shop: ["settings", "export", "import", "invite"],
   }),
 };
 

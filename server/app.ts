@@ -9,12 +9,14 @@ import { apiNotFound, errorHandler } from "./http/errors";
 import { apiBodies, authBodies, readablePath } from "./http/edge";
 import { sameOriginWrites } from "./http/same-origin";
 import { shopsRouter } from "./shops/router";
+import { sheetRouter } from "./sheet/router";
 import { searchRouter } from "./search/router";
 import { alloysRouter } from "./alloys/router";
 import { castingsRouter } from "./castings/router";
 import { commentsRouter } from "./comments/router";
 import { diagnosisRouter } from "./diagnosis/router";
 import { exportRouter } from "./export/router";
+import { importRouter } from "./import/router";
 import { marksRouter } from "./marks/router";
 import { meltsRouter } from "./melts/router";
 import { peopleRouter } from "./people/router";
@@ -36,11 +38,14 @@ export const API_ROUTERS: [string, express.Router][] = [
   ["/melts", meltsRouter],
   ["/calculations", calculationsRouter],
   ["/trends", trendsRouter],
+  // The case sheet beside the casting it prints (server/sheet), before the casting routes.
+  ["/castings", sheetRouter],
   ["/castings", castingsRouter],
   ["/photos", photosRouter],
   ["/marks", marksRouter],
   ["/comments", commentsRouter],
   ["/export", exportRouter],
+  ["/import", importRouter],
   ["/diagnosis", diagnosisRouter],
   // Mentors (docs/mentor-api.md): review, follow-ups and the shop's rulebook; then the casebook search.
   ["/review", reviewRouter],

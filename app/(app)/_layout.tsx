@@ -2,6 +2,7 @@ import { TabList, Tabs, TabSlot, TabTrigger } from "expo-router/ui";
 import { ActivityIndicator, StyleSheet, View } from "react-native";
 import { CreateShopForm } from "@/components/auth/create-shop-form";
 import { NavButton } from "@/components/ui/nav-button";
+import { printHidden } from "@/components/ui/print";
 import { Notice } from "@/components/ui/notice";
 import { ShopHeader } from "@/components/shops/shop-header";
 import { colors } from "@/constants/theme";
@@ -33,7 +34,7 @@ export default function AppLayout() {
 
   // TabList must be a direct child of Tabs, so it is built here rather than in a component.
   const nav = (
-    <TabList style={wide ? styles.rail : styles.bar}>
+    <TabList style={wide ? styles.rail : styles.bar} {...printHidden}>
       {SECTIONS.map((s) => (
         <TabTrigger key={s.name} name={s.name} href={s.href} asChild>
           <NavButton
@@ -48,7 +49,9 @@ export default function AppLayout() {
   );
   return (
     <View style={styles.fill}>
-      <ShopHeader me={me.data} />
+      <View {...printHidden}>
+        <ShopHeader me={me.data} />
+      </View>
       <Tabs style={[styles.fill, { flexDirection: wide ? "row" : "column" }]}>
         {wide ? nav : null}
         <TabSlot style={styles.fill} />

@@ -2,6 +2,7 @@ import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { CauseRecordLine } from "@/components/rulebook/rule-record";
 import { ScoreBar } from "@/components/ui/score-bar";
+import { usePrinting } from "@/hooks/use-printing";
 import { card, colors, fontSize, space } from "@/constants/theme";
 import { fixesInUnits } from "@/lib/quantity-words";
 import { reasonInUnits } from "@/lib/reason-text";
@@ -25,6 +26,9 @@ export function CauseCard({ cause, rank, units, ticked, onTick }: Props) {
   const [why, setWhy] = useState(false);
   // A tick is kept by the fix's own (SI) text, so it holds whichever units the person reads it in.
   const shown = fixesInUnits(cause, units);
+  // On paper there is nothing to tap, so the reasons are always there.
+  const printing = usePrinting();
+  const open = why || printing;
 
   return (
     <View style={styles.card} testID={`cause-${rank}`}>
@@ -58,7 +62,7 @@ export function CauseCard({ cause, rank, units, ticked, onTick }: Props) {
       <Pressable role="button" aria-expanded={why} onPress={() => setWhy((w) => !w)}>
         <Text style={styles.toggle}>{why ? "▾ Hide why" : "▸ Why this cause"}</Text>
       </Pressable>
-      {why ? (
+      {open ? (
         <View style={styles.why}>
           {/* Older saved results carry only the SI sentences. */}
           {(cause.reasons ? cause.reasons.map((r) => reasonInUnits(r, units)) : cause.because).map((b) => (

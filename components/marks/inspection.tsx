@@ -7,6 +7,7 @@ import { MarkList } from "@/components/marks/mark-list";
 import { PhotoAdd } from "@/components/photos/photo-add";
 import { PhotoDropZone } from "@/components/photos/photo-drop-zone";
 import { PhotoPanel } from "@/components/photos/photo-panel";
+import { PrintHidden, printHidden, printStacked } from "@/components/ui/print";
 import { colors, fontSize, space } from "@/constants/theme";
 import { useInspection } from "@/hooks/use-inspection";
 import { fromFile } from "@/hooks/use-photo-picker";
@@ -44,13 +45,23 @@ export function Inspection({ casting, wide }: { casting: CastingDetail; wide: bo
 
   const photos = (
     <PhotoDropZone enabled={wide} onFiles={(files) => intake.add({ candidates: files.map(fromFile), refused: [] })}>
-      <PhotoAdd add={intake.add} busy={intake.busy} progress={intake.progress} messages={intake.messages} wide={wide} />
+      <PrintHidden>
+        <PhotoAdd
+          add={intake.add}
+          busy={intake.busy}
+          progress={intake.progress}
+          messages={intake.messages}
+          wide={wide}
+        />
+      </PrintHidden>
       {moving ? (
         <Text style={styles.moving} role="status">
           Tap the new spot for mark {moving.number}.
         </Text>
       ) : casting.photos.length ? (
-        <Text style={styles.hint}>Tap a photo where you see a defect to mark it.</Text>
+        <Text style={styles.hint} {...printHidden}>
+          Tap a photo where you see a defect to mark it.
+        </Text>
       ) : null}
       {casting.photos.map((p) => (
         <View key={p.id} style={styles.photo}>
@@ -86,7 +97,7 @@ export function Inspection({ casting, wide }: { casting: CastingDetail; wide: bo
     </View>
   );
   return wide ? (
-    <View style={styles.twoPane}>
+    <View style={styles.twoPane} {...printStacked}>
       <View style={styles.left}>{photos}</View>
       {marks}
     </View>

@@ -83,6 +83,15 @@ export async function getObject(key: string, range?: string): Promise<StoredObje
   }
 }
 
+/** A whole object in memory (a photo for the printed sheet); null when it is missing. */
+export async function readObject(key: string): Promise<Buffer | null> {
+  const got = await getObject(key);
+  if (got === "missing" || got === "unsatisfiable") return null;
+  const chunks: Buffer[] = [];
+  for await (const chunk of got.body) chunks.push(Buffer.from(chunk as Uint8Array));
+  return Buffer.concat(chunks);
+}
+
 export async function objectExists(key: string): Promise<boolean> {
   try {
     await store().send(new HeadObjectCommand({ Bucket: env.S3_BUCKET, Key: key }));

@@ -114,6 +114,81 @@ describe("CSV export", () => {
     for (const cell of Object.values(row)) expect(cell).not.toMatch(/^[=+@\t\r]/);
   });
 
+  it("adds the mentor's confirmed cause, the fixes tried and whether they worked", async () => {
+    const { owner, mentor, caster } = await shopWithCrew("Export Learning Shop");
+    const melt = await newMelt(caster);
+    const plate = await newCasting(caster, melt.id, {
+      marks: [{ type: "misrun", location: "far-from-gate", severity: 3 }],
+    });
+    const untouched = await newCasting(caster, melt.id, { partName: "Bracket", outcome: "good" });
+    const said = await mentor.agent
+      .post(`/api/review/castings/${plate.id}/confirmations`)
+      .send({ causeText: "=Ladle lip froze over" });
+    expect(said.status).toBe(201);
+    const first = await caster.agent
+      .post(`/api/followups/castings/${plate.id}/fixes`)
+      .send({ fix: "Pour 60 °C hotter" });
+    expect(first.status).toBe(201);
+    // Whether a fix worked is judged on the next casting of the part, from a later melt.
+    const next = await newCasting(caster, (await newMelt(caster, { pouredOn: "2026-02-02" })).id, {
+      outcome: "rework",
+    });
+    const judged = await caster.agent
+      .patch(`/api/followups/fixes/${first.body.id}`)
+      .send({ nextCastingId: next.id, worked: "partly" });
+    expect(judged.status).toBe(200);
+    expect(
+      (await caster.agent.post(`/api/followups/castings/${plate.id}/fixes`).send({ fix: "Vent the far end" })).status,
+    ).toBe(201);
+
+    const rows = await csvOf(await owner.agent.get("/api/export/castings.csv"));
+    const row = rows.find((r) => r.casting_id === String(plate.id))!;
+    // The cause in the mentor's words, guarded like every text cell; fixes in the order they were tried.
+    expect(row.confirmed_cause).toBe("'=Ladle lip froze over");
+    expect(row.fix_tried).toBe("Pour 60 °C hotter; Vent the far end");
+    expect(row.fix_worked).toBe("partly; not judged");
+    const plain = rows.find((r) => r.casting_id === String(untouched.id))!;
+    expect([plain.confirmed_cause, plain.fix_tried, plain.fix_worked]).toEqual(["", "", ""]);
+  });
+
+  it("writes SI by default and the person's or the shop's units when asked, the unit in each column name", async () => {
+    const { owner } = await shopWithCrew("Export Units Shop");
+    const melt = await newMelt(owner);
+    await newCasting(owner, melt.id);
+    const si = (await csvOf(await owner.agent.get("/api/export/castings.csv")))[0];
+    expect(si).toMatchObject({
+      pour_temp_c: "700",
+      min_section_mm: "4",
+      sprue_height_mm: "200",
+      foam_density_kg_m3: "20",
+    });
+
+    expect(
+      (await owner.agent.put("/api/people/me/units").send({ temperature: "F", length: "in", mass: "lb" })).status,
+    ).toBe(200);
+    const mine = (await csvOf(await owner.agent.get("/api/export/castings.csv?units=mine")))[0];
+    // Exact definitions (lib/units.ts): °F = °C × 9/5 + 32, 1 in = 25.4 mm, 1 lb = 0.45359237 kg, 1 ft = 0.3048 m.
+    expect(mine).toMatchObject({
+      melt_temp_f: "1328", // 720 °C
+      pour_temp_f: "1292", // 700 °C
+      superheat_f: "153", // 85 °C of superheat is a difference: × 9/5, no +32
+      ambient_temp_f: "39", // 4 °C = 39.2 °F
+      min_section_in: "0.157", // 4 mm
+      sprue_height_in: "7.874", // 200 mm
+      foam_density_lb_ft3: "1.25", // 20 kg/m³ = 1.2486 lb/ft³
+    });
+    expect(mine).not.toHaveProperty("pour_temp_c");
+
+    // The shop's defaults: °F only; length and mass the shop left unset stay SI.
+    expect((await owner.agent.patch("/api/shops/current/settings").send({ defaultTemperature: "F" })).status).toBe(200);
+    const shop = (await csvOf(await owner.agent.get("/api/export/castings.csv?units=shop")))[0];
+    expect(shop).toMatchObject({ pour_temp_f: "1292", min_section_mm: "4", foam_density_kg_m3: "20" });
+
+    const bad = await owner.agent.get("/api/export/castings.csv?units=furlongs");
+    expect(bad.status).toBe(400);
+    expect(JSON.stringify(bad.body.error)).toMatch(/units must be si, mine or shop/);
+  });
+
   it("is the owner's alone (403 for mentor and caster), and a shop with no castings gets the header only", async () => {
     const { owner, mentor, caster } = await shopWithCrew("Export Rules Shop");
     expect((await caster.agent.get("/api/export/castings.csv")).status).toBe(403);

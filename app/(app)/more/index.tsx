@@ -81,6 +81,9 @@ export default function MoreScreen() {
         <>
           <Heading level={2}>Shop records</Heading>
           <ShopExport />
+          <Link href="/more/import" style={styles.link} testID="import-link">
+            <Text style={styles.linkText}>Import an old pour log (CSV) →</Text>
+          </Link>
         </>
       ) : null}
       <Heading level={2}>Safety</Heading>

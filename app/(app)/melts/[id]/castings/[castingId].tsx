@@ -3,14 +3,17 @@ import { ArchiveControl } from "@/components/archive/archive-control";
 import { CalcLinks } from "@/components/calculators/calc-links";
 import { gatingPrefill } from "@/lib/calculator-fields";
 import { BackLink } from "@/components/ui/back-link";
+import { CaseSheetActions } from "@/components/castings/case-sheet-actions";
 import { CastingSummary } from "@/components/castings/casting-summary";
 import { CommentThread } from "@/components/comments/comment-thread";
 import { DiagnosisView } from "@/components/diagnosis/diagnosis-view";
 import { FollowupPanel } from "@/components/followups/followup-panel";
 import { Heading } from "@/components/ui/heading";
 import { Inspection } from "@/components/marks/inspection";
+import { MeltFacts } from "@/components/melts/melt-facts";
 import { LoadFailed, Loading } from "@/components/ui/query-state";
 import { ReviewPanel } from "@/components/review/review-panel";
+import { PrintHidden, PrintOnly } from "@/components/ui/print";
 import { Screen } from "@/components/ui/screen";
 import { SimilarCases } from "@/components/search/similar-cases";
 import { useCasting } from "@/hooks/use-castings";
@@ -43,24 +46,32 @@ export default function CastingScreen() {
       {c.melt.archivedAt ? <ArchiveControl kind="melt" row={c.melt} /> : null}
       <CastingSummary casting={c} units={units} mayEdit={mayWrite} editField={params.edit} />
       <ArchiveControl kind="casting" row={c} />
+      <CaseSheetActions castingId={c.id} />
+      <PrintOnly>
+        <Heading level={2}>The melt</Heading>
+        <MeltFacts melt={c.melt} units={units} />
+      </PrintOnly>
       <Heading level={2}>Photos and marks</Heading>
       <Inspection casting={c} wide={wide} />
       <DiagnosisView casting={c} units={units} mayRun={mayWrite} />
       <ReviewPanel castingId={c.id} causes={causes} />
       <FollowupPanel castingId={c.id} causes={causes} />
-      <CalcLinks
-        target={{ meltId: c.meltId, castingId: c.id }}
-        prefill={{
-          alloy: c.melt.alloy,
-          process: c.melt.process,
-          minSectionMm: c.minSectionMm,
-          thicknessMm: c.maxSectionMm,
-          shape: "plate",
-          ...gatingPrefill(c),
-        }}
-      />
-      <SimilarCases castingId={c.id} />
-      <CommentThread castingId={c.id} comments={c.comments} mayComment={roleCan(role, { casebook: ["comment"] })} />
+      {/* Links to elsewhere and the thread stay on screen; the printed sheet ends with the fix and its outcome. */}
+      <PrintHidden>
+        <CalcLinks
+          target={{ meltId: c.meltId, castingId: c.id }}
+          prefill={{
+            alloy: c.melt.alloy,
+            process: c.melt.process,
+            minSectionMm: c.minSectionMm,
+            thicknessMm: c.maxSectionMm,
+            shape: "plate",
+            ...gatingPrefill(c),
+          }}
+        />
+        <SimilarCases castingId={c.id} />
+        <CommentThread castingId={c.id} comments={c.comments} mayComment={roleCan(role, { casebook: ["comment"] })} />
+      </PrintHidden>
     </Screen>
   );
 }
