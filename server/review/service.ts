@@ -28,6 +28,7 @@ import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
 import { HttpError } from "../http/errors";
 import { iso, personRef } from "../notebook/shared";
+import { allCausesOf, causeTitles } from "../rulebook/cause-titles";
 import { causesOf } from "../rulebook/context";
 import { newCauseId } from "../rulebook/draft";
 
@@ -41,11 +42,6 @@ async function nameOf(ids: (string | null)[]) {
     ? await db.select({ id: user.id, name: user.name }).from(user).where(inArray(user.id, wanted))
     : [];
   return (id: string | null) => (id ? personRef(id, rows.find((r) => r.id === id)?.name ?? "") : null);
-}
-
-async function causeTitles(shopId: string) {
-  const all = [...BUILT_IN_RULE_SET.causes, ...(await causesOf(shopId))];
-  return new Map(all.map((c) => [c.id, c.title]));
 }
 
 /** The metal of a casting's melt (from the alloy row it points at): fixes differ by metal. */
@@ -76,7 +72,7 @@ export async function castingCauses(shopId: string, castingId: number): Promise<
  * already in the rulebook, that cause; or, when asked, a new shop cause named by the words; else the words.
  */
 async function causeOfConfirmation(m: ShopMember, input: ConfirmationInput) {
-  const known = [...BUILT_IN_RULE_SET.causes, ...(await causesOf(m.shopId))];
+  const known = await allCausesOf(m.shopId);
   if (input.causeId) {
     if (!known.some((c) => c.id === input.causeId))
       throw new HttpError(400, "Some values need fixing.", {

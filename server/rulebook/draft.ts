@@ -1,8 +1,8 @@
-import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
 import { checkRule, ruleSchema, type KbCause, type KbRule } from "../../rules/kb-schema";
 import { draftToRule, ruleDraftInput, type RuleDraftParsed } from "../../lib/rulebook-schemas";
 import { fieldErrors, HttpError, notFound, parseOr400 } from "../http/errors";
-import { causesOf, versionsOf, type VersionRow } from "./context";
+import { allCausesOf } from "./cause-titles";
+import { versionsOf, type VersionRow } from "./context";
 
 /**
  * A rule as the form sends it, checked twice (the form's schema, then the knowledge base's own
@@ -34,7 +34,7 @@ const slug = (s: string) =>
 
 /** The cause a draft names: a known one, or a new one with an id of its own ("shop-<words>"). */
 async function causeFor(shopId: string, d: RuleDraftParsed): Promise<KbCause> {
-  const known = [...BUILT_IN_RULE_SET.causes, ...(await causesOf(shopId))];
+  const known = await allCausesOf(shopId);
   if (d.cause.kind === "existing") {
     const wanted = d.cause.id;
     const found = known.find((c) => c.id === wanted);
@@ -79,6 +79,6 @@ function checkedRule(d: RuleDraftParsed, ruleId: string, cause: KbCause, causeId
 export async function prepare(shopId: string, body: unknown, ruleId: string) {
   const d = parseOr400(ruleDraftInput, body);
   const cause = await causeFor(shopId, d);
-  const causeIds = new Set([...BUILT_IN_RULE_SET.causes, ...(await causesOf(shopId))].map((c) => c.id));
+  const causeIds = new Set((await allCausesOf(shopId)).map((c) => c.id));
   return { rule: checkedRule(d, ruleId, cause, causeIds), cause, isNew: !causeIds.has(cause.id) };
 }

@@ -1,10 +1,9 @@
 import { and, eq, inArray, isNull, or } from "drizzle-orm";
 import { alloys, member, searchDocuments, user } from "../../db/schema";
 import type { SearchParams } from "../../lib/search-schemas";
-import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
 import { db } from "../db";
 import { HttpError } from "../http/errors";
-import { causesOf } from "../rulebook/context";
+import { causeTitles } from "../rulebook/cause-titles";
 import { alloyKey } from "./case-doc";
 
 const unknown = (field: string, values: string[], what: string) =>
@@ -13,9 +12,7 @@ const unknown = (field: string, values: string[], what: string) =>
   });
 
 /** Every cause title the shop's rulebook knows (built-in and its own), by id. */
-export async function causeTitles(shopId: string): Promise<Map<string, string>> {
-  return new Map([...BUILT_IN_RULE_SET.causes, ...(await causesOf(shopId))].map((c) => [c.id, c.title]));
-}
+export { causeTitles };
 
 /** Alloys, causes and people must be ones this shop knows; a stranger's id is refused like a typo. */
 export async function checkNames(shopId: string, p: SearchParams, titles: Map<string, string>) {
