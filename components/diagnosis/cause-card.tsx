@@ -1,6 +1,7 @@
 import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { CauseRecordLine } from "@/components/rulebook/rule-record";
+import { CheckBox } from "@/components/ui/check-box";
 import { ScoreBar } from "@/components/ui/score-bar";
 import { usePrinting } from "@/hooks/use-printing";
 import { card, colors, fontSize, space } from "@/constants/theme";
@@ -44,20 +45,14 @@ export function CauseCard({ cause, rank, units, ticked, onTick }: Props) {
         </Text>
       </Text>
       {cause.fixes.map((f, i) => (
-        <Pressable
+        <CheckBox
           key={f}
-          role="checkbox"
-          aria-checked={ticked.has(f)}
-          aria-label={shown[i] ?? f}
+          label={shown[i] ?? f}
+          checked={ticked.has(f)}
           disabled={!onTick}
-          onPress={() => onTick?.(f, !ticked.has(f))}
-          style={styles.fix}
-        >
-          <View style={[styles.box, ticked.has(f) && styles.boxOn]}>
-            {ticked.has(f) ? <Text style={styles.tick}>✓</Text> : null}
-          </View>
-          <Text style={styles.fixText}>{shown[i] ?? f}</Text>
-        </Pressable>
+          onChange={(on) => onTick?.(f, on)}
+          large
+        />
       ))}
       <Pressable role="button" aria-expanded={why} onPress={() => setWhy((w) => !w)}>
         <Text style={styles.toggle}>{why ? "▾ Hide why" : "▸ Why this cause"}</Text>
@@ -82,20 +77,6 @@ const styles = StyleSheet.create({
   title: { fontSize: fontSize.field, fontWeight: "700", color: colors.ink },
   sub: { fontSize: fontSize.small, fontWeight: "700", color: colors.muted, marginTop: space.xs },
   subNote: { fontWeight: "400" },
-  fix: { flexDirection: "row", gap: space.sm, alignItems: "flex-start", minHeight: 32 },
-  box: {
-    width: 22,
-    height: 22,
-    borderRadius: 4,
-    borderWidth: 2,
-    borderColor: colors.steel,
-    alignItems: "center",
-    justifyContent: "center",
-    marginTop: 1,
-  },
-  boxOn: { backgroundColor: colors.steel },
-  tick: { color: "#FFFFFF", fontSize: fontSize.detail, fontWeight: "700", lineHeight: 16 },
-  fixText: { flex: 1, fontSize: fontSize.body, lineHeight: 22, color: colors.ink },
   toggle: { fontSize: fontSize.body, fontWeight: "600", color: colors.accent, paddingVertical: space.xs },
   why: { gap: space.xs, paddingLeft: space.sm, borderLeftWidth: 3, borderLeftColor: colors.line },
   reason: { fontSize: fontSize.detail, lineHeight: 21, color: colors.ink },

@@ -1,5 +1,6 @@
 import { useMemo, useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
+import { CheckBox } from "@/components/ui/check-box";
 import { Button } from "@/components/ui/button";
 import { FieldError } from "@/components/ui/field-error";
 import { Heading } from "@/components/ui/heading";
@@ -111,9 +112,7 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
           />
           {lookAlikes.length ? (
             <View style={styles.lookAlikes} testID="cause-look-alikes">
-              <Text style={styles.checkText}>
-                Is it one of these rulebook causes? Tap it to confirm that one instead.
-              </Text>
+              <Text style={styles.note}>Is it one of these rulebook causes? Tap it to confirm that one instead.</Text>
               {lookAlikes.map((c) => (
                 <Pressable
                   key={c.id}
@@ -130,19 +129,11 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
               ))}
             </View>
           ) : null}
-          <Pressable
-            role="checkbox"
-            aria-checked={makeShopCause}
-            onPress={() => setMakeShopCause((v) => !v)}
-            style={styles.check}
-          >
-            <View style={[styles.box, makeShopCause && styles.boxOn]}>
-              {makeShopCause ? <Text style={styles.tick}>✓</Text> : null}
-            </View>
-            <Text style={styles.checkText}>
-              Add it to the shop’s rulebook as a cause, so rules can point at it and its record is kept
-            </Text>
-          </Pressable>
+          <CheckBox
+            label="Add it to the shop’s rulebook as a cause, so rules can point at it and its record is kept"
+            checked={makeShopCause}
+            onChange={setMakeShopCause}
+          />
           {makeShopCause ? (
             <TextField
               label="A fix to try for it"
@@ -174,20 +165,7 @@ const styles = StyleSheet.create({
   label: { fontSize: fontSize.detail, fontWeight: "600", color: colors.ink },
   list: { gap: space.xs },
   other: { gap: space.sm },
-  check: { flexDirection: "row", gap: space.sm, alignItems: "flex-start", minHeight: 32 },
-  box: {
-    width: 22,
-    height: 22,
-    borderRadius: 4,
-    borderWidth: 2,
-    borderColor: colors.steel,
-    alignItems: "center",
-    justifyContent: "center",
-    marginTop: 1,
-  },
-  boxOn: { backgroundColor: colors.steel },
-  tick: { color: "#FFFFFF", fontSize: fontSize.detail, fontWeight: "700", lineHeight: 16 },
-  checkText: { flex: 1, fontSize: fontSize.detail, lineHeight: 20, color: colors.ink },
+  note: { fontSize: fontSize.detail, lineHeight: 20, color: colors.ink },
   lookAlikes: { gap: space.xs },
   lookAlike: {
     padding: space.sm,
