@@ -1,9 +1,10 @@
 import { factSpec } from "../rules/fact-catalog";
+import { CASTING_CONDITIONS, MELT_CONDITIONS } from "./condition-fields";
 
 /**
  * Where a person logs each input of the diagnosis: the melt's form or the casting's, and the label of
- * the field there (server/diagnosis/stored-case.ts reads the same columns into the case). Inputs the
- * notebook does not keep yet (gating areas, compactability...) have no field, so they stay plain text.
+ * the field there (server/diagnosis/stored-case.ts reads the same columns into the case). The pour
+ * conditions beyond the everyday ones (lib/condition-fields.ts) come with their own labels.
  */
 export type FactField = { form: "melt" | "casting"; labels: string[] };
 const melt = (...labels: string[]): FactField => ({ form: "melt", labels });
@@ -31,7 +32,12 @@ const FIELDS: Record<string, FactField> = {
   hasRiser: casting("Riser"),
   hasOverflow: casting("Overflow"),
   hasVents: casting("Vents"),
+  ...Object.fromEntries(MELT_CONDITIONS.flatMap((g) => g.fields).map((f) => [f.key, melt(f.label)])),
+  ...Object.fromEntries(CASTING_CONDITIONS.flatMap((g) => g.fields).map((f) => [f.key, casting(f.label)])),
 };
+
+/** Whether a diagnosis input is one of the melt's folded-away conditions, which the form then opens. */
+export const isMeltCondition = (fact: string) => MELT_CONDITIONS.some((g) => g.fields.some((f) => f.key === fact));
 
 export const fieldOfFact = (fact: string): FactField | undefined => FIELDS[fact];
 

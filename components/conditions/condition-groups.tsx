@@ -21,6 +21,8 @@ type Props = {
   units: Units;
   /** What the closed section says it holds ("treatment, sand, mould"); without it the groups show open. */
   summary?: string;
+  /** Open from the start (the form was opened to fill one of these in). */
+  startOpen?: boolean;
 };
 
 const isSet = (v: string | boolean | undefined) => v !== undefined && v !== "";
@@ -29,13 +31,13 @@ const isSet = (v: string | boolean | undefined) => v !== undefined && v !== "";
  * The conditions beyond the everyday ones, folded away until wanted: a caster fills in what was measured,
  * and each one logged sharpens the diagnosis. It opens by itself when a value is there or one is wrong.
  */
-export function ConditionGroups({ groups, draft, onChange, errors, context, units, summary }: Props) {
+export function ConditionGroups({ groups, draft, onChange, errors, context, units, summary, startOpen }: Props) {
   const shown = groups
     .map((g) => ({ ...g, fields: g.fields.filter((f) => f.shows(context)) }))
     .filter((g) => g.fields.length > 0);
   const keys = shown.flatMap((g) => g.fields.map((f) => f.key));
   const filled = keys.filter((k) => isSet(draft[k])).length;
-  const [open, setOpen] = useState(filled > 0 || summary === undefined);
+  const [open, setOpen] = useState(filled > 0 || summary === undefined || !!startOpen);
   const wrong = keys.some((k) => errors[k]);
   if (shown.length === 0) return null;
   if (!open && !wrong)

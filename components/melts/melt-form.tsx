@@ -29,12 +29,14 @@ type Props = {
   onSubmit: (input: MeltInput) => Promise<unknown>;
   /** Where the draft is kept on the device ("melt:new", "melt:12"). */
   draftName: string;
+  /** Open the folded conditions: the form was opened to fill one of them in. */
+  openConditions?: boolean;
   /** A new melt's save carries an idempotency key, so sending it twice makes one melt. */
   isNew?: boolean;
 };
 
 /** Every condition of a melt, checked here with the API's own schema before anything is sent. */
-export function MeltForm({ initial, units, submitLabel, onSubmit, draftName, isNew }: Props) {
+export function MeltForm({ initial, units, submitLabel, onSubmit, draftName, isNew, openConditions }: Props) {
   const alloys = useAlloys();
   const { draft, set, errors, setErrors, check, restored, discard, startOver } = useMeltDraft(
     initial,
@@ -99,6 +101,7 @@ export function MeltForm({ initial, units, submitLabel, onSubmit, draftName, isN
         context={meltContext(draft, alloys.data ?? [])}
         units={units}
         summary="treatment, sand, mould"
+        startOpen={openConditions}
       />
       <TextField
         label="Notes"

@@ -8,7 +8,7 @@ import { useFocusField } from "@/hooks/use-focus-field";
 import { useMelt, useUpdateMelt } from "@/hooks/use-melts";
 import { useUnitsQuery } from "@/hooks/use-units";
 import { formatDay } from "@/lib/dates";
-import { fieldOfFact } from "@/lib/fact-fields";
+import { fieldOfFact, isMeltCondition } from "@/lib/fact-fields";
 import { SI_UNITS } from "@/lib/units";
 
 /**
@@ -38,6 +38,7 @@ export default function EditMeltScreen() {
         units={units.data ?? SI_UNITS}
         submitLabel="Save changes"
         draftName={`melt:${id}`}
+        openConditions={!!params.field && isMeltCondition(params.field)}
         onSubmit={async (input) => {
           await update.mutateAsync(input);
           router.replace(back);
