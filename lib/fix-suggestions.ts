@@ -29,3 +29,16 @@ export function fixSuggestions(opts: {
     others,
   };
 }
+
+/**
+ * How each suggested fix reads in a person's units: the suggestions and ticks are kept by the fix's SI
+ * text, and the causes carry the same fix as a template with quantities (`fixTemplates`, index for index).
+ */
+export function fixWords(
+  causes: { fixes: string[]; fixTemplates?: string[] }[],
+  say: (template: string) => string,
+): (fix: string) => string {
+  const words = new Map<string, string>();
+  for (const c of causes) c.fixes.forEach((f, i) => c.fixTemplates?.[i] && words.set(f, say(c.fixTemplates[i])));
+  return (fix) => words.get(fix) ?? fix;
+}

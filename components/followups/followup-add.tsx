@@ -7,21 +7,32 @@ import { Heading } from "@/components/ui/heading";
 import { TextField } from "@/components/ui/text-field";
 import { card, colors, fontSize, radius, space } from "@/constants/theme";
 import { useAddFix } from "@/hooks/use-followups";
+import { useUnits } from "@/hooks/use-units";
 import { ApiError } from "@/lib/api";
 import type { FixSuggestions } from "@/lib/fix-suggestions";
+import { textInUnits } from "@/lib/quantity-words";
 import { fixInput, type CastingRef } from "@/lib/review-schemas";
 
-type Props = { castingId: number; candidates: CastingRef[]; suggestions: FixSuggestions; ticked: string[] };
+type Props = {
+  castingId: number;
+  candidates: CastingRef[];
+  suggestions: FixSuggestions;
+  ticked: string[];
+  /** A suggested fix (kept by its SI text) as the person reads it, in their units. */
+  say: (fix: string) => string;
+};
 const OTHERS_SHOWN = 4;
 
 /**
  * Record what was changed for the next pour: typed, or built from the fixes the rulebook suggests (the
  * confirmed cause's first), tapped in or out. The fixes ticked on the likely causes start chosen.
  */
-export function FollowupAdd({ castingId, candidates, suggestions, ticked }: Props) {
+export function FollowupAdd({ castingId, candidates, suggestions, ticked, say }: Props) {
   const add = useAddFix(castingId);
+  const units = useUnits();
   const [chosen, setChosen] = useState<string[]>(ticked);
-  const [fix, setFix] = useState(ticked.join("; "));
+  // What was changed is recorded in the person's own words and units.
+  const [fix, setFix] = useState(ticked.map(say).join("; "));
   const [typed, setTyped] = useState(false);
   const [next, setNext] = useState<string | null>(null);
   const [error, setError] = useState<string>();
@@ -31,12 +42,13 @@ export function FollowupAdd({ castingId, candidates, suggestions, ticked }: Prop
     if (typed) return;
     const now = tickedKey ? tickedKey.split("\n") : [];
     setChosen(now);
-    setFix(now.join("; "));
+    setFix(now.map(say).join("; "));
+    // `say` follows the units, which do not change while the form is open.
   }, [tickedKey, typed]);
   const toggle = (s: string) => {
     const list = chosen.includes(s) ? chosen.filter((x) => x !== s) : [...chosen, s];
     setChosen(list);
-    setFix(list.join("; "));
+    setFix(list.map(say).join("; "));
     setTyped(false);
   };
   const submit = () => {
@@ -59,13 +71,13 @@ export function FollowupAdd({ castingId, candidates, suggestions, ticked }: Prop
       key={s}
       role="checkbox"
       aria-checked={chosen.includes(s)}
-      aria-label={`Use: ${s}`}
+      aria-label={`Use: ${say(s)}`}
       onPress={() => toggle(s)}
       style={[styles.suggestion, chosen.includes(s) && styles.on]}
     >
       <Text style={styles.suggestionText}>
         {chosen.includes(s) ? "✓ " : ""}
-        {s}
+        {say(s)}
       </Text>
     </Pressable>
   );
@@ -101,7 +113,7 @@ export function FollowupAdd({ castingId, candidates, suggestions, ticked }: Prop
           setTyped(true);
         }}
         error={error}
-        placeholder="e.g. Poured 40 °C hotter"
+        placeholder={`e.g. Poured ${textInUnits("{40 K}", units)} hotter`}
       />
       {candidates.length ? (
         <ChoiceChips

@@ -9,7 +9,9 @@ import { colors, fontSize, space } from "@/constants/theme";
 import { useFollowups } from "@/hooks/use-followups";
 import { useCaseReview, useCastingCauses } from "@/hooks/use-review";
 import { useMay } from "@/hooks/use-rulebook";
-import { fixSuggestions } from "@/lib/fix-suggestions";
+import { useUnits } from "@/hooks/use-units";
+import { fixSuggestions, fixWords } from "@/lib/fix-suggestions";
+import { textInUnits } from "@/lib/quantity-words";
 import type { CauseWithRecord } from "@/lib/review-schemas";
 
 /**
@@ -22,6 +24,7 @@ export function FollowupPanel({ castingId, causes }: { castingId: number; causes
   const review = useCaseReview(castingId);
   const rulebook = useCastingCauses(castingId);
   const mayWrite = useMay({ casebook: ["write"] });
+  const units = useUnits();
   if (data.isPending) return <Loading />;
   if (data.error) return <Notice tone="error">{data.error.message}</Notice>;
   const { fixes, chain, candidates, ticked } = data.data;
@@ -31,6 +34,7 @@ export function FollowupPanel({ castingId, causes }: { castingId: number; causes
     ranked: causes,
     ticked,
   });
+  const say = fixWords([...causes, ...(rulebook.data ?? [])], (t) => textInUnits(t, units));
   return (
     <View style={styles.wrap} testID="followup-panel">
       <Heading level={2}>Fixes tried</Heading>
@@ -40,7 +44,13 @@ export function FollowupPanel({ castingId, causes }: { castingId: number; causes
         <FollowupFix key={f.id} fix={f} candidates={candidates} mayWrite={mayWrite} />
       ))}
       {mayWrite ? (
-        <FollowupAdd castingId={castingId} candidates={candidates} suggestions={suggestions} ticked={ticked} />
+        <FollowupAdd
+          castingId={castingId}
+          candidates={candidates}
+          suggestions={suggestions}
+          ticked={ticked}
+          say={say}
+        />
       ) : null}
     </View>
   );

@@ -23,6 +23,8 @@ import { metalOf } from "../../rules/alloys";
 import { comparableCause } from "../../rules/backtest";
 import type { DiagnosisResult } from "../../rules/engine";
 import { BUILT_IN_RULE_SET } from "../../rules/knowledge-base";
+import type { KbCause } from "../../rules/kb-schema";
+import { siText } from "../../rules/quantity-text";
 import { fixesFor } from "../../rules/rank";
 import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
@@ -59,11 +61,13 @@ export async function castingCauses(shopId: string, castingId: number): Promise<
   const casting = await castingInShop(shopId, castingId);
   const [metal, own] = await Promise.all([metalOfCasting(casting.meltId), causesOf(shopId)]);
   const facts = { metal };
+  // Fixes in SI words, and as templates with quantities for the app to say in a person's units.
+  const option = (c: KbCause, shop: boolean) => {
+    const fixTemplates = fixesFor(c, facts);
+    return { id: c.id, title: c.title, fixes: fixTemplates.map(siText), fixTemplates, shop };
+  };
   return {
-    causes: [
-      ...BUILT_IN_RULE_SET.causes.map((c) => ({ id: c.id, title: c.title, fixes: fixesFor(c, facts), shop: false })),
-      ...own.map((c) => ({ id: c.id, title: c.title, fixes: fixesFor(c, facts), shop: true })),
-    ],
+    causes: [...BUILT_IN_RULE_SET.causes.map((c) => option(c, false)), ...own.map((c) => option(c, true))],
   };
 }
 

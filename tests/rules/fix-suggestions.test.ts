@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { fixSuggestions } from "../../lib/fix-suggestions";
+import { fixSuggestions, fixWords } from "../../lib/fix-suggestions";
 
 const rulebook = [
   { id: "cold-pour", title: "Metal poured too cold", fixes: ["Pour hotter", "Shorten the carry"], shop: false },
@@ -37,5 +37,19 @@ describe("fixes offered when recording a fix", () => {
       confirmed: null,
       others: [],
     });
+  });
+});
+
+describe("suggested fixes read in the person's units", () => {
+  it("finds each SI fix's template, index for index, and leaves a fix without one as it is", () => {
+    const causes = [
+      { fixes: ["Pour hotter by 20-30 °C"], fixTemplates: ["Pour hotter by {20-30 K}"] },
+      { fixes: ["Skim the melt"] },
+    ];
+    // A rise of 20-30 K is 36-54 °F: a difference scales by 9/5 with no offset (the definition of the °F).
+    const say = fixWords(causes, (t) => t.replace("{20-30 K}", "36-54 °F"));
+    expect(say("Pour hotter by 20-30 °C")).toBe("Pour hotter by 36-54 °F");
+    expect(say("Skim the melt")).toBe("Skim the melt");
+    expect(say("Typed by a caster")).toBe("Typed by a caster");
   });
 });
