@@ -88,6 +88,7 @@ describe("confirming any cause of the rulebook", () => {
       id: "shop-ladle-lip-froze-over",
       title: "Ladle lip froze over",
       fixes: ["Preheat the ladle lip with the torch"],
+      fixTemplates: ["Preheat the ladle lip with the torch"],
       shop: true,
     });
     // Adding the same words again confirms the cause already there instead of a second one.
