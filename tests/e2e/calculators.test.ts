@@ -34,6 +34,62 @@ describe("calculators", () => {
     await longShot(page, "calculator-riser-wide");
   });
 
+  it("opens every other calculator from an aluminium melt, prefilled, works each out and saves it on the melt", async () => {
+    const page = await signedInAs(browser(), baseUrl, WIDE, "mentor");
+    const melts = await (await page.request.get(`${baseUrl}/api/melts?pageSize=50`)).json();
+    const melt = melts.items.find((m: { alloy: string; pourTempC: number | null }) => m.alloy === "A356.0");
+    const meltUrl = `${baseUrl}/melts/${melt.id}`;
+    // Values that read sensibly in mm or in; temperatures come prefilled from the melt, in the person's units.
+    const steps: [string, (p: typeof page) => Promise<void>, string | RegExp][] = [
+      [
+        "Metal to melt",
+        async (p) => {
+          await p.getByRole("radio", { name: "pattern volume" }).click();
+          await p.getByLabel(/^Pattern volume/).fill("500");
+          await p.getByLabel(/^Casting yield/).fill("60");
+          await p.getByLabel(/^Melt loss/).fill("5");
+        },
+        "Metal poured",
+      ],
+      ["Pattern size", async (p) => void (await p.getByLabel(/^Length/).fill("100")), /^Shrink rule/],
+      [
+        "Riser",
+        async (p) => {
+          await p.getByRole("radio", { name: "plate" }).click();
+          await p.getByLabel(/^Length/).fill("125");
+          await p.getByLabel(/^Width/).fill("75");
+          await p.getByLabel(/^Thickness/).fill("20");
+        },
+        "Riser diameter = height",
+      ],
+      [
+        "Gating",
+        async (p) => {
+          await p.getByLabel(/^Sprue height/).fill("200");
+          await p.getByLabel(/^Sprue-base \(choke\) area/).fill("2.5");
+          await p.getByRole("radio", { name: "a gating ratio" }).click();
+          await p.getByRole("radio", { name: "1:2:4" }).click();
+          await p.getByRole("radio", { name: "bottom" }).click();
+        },
+        "Ingate velocity",
+      ],
+      ["Hydrogen", async () => {}, /Upper bound/],
+    ];
+    for (const [title, fill, shows] of steps) {
+      await page.goto(meltUrl);
+      await page.getByRole("link", { name: title, exact: true }).click();
+      await page.getByRole("button", { name: "Work it out" }).waitFor();
+      await fill(page);
+      await page.getByRole("button", { name: "Work it out" }).click();
+      await seen(page, shows);
+      await page.getByRole("button", { name: /^Save on melt/ }).click();
+      await seen(page, /^Saved on melt/);
+    }
+    await page.goto(meltUrl);
+    const saved = page.getByLabel("Saved results");
+    for (const [title] of steps) await expect.poll(() => saved.getByText(`${title}:`).count()).toBeGreaterThan(0);
+  });
+
   it("refuses a riser of negative volume with a message on the field", async () => {
     const page = await signedInAs(browser(), baseUrl, PHONE, "caster");
     await page.goto(`${baseUrl}/melts/calculators/riser?shape=typed`);
