@@ -131,6 +131,7 @@ export const melts = pgTable(
     coatingPermeability: coatingPermeabilityEnum("coating_permeability"),
     foamType: foamTypeEnum("foam_type"),
     glueJoints: boolean("glue_joints"),
+    sandVibrated: boolean("sand_vibrated"),
     notes: text("notes"),
     createdBy: createdBy(),
     createdAt: createdAt(),

@@ -149,6 +149,12 @@ export const MELT_CONDITIONS: ConditionGroup[] = [
         shows: processIn("lost-foam"),
       },
       { key: "glueJoints", label: "Glued joints in the pattern", kind: "yes-no", shows: processIn("lost-foam") },
+      {
+        key: "sandVibrated",
+        label: "Sand filled and vibrated in layers",
+        kind: "yes-no",
+        shows: processIn("lost-foam"),
+      },
     ],
   },
 ];
@@ -216,6 +222,7 @@ export const meltConditionFields = {
   coatingPermeability: opt(z.enum(COATING_PERMEABILITIES, { error: "low, medium or high" })),
   foamType: opt(s.foamType.unwrap()),
   glueJoints: opt(s.glueJoints.unwrap()),
+  sandVibrated: opt(s.sandVibrated.unwrap()),
 };
 export const castingConditionFields = {
   chokeAreaMm2: opt(s.chokeAreaMm2.unwrap()),

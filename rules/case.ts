@@ -160,6 +160,8 @@ export const caseSchema = z
     foamDensityKgM3: z.number().positive().max(200).optional(),
     foamType: oneOf("foamType", FOAM_TYPES).optional(),
     glueJoints: z.boolean().optional(),
+    /** Lost foam: the flask filled in layers and each vibrated, so the sand packs round the coated pattern. */
+    sandVibrated: z.boolean().optional(),
     minSectionMm: positiveMm.optional(),
     maxSectionMm: positiveMm.optional(),
     sprueHeightMm: positiveMm.optional(),

@@ -120,6 +120,7 @@ export const FACTS: readonly FactSpec[] = [
   n("foamDensityKgM3", "foam density", "density"),
   e("foamType", "foam type", FOAM_TYPES),
   b("glueJoints", "glued foam joints"),
+  b("sandVibrated", "sand filled and vibrated in layers (lost foam)"),
   n("minSectionMm", "thinnest section", "length"),
   n("maxSectionMm", "thickest section", "length"),
   n("sprueHeightMm", "sprue height", "length"),

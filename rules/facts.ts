@@ -100,6 +100,7 @@ export function deriveFacts(c: DiagnosisCase, alloy: AlloySpec): Facts {
     foamDensityKgM3: c.foamDensityKgM3,
     foamType: c.foamType,
     glueJoints: c.glueJoints,
+    sandVibrated: c.sandVibrated,
     minSectionMm: c.minSectionMm,
     maxSectionMm: c.maxSectionMm,
     sprueHeightMm: c.sprueHeightMm,

@@ -366,6 +366,20 @@ const EXAMPLES: Example[] = [
     first: "mould-cracked",
     input: { process: "investment" },
   },
+  // Lost foam holds its unbonded sand only by compaction (common practice): an unvibrated flask swells or
+  // collapses; a vibrated one points elsewhere.
+  {
+    name: "A356 lost foam swell, flask not vibrated in layers, pour in the window",
+    type: "swell",
+    first: "soft-rammed-mould",
+    input: { process: "lost-foam", sandVibrated: false, pourTempC: 760, foamDensityKgM3: 20 },
+  },
+  {
+    name: "A356 lost foam sand collapse, flask vibrated in layers",
+    type: "sand-collapse",
+    notFirst: "soft-rammed-mould",
+    input: { process: "lost-foam", sandVibrated: true, pourTempC: 760, foamDensityKgM3: 20 },
+  },
 ];
 
 const run = (e: Example) => {

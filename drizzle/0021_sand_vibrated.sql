@@ -1,0 +1,1 @@
+ALTER TABLE "melts" ADD COLUMN "sand_vibrated" boolean;
