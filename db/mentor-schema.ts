@@ -115,6 +115,23 @@ export const fixTicks = pgTable(
   (t) => [primaryKey({ name: "fix_ticks_pk", columns: [t.castingId, t.fix] })],
 );
 
+/**
+ * When the author of a casting last read the mentors' answer on it: a confirmation newer than this is
+ * a new answer, marked on the author's lists until they open the casting.
+ */
+export const answerSeen = pgTable(
+  "answer_seen",
+  {
+    shopId: shopId(),
+    castingId: castingId(),
+    userId: text("user_id")
+      .notNull()
+      .references(() => user.id, { onDelete: "cascade" }),
+    seenAt: timestamp("seen_at", { withTimezone: true }).defaultNow().notNull(),
+  },
+  (t) => [primaryKey({ name: "answer_seen_pk", columns: [t.castingId, t.userId] })],
+);
+
 /** A rule written in the shop; its rule id in the engine is `shop-<id>`. Its content lives in versions. */
 export const shopRules = pgTable("shop_rules", {
   id: serial("id").primaryKey(),

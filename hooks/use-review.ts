@@ -33,6 +33,19 @@ export function useReviewQueue(enabled = true) {
   });
 }
 
+/** Once the answer on a casting has been read, its "new answer" mark leaves the person's lists. */
+export function useAnswerSeen(castingId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => api<void>(`/review/castings/${castingId}/seen`, { method: "POST" }),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: castingKeys.all }),
+        queryClient.invalidateQueries({ queryKey: ["melts"] }),
+      ]),
+  });
+}
+
 function useReviewChange<T>(
   castingId: number,
   fn: (arg: T) => Promise<CaseReview>,

@@ -275,6 +275,8 @@ export type CastingSummary = Row & {
   photoCount: number;
   defectTypes: DefectType[];
   thumbUrl: string | null;
+  /** For the person asking: a mentor answered on their own casting since they last opened it. */
+  newAnswer: boolean;
 };
 export type Photo = Row & { castingId: number; width: number; height: number; imageUrl: string; thumbUrl: string };
 export type Mark = Row & {

@@ -34,6 +34,11 @@ export function CastingRow({ casting }: { casting: CastingSummary }) {
               <Text style={styles.muted}>not judged</Text>
             )}
           </View>
+          {casting.newAnswer ? (
+            <Text style={styles.newAnswer} testID="new-answer">
+              ● A mentor answered since you last looked
+            </Text>
+          ) : null}
           <Text style={styles.muted} numberOfLines={2}>
             {casting.markCount
               ? `${casting.markCount} mark${casting.markCount === 1 ? "" : "s"}: ${defects.join(", ")}`
@@ -56,4 +61,5 @@ const styles = StyleSheet.create({
   part: { flex: 1, fontSize: fontSize.field, fontWeight: "600", color: colors.ink },
   outcome: { fontSize: fontSize.detail, fontWeight: "700" },
   muted: { fontSize: fontSize.detail, color: colors.muted },
+  newAnswer: { fontSize: fontSize.detail, fontWeight: "700", color: colors.accent },
 });

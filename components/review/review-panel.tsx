@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { Heading } from "@/components/ui/heading";
@@ -7,7 +7,7 @@ import { Loading } from "@/components/ui/query-state";
 import { ReviewConfirmForm } from "@/components/review/review-confirm-form";
 import { TextField } from "@/components/ui/text-field";
 import { colors, fontSize, radius, space } from "@/constants/theme";
-import { useAskReview, useCaseReview } from "@/hooks/use-review";
+import { useAnswerSeen, useAskReview, useCaseReview } from "@/hooks/use-review";
 import { useMay } from "@/hooks/use-rulebook";
 import { formatMoment } from "@/lib/dates";
 import type { CauseWithRecord } from "@/lib/review-schemas";
@@ -24,6 +24,13 @@ export function ReviewPanel({ castingId, causes }: { castingId: number; causes: 
   const mayConfirm = useMay({ review: ["confirm"] });
   const [note, setNote] = useState("");
   const [correcting, setCorrecting] = useState(false);
+  // The answer is on screen: its "new answer" mark leaves the author's lists (a no-op for anyone else).
+  const seen = useAnswerSeen(castingId);
+  const answerId = review.data?.current?.id;
+  useEffect(() => {
+    if (answerId !== undefined) seen.mutate();
+    // Once per answer shown; `seen` is a new object each render.
+  }, [answerId]);
   if (review.isPending) return <Loading />;
   if (review.error) return <Notice tone="error">{review.error.message}</Notice>;
   const { waiting, current, confirmations } = review.data;

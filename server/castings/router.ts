@@ -17,7 +17,8 @@ castingsRouter.post("/melts/:id", ...write, async (req, res) => {
 });
 
 castingsRouter.get("/", ...read, async (req, res) => {
-  res.json(await listCastings(currentMember(req).shopId, parseOr400(castingListQuery, req.query)));
+  const m = currentMember(req);
+  res.json(await listCastings(m.shopId, parseOr400(castingListQuery, req.query), m.userId));
 });
 
 castingsRouter.get("/:id", ...read, async (req, res) => {

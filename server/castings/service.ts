@@ -1,5 +1,6 @@
 import { and, asc, count, desc, eq, inArray, isNull, sql, type SQL } from "drizzle-orm";
 import { db } from "../db";
+import { castingsWithNewAnswer } from "./new-answers";
 import { alloys, castings, melts, photos, user } from "../../db/schema";
 import {
   castingFields,
@@ -107,7 +108,7 @@ export type CastingSort = keyof typeof CASTING_ORDER;
 /** Cards and table rows: the casting with its melt's date, alloy and process, its marks' defect types and a thumbnail. */
 export async function castingSummaries(
   shopId: string,
-  opts: { meltId?: number; sort: CastingSort; limit?: number; offset?: number },
+  opts: { meltId?: number; sort: CastingSort; limit?: number; offset?: number; viewer?: string },
 ) {
   // Archived castings are hidden everywhere; an archived melt's castings are hidden from the shop-wide
   // list but still shown on that melt's own page, where an owner may restore it.
@@ -133,6 +134,7 @@ export async function castingSummaries(
   const rows = await query;
   const ids = rows.map((r) => r.c.id);
   const marks = groupBy(await marksOf(ids), (mk) => mk.castingId);
+  const answered = opts.viewer ? await castingsWithNewAnswer(opts.viewer, ids) : new Set<number>();
   const pics = groupBy(
     ids.length
       ? await db
@@ -159,6 +161,7 @@ export async function castingSummaries(
       photoCount: ownPics.length,
       defectTypes: [...new Set(own.map((mk) => mk.type))],
       thumbUrl: ownPics[0] ? photoUrls(ownPics[0].id).thumbUrl : null,
+      newAnswer: answered.has(c.id),
       createdBy: personRef(c.createdBy, byName),
       createdAt: iso(c.createdAt),
     };
@@ -168,8 +171,9 @@ export async function castingSummaries(
 export async function listCastings(
   shopId: string,
   q: { page: number; pageSize: number; sort: CastingSort },
+  viewer?: string,
 ): Promise<Page<CastingSummary>> {
-  const items = await castingSummaries(shopId, { sort: q.sort, limit: q.pageSize, offset: offsetOf(q) });
+  const items = await castingSummaries(shopId, { sort: q.sort, limit: q.pageSize, offset: offsetOf(q), viewer });
   const [{ total }] = await db
     .select({ total: count() })
     .from(castings)

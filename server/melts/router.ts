@@ -25,9 +25,9 @@ meltsRouter.post("/", ...write, async (req, res) => {
 
 /** A melt's page: the melt and its castings in the order they were poured. */
 meltsRouter.get("/:id", ...read, async (req, res) => {
-  const shopId = currentMember(req).shopId;
+  const { shopId, userId } = currentMember(req);
   const melt = await getMelt(shopId, idParam(req.params.id, "No such melt"));
-  const castings = await castingSummaries(shopId, { meltId: melt.id, sort: "date-asc" });
+  const castings = await castingSummaries(shopId, { meltId: melt.id, sort: "date-asc", viewer: userId });
   res.json({ ...melt, castings } satisfies MeltDetail);
 });
 

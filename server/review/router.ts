@@ -4,7 +4,7 @@ import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
 import { idParam } from "../notebook/shared";
 import { noticeCauseConfirmed, noticeReviewRequested, openRequestersOf } from "../people/notices";
-import { caseReview, castingCauses, confirmCause, requestReview, reviewQueue } from "./service";
+import { caseReview, castingCauses, confirmCause, markAnswerSeen, requestReview, reviewQueue } from "./service";
 
 /** Review of a casting: anyone in the shop asks and reads; mentors and owners see the queue and confirm. */
 export const reviewRouter = Router();
@@ -17,6 +17,12 @@ reviewRouter.get("/castings/:id", requireShopMember, allow({ casebook: ["read"] 
 /** The whole rulebook's causes for this casting: the confirm form searches them, "record a fix" offers their fixes. */
 reviewRouter.get("/castings/:id/causes", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
   res.json(await castingCauses(currentMember(req).shopId, castingId(req.params.id)));
+});
+
+/** The person has read the answer on this casting: its "new answer" mark goes from their lists. */
+reviewRouter.post("/castings/:id/seen", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
+  await markAnswerSeen(currentMember(req), castingId(req.params.id));
+  res.status(204).end();
 });
 
 reviewRouter.post(

@@ -2,6 +2,7 @@ import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
 import { db } from "../db";
 import {
   alloys,
+  answerSeen,
   castings,
   confirmations,
   defectMarks,
@@ -136,6 +137,16 @@ export async function caseReview(shopId: string, castingId: number): Promise<Cas
 }
 
 /** Asking twice while a request is open keeps the first: the queue holds each casting once. */
+/** Records that the person read the mentors' answer on this casting now (one row per person and casting). */
+export async function markAnswerSeen(m: ShopMember, castingId: number): Promise<void> {
+  await castingInShop(m.shopId, castingId);
+  const seenAt = new Date();
+  await db
+    .insert(answerSeen)
+    .values({ shopId: m.shopId, castingId, userId: m.userId, seenAt })
+    .onConflictDoUpdate({ target: [answerSeen.castingId, answerSeen.userId], set: { seenAt } });
+}
+
 export async function requestReview(
   m: ShopMember,
   castingId: number,

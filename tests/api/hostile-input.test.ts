@@ -145,7 +145,7 @@ describe("hostile input at the edge", () => {
     // Photos and pour-log imports take multipart files, not JSON; their own tests send them bad files
     // (photos.test.ts; import.test.ts: NUL bytes, empty, oversized, not CSV).
     const bodiless =
-      /\/(publish|retire|resend|cancel|make-owner|archive|restore)$|^\/api\/people\/leave$|^\/api\/diagnosis\/castings\/|^\/api\/(photos|import)(\/|$)/;
+      /\/(publish|retire|resend|cancel|make-owner|archive|restore|seen)$|^\/api\/people\/leave$|^\/api\/diagnosis\/castings\/|^\/api\/(photos|import)(\/|$)/;
     const routes = apiRoutes().filter((r) => r.method !== "GET" && r.method !== "DELETE" && !bodiless.test(r.path));
     for (const r of routes) {
       const pattern = new RegExp(`^${r.path.replace(/:\w+/g, "[^/]+")}$`);
