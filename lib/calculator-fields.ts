@@ -144,13 +144,23 @@ const PERSON_UNITS: Partial<Record<CalcQuantity, Quantity>> = {
   length: "length",
   mass: "mass",
   density: "density",
+  velocity: "velocity",
 };
+/**
+ * Volumes and areas a person who works in inches reads in cubic and square inches: 1 in = 2.54 cm
+ * exactly, so 1 in³ = 16.387064 cm³ and 1 in² = 6.4516 cm² (the 1959 international inch).
+ */
+const INCH_UNITS: Partial<Record<CalcQuantity, { label: string; cmPer: number }>> = {
+  "volume-cm3": { label: "in³", cmPer: 2.54 ** 3 },
+  "area-cm2": { label: "in²", cmPer: 2.54 ** 2 },
+  "flow-cm3-per-s": { label: "in³/s", cmPer: 2.54 ** 3 },
+};
+const inInches = (q: CalcQuantity, u: Units) => (u.length === "in" ? INCH_UNITS[q] : undefined);
 const SI_LABELS: Record<string, string> = {
   "volume-cm3": "cm³",
   "area-cm2": "cm²",
   "time-min": "min",
   "time-s": "s",
-  velocity: "m/s",
   "flow-cm3-per-s": "cm³/s",
   percent: "%",
   "solubility-cm3-per-100g": "cm³/100 g",
@@ -162,26 +172,32 @@ const SI_LABELS: Record<string, string> = {
 /** The unit a calculator's number is typed and shown in: the person's where they chose one. */
 export function calcUnit(q: CalcQuantity, u: Units): string {
   const p = PERSON_UNITS[q];
-  return p ? unitLabel(p, u) : SI_LABELS[q];
+  return p ? unitLabel(p, u) : (inInches(q, u)?.label ?? SI_LABELS[q]);
 }
 /** A length in inches takes fractions (1 1/2), and so a keyboard with / and a space. */
 export const calcTakesFractions = (q: CalcQuantity, u: Units) => takesInchFractions(PERSON_UNITS[q] ?? null, u);
 export function calcToField(q: CalcQuantity, si: number | undefined, u: Units): string {
   const p = PERSON_UNITS[q];
   if (si === undefined || !Number.isFinite(si)) return "";
-  return p ? toField(p, si, u) : String(Number(si.toFixed(3)));
+  if (p) return toField(p, si, u);
+  const inch = inInches(q, u);
+  return String(Number((inch ? si / inch.cmPer : si).toFixed(3)));
 }
 export function calcFromField(q: CalcQuantity, text: string, u: Units): number | undefined {
   const p = PERSON_UNITS[q];
   if (p) return fromField(p, text, u);
   const t = text.trim().replace(",", ".");
   if (t === "") return undefined;
-  return Number.isFinite(Number(t)) ? Number(t) : Number.NaN;
+  const n = Number(t);
+  if (!Number.isFinite(n)) return Number.NaN;
+  return n * (inInches(q, u)?.cmPer ?? 1);
 }
 /** A result for reading, rounded as a caster writes it (lib/units.ts): "760 °C", "5.9 in", "12.5 lb", "0.75 cm³/100 g". */
 export function calcFormat(q: CalcQuantity, si: number, u: Units): string {
   const p = PERSON_UNITS[q];
   if (p) return `${readingNumber(p, si, u)} ${unitLabel(p, u)}`;
+  const inch = inInches(q, u);
+  if (inch) return `${Number((si / inch.cmPer).toPrecision(3))} ${inch.label}`;
   return `${Number(si.toPrecision(3))} ${SI_LABELS[q]}`;
 }
 

@@ -1,6 +1,7 @@
 import convert from "convert-units";
 import { describe, expect, it } from "vitest";
-import { formatValue, fromField, fromSi, KG_M3_PER_LB_FT3, toField, toSi, type Units } from "../../lib/units";
+import { formatValue, fromField, fromSi, KG_M3_PER_LB_FT3, SI_UNITS, toField, toSi, type Units } from "../../lib/units";
+import { calcFormat, calcFromField, calcToField, calcUnit } from "../../lib/calculator-fields";
 
 const US: Units = { temperature: "F", length: "in", mass: "lb" };
 const SI: Units = { temperature: "C", length: "mm", mass: "kg" };
@@ -146,5 +147,20 @@ describe("inches as casters write them", () => {
     // 1,350 °F = (1350 - 32) × 5/9 = 732.2 °C.
     expect(fromField("temperature", "1,350", US)).toBeCloseTo(732.22, 2);
     expect(fromField("temperature", "-4", US)).toBeCloseTo(-20, 10);
+  });
+});
+
+describe("calculator volumes and areas for a person who works in inches", () => {
+  // 1 in = 2.54 cm exactly (1959), so 1 in³ = 16.387064 cm³ and 1 in² = 6.4516 cm²; convert-units
+  // checks them to within its rounded definitions (about 5e-6 relative for volume).
+  it("types and reads in³ and in², and keeps cm³ and cm² for a metric person", () => {
+    expect(calcFromField("volume-cm3", "1", US)! / convert(1).from("in3").to("cm3")).toBeCloseTo(1, 4);
+    expect(calcFromField("area-cm2", "1", US)! / convert(1).from("in2").to("cm2")).toBeCloseTo(1, 4);
+    expect(calcToField("volume-cm3", 16.387064, US)).toBe("1");
+    expect(calcUnit("area-cm2", US)).toBe("in²");
+    expect(calcUnit("area-cm2", SI_UNITS)).toBe("cm²");
+    // The Groover sprue's 396 cm³/s is 24.2 in³/s (396 / 16.387064).
+    expect(calcFormat("flow-cm3-per-s", 396, US)).toBe("24.2 in³/s");
+    expect(calcFormat("flow-cm3-per-s", 396, SI_UNITS)).toBe("396 cm³/s");
   });
 });
