@@ -6,12 +6,13 @@ import { describeLeaf } from "../../rules/rule-words";
 import { formatFact } from "../../lib/fact-display";
 import { moistureLabel, PROCESS_LABELS } from "../../lib/labels";
 import { meltConditionRows } from "../../lib/condition-rows";
+import { SI_UNITS } from "../../lib/units";
 
 describe("stored codes in words", () => {
   it("says alloy families in words, never as their codes", () => {
     expect(valueWord("al-si")).toBe("aluminium-silicon");
     expect(valueWord("al-si-cu")).toBe("aluminium-silicon-copper");
-    expect(formatFact("alloyFamily", "al-mg", "metric")).toEqual({
+    expect(formatFact("alloyFamily", "al-mg", SI_UNITS)).toEqual({
       label: "alloy family",
       value: "aluminium-magnesium",
     });
@@ -26,7 +27,7 @@ describe("stored codes in words", () => {
   it("names the mould's water as the melt form does", () => {
     expect(moistureLabel("green-sand")).toBe("Sand moisture");
     expect(moistureLabel("investment")).toBe("Mould moisture");
-    const rows = meltConditionRows({ process: "no-bake-sand", sandMoisturePct: 3 } as never, "metric");
+    const rows = meltConditionRows({ process: "no-bake-sand", sandMoisturePct: 3 } as never, SI_UNITS);
     expect(rows.map((r) => r.label)).toContain("Sand moisture");
     expect(rows.map((r) => r.label)).not.toContain("Mould moisture");
   });
