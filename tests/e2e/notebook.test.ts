@@ -147,6 +147,9 @@ describe("the notebook at phone size (390 px)", () => {
       .getByRole("button", { name: /Why this cause/ })
       .click();
     await longShot(page, "phone-casting-causes");
+    // A caster reads when the causes were worked out, not the rulebook version's hash.
+    expect(await page.getByTestId("diagnosis").textContent()).toMatch(/Worked out/);
+    expect(await page.getByTestId("diagnosis").textContent()).not.toMatch(/rules version/);
     expect(page.url()).toBe(castingUrl);
     await page.context().close();
   });
@@ -186,6 +189,8 @@ describe("the notebook at wide size (1280 px)", () => {
     await seen(page, "Photos and marks");
     await seen(page, "Likely causes");
     await longShot(page, "wide-casting");
+    // A mentor, who writes rules, can match the answer to a rulebook version.
+    expect(await page.getByTestId("diagnosis").textContent()).toMatch(/rules version [0-9a-f]{8}/);
 
     // Dropping a photo file from the desktop onto the photo area uploads it.
     const photos = await page.getByTestId("casting-photo").count();
