@@ -10,8 +10,13 @@ export const colors = {
   steel: "#2F5D62",
   danger: "#B42318",
   dangerBg: "#FDECEA",
+  /** Dark amber: "needs rework" and other cautions in text, readable on white and on the paper. */
+  caution: "#8A6100",
   cautionBg: "#FFF4D6",
 };
+
+/** How a casting came out, one colour each wherever it shows (a casting's row, a casebook card). */
+export const outcomeColours = { good: colors.steel, rework: colors.caution, scrap: colors.danger } as const;
 
 export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
 export const radius = { sm: 6, md: 10 } as const;

@@ -1,6 +1,7 @@
 import type { CalcQuantity, CalculatorKind } from "../rules/calculators";
 import { GATING_POSITIONS, PROCESSES } from "../rules/case";
 import { GATING_RATIOS } from "../rules/calculators/gating";
+import { valueWord } from "../rules/value-words";
 import { fromField, readingNumber, takesInchFractions, toField, unitLabel, type Quantity, type Units } from "./units";
 
 /** What each calculator asks for, in the order a caster has the figures to hand. */
@@ -23,7 +24,7 @@ const num = (key: string, label: string, quantity: CalcQuantity, showIf?: [strin
   quantity,
   showIf,
 });
-const processes = PROCESSES.map((p) => ({ value: p, label: p.replace(/-/g, " ") }));
+const processes = PROCESSES.map((p) => ({ value: p, label: valueWord(p) }));
 
 export const CALCULATOR_TITLES: Record<CalculatorKind, { title: string; purpose: string; pour: boolean }> = {
   "pour-temperature": {

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import type { Metal } from "../rules/alloys";
+import { valueWord } from "../rules/value-words";
 import {
   caseSchema,
   COATING_PERMEABILITIES,
@@ -31,7 +32,7 @@ export type ConditionField = Base &
 export type ConditionGroup = { heading: string; fields: ConditionField[] };
 
 const words = (values: readonly string[], labels: Record<string, string> = {}) =>
-  values.map((v) => ({ value: v, label: labels[v] ?? v.replace(/-/g, " ") }));
+  values.map((v) => ({ value: v, label: labels[v] ?? valueWord(v) }));
 const always = () => true;
 const metalIs = (m: Metal) => (c: ConditionContext) => c.metal === m;
 const processIn =

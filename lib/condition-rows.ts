@@ -1,6 +1,6 @@
 import { loggedConditions } from "./condition-drafts";
 import { CASTING_CONDITIONS, MELT_CONDITIONS } from "./condition-fields";
-import { CHARGE_LABELS, DEGASSING_LABELS, PROCESS_LABELS } from "./labels";
+import { CHARGE_LABELS, DEGASSING_LABELS, moistureLabel, PROCESS_LABELS } from "./labels";
 import type { Casting, Melt } from "./notebook-schemas";
 import { formatValue, type Quantity, type Units } from "./units";
 
@@ -42,7 +42,9 @@ export function meltConditionRows(melt: Melt, units: Units): ConditionRow[] {
     { label: "Skimmed", value: yesNo(melt.skimmed) },
     { label: "Air temperature", value: q("temperature", melt.ambientTempC) },
     { label: "Humidity", value: pct(melt.humidityPct) },
-    ...(melt.process === "permanent-mould" ? [] : [{ label: "Mould moisture", value: pct(melt.sandMoisturePct) }]),
+    ...(melt.process === "permanent-mould"
+      ? []
+      : [{ label: moistureLabel(melt.process), value: pct(melt.sandMoisturePct) }]),
     { label: "Coating", value: coatingText(melt) },
     ...(melt.process === "lost-foam" ? [{ label: "Foam density", value: q("density", melt.foamDensityKgM3) }] : []),
     // Conditions beyond the everyday ones, where they were logged (lib/condition-fields.ts).

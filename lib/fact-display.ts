@@ -1,4 +1,5 @@
 import { factSpec, type FactQuantity } from "../rules/fact-catalog";
+import { valueWord } from "../rules/value-words";
 import { formatValue, type Quantity, type Units } from "./units";
 
 /** Units of the quantities that no person's choice changes. */
@@ -27,7 +28,7 @@ export function formatFact(
   const spec = factSpec(name);
   const label = spec?.label ?? name;
   if (typeof value === "boolean") return { label, value: value ? "yes" : "no" };
-  if (typeof value === "string") return { label, value: value.replace(/-/g, " ") };
+  if (typeof value === "string") return { label, value: valueWord(value) };
   if (spec?.kind !== "number") return { label, value: String(value) };
   const q = CONVERTED[spec.quantity];
   if (q) return { label, value: formatValue(q, value, units) };

@@ -82,7 +82,7 @@ export const IMPORT_FIELDS: ImportField[] = [
     quantity: "temperature",
   },
   { key: "humidityPct", label: "Humidity %", of: "melt", input: "humidityPct", kind: "number" },
-  { key: "sandMoisturePct", label: "Mould moisture %", of: "melt", input: "sandMoisturePct", kind: "number" },
+  { key: "sandMoisturePct", label: "Sand moisture %", of: "melt", input: "sandMoisturePct", kind: "number" },
   { key: "coatingApplied", label: "Coating applied", of: "melt", input: "coatingApplied", kind: "yes-no" },
   { key: "coatingDried", label: "Coating dried", of: "melt", input: "coatingDried", kind: "yes-no" },
   { key: "coatingCoats", label: "Coats of coating", of: "melt", input: "coatingCoats", kind: "number" },

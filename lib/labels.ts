@@ -1,14 +1,9 @@
 import type { Charge, DegassingMethod, Process } from "../rules/case";
+import { PROCESS_WORDS, valueWord } from "../rules/value-words";
 
-/** Plain words for stored codes, shown wherever a person reads them. */
-export const PROCESS_LABELS: Record<Process, string> = {
-  "green-sand": "green sand",
-  "no-bake-sand": "no-bake sand",
-  "lost-foam": "lost foam",
-  investment: "investment",
-  plaster: "plaster",
-  "permanent-mould": "permanent mould",
-};
+/** Plain words for stored codes, shown wherever a person reads them (one spelling: rules/value-words.ts). */
+export const PROCESS_LABELS: Record<Process, string> = PROCESS_WORDS;
+export { valueWord };
 
 export const CHARGE_LABELS: Record<Charge, string> = {
   ingot: "ingot",
@@ -26,3 +21,11 @@ export const DEGASSING_LABELS: Record<DegassingMethod, string> = {
 
 /** How a casting came out of the sand. */
 export const OUTCOME_LABELS = { good: "good", rework: "needs rework", scrap: "scrap" } as const;
+
+/**
+ * One name for the water in the mould, the same on the melt form, the melt's conditions and the case sheet:
+ * "sand moisture" for sand moulds, "mould moisture" for investment and plaster shells (lib/fact-fields.ts
+ * lists both, so a link to the field finds it either way).
+ */
+export const moistureLabel = (process: Process | null | undefined) =>
+  process === "investment" || process === "plaster" ? "Mould moisture" : "Sand moisture";

@@ -1,6 +1,7 @@
 import { factSpec } from "../rules/fact-catalog";
 import { FACT_PLACEHOLDER } from "../rules/quantity-text";
 import type { Reason } from "../rules/rank";
+import { valueWord } from "../rules/value-words";
 import { textInUnits } from "./quantity-words";
 import { readingNumber, unitLabel, type Quantity, type Units } from "./units";
 
@@ -23,7 +24,7 @@ function quantityOf(name: string): Quantity | undefined {
 function plain(value: Reason["values"][string]): string {
   if (value === null || value === undefined) return "unknown";
   if (typeof value === "boolean") return value ? "yes" : "no";
-  return typeof value === "string" ? value.replace(/-/g, " ") : String(value);
+  return valueWord(value);
 }
 
 const PLACEHOLDER_AND_UNIT = new RegExp(`${FACT_PLACEHOLDER.source}(\\s*)(°C|mm²|mm|kg/m³|m/s)?`, "g");

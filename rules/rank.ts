@@ -2,6 +2,7 @@ import { FACTS, factSpec, type Facts, type METALS } from "./fact-catalog";
 import { roundFact } from "./facts";
 import { conditionLeaves, evaluateLeaf, type Condition, type KbCause, type KbRule } from "./kb-schema";
 import { FACT_PLACEHOLDER, siText } from "./quantity-text";
+import { valueWord } from "./value-words";
 
 /**
  * A reason as data as well as words: the rule's sentence template and the (rounded, SI) values of the
@@ -41,7 +42,7 @@ const display = (name: string, facts: Facts) => {
   const v = roundFact(name, facts[name]);
   if (v === undefined) return "unknown";
   if (typeof v === "boolean") return v ? "yes" : "no";
-  return typeof v === "string" ? v.replace(/-/g, " ") : String(v);
+  return valueWord(v);
 };
 export const fillBecause = (template: string, facts: Facts) =>
   siText(template).replace(FACT_PLACEHOLDER, (_, name: string) => display(name, facts));

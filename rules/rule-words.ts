@@ -1,5 +1,6 @@
 import { factSpec, type FactQuantity, type FactSpec } from "./fact-catalog";
 import type { Condition, Leaf } from "./kb-schema";
+import { valueWord } from "./value-words";
 
 /**
  * Rules in plain words, for the rulebook and its version differences. Values are stored SI; the
@@ -28,17 +29,7 @@ const trim = (n: number) => String(Number(n.toFixed(Math.abs(n) >= 100 ? 0 : 2))
 export const siFormat: ValueFormat = (spec, si) =>
   `${trim(si)}${SI_UNIT[spec.quantity] ? ` ${SI_UNIT[spec.quantity]}` : ""}`;
 
-// Codes that read badly with their hyphens simply turned into spaces.
-const VALUE_WORDS: Record<string, string> = {
-  "al-si": "Al-Si",
-  "al-si-cu": "Al-Si-Cu",
-  "al-cu": "Al-Cu",
-  "al-mg": "Al-Mg",
-  "al-zn": "Al-Zn",
-  "al-wrought": "wrought aluminium",
-  "copper-base": "copper-base",
-};
-export const valueWord = (v: unknown) => (typeof v === "string" ? (VALUE_WORDS[v] ?? v.replace(/-/g, " ")) : String(v));
+export { valueWord };
 const list = (vs: unknown[]) =>
   vs.length === 1 ? valueWord(vs[0]) : `${vs.slice(0, -1).map(valueWord).join(", ")} or ${valueWord(vs.at(-1))}`;
 

@@ -1,12 +1,10 @@
 import { Link } from "expo-router";
 import { Image, Pressable, StyleSheet, Text, View } from "react-native";
-import { card, colors, fontSize, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, outcomeColours, radius, space } from "@/constants/theme";
 import { photoUri } from "@/hooks/use-photos";
 import { DEFECTS } from "@/lib/defects";
 import { OUTCOME_LABELS } from "@/lib/labels";
-import type { CastingSummary, Outcome } from "@/lib/notebook-schemas";
-
-export const OUTCOME_COLOURS: Record<Outcome, string> = { good: colors.steel, rework: "#8A6100", scrap: colors.danger };
+import type { CastingSummary } from "@/lib/notebook-schemas";
 
 /** One casting in a melt's list: its part, how it came out, and what was marked on it. */
 export function CastingRow({ casting }: { casting: CastingSummary }) {
@@ -27,7 +25,7 @@ export function CastingRow({ casting }: { casting: CastingSummary }) {
               {casting.partName}
             </Text>
             {casting.outcome ? (
-              <Text style={[styles.outcome, { color: OUTCOME_COLOURS[casting.outcome] }]}>
+              <Text style={[styles.outcome, { color: outcomeColours[casting.outcome] }]}>
                 {OUTCOME_LABELS[casting.outcome]}
               </Text>
             ) : (

@@ -16,7 +16,18 @@ import type { Units } from "@/lib/units";
  * The likely causes of what was marked on this casting, from the shop's rules and the melt's and
  * casting's conditions. The last answer is kept and shown on opening; the button works it out again.
  */
-export function DiagnosisView({ casting, units, mayRun }: { casting: CastingDetail; units: Units; mayRun: boolean }) {
+export function DiagnosisView({
+  casting,
+  units,
+  mayRun,
+  showsRuleVersion,
+}: {
+  casting: CastingDetail;
+  units: Units;
+  mayRun: boolean;
+  /** Mentors and owners, who write the rules, can match an answer to a rulebook version; a caster needs the date. */
+  showsRuleVersion: boolean;
+}) {
   const run = useRunDiagnosis(casting.id);
   const snapshot = casting.diagnosis;
   const noMarks = casting.marks.length === 0;
@@ -58,8 +69,8 @@ export function DiagnosisView({ casting, units, mayRun }: { casting: CastingDeta
         <>
           <Text style={styles.when}>
             Worked out {formatMoment(snapshot.createdAt)}
-            {snapshot.createdBy?.name ? ` by ${snapshot.createdBy.name}` : ""} · rules version{" "}
-            {snapshot.ruleSetVersion.slice(0, 8)}.
+            {snapshot.createdBy?.name ? ` by ${snapshot.createdBy.name}` : ""}
+            {showsRuleVersion ? ` · rules version ${snapshot.ruleSetVersion.slice(0, 8)}` : ""}.
           </Text>
           {snapshot.result.causes.length === 0 ? (
             <Notice>

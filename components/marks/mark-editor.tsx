@@ -1,5 +1,5 @@
-import { useState } from "react";
-import { StyleSheet, Text, View } from "react-native";
+import { useEffect, useRef, useState } from "react";
+import { Platform, StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { ChoiceChips } from "@/components/ui/choice-chips";
 import { DefectPicker } from "@/components/marks/defect-picker";
@@ -38,6 +38,20 @@ export function MarkEditor({ title, mark, busy, failure, onSave, onCancel, onMov
   // Removing takes a second tap: there is no undo.
   const [confirmRemove, setConfirmRemove] = useState(false);
 
+  // Opened by a tap on the photo, the form starts below it, on a phone often past the screen's bottom
+  // edge: bring its top into view (a form already in sight, as beside the photos on a wide screen, stays put).
+  const box = useRef<View>(null);
+  useEffect(() => {
+    if (Platform.OS !== "web") return;
+    const node = box.current as unknown as HTMLElement | null;
+    if (!node?.getBoundingClientRect) return;
+    const top = node.getBoundingClientRect().top;
+    if (top < 0 || top > window.innerHeight * 0.6) {
+      const still = window.matchMedia?.("(prefers-reduced-motion: reduce)").matches;
+      node.scrollIntoView({ block: "start", behavior: still ? "auto" : "smooth" });
+    }
+  }, []);
+
   function save() {
     const parsed = describe.safeParse({ type, location, severity, note: note.trim() || null });
     const found = parsed.success ? {} : fieldErrors(parsed.error, { topLevel: true });
@@ -48,7 +62,7 @@ export function MarkEditor({ title, mark, busy, failure, onSave, onCancel, onMov
   }
 
   return (
-    <View style={styles.box} testID="mark-editor">
+    <View ref={box} style={styles.box} testID="mark-editor">
       <Heading level={3}>{title}</Heading>
       <DefectPicker value={type} onChange={setType} />
       <FieldError message={errors.type} />

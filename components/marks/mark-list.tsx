@@ -1,6 +1,7 @@
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import type { Pin } from "@/components/photos/photo-marker";
 import { card, colors, fontSize, space } from "@/constants/theme";
+import { pinSizePx, SeverityPin } from "@/components/marks/severity-pin";
 import { DEFECTS, LOCATION_LABELS, SEVERITY_LABELS } from "@/lib/defects";
 
 type Props = { pins: Pin[]; selectedId: number | null; onOpen: (pin: Pin) => void; photoNumbers: Map<number, number> };
@@ -22,7 +23,7 @@ export function MarkList({ pins, selectedId, onOpen, photoNumbers }: Props) {
             style={[styles.row, p.mark.id === selectedId && styles.on]}
           >
             <View style={styles.badge}>
-              <Text style={styles.badgeText}>{p.number}</Text>
+              <SeverityPin label={String(p.number)} severity={p.mark.severity} />
             </View>
             <View style={styles.body}>
               <Text style={styles.title}>
@@ -46,15 +47,8 @@ const styles = StyleSheet.create({
   empty: { fontSize: fontSize.body, color: colors.muted },
   row: { ...card, flexDirection: "row", gap: space.md, alignItems: "flex-start", padding: space.sm },
   on: { borderColor: colors.steel, borderWidth: 2 },
-  badge: {
-    width: 28,
-    height: 28,
-    borderRadius: 14,
-    backgroundColor: colors.accent,
-    alignItems: "center",
-    justifyContent: "center",
-  },
-  badgeText: { color: "#FFFFFF", fontWeight: "700" },
+  // As wide as the most-ringed pin, so the rows line up whatever their severity.
+  badge: { width: pinSizePx(3), alignItems: "center" },
   body: { flex: 1, gap: 2 },
   title: { fontSize: fontSize.body, fontWeight: "600", color: colors.ink },
   cls: { color: colors.muted, fontWeight: "400" },

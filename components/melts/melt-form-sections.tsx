@@ -7,7 +7,7 @@ import { TextField } from "@/components/ui/text-field";
 import { YesNoChips } from "@/components/ui/yes-no-chips";
 import type { MeltDraft } from "@/hooks/use-melt-draft";
 import { showsFoam, showsMoisture } from "@/hooks/use-melt-draft";
-import { CHARGE_LABELS, DEGASSING_LABELS } from "@/lib/labels";
+import { CHARGE_LABELS, DEGASSING_LABELS, moistureLabel } from "@/lib/labels";
 import { unitLabel, type Units } from "@/lib/units";
 import { CHARGES, DEGASSING_METHODS, type Charge, type DegassingMethod } from "@/rules/case";
 
@@ -113,13 +113,12 @@ export function DaySection({ draft, set, errors, units }: SectionProps) {
 }
 
 export function MouldSection({ draft, set, errors, units }: SectionProps) {
-  const sandy = draft.process !== "investment" && draft.process !== "plaster";
   return (
     <>
       <Heading level={3}>The mould</Heading>
       {showsMoisture(draft.process) ? (
         <NumberField
-          label={sandy ? "Sand moisture" : "Mould moisture"}
+          label={moistureLabel(draft.process)}
           unit="%"
           value={draft.sandMoisturePct}
           onChangeText={(v) => set("sandMoisturePct", v)}

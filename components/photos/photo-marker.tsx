@@ -1,7 +1,9 @@
 import { useRef, useState } from "react";
 import { Image, Platform, Pressable, StyleSheet, Text, View, type GestureResponderEvent } from "react-native";
-import { colors, fontSize } from "@/constants/theme";
+import { SeverityLegend, SeverityPin, pinSizePx, severityWord } from "@/components/marks/severity-pin";
+import { colors, fontSize, space } from "@/constants/theme";
 import { photoUri } from "@/hooks/use-photos";
+import { DEFECTS } from "@/lib/defects";
 import type { Mark, Photo } from "@/lib/notebook-schemas";
 
 export type Pin = { number: number; mark: Mark };
@@ -72,15 +74,18 @@ export function PhotoMarker({ photo, pins, selectedId, pending, onTap, onPin, ma
               <Pressable
                 key={mark.id}
                 onPress={() => onPin(mark)}
-                aria-label={`Mark ${number}`}
+                aria-label={`Mark ${number}: ${DEFECTS[mark.type]?.label ?? mark.type}, ${severityWord(mark.severity)}`}
                 testID={`pin-${number}`}
                 style={[
-                  styles.pin,
-                  { left: mark.x * size.w - PIN / 2, top: mark.y * size.h - PIN / 2 },
+                  styles.spot,
+                  {
+                    left: mark.x * size.w - pinSizePx(mark.severity) / 2,
+                    top: mark.y * size.h - pinSizePx(mark.severity) / 2,
+                  },
                   mark.id === selectedId && styles.pinOn,
                 ]}
               >
-                <Text style={styles.pinText}>{number}</Text>
+                <SeverityPin label={String(number)} severity={mark.severity} on={mark.id === selectedId} />
               </Pressable>
             ),
           )}
@@ -98,12 +103,13 @@ export function PhotoMarker({ photo, pins, selectedId, pending, onTap, onPin, ma
           ) : null}
         </View>
       ) : null}
+      {pins.some((p) => p.mark.x !== null) ? <SeverityLegend /> : null}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  outer: { width: "100%", alignItems: "center" },
+  outer: { width: "100%", alignItems: "center", gap: space.sm },
   pin: {
     position: "absolute",
     width: PIN,
@@ -115,7 +121,8 @@ const styles = StyleSheet.create({
     borderWidth: 2,
     borderColor: "#FFFFFF",
   },
-  pinOn: { backgroundColor: colors.steel, transform: [{ scale: 1.2 }] },
+  spot: { position: "absolute" },
+  pinOn: { transform: [{ scale: 1.2 }] },
   pending: { backgroundColor: colors.ink },
   pinText: { color: "#FFFFFF", fontWeight: "700", fontSize: fontSize.detail },
 });

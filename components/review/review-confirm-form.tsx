@@ -49,6 +49,8 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
       newCauseFix: isOther && makeShopCause ? fix.trim() || undefined : undefined,
       note: note || undefined,
     };
+    // "Something else" chosen but not named: say so at the name's field, not at the list just left.
+    if (isOther && !input.causeText) return setErrors({ causeText: "say what it was, or choose a cause above" });
     const parsed = confirmationInput.safeParse(input);
     if (!parsed.success) return setErrors(fieldErrors(parsed.error, { topLevel: true }));
     setErrors({});
@@ -64,9 +66,11 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
       onError: (e) => setErrors(e instanceof ApiError ? e.fields : {}),
     });
   };
+  // A new choice starts afresh: no message about the last one, from the form or the server, stays behind.
   const choose = (id: string) => {
     setChoice(id);
     setErrors({});
+    confirm.reset();
   };
   return (
     <View style={styles.wrap}>
@@ -106,7 +110,10 @@ export function ReviewConfirmForm({ castingId, causes, title, onDone }: Props) {
           <TextField
             label="What it was"
             value={other}
-            onChangeText={setOther}
+            onChangeText={(v) => {
+              setOther(v);
+              if (errors.causeText) setErrors(({ causeText: _, ...rest }) => rest);
+            }}
             error={errors.causeText}
             placeholder="e.g. Ladle lip froze over"
           />

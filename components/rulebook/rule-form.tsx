@@ -8,6 +8,7 @@ import { Notice } from "@/components/ui/notice";
 import { RuleCausePicker } from "@/components/rulebook/rule-cause-picker";
 import { RuleConditionRow } from "@/components/rulebook/rule-condition-row";
 import { MultiChips } from "@/components/rulebook/rule-multi-chips";
+import { RuleReasonField } from "@/components/rulebook/rule-reason-field";
 import { RuleTrial } from "@/components/rulebook/rule-trial";
 import { TextField } from "@/components/ui/text-field";
 import { card, space } from "@/constants/theme";
@@ -128,12 +129,13 @@ export function RuleForm({ initial, ruleId, causes, units, onSaved }: Props) {
         <FieldError message={e.weight} />
       </Section>
       <Section title="Why, and where it comes from">
-        <TextField
-          label="Reason, shown with the diagnosis"
+        <RuleReasonField
           value={s.because}
-          onChangeText={(t) => f.set("because", t)}
+          onChange={(t) => f.set("because", t)}
           error={e.because}
-          placeholder="e.g. The ladle sat for minutes before the pour"
+          ruleFacts={s.rows.map((r) => r.fact)}
+          against={s.effect === "weakens"}
+          units={units}
         />
         <MultiChips
           label="Source"

@@ -1,18 +1,16 @@
 import { Link } from "expo-router";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { MarkedText } from "@/components/search/casebook-marked-text";
-import { card, colors, fontSize, radius, space } from "@/constants/theme";
+import { card, colors, fontSize, outcomeColours, radius, space } from "@/constants/theme";
 import { formatDay } from "@/lib/dates";
 import { OUTCOME_LABELS, PROCESS_LABELS } from "@/lib/labels";
 import type { CaseHit, CaseSummary } from "@/lib/search-schemas";
 import { castingHref, causeLine, defectsLine } from "@/lib/case-words";
 
-const OUTCOME_COLOURS = { good: colors.steel, rework: "#8A6D1F", scrap: colors.danger } as const;
-
 export function OutcomeTag({ outcome }: { outcome: CaseSummary["outcome"] }) {
   if (!outcome) return <Text style={styles.muted}>not judged</Text>;
   return (
-    <Text style={[styles.tag, { color: OUTCOME_COLOURS[outcome], borderColor: OUTCOME_COLOURS[outcome] }]}>
+    <Text style={[styles.tag, { color: outcomeColours[outcome], borderColor: outcomeColours[outcome] }]}>
       {OUTCOME_LABELS[outcome]}
     </Text>
   );

@@ -29,10 +29,11 @@ export function CasebookResultTable({
     {
       key: "part",
       label: "Part",
-      flex: 1.9,
-      render: (h) => <MarkedText style={styles.strong} runs={h.marked.part} plain={h.partName} numberOfLines={2} />,
+      flex: 2.2,
+      // The part's whole name, wrapped: two pumps' impellers differ only at the end of it.
+      render: (h) => <MarkedText style={styles.strong} runs={h.marked.part} plain={h.partName} />,
     },
-    { key: "poured", label: "Poured", flex: 1.7, sorts: DATE_SORTS, render: (h) => formatDay(h.pouredOn) },
+    { key: "poured", label: "Poured", flex: 1.4, sorts: DATE_SORTS, render: (h) => formatDay(h.pouredOn) },
     {
       key: "how",
       label: "Alloy, process",
@@ -42,7 +43,6 @@ export function CasebookResultTable({
           style={styles.text}
           runs={h.marked.conditions}
           plain={`${h.alloy} · ${PROCESS_LABELS[h.process]}`}
-          numberOfLines={2}
         />
       ),
     },
@@ -52,9 +52,9 @@ export function CasebookResultTable({
       flex: 2.6,
       render: (h) => (
         <View>
-          <MarkedText style={styles.text} runs={h.marked.defects} plain={defectsLine(h)} numberOfLines={3} />
+          <MarkedText style={styles.text} runs={h.marked.defects} plain={defectsLine(h)} />
           {(h.marked.notes ?? h.marked.comments) ? (
-            <MarkedText style={styles.words} runs={h.marked.notes ?? h.marked.comments} plain="" numberOfLines={2} />
+            <MarkedText style={styles.words} runs={h.marked.notes ?? h.marked.comments} plain="" />
           ) : null}
         </View>
       ),
@@ -63,7 +63,7 @@ export function CasebookResultTable({
       key: "cause",
       label: "Cause",
       flex: 2.1,
-      render: (h) => <MarkedText style={styles.cause} runs={h.marked.causes} plain={causeLine(h)} numberOfLines={3} />,
+      render: (h) => <MarkedText style={styles.cause} runs={h.marked.causes} plain={causeLine(h)} />,
     },
     { key: "outcome", label: "Outcome", flex: 1.3, render: (h) => <OutcomeTag outcome={h.outcome} /> },
   ];

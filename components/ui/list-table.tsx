@@ -61,9 +61,8 @@ export function ListTable<Row>({ columns, rows, rowKey, sort, onSort, onOpen }: 
             return (
               <View key={c.key} role="cell" style={[styles.cell, { flex: c.flex }]}>
                 {typeof content === "string" || typeof content === "number" ? (
-                  <Text style={[styles.text, c.align === "right" && styles.right]} numberOfLines={1}>
-                    {content}
-                  </Text>
+                  // Wrapped, not cut: a cell's words are what the row is told apart by.
+                  <Text style={[styles.text, c.align === "right" && styles.right]}>{content}</Text>
                 ) : (
                   content
                 )}

@@ -79,8 +79,13 @@ describe("the learning loop on a casting", () => {
     await mentor.setViewportSize(PHONE);
     await mentor.getByRole("button", { name: "Correct the cause" }).click();
     await mentor.getByRole("radio", { name: "Something else (not in the rulebook)" }).click();
+    // Sent without a name, the message sits at the name's field and goes once the name is typed.
+    await mentor.getByTestId("confirm-cause").click();
+    await expect.poll(() => mentor.getByText("say what it was, or choose a cause above").count()).toBe(1);
+    expect(await mentor.getByText("choose a cause, or name another").count()).toBe(0);
     // Words that sound like a rulebook cause offer it instead.
     await mentor.getByLabel("What it was").fill("hydrogen pick up");
+    expect(await mentor.getByText("say what it was, or choose a cause above").count()).toBe(0);
     const alike = mentor.getByTestId("cause-look-alikes");
     await expect
       .poll(() => alike.getByRole("button", { name: new RegExp(hydrogen.title.slice(0, 20)) }).count())

@@ -50,6 +50,14 @@ async function choosePhoto(page: Page, path: string) {
 async function addMark(page: Page, fx: number, fy: number, defect: string, where: string) {
   await tapPhoto(page, fx, fy);
   await expect.poll(() => page.getByTestId("mark-editor").count()).toBe(1);
+  // The form opens where it can be seen: its top inside the window, not below the screen's edge.
+  const height = page.viewportSize()!.height;
+  await expect
+    .poll(async () => {
+      const top = (await page.getByTestId("mark-editor").boundingBox())!.y;
+      return top >= 0 && top < height * 0.6;
+    })
+    .toBe(true);
   await page.getByRole("radio", { name: defect, exact: true }).click();
   await page.getByRole("radio", { name: where, exact: true }).click();
   await page.getByRole("button", { name: "Add the mark" }).click();
@@ -121,6 +129,9 @@ describe("the notebook at phone size (390 px)", () => {
     expect(first.y).toBeCloseTo(0.42, 1);
     expect(await page.getByTestId("mark-list").getByText("Gas porosity").count()).toBe(1);
     expect(await page.getByTestId("mark-list").getByText("Shrinkage").count()).toBe(1);
+    // Severity by rings as well as in words for a screen reader, with a legend for the rings.
+    expect(await page.getByLabel("Mark 1: Gas porosity, clear").count()).toBe(1);
+    expect(await page.getByLabel("Pins: one ring slight, two rings clear, three rings severe").count()).toBe(1);
     await longShot(page, "phone-casting-marks");
 
     // Move mark 2: select it, then tap the new spot.
@@ -136,6 +147,9 @@ describe("the notebook at phone size (390 px)", () => {
       .getByRole("button", { name: /Why this cause/ })
       .click();
     await longShot(page, "phone-casting-causes");
+    // A caster reads when the causes were worked out, not the rulebook version's hash.
+    expect(await page.getByTestId("diagnosis").textContent()).toMatch(/Worked out/);
+    expect(await page.getByTestId("diagnosis").textContent()).not.toMatch(/rules version/);
     expect(page.url()).toBe(castingUrl);
     await page.context().close();
   });
@@ -175,6 +189,8 @@ describe("the notebook at wide size (1280 px)", () => {
     await seen(page, "Photos and marks");
     await seen(page, "Likely causes");
     await longShot(page, "wide-casting");
+    // A mentor, who writes rules, can match the answer to a rulebook version.
+    expect(await page.getByTestId("diagnosis").textContent()).toMatch(/rules version [0-9a-f]{8}/);
 
     // Dropping a photo file from the desktop onto the photo area uploads it.
     const photos = await page.getByTestId("casting-photo").count();

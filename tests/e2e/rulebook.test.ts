@@ -50,7 +50,15 @@ for (const [sizeName, size, defect, defectLabel] of [
       await mentor.getByLabel("Name of the cause").fill(cause);
       await mentor.getByLabel("Fixes to try, one per line").fill("Weight or clamp the cope before pouring");
       await mentor.getByRole("radio", { name: "strong evidence (0.8)" }).click();
-      await mentor.getByLabel("Reason, shown with the diagnosis").fill("A tall sprue pushes hard on the cope");
+      const reason = mentor.getByLabel("Reason, shown with the diagnosis");
+      await reason.fill("A tall sprue pushes hard on the cope:");
+      // The rule's own fact is offered as a chip; tapping it puts its placeholder in, and the preview fills it.
+      await mentor.getByRole("button", { name: "Insert sprue height" }).click();
+      expect(await reason.inputValue()).toBe("A tall sprue pushes hard on the cope: {sprueHeightMm} mm");
+      await expect
+        .poll(() => mentor.getByTestId("reason-preview").textContent())
+        .toMatch(/A tall sprue pushes hard on the cope: \d+ mm/);
+      expect(await mentor.getByTestId("reason-preview").textContent()).not.toContain("{");
       await expect.poll(() => mentor.getByText("choose a cause").count()).toBe(0);
 
       await mentor.getByTestId("try-rule").click();

@@ -53,7 +53,12 @@ export default function CastingScreen() {
       </PrintOnly>
       <Heading level={2}>Photos and marks</Heading>
       <Inspection casting={c} wide={wide} />
-      <DiagnosisView casting={c} units={units} mayRun={mayWrite} />
+      <DiagnosisView
+        casting={c}
+        units={units}
+        mayRun={mayWrite}
+        showsRuleVersion={roleCan(role, { rule: ["write"] })}
+      />
       <ReviewPanel castingId={c.id} causes={causes} />
       <FollowupPanel castingId={c.id} causes={causes} />
       {/* Links to elsewhere and the thread stay on screen; the printed sheet ends with the fix and its outcome. */}
