@@ -19,6 +19,8 @@ export type ImportField = {
   quantity?: Quantity;
   choices?: Record<string, string>;
   required?: boolean;
+  /** Other headings old logs use for it ("Mould moisture" for the sand's water). */
+  also?: string[];
 };
 
 const OUTCOMES = { good: OUTCOME_LABELS.good, rework: OUTCOME_LABELS.rework, scrap: OUTCOME_LABELS.scrap };
@@ -82,7 +84,14 @@ export const IMPORT_FIELDS: ImportField[] = [
     quantity: "temperature",
   },
   { key: "humidityPct", label: "Humidity %", of: "melt", input: "humidityPct", kind: "number" },
-  { key: "sandMoisturePct", label: "Sand moisture %", of: "melt", input: "sandMoisturePct", kind: "number" },
+  {
+    key: "sandMoisturePct",
+    label: "Sand moisture %",
+    of: "melt",
+    input: "sandMoisturePct",
+    kind: "number",
+    also: ["Mould moisture %", "Mould moisture", "Moisture %", "Moisture"],
+  },
   { key: "coatingApplied", label: "Coating applied", of: "melt", input: "coatingApplied", kind: "yes-no" },
   { key: "coatingDried", label: "Coating dried", of: "melt", input: "coatingDried", kind: "yes-no" },
   { key: "coatingCoats", label: "Coats of coating", of: "melt", input: "coatingCoats", kind: "number" },
@@ -182,7 +191,13 @@ export function guessMapping(headers: string[]): ImportMapping {
   headers.forEach((h, column) => {
     const words = squash(h);
     const field =
-      IMPORT_FIELDS.find((f) => squash(f.key) === words || squash(f.label) === words || squash(f.input) === words) ??
+      IMPORT_FIELDS.find(
+        (f) =>
+          squash(f.key) === words ||
+          squash(f.label) === words ||
+          squash(f.input) === words ||
+          (f.also ?? []).some((a) => squash(a) === words),
+      ) ??
       IMPORT_FIELDS.find(
         (f) => words.length > 3 && (words.startsWith(squash(f.key)) || words.startsWith(squash(f.label))),
       );
