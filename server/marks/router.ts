@@ -2,7 +2,7 @@ import { Router } from "express";
 import { markInput, markPatch } from "../../lib/notebook-schemas";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
-import { expectedVersion, rowVersion, sendVersioned } from "../http/row-version";
+import { expectedVersion, sendVersioned } from "../http/row-version";
 import { idParam } from "../notebook/shared";
 import { addMark, deleteMark, patchMark } from "./service";
 
