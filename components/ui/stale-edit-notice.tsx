@@ -45,7 +45,7 @@ const styles = StyleSheet.create({
   table: { gap: space.xs },
   row: { flexDirection: "row", gap: space.sm, flexWrap: "wrap" },
   head: { fontWeight: "600", color: colors.muted },
-  label: { flexBasis: 140, flexGrow: 1, fontSize: fontSize.body, color: colors.ink },
-  cell: { flexBasis: 90, flexGrow: 1, fontSize: fontSize.body, color: colors.ink },
+  label: { flexBasis: 100, flexGrow: 1, fontSize: fontSize.body, color: colors.ink },
+  cell: { flexBasis: 80, flexGrow: 1, fontSize: fontSize.body, color: colors.ink },
   actions: { flexDirection: "row", gap: space.sm, flexWrap: "wrap" },
 });

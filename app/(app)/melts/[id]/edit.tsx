@@ -49,7 +49,7 @@ export default function EditMeltScreen() {
       await update.mutateAsync({ input, version });
     } catch (e) {
       if (!(e instanceof ApiError && e.status === 412 && e.current)) throw e;
-      // The form keeps what was typed; the notice below offers both versions.
+      // The form keeps what was typed; the notice by the save button offers both versions.
       setConflict({ mine: input, theirs: e.current as Melt });
       return;
     }
@@ -63,26 +63,28 @@ export default function EditMeltScreen() {
     <Screen>
       <BackLink href={back} label={toCasting ? "Back to the casting" : "Back to the melt"} />
       <Heading>Change the melt of {formatDay(melt.data.pouredOn)}</Heading>
-      {conflict ? (
-        <StaleEditNotice
-          rows={rows}
-          busy={update.isPending}
-          onKeepMine={() => {
-            const { mine, theirs } = conflict;
-            setConflict(undefined);
-            void save(mine, theirs.version);
-          }}
-          onTakeTheirs={() => {
-            setOpened(conflict.theirs);
-            setConflict(undefined);
-            setFormKey((k) => k + 1);
-          }}
-        />
-      ) : null}
       <MeltForm
         key={formKey}
         initial={base}
         units={unitsNow}
+        beforeSave={
+          conflict ? (
+            <StaleEditNotice
+              rows={rows}
+              busy={update.isPending}
+              onKeepMine={() => {
+                const { mine, theirs } = conflict;
+                setConflict(undefined);
+                void save(mine, theirs.version);
+              }}
+              onTakeTheirs={() => {
+                setOpened(conflict.theirs);
+                setConflict(undefined);
+                setFormKey((k) => k + 1);
+              }}
+            />
+          ) : null
+        }
         submitLabel="Save changes"
         draftName={`melt:${id}`}
         openConditions={!!params.field && isMeltCondition(params.field)}
