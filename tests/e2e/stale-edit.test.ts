@@ -74,3 +74,32 @@ describe("editing a melt someone else has just changed", () => {
     expect(await storedFurnace(caster, meltId)).toBe("Caster's second pot");
   });
 });
+
+describe("editing a casting someone else has just changed", () => {
+  it("shows both versions of the notes and keeps mine on request", async () => {
+    const mentor = await signedInAs(browser(), baseUrl, PHONE, "mentor");
+    const demo = (await (await mentor.request.get(`${baseUrl}/api/castings?pageSize=1`)).json()).items[0];
+    const made = await mentor.request.post(`${baseUrl}/api/castings/melts/${demo.meltId}`, {
+      data: { partName: "Test bracket", notes: "Notes as opened" },
+    });
+    expect(made.status(), await made.text()).toBe(201);
+    const casting = await made.json();
+    await mentor.goto(`${baseUrl}/melts/${demo.meltId}/castings/${casting.id}`);
+    await mentor.getByRole("button", { name: "Change sizes and details" }).click();
+    const notes = mentor.getByLabel("Notes", { exact: true });
+    await expect.poll(() => notes.inputValue()).toBe("Notes as opened");
+    // Someone else saves first, through the API.
+    await mentor.request.patch(`${baseUrl}/api/castings/${casting.id}`, { data: { notes: "Their notes" } });
+    await notes.fill("My notes");
+    await mentor.getByTestId("save-casting").click();
+    await seen(mentor, "Changed by someone else since you opened it");
+    const notice = mentor.getByTestId("stale-edit");
+    await expect.poll(() => notice.getByText("Their notes").count()).toBe(1);
+    await expect.poll(() => notice.getByText("My notes").count()).toBe(1);
+    await longShot(mentor, "stale-edit-casting-390");
+    await mentor.getByTestId("keep-mine").click();
+    const stored = async () =>
+      (await (await mentor.request.get(`${baseUrl}/api/castings/${casting.id}`)).json()).notes as string;
+    await expect.poll(stored).toBe("My notes");
+  });
+});
