@@ -69,7 +69,7 @@ export function CastingSummary({
         onChange={(outcome) => update.mutate({ input: { outcome } })}
         disabled={!mayEdit || update.isPending}
       />
-      {update.error ? <Notice tone="error">{update.error.message}</Notice> : null}
+      {update.error && !conflict ? <Notice tone="error">{update.error.message}</Notice> : null}
       {editing && conflict ? (
         <StaleEditNotice
           rows={changedRows(

@@ -96,6 +96,8 @@ describe("editing a casting someone else has just changed", () => {
     const notice = mentor.getByTestId("stale-edit");
     await expect.poll(() => notice.getByText("Their notes").count()).toBe(1);
     await expect.poll(() => notice.getByText("My notes").count()).toBe(1);
+    // One notice, not a second error box saying the same.
+    expect(await mentor.getByText("Changed by someone else since you opened it").count()).toBe(1);
     await longShot(mentor, "stale-edit-casting-390");
     await mentor.getByTestId("keep-mine").click();
     const stored = async () =>
