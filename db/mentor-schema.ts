@@ -15,7 +15,7 @@ import {
 import type { KbRule } from "../rules/kb-schema";
 import { organization, user } from "./auth-schema";
 import { ruleStatusEnum, workedEnum } from "./enums";
-import { castings } from "./notebook-schema";
+import { castings, rowVersionColumn } from "./notebook-schema";
 
 /**
  * What the shop learns from its castings (core loop step 5 and the rulebook): review requests,
@@ -92,6 +92,7 @@ export const fixesTried = pgTable(
     createdBy: createdBy(),
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).defaultNow().notNull(),
+    version: rowVersionColumn(),
     updatedBy: text("updated_by")
       .notNull()
       .references(() => user.id),

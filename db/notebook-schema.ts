@@ -49,6 +49,12 @@ const createdBy = () =>
     .references(() => user.id);
 const createdAt = () => timestamp("created_at", { withTimezone: true }).defaultNow().notNull();
 const updatedAt = () => timestamp("updated_at", { withTimezone: true }).defaultNow().notNull();
+/**
+ * The row's version for optimistic concurrency (ETag / If-Match, server/http/row-version.ts), raised by
+ * one on every edit. A counter rather than updated_at: two saves can fall in the same millisecond (the
+ * precision a JS Date carries) and a clock can be set back, a counter never repeats.
+ */
+export const rowVersionColumn = () => integer("version").default(1).notNull();
 
 /**
  * Archiving hides a melt or casting from lists instead of deleting it, so an owner can bring it back
@@ -136,6 +142,7 @@ export const melts = pgTable(
     createdBy: createdBy(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
+    version: rowVersionColumn(),
     ...archiveAndRetry(),
   },
   (t) => [
@@ -175,6 +182,7 @@ export const castings = pgTable(
     createdBy: createdBy(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
+    version: rowVersionColumn(),
     ...archiveAndRetry(),
   },
   (t) => [
@@ -227,6 +235,7 @@ export const defectMarks = pgTable(
     createdBy: createdBy(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
+    version: rowVersionColumn(),
   },
   (t) => [
     index("marks_casting_idx").on(t.castingId),

@@ -34,7 +34,9 @@ export function useCreateCasting() {
 export function useUpdateCasting(id: number) {
   const refresh = useRefreshCasting();
   return useMutation({
-    mutationFn: (input: Partial<CastingInput>) => api<Casting>(`/castings/${id}`, { method: "PATCH", body: input }),
+    /** `version` is the one the form opened at: a save over someone else's later edit answers 412. */
+    mutationFn: ({ input, version }: { input: Partial<CastingInput>; version?: number }) =>
+      api<Casting>(`/castings/${id}`, { method: "PATCH", body: input, ifMatch: version }),
     onSuccess: () => refresh(id),
   });
 }

@@ -64,7 +64,9 @@ export function useCreateMelt() {
 export function useUpdateMelt(id: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: Partial<MeltInput>) => api<Melt>(`/melts/${id}`, { method: "PATCH", body: input }),
+    /** `version` is the one the form opened at: a save over someone else's later edit answers 412. */
+    mutationFn: ({ input, version }: { input: Partial<MeltInput>; version?: number }) =>
+      api<Melt>(`/melts/${id}`, { method: "PATCH", body: input, ifMatch: version }),
     // A casting's page shows its melt's conditions too.
     onSuccess: () =>
       Promise.all([

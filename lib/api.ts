@@ -10,6 +10,8 @@ export class ApiError extends Error {
     readonly fields: Record<string, string> = {},
     /** The messages that quote a limit, as templates ("above {1700 °C}"): `fieldsIn` says them in a person's units. */
     readonly fieldTemplates: Record<string, string> = {},
+    /** On 412 (an edit from a version someone else has since changed): the row as it now stands. */
+    readonly current?: unknown,
   ) {
     super(message);
   }
@@ -20,13 +22,20 @@ export class ApiError extends Error {
   }
 }
 
-export async function api<T>(path: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+/** `ifMatch` is the row version the person opened (a row's `version`): the save is refused with 412 if it moved on. */
+export async function api<T>(
+  path: string,
+  init: { method?: string; body?: unknown; ifMatch?: number } = {},
+): Promise<T> {
+  const headers: Record<string, string> = {};
+  if (init.body !== undefined) headers["Content-Type"] = "application/json";
+  if (init.ifMatch !== undefined) headers["If-Match"] = `"${init.ifMatch}"`;
   let res: Response;
   try {
     res = await fetch(`${apiBaseUrl}/api${path}`, {
       method: init.method ?? "GET",
       credentials: "include",
-      headers: init.body === undefined ? undefined : { "Content-Type": "application/json" },
+      headers,
       body: init.body === undefined ? undefined : JSON.stringify(init.body),
     });
   } catch {
@@ -39,6 +48,7 @@ export async function api<T>(path: string, init: { method?: string; body?: unkno
       data?.error?.message ?? `The server answered ${res.status}.`,
       data?.error?.fields,
       data?.error?.fieldTemplates,
+      data?.error?.current,
     );
   }
   return data as T;

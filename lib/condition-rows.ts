@@ -68,3 +68,14 @@ export function castingConditionRows(c: Casting, units: Units): ConditionRow[] {
     { label: "Orientation", value: c.orientation },
   ];
 }
+
+export type ChangedRow = { label: string; mine: string | null; theirs: string | null };
+
+/** The rows whose value differs between the person's version and the one saved since: the two side by side. */
+export function changedRows(mine: ConditionRow[], theirs: ConditionRow[]): ChangedRow[] {
+  const labels = [...new Set([...mine, ...theirs].map((r) => r.label))];
+  const valueOf = (rows: ConditionRow[], label: string) => rows.find((r) => r.label === label)?.value ?? null;
+  return labels
+    .map((label) => ({ label, mine: valueOf(mine, label), theirs: valueOf(theirs, label) }))
+    .filter((r) => r.mine !== r.theirs);
+}

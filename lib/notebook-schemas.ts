@@ -245,6 +245,8 @@ export type Melt = Row &
     charge: Charge | null;
     degassing: DegassingMethod | null;
     updatedAt: string;
+    /** Raised by one on every edit; the ETag (server/http/row-version.ts). */
+    version: number;
   };
 export type MeltSummary = Row & {
   pouredOn: string;
@@ -262,6 +264,7 @@ export type Casting = Row &
     partName: string;
     outcome: Outcome | null;
     updatedAt: string;
+    version: number;
   };
 export type CastingSummary = Row & {
   meltId: number;
@@ -288,6 +291,7 @@ export type Mark = Row & {
   location: DefectLocation;
   severity: number;
   note: string | null;
+  version: number;
 };
 export type Comment = Row & { castingId: number; body: string };
 export type DiagnosisSnapshot = {

@@ -117,6 +117,7 @@ export type FixTried = {
   createdBy: PersonRef | null;
   createdAt: string;
   updatedAt: string;
+  version: number;
 };
 /** One casting of the part in the chain of fixes, oldest first; `current` marks the casting on screen. */
 export type ChainLink = { casting: CastingRef; fixes: FixTried[]; current: boolean };

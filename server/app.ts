@@ -64,7 +64,7 @@ export function createApp(opts: { webDir?: string } = {}) {
   app.disable("x-powered-by");
   app.set("trust proxy", env.TRUST_PROXY);
 
-  if (env.DEV_WEB_ORIGIN) app.use(cors({ origin: env.DEV_WEB_ORIGIN, credentials: true }));
+  if (env.DEV_WEB_ORIGIN) app.use(cors({ origin: env.DEV_WEB_ORIGIN, credentials: true, exposedHeaders: ["ETag"] }));
 
   // Before any body is read: a write from another site's page is refused.
   app.use("/api", sameOriginWrites);

@@ -5,13 +5,16 @@ import { CastingFacts } from "@/components/castings/casting-facts";
 import { CastingForm } from "@/components/castings/casting-form";
 import { Heading } from "@/components/ui/heading";
 import { Notice } from "@/components/ui/notice";
+import { StaleEditNotice } from "@/components/ui/stale-edit-notice";
 import { OutcomeChips } from "@/components/castings/outcome-chips";
 import { colors, fontSize, space } from "@/constants/theme";
 import { useUpdateCasting } from "@/hooks/use-castings";
 import { useFocusField } from "@/hooks/use-focus-field";
+import { ApiError } from "@/lib/api";
+import { castingConditionRows, changedRows } from "@/lib/condition-rows";
 import { fieldOfFact } from "@/lib/fact-fields";
 import { PROCESS_LABELS } from "@/lib/labels";
-import type { CastingDetail } from "@/lib/notebook-schemas";
+import type { Casting, CastingDetail, CastingInput } from "@/lib/notebook-schemas";
 import { formatValue, type Units } from "@/lib/units";
 
 /** The casting's own record: how it came out (one tap to change), its melt in a line, its sizes. */
@@ -31,9 +34,27 @@ export function CastingSummary({
   const field = editField ? fieldOfFact(editField) : undefined;
   const opens = mayEdit && field?.form === "casting";
   const [editing, setEditing] = useState(opens);
+  // The version the form opened at (If-Match); taking theirs opens the form again at their version.
+  const [opened, setOpened] = useState<Casting>(casting);
+  const [conflict, setConflict] = useState<{ mine: Partial<CastingInput>; theirs: Casting }>();
+  const [formKey, setFormKey] = useState(0);
+  const startEditing = () => {
+    setOpened(casting);
+    setEditing(true);
+  };
+  async function save(input: Partial<CastingInput>, version: number) {
+    try {
+      await update.mutateAsync({ input, version });
+    } catch (e) {
+      if (!(e instanceof ApiError && e.status === 412 && e.current)) throw e;
+      setConflict({ mine: input, theirs: e.current as Casting });
+      return;
+    }
+    setEditing(false);
+  }
   // The link is followed on this same page: open the form when it names a field.
   useEffect(() => {
-    if (opens) setEditing(true);
+    if (opens) startEditing();
   }, [opens, editField]);
   useFocusField(editing ? field?.labels : undefined, editing);
   const m = casting.melt;
@@ -45,21 +66,38 @@ export function CastingSummary({
       </Text>
       <OutcomeChips
         value={casting.outcome}
-        onChange={(outcome) => update.mutate({ outcome })}
+        onChange={(outcome) => update.mutate({ input: { outcome } })}
         disabled={!mayEdit || update.isPending}
       />
-      {update.error ? <Notice tone="error">{update.error.message}</Notice> : null}
+      {update.error && !conflict ? <Notice tone="error">{update.error.message}</Notice> : null}
+      {editing && conflict ? (
+        <StaleEditNotice
+          rows={changedRows(
+            withNotes({ ...conflict.theirs, ...conflict.mine } as Casting, units),
+            withNotes(conflict.theirs, units),
+          )}
+          busy={update.isPending}
+          onKeepMine={() => {
+            const { mine, theirs } = conflict;
+            setConflict(undefined);
+            void save(mine, theirs.version);
+          }}
+          onTakeTheirs={() => {
+            setOpened(conflict.theirs);
+            setConflict(undefined);
+            setFormKey((k) => k + 1);
+          }}
+        />
+      ) : null}
       {editing ? (
         <CastingForm
-          initial={casting}
+          key={formKey}
+          initial={opened}
           units={units}
           startExpanded
           submitLabel="Save changes"
           draftName={`casting:${casting.id}`}
-          onSubmit={async (input) => {
-            await update.mutateAsync(input);
-            setEditing(false);
-          }}
+          onSubmit={(input) => save(input, opened.version)}
         />
       ) : (
         <>
@@ -67,7 +105,7 @@ export function CastingSummary({
           {casting.notes ? <Notice>{casting.notes}</Notice> : null}
           {mayEdit ? (
             <View style={styles.start}>
-              <Button kind="plain" label="Change sizes and details" onPress={() => setEditing(true)} />
+              <Button kind="plain" label="Change sizes and details" onPress={startEditing} />
             </View>
           ) : null}
         </>
@@ -79,6 +117,11 @@ export function CastingSummary({
       ) : null}
     </View>
   );
+}
+
+/** The casting's details in the person's units, and its name and notes, for comparing two versions. */
+function withNotes(c: Casting, units: Units) {
+  return [{ label: "Part", value: c.partName }, ...castingConditionRows(c, units), { label: "Notes", value: c.notes }];
 }
 
 const styles = StyleSheet.create({

@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useState, type ReactNode } from "react";
 import { StyleSheet, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { ChoiceChips } from "@/components/ui/choice-chips";
@@ -33,10 +33,21 @@ type Props = {
   openConditions?: boolean;
   /** A new melt's save carries an idempotency key, so sending it twice makes one melt. */
   isNew?: boolean;
+  /** Shown just above the save button, where the person's eyes are after pressing it (a refused save's choices). */
+  beforeSave?: ReactNode;
 };
 
 /** Every condition of a melt, checked here with the API's own schema before anything is sent. */
-export function MeltForm({ initial, units, submitLabel, onSubmit, draftName, isNew, openConditions }: Props) {
+export function MeltForm({
+  initial,
+  units,
+  submitLabel,
+  onSubmit,
+  draftName,
+  isNew,
+  openConditions,
+  beforeSave,
+}: Props) {
   const alloys = useAlloys();
   const { draft, set, errors, setErrors, check, restored, discard, startOver } = useMeltDraft(
     initial,
@@ -114,6 +125,7 @@ export function MeltForm({ initial, units, submitLabel, onSubmit, draftName, isN
       />
       <SafetyCautions />
       {failure ? <Notice tone="error">{failure}</Notice> : null}
+      {beforeSave}
       <Button label={submitLabel} onPress={submit} busy={busy} testID="save-melt" />
     </View>
   );

@@ -2,6 +2,7 @@ import { Router } from "express";
 import { castingInput, castingListQuery, castingPatch } from "../../lib/notebook-schemas";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
+import { expectedVersion, rowVersion, sendVersioned } from "../http/row-version";
 import { idParam } from "../notebook/shared";
 import { castingDetail } from "./detail";
 import { archiveCasting, createCasting, listCastings, patchCasting, restoreCasting } from "./service";
@@ -22,12 +23,16 @@ castingsRouter.get("/", ...read, async (req, res) => {
 });
 
 castingsRouter.get("/:id", ...read, async (req, res) => {
-  res.json(await castingDetail(currentMember(req).shopId, idParam(req.params.id, "No such casting")));
+  const casting = await castingDetail(currentMember(req).shopId, idParam(req.params.id, "No such casting"));
+  res.set("ETag", rowVersion(casting)).json(casting);
 });
 
 castingsRouter.patch("/:id", ...write, async (req, res) => {
   const id = idParam(req.params.id, "No such casting");
-  res.json(await patchCasting(currentMember(req), id, parseOr400(castingPatch, req.body)));
+  sendVersioned(
+    res,
+    await patchCasting(currentMember(req), id, parseOr400(castingPatch, req.body), expectedVersion(req)),
+  );
 });
 
 /** Archive and restore: who may is decided in server/notebook/archive.ts (author, mentor, owner). */

@@ -12,6 +12,7 @@ import {
 } from "../../lib/notebook-schemas";
 import type { ShopMember } from "../auth/shop-access";
 import { notFound, parseOr400 } from "../http/errors";
+import { requireFresh, StaleRowError, type expectedVersion } from "../http/row-version";
 import { insertMarks, marksOf } from "../marks/service";
 import { checkMayArchive, checkMayRestore } from "../notebook/archive";
 import { changedOnly, groupBy, iso, offsetOf, personRef, withoutNulls } from "../notebook/shared";
@@ -60,14 +61,28 @@ export async function createCasting(m: ShopMember, meltId: number, input: Castin
   });
 }
 
-export async function patchCasting(m: ShopMember, id: number, patch: Partial<CastingInput>): Promise<Casting> {
+export async function patchCasting(
+  m: ShopMember,
+  id: number,
+  patch: Partial<CastingInput>,
+  expected?: ReturnType<typeof expectedVersion>,
+): Promise<Casting> {
   const current = await castingInShop(m.shopId, id);
+  requireFresh(expected, await versionedCasting(current));
   const merged = parseOr400(castingInput, { ...withoutNulls(current), ...patch });
+  // The version in the WHERE makes check and write one step (see server/http/row-version.ts).
+  const fresh = expected === undefined ? undefined : eq(castings.version, current.version);
   const [row] = await db
     .update(castings)
-    .set({ ...changedOnly(castingValues(merged), patch), updatedAt: new Date() })
-    .where(and(eq(castings.shopId, m.shopId), eq(castings.id, id)))
+    .set({ ...changedOnly(castingValues(merged), patch), updatedAt: new Date(), version: sql`${castings.version} + 1` })
+    .where(and(eq(castings.shopId, m.shopId), eq(castings.id, id), fresh))
     .returning();
+  if (!row) throw new StaleRowError(await versionedCasting(await castingInShop(m.shopId, id)));
+  const [who] = await db.select({ name: user.name }).from(user).where(eq(user.id, row.createdBy));
+  return toCasting(row, who.name);
+}
+
+async function versionedCasting(row: Awaited<ReturnType<typeof castingInShop>>): Promise<Casting> {
   const [who] = await db.select({ name: user.name }).from(user).where(eq(user.id, row.createdBy));
   return toCasting(row, who.name);
 }

@@ -2,6 +2,7 @@ import { Router } from "express";
 import { fixInput, fixPatch, fixTickInput } from "../../lib/review-schemas";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
+import { expectedVersion, sendVersioned } from "../http/row-version";
 import { idParam } from "../notebook/shared";
 import { addFix, followups, patchFix } from "./service";
 import { setTick } from "./ticks";
@@ -22,7 +23,7 @@ followupsRouter.post("/castings/:id/fixes", ...write, async (req, res) => {
 
 followupsRouter.patch("/fixes/:id", ...write, async (req, res) => {
   const id = idParam(req.params.id, "No such fix");
-  res.json(await patchFix(currentMember(req), id, parseOr400(fixPatch, req.body)));
+  sendVersioned(res, await patchFix(currentMember(req), id, parseOr400(fixPatch, req.body), expectedVersion(req)));
 });
 
 /** A fix to try ticked on the likely causes; answers the casting's ticks as they are now. */

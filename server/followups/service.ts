@@ -5,6 +5,7 @@ import type { CastingRef, ChainLink, FixInput, FixPatch, FixTried, Followups } f
 import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
 import { HttpError, notFound } from "../http/errors";
+import { requireFresh, StaleRowError, type expectedVersion } from "../http/row-version";
 import { changedOnly, iso, personRef } from "../notebook/shared";
 import { ticksOf } from "./ticks";
 
@@ -56,6 +57,7 @@ async function toFixes(rows: FixRow[]): Promise<FixTried[]> {
       createdBy: personRef(r.createdBy, people.find((p) => p.id === r.createdBy)?.name ?? ""),
       createdAt: iso(r.createdAt),
       updatedAt: iso(r.updatedAt),
+      version: r.version,
     };
   });
 }
@@ -180,12 +182,23 @@ export async function addFix(m: ShopMember, castingId: number, input: FixInput):
   return (await toFixes([row]))[0];
 }
 
-export async function patchFix(m: ShopMember, id: number, patch: FixPatch): Promise<FixTried> {
+async function fixInShop(shopId: string, id: number): Promise<FixRow> {
   const [row] = await db
     .select()
     .from(fixesTried)
-    .where(and(eq(fixesTried.shopId, m.shopId), eq(fixesTried.id, id)));
+    .where(and(eq(fixesTried.shopId, shopId), eq(fixesTried.id, id)));
   if (!row) throw notFound("No such fix");
+  return row;
+}
+
+export async function patchFix(
+  m: ShopMember,
+  id: number,
+  patch: FixPatch,
+  expected?: ReturnType<typeof expectedVersion>,
+): Promise<FixTried> {
+  const row = await fixInShop(m.shopId, id);
+  requireFresh(expected, row);
   const merged = { ...row, ...Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)) } as FixRow;
   if (patch.nextCastingId !== undefined) await checkNext(m.shopId, row.castingId, patch.nextCastingId);
   if (merged.worked && !merged.nextCastingId)
@@ -196,8 +209,11 @@ export async function patchFix(m: ShopMember, id: number, patch: FixPatch): Prom
       ...changedOnly({ fix: merged.fix, nextCastingId: merged.nextCastingId, worked: merged.worked }, patch),
       updatedAt: new Date(),
       updatedBy: m.userId,
+      version: sql`${fixesTried.version} + 1`,
     })
-    .where(eq(fixesTried.id, id))
+    // The version in the WHERE makes check and write one step (see server/http/row-version.ts).
+    .where(and(eq(fixesTried.id, id), expected === undefined ? undefined : eq(fixesTried.version, row.version)))
     .returning();
+  if (!saved) throw new StaleRowError((await toFixes([await fixInShop(m.shopId, id)]))[0]);
   return (await toFixes([saved]))[0];
 }

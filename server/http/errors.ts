@@ -73,9 +73,11 @@ export function isDatabaseUnavailable(err: unknown): boolean {
 
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   if (err instanceof HttpError) {
+    // A stale edit (server/http/row-version.ts) also answers the row as it now stands.
+    const current = (err as { current?: unknown }).current;
     res
       .status(err.status)
-      .json({ error: { message: err.message, fields: err.fields, fieldTemplates: err.fieldTemplates } });
+      .json({ error: { message: err.message, fields: err.fields, fieldTemplates: err.fieldTemplates, current } });
     return;
   }
   if (isDatabaseUnavailable(err)) {

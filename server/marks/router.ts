@@ -2,6 +2,7 @@ import { Router } from "express";
 import { markInput, markPatch } from "../../lib/notebook-schemas";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
+import { expectedVersion, sendVersioned } from "../http/row-version";
 import { idParam } from "../notebook/shared";
 import { addMark, deleteMark, patchMark } from "./service";
 
@@ -16,7 +17,7 @@ marksRouter.post("/castings/:id", ...write, async (req, res) => {
 
 marksRouter.patch("/:id", ...write, async (req, res) => {
   const id = idParam(req.params.id, "No such mark");
-  res.json(await patchMark(currentMember(req), id, parseOr400(markPatch, req.body)));
+  sendVersioned(res, await patchMark(currentMember(req), id, parseOr400(markPatch, req.body), expectedVersion(req)));
 });
 
 marksRouter.delete("/:id", ...write, async (req, res) => {

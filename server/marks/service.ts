@@ -1,10 +1,11 @@
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { db } from "../db";
 import { defectMarks, photos, user } from "../../db/schema";
 import { markInput, type Mark, type MarkInput } from "../../lib/notebook-schemas";
 import type { ShopMember } from "../auth/shop-access";
 import { castingInShop } from "../castings/lookup";
 import { HttpError, notFound, parseOr400 } from "../http/errors";
+import { requireFresh, StaleRowError, type expectedVersion } from "../http/row-version";
 import { changedOnly, iso, personRef, withoutNulls } from "../notebook/shared";
 
 type MarkRow = typeof defectMarks.$inferSelect;
@@ -23,6 +24,7 @@ export function toMark(r: MarkRow, byName: string): Mark {
     note: r.note,
     createdBy: personRef(r.createdBy, byName),
     createdAt: iso(r.createdAt),
+    version: r.version,
   };
 }
 
@@ -86,8 +88,14 @@ async function markInShop(shopId: string, id: number) {
 }
 
 /** Moving a pin sends x and y; taking it off the photo sends photoId null. */
-export async function patchMark(m: ShopMember, id: number, patch: Partial<MarkInput>): Promise<Mark> {
+export async function patchMark(
+  m: ShopMember,
+  id: number,
+  patch: Partial<MarkInput>,
+  expected?: ReturnType<typeof expectedVersion>,
+): Promise<Mark> {
   const current = await markInShop(m.shopId, id);
+  requireFresh(expected, await markWithName(current));
   const base: Record<string, unknown> = withoutNulls(current);
   if (patch.photoId === null) {
     // Off the photo: the position goes with it.
@@ -96,11 +104,23 @@ export async function patchMark(m: ShopMember, id: number, patch: Partial<MarkIn
   }
   const merged = parseOr400(markInput, { ...base, ...patch });
   await checkPhoto(db, current.castingId, merged.photoId);
+  const fresh = expected === undefined ? undefined : eq(defectMarks.version, current.version);
   const [row] = await db
     .update(defectMarks)
-    .set({ ...changedOnly(markValues(merged), patch, { photoId: ["x", "y"] }), updatedAt: new Date() })
-    .where(and(eq(defectMarks.shopId, m.shopId), eq(defectMarks.id, id)))
+    .set({
+      ...changedOnly(markValues(merged), patch, { photoId: ["x", "y"] }),
+      updatedAt: new Date(),
+      version: sql`${defectMarks.version} + 1`,
+    })
+    // The version in the WHERE makes check and write one step (see server/http/row-version.ts).
+    .where(and(eq(defectMarks.shopId, m.shopId), eq(defectMarks.id, id), fresh))
     .returning();
+  if (!row) throw new StaleRowError(await markWithName(await markInShop(m.shopId, id)));
+  const [who] = await db.select({ name: user.name }).from(user).where(eq(user.id, row.createdBy));
+  return toMark(row, who.name);
+}
+
+async function markWithName(row: MarkRow): Promise<Mark> {
   const [who] = await db.select({ name: user.name }).from(user).where(eq(user.id, row.createdBy));
   return toMark(row, who.name);
 }

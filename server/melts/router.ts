@@ -2,6 +2,7 @@ import { Router } from "express";
 import { meltInput, meltListQuery, meltPatch, type MeltDetail } from "../../lib/notebook-schemas";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
+import { expectedVersion, rowVersion, sendVersioned } from "../http/row-version";
 import { castingSummaries } from "../castings/service";
 import { idParam } from "../notebook/shared";
 import { archiveMelt, createMelt, getMelt, listMelts, meltDefaults, patchMelt, restoreMelt } from "./service";
@@ -28,12 +29,12 @@ meltsRouter.get("/:id", ...read, async (req, res) => {
   const { shopId, userId } = currentMember(req);
   const melt = await getMelt(shopId, idParam(req.params.id, "No such melt"));
   const castings = await castingSummaries(shopId, { meltId: melt.id, sort: "date-asc", viewer: userId });
-  res.json({ ...melt, castings } satisfies MeltDetail);
+  res.set("ETag", rowVersion(melt)).json({ ...melt, castings } satisfies MeltDetail);
 });
 
 meltsRouter.patch("/:id", ...write, async (req, res) => {
   const id = idParam(req.params.id, "No such melt");
-  res.json(await patchMelt(currentMember(req), id, parseOr400(meltPatch, req.body)));
+  sendVersioned(res, await patchMelt(currentMember(req), id, parseOr400(meltPatch, req.body), expectedVersion(req)));
 });
 
 /** Archive and restore: who may is decided in server/notebook/archive.ts (author, mentor, owner). */

@@ -13,6 +13,7 @@ import {
 import type { Process } from "../../rules/case";
 import type { ShopMember } from "../auth/shop-access";
 import { notFound, parseOr400 } from "../http/errors";
+import { requireFresh, StaleRowError, type expectedVersion } from "../http/row-version";
 import { requireAlloy } from "../alloys/service";
 import { checkMayArchive, checkMayRestore } from "../notebook/archive";
 import { iso, offsetOf, omit, personRef, refuseIfAny, withoutNulls, changedOnly } from "../notebook/shared";
@@ -117,14 +118,34 @@ export async function restoreMelt(m: ShopMember, id: number): Promise<Melt> {
 }
 
 /** A PATCH is checked as the whole melt it makes, so a new alloy re-checks the stored pour temperature. */
-export async function patchMelt(m: ShopMember, id: number, patch: Partial<MeltInput>): Promise<Melt> {
+export async function patchMelt(
+  m: ShopMember,
+  id: number,
+  patch: Partial<MeltInput>,
+  expected?: ReturnType<typeof expectedVersion>,
+): Promise<Melt> {
   const current = await getMelt(m.shopId, id);
+  requireFresh(expected, current);
   const merged = parseOr400(meltInput, { ...withoutNulls(current), ...patch });
   const values = await meltValues(m.shopId, merged);
-  await db
+  // The version in the WHERE makes check and write one step: of two saves from the same version, the
+  // second finds the row already moved on and writes nothing.
+  const saved = await db
     .update(melts)
-    .set({ ...changedOnly(values, patch, { alloy: ["alloyId"] }), updatedAt: new Date() })
-    .where(and(eq(melts.shopId, m.shopId), eq(melts.id, id)));
+    .set({
+      ...changedOnly(values, patch, { alloy: ["alloyId"] }),
+      updatedAt: new Date(),
+      version: sql`${melts.version} + 1`,
+    })
+    .where(
+      and(
+        eq(melts.shopId, m.shopId),
+        eq(melts.id, id),
+        expected === undefined ? undefined : eq(melts.version, current.version),
+      ),
+    )
+    .returning({ id: melts.id });
+  if (!saved.length) throw new StaleRowError(await getMelt(m.shopId, id));
   return getMelt(m.shopId, id);
 }
 

@@ -49,7 +49,7 @@ export const thinPlate: CastingInput = {
 export async function newMelt(p: Person, input: Partial<MeltInput> = {}) {
   const res = await p.agent.post("/api/melts").send({ ...coldLostFoamMelt, ...input });
   if (res.status !== 201) throw new Error(`melt: ${res.status} ${res.text}`);
-  return res.body as { id: number };
+  return res.body as { id: number; version: number };
 }
 
 /** Marks as plain JSON (the tests also send values the API must refuse). */
@@ -62,7 +62,7 @@ export async function newCasting(
 ) {
   const res = await p.agent.post(`/api/castings/melts/${meltId}`).send({ ...thinPlate, ...input });
   if (res.status !== 201) throw new Error(`casting: ${res.status} ${res.text}`);
-  return res.body as { id: number };
+  return res.body as { id: number; version: number };
 }
 
 /** Row counts of a shop, to show that a refused request stored nothing. */

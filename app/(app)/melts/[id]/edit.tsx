@@ -1,15 +1,23 @@
+import { useState } from "react";
 import { useLocalSearchParams, useRouter, type Href } from "expo-router";
 import { BackLink } from "@/components/ui/back-link";
 import { Heading } from "@/components/ui/heading";
 import { MeltForm } from "@/components/melts/melt-form";
 import { LoadFailed, Loading } from "@/components/ui/query-state";
 import { Screen } from "@/components/ui/screen";
+import { StaleEditNotice } from "@/components/ui/stale-edit-notice";
 import { useFocusField } from "@/hooks/use-focus-field";
 import { useMelt, useUpdateMelt } from "@/hooks/use-melts";
 import { useUnitsQuery } from "@/hooks/use-units";
+import { ApiError } from "@/lib/api";
+import { changedRows, meltConditionRows } from "@/lib/condition-rows";
 import { formatDay } from "@/lib/dates";
 import { fieldOfFact, isMeltCondition } from "@/lib/fact-fields";
-import { SI_UNITS } from "@/lib/units";
+import type { Melt, MeltInput } from "@/lib/notebook-schemas";
+import { SI_UNITS, type Units } from "@/lib/units";
+
+/** A save refused because the melt changed since it was opened: what was sent and the melt as it now is. */
+type Conflict = { mine: MeltInput; theirs: Melt };
 
 /**
  * Correct a melt's conditions; a cleared field is sent as null so the stored value goes too. `field`
@@ -22,28 +30,75 @@ export default function EditMeltScreen() {
   const units = useUnitsQuery();
   const update = useUpdateMelt(id);
   const router = useRouter();
+  // The version the form opened at (If-Match); taking theirs opens the form again at their version.
+  const [opened, setOpened] = useState<Melt>();
+  const [conflict, setConflict] = useState<Conflict>();
+  const [formKey, setFormKey] = useState(0);
+  if (melt.data && !opened) setOpened(melt.data);
   // Only a casting page of this app: the parameter comes from a link and must not send anyone elsewhere.
   const toCasting = /^\/melts\/\d+\/castings\/\d+$/.test(params.back ?? "");
   const back = (toCasting ? params.back : `/melts/${id}`) as Href;
   useFocusField(params.field ? fieldOfFact(params.field)?.labels : undefined, melt.isSuccess && units.isSuccess);
   if (melt.isPending || units.isPending) return <Loading />;
   if (melt.error) return <LoadFailed error={melt.error} />;
+  const unitsNow = units.data ?? SI_UNITS;
+  const base = opened ?? melt.data;
+
+  async function save(input: MeltInput, version: number) {
+    try {
+      await update.mutateAsync({ input, version });
+    } catch (e) {
+      if (!(e instanceof ApiError && e.status === 412 && e.current)) throw e;
+      // The form keeps what was typed; the notice by the save button offers both versions.
+      setConflict({ mine: input, theirs: e.current as Melt });
+      return;
+    }
+    router.replace(back);
+  }
+  const rows = conflict
+    ? changedRows(withNotes({ ...conflict.theirs, ...conflict.mine }, unitsNow), withNotes(conflict.theirs, unitsNow))
+    : [];
 
   return (
     <Screen>
       <BackLink href={back} label={toCasting ? "Back to the casting" : "Back to the melt"} />
       <Heading>Change the melt of {formatDay(melt.data.pouredOn)}</Heading>
       <MeltForm
-        initial={melt.data}
-        units={units.data ?? SI_UNITS}
+        key={formKey}
+        initial={base}
+        units={unitsNow}
+        beforeSave={
+          conflict ? (
+            <StaleEditNotice
+              rows={rows}
+              busy={update.isPending}
+              onKeepMine={() => {
+                const { mine, theirs } = conflict;
+                setConflict(undefined);
+                void save(mine, theirs.version);
+              }}
+              onTakeTheirs={() => {
+                setOpened(conflict.theirs);
+                setConflict(undefined);
+                setFormKey((k) => k + 1);
+              }}
+            />
+          ) : null
+        }
         submitLabel="Save changes"
         draftName={`melt:${id}`}
         openConditions={!!params.field && isMeltCondition(params.field)}
-        onSubmit={async (input) => {
-          await update.mutateAsync(input);
-          router.replace(back);
-        }}
+        onSubmit={(input) => save(input, base.version)}
       />
     </Screen>
   );
+}
+
+/** The melt's conditions in the person's units, and its notes, for comparing two versions. */
+function withNotes(melt: Melt, units: Units) {
+  return [
+    ...meltConditionRows(melt, units),
+    { label: "Poured on", value: formatDay(melt.pouredOn) },
+    { label: "Notes", value: melt.notes },
+  ];
 }
