@@ -1,6 +1,7 @@
 import { randomUUID } from "node:crypto";
 import { and, asc, eq } from "drizzle-orm";
 import { fileTypeFromBuffer } from "file-type";
+import pLimit from "p-limit";
 import sharp from "sharp";
 import { db } from "../db";
 import { defectMarks, photos, user } from "../../db/schema";
@@ -13,6 +14,13 @@ import { deleteObjects, putObject } from "./object-store";
 import { photoUrls } from "./urls";
 
 export const MAX_PHOTO_BYTES = 15 * 1024 * 1024;
+/**
+ * A picture decodes to about 4 bytes a pixel: 40 megapixels is about 160 MB, more than any phone camera
+ * takes (common practice for upload limits). Larger ones are refused from their header, before decoding.
+ */
+export const MAX_PHOTO_PIXELS = 40_000_000;
+/** Photos are decoded two at a time per server, so eight large uploads at once cannot take gigabytes. */
+const decodeTwoAtATime = pLimit(2);
 /** Judged by content (file-type), never by the name or the browser's claim. */
 const ACCEPTED = new Set(["image/jpeg", "image/png", "image/webp", "image/heic", "image/heif"]);
 const LONG_EDGE_PX = 4096; // plenty to see a pinhole; keeps a 48-megapixel phone shot from filling the disk
@@ -45,7 +53,7 @@ export async function photosOf(castingId: number): Promise<Photo[]> {
  * so GPS position, camera serial and the rest stay behind.
  */
 async function encode(input: Buffer) {
-  const upright = sharp(input, { failOn: "error" }).rotate();
+  const upright = sharp(input, { failOn: "error", limitInputPixels: MAX_PHOTO_PIXELS }).rotate();
   const image = await upright
     .clone()
     .resize({ width: LONG_EDGE_PX, height: LONG_EDGE_PX, fit: "inside", withoutEnlargement: true })
@@ -66,8 +74,16 @@ async function readableImage(buffer: Buffer) {
       photo: "choose a photo (JPEG, PNG, WebP or HEIC)",
     });
   }
+  // The header says how big the decoded picture would be; a small file can hold a huge one.
+  const { width = 0, height = 0 } = await sharp(buffer)
+    .metadata()
+    .catch(() => ({ width: 0, height: 0 }));
+  if (width * height > MAX_PHOTO_PIXELS) {
+    const message = `The photo is ${Math.round((width * height) / 1e6)} megapixels; the most is ${MAX_PHOTO_PIXELS / 1e6}. Make it smaller and try again.`;
+    throw new HttpError(413, message, { photo: message });
+  }
   try {
-    return { mime: kind.mime, ...(await encode(buffer)) };
+    return { mime: kind.mime, ...(await decodeTwoAtATime(() => encode(buffer))) };
   } catch {
     const heic = kind.mime === "image/heic" || kind.mime === "image/heif";
     const message = heic

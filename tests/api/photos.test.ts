@@ -90,6 +90,25 @@ describe("photo uploads", () => {
     expect(list.body.items[0]).toMatchObject({ photoCount: 2, thumbUrl: expect.stringMatching(/\/thumb$/) });
   });
 
+  it("refuses a decompression bomb by its header (413) before decoding it, and stores nothing", async () => {
+    const { caster } = await shopWithCrew("Bomb Photo Shop");
+    const casting = await castingOf(caster);
+    const before = await objectsInStore();
+    // 16,000 × 16,000 of one grey compresses to well under a megabyte but would decode to about 1 GB.
+    const bomb = await sharp({
+      create: { width: 16000, height: 16000, channels: 3, background: { r: 128, g: 128, b: 128 } },
+      limitInputPixels: false,
+    })
+      .png({ compressionLevel: 9 })
+      .toBuffer();
+    expect(bomb.length).toBeLessThan(2 * 1024 * 1024);
+    const res = await caster.agent.post(`/api/photos/castings/${casting.id}`).attach("photo", bomb, "bomb.png");
+    expect(res.status).toBe(413);
+    expect(res.body.error.message).toMatch(/256 megapixels; the most is 40/);
+    expect(await photoRows(casting.id)).toEqual([]);
+    expect(await objectsInStore()).toEqual(before);
+  }, 60_000);
+
   it("refuses a text file named .jpg (415) and stores no row and no file", async () => {
     const { caster } = await shopWithCrew("Text Photo Shop");
     const casting = await castingOf(caster);
