@@ -59,6 +59,11 @@ export const API_ROUTERS: [string, express.Router][] = [
  * web app (when `webDir` holds one) for every other path. Built here, started in server/index.ts,
  * so tests call `request(createApp())` without a port.
  */
+const noStore: express.RequestHandler = (_req, res, next) => {
+  res.set("Cache-Control", "no-store");
+  next();
+};
+
 export function createApp(opts: { webDir?: string } = {}) {
   const app = express();
   app.disable("x-powered-by");
@@ -68,6 +73,10 @@ export function createApp(opts: { webDir?: string } = {}) {
 
   // Before any body is read: a write from another site's page is refused.
   app.use("/api", sameOriginWrites);
+  // Answers are one person's view of the shop and change with every write: never kept by the browser.
+  // (A row's ETag is for If-Match on PATCH; without no-store a browser would revalidate a melt's page
+  // with If-None-Match and be told 304 while its castings had changed under the same melt version.)
+  app.use("/api", noStore);
   // better-auth re-reads a body that is already parsed, so its bodies are bounded here first.
   app.all("/api/auth/{*any}", ...authBodies, clientAddressForAuth, toNodeHandler(getAuth()));
 

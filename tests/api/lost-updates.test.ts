@@ -186,3 +186,18 @@ describe("If-Match on PATCH", () => {
     expect(any.status).toBe(200);
   });
 });
+
+describe("row versions and the browser's cache", () => {
+  it("API answers are never kept by the browser, so a melt's ETag cannot turn a changed page into a 304", async () => {
+    const { caster } = await shopWithCrew("No Store Shop");
+    const melt = await newMelt(caster);
+    const first = await caster.agent.get(`/api/melts/${melt.id}`);
+    expect(first.headers["cache-control"]).toBe("no-store");
+    await newCasting(caster, melt.id);
+    // With no-store a browser keeps nothing, so it never asks If-None-Match and always gets the new page.
+    const again = await caster.agent.get(`/api/melts/${melt.id}`);
+    expect(again.status).toBe(200);
+    expect(again.headers.etag).toBe(first.headers.etag); // the melt row itself did not change
+    expect(again.body.castings).toHaveLength(1);
+  });
+});
