@@ -10,7 +10,7 @@ import { OutcomeChips } from "@/components/castings/outcome-chips";
 import { colors, fontSize, space } from "@/constants/theme";
 import { useUpdateCasting } from "@/hooks/use-castings";
 import { useFocusField } from "@/hooks/use-focus-field";
-import { ApiError } from "@/lib/api";
+import { useStaleEdit } from "@/hooks/use-stale-edit";
 import { castingConditionRows, changedRows } from "@/lib/condition-rows";
 import { fieldOfFact } from "@/lib/fact-fields";
 import { PROCESS_LABELS } from "@/lib/labels";
@@ -35,23 +35,16 @@ export function CastingSummary({
   const opens = mayEdit && field?.form === "casting";
   const [editing, setEditing] = useState(opens);
   // The version the form opened at (If-Match); taking theirs opens the form again at their version.
-  const [opened, setOpened] = useState<Casting>(casting);
-  const [conflict, setConflict] = useState<{ mine: Partial<CastingInput>; theirs: Casting }>();
-  const [formKey, setFormKey] = useState(0);
+  const stale = useStaleEdit<Casting, Partial<CastingInput>>(update.mutateAsync, casting);
+  const { conflict, formKey } = stale;
+  const opened = stale.opened ?? casting;
   const startEditing = () => {
-    setOpened(casting);
+    stale.setOpened(casting);
     setEditing(true);
   };
-  async function save(input: Partial<CastingInput>, version: number) {
-    try {
-      await update.mutateAsync({ input, version });
-    } catch (e) {
-      if (!(e instanceof ApiError && e.status === 412 && e.current)) throw e;
-      setConflict({ mine: input, theirs: e.current as Casting });
-      return;
-    }
-    setEditing(false);
-  }
+  const done = (saved: boolean) => {
+    if (saved) setEditing(false);
+  };
   // The link is followed on this same page: open the form when it names a field.
   useEffect(() => {
     if (opens) startEditing();
@@ -77,16 +70,8 @@ export function CastingSummary({
             withNotes(conflict.theirs, units),
           )}
           busy={update.isPending}
-          onKeepMine={() => {
-            const { mine, theirs } = conflict;
-            setConflict(undefined);
-            void save(mine, theirs.version);
-          }}
-          onTakeTheirs={() => {
-            setOpened(conflict.theirs);
-            setConflict(undefined);
-            setFormKey((k) => k + 1);
-          }}
+          onKeepMine={() => void stale.keepMine().then(done)}
+          onTakeTheirs={stale.takeTheirs}
         />
       ) : null}
       {editing ? (
@@ -97,7 +82,7 @@ export function CastingSummary({
           startExpanded
           submitLabel="Save changes"
           draftName={`casting:${casting.id}`}
-          onSubmit={(input) => save(input, opened.version)}
+          onSubmit={(input) => stale.save(input, opened.version).then(done)}
         />
       ) : (
         <>

@@ -1,4 +1,3 @@
-import { useState } from "react";
 import { useLocalSearchParams, useRouter, type Href } from "expo-router";
 import { BackLink } from "@/components/ui/back-link";
 import { Heading } from "@/components/ui/heading";
@@ -8,16 +7,13 @@ import { Screen } from "@/components/ui/screen";
 import { StaleEditNotice } from "@/components/ui/stale-edit-notice";
 import { useFocusField } from "@/hooks/use-focus-field";
 import { useMelt, useUpdateMelt } from "@/hooks/use-melts";
+import { useStaleEdit } from "@/hooks/use-stale-edit";
 import { useUnitsQuery } from "@/hooks/use-units";
-import { ApiError } from "@/lib/api";
 import { changedRows, meltConditionRows } from "@/lib/condition-rows";
 import { formatDay } from "@/lib/dates";
 import { fieldOfFact, isMeltCondition } from "@/lib/fact-fields";
 import type { Melt, MeltInput } from "@/lib/notebook-schemas";
 import { SI_UNITS, type Units } from "@/lib/units";
-
-/** A save refused because the melt changed since it was opened: what was sent and the melt as it now is. */
-type Conflict = { mine: MeltInput; theirs: Melt };
 
 /**
  * Correct a melt's conditions; a cleared field is sent as null so the stored value goes too. `field`
@@ -31,10 +27,9 @@ export default function EditMeltScreen() {
   const update = useUpdateMelt(id);
   const router = useRouter();
   // The version the form opened at (If-Match); taking theirs opens the form again at their version.
-  const [opened, setOpened] = useState<Melt>();
-  const [conflict, setConflict] = useState<Conflict>();
-  const [formKey, setFormKey] = useState(0);
-  if (melt.data && !opened) setOpened(melt.data);
+  const stale = useStaleEdit<Melt, MeltInput>(update.mutateAsync);
+  const { opened, conflict, formKey } = stale;
+  if (melt.data && !opened) stale.setOpened(melt.data);
   // Only a casting page of this app: the parameter comes from a link and must not send anyone elsewhere.
   const toCasting = /^\/melts\/\d+\/castings\/\d+$/.test(params.back ?? "");
   const back = (toCasting ? params.back : `/melts/${id}`) as Href;
@@ -44,17 +39,10 @@ export default function EditMeltScreen() {
   const unitsNow = units.data ?? SI_UNITS;
   const base = opened ?? melt.data;
 
-  async function save(input: MeltInput, version: number) {
-    try {
-      await update.mutateAsync({ input, version });
-    } catch (e) {
-      if (!(e instanceof ApiError && e.status === 412 && e.current)) throw e;
-      // The form keeps what was typed; the notice by the save button offers both versions.
-      setConflict({ mine: input, theirs: e.current as Melt });
-      return;
-    }
-    router.replace(back);
-  }
+  // A refused save keeps what was typed; the notice by the save button offers both versions.
+  const done = (saved: boolean) => {
+    if (saved) router.replace(back);
+  };
   const rows = conflict
     ? changedRows(withNotes({ ...conflict.theirs, ...conflict.mine }, unitsNow), withNotes(conflict.theirs, unitsNow))
     : [];
@@ -72,23 +60,15 @@ export default function EditMeltScreen() {
             <StaleEditNotice
               rows={rows}
               busy={update.isPending}
-              onKeepMine={() => {
-                const { mine, theirs } = conflict;
-                setConflict(undefined);
-                void save(mine, theirs.version);
-              }}
-              onTakeTheirs={() => {
-                setOpened(conflict.theirs);
-                setConflict(undefined);
-                setFormKey((k) => k + 1);
-              }}
+              onKeepMine={() => void stale.keepMine().then(done)}
+              onTakeTheirs={stale.takeTheirs}
             />
           ) : null
         }
         submitLabel="Save changes"
         draftName={`melt:${id}`}
         openConditions={!!params.field && isMeltCondition(params.field)}
-        onSubmit={(input) => save(input, base.version)}
+        onSubmit={(input) => stale.save(input, base.version).then(done)}
       />
     </Screen>
   );
