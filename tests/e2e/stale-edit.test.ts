@@ -76,8 +76,11 @@ describe("editing a melt someone else has just changed", () => {
 });
 
 describe("editing a casting someone else has just changed", () => {
-  it("shows both versions of the notes and keeps mine on request", async () => {
-    const mentor = await signedInAs(browser(), baseUrl, PHONE, "mentor");
+  it.each([
+    ["390", PHONE],
+    ["1280", WIDE],
+  ] as const)("at %s px shows both versions of the notes and keeps mine on request", async (width, size) => {
+    const mentor = await signedInAs(browser(), baseUrl, size, "mentor");
     const demo = (await (await mentor.request.get(`${baseUrl}/api/castings?pageSize=1`)).json()).items[0];
     const made = await mentor.request.post(`${baseUrl}/api/castings/melts/${demo.meltId}`, {
       data: { partName: "Test bracket", notes: "Notes as opened" },
@@ -98,7 +101,7 @@ describe("editing a casting someone else has just changed", () => {
     await expect.poll(() => notice.getByText("My notes").count()).toBe(1);
     // One notice, not a second error box saying the same.
     expect(await mentor.getByText("Changed by someone else since you opened it").count()).toBe(1);
-    await longShot(mentor, "stale-edit-casting-390");
+    await longShot(mentor, `stale-edit-casting-${width}`);
     await mentor.getByTestId("keep-mine").click();
     const stored = async () =>
       (await (await mentor.request.get(`${baseUrl}/api/castings/${casting.id}`)).json()).notes as string;
