@@ -19,6 +19,7 @@ export const MELT_NUMBERS = {
   sandMoisturePct: null,
   coatingCoats: null,
   foamDensityKgM3: "density",
+  chargeWeightKg: "mass",
 } as const satisfies NumberSpec<string>;
 type NumberKey = keyof typeof MELT_NUMBERS;
 

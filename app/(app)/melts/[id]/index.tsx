@@ -10,6 +10,7 @@ import { WaitingCastings } from "@/components/castings/waiting-castings";
 import { CastingRow } from "@/components/castings/casting-row";
 import { Heading } from "@/components/ui/heading";
 import { MeltFacts } from "@/components/melts/melt-facts";
+import { MeltYield } from "@/components/melts/melt-yield";
 import { Notice } from "@/components/ui/notice";
 import { LoadFailed, Loading } from "@/components/ui/query-state";
 import { Screen } from "@/components/ui/screen";
@@ -45,6 +46,7 @@ export default function MeltScreen() {
       </View>
       <ArchiveControl kind="melt" row={m} />
       <MeltFacts melt={m} units={u} />
+      <MeltYield melt={m} units={u} />
       {m.notes ? <Notice>{m.notes}</Notice> : null}
       <CalcLinks
         target={{ meltId: id }}
