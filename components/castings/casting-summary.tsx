@@ -98,7 +98,9 @@ export function CastingSummary({
           {folds ? (
             <Pressable role="button" aria-expanded={detailsOpen} onPress={() => setShowDetails((v) => !v)}>
               <Text style={styles.toggle}>
-                {detailsOpen ? "▾ Hide sizes, gating and weights" : `▸ Sizes, gating and weights (${recorded} recorded)`}
+                {detailsOpen
+                  ? "▾ Hide sizes, gating and weights"
+                  : `▸ Sizes, gating and weights (${recorded} recorded)`}
               </Text>
             </Pressable>
           ) : null}

@@ -56,7 +56,13 @@ export function DateField({ label, value, onChange, error, testID }: Props) {
           testID={testID}
         />
         {Platform.OS === "web" ? (
-          <Pressable role="button" onPress={open} style={styles.button} aria-label={`Pick ${label.toLowerCase()} from a calendar`} {...printHidden}>
+          <Pressable
+            role="button"
+            onPress={open}
+            style={styles.button}
+            aria-label={`Pick ${label.toLowerCase()} from a calendar`}
+            {...printHidden}
+          >
             <Text style={styles.buttonText}>Calendar</Text>
             {createElement("input", {
               ref: picker,

@@ -70,7 +70,9 @@ describe("weights and yield", () => {
       ["pouredWeightKg", 1e9, /above 10,000 kg/],
       ["castingWeightKg", "heavy", /./],
     ] as const) {
-      const res = await caster.agent.post(`/api/castings/melts/${melt.id}`).send({ partName: "Plaque", [field]: value });
+      const res = await caster.agent
+        .post(`/api/castings/melts/${melt.id}`)
+        .send({ partName: "Plaque", [field]: value });
       expect(res.status, `${field}=${value}`).toBe(400);
       expect(res.body.error.fields[field]).toMatch(says);
     }
@@ -105,11 +107,21 @@ describe("weights and yield", () => {
     const melt = await newMelt(owner, { chargeWeightKg: 8 });
     await newCasting(owner, melt.id, { castingWeightKg: 1.8, pouredWeightKg: 3.0 });
     const si = csvRows((await owner.agent.get("/api/export/castings.csv")).text)[0];
-    expect(si).toMatchObject({ charge_weight_kg: "8", casting_weight_kg: "1.8", poured_weight_kg: "3", yield_pct: "60" });
+    expect(si).toMatchObject({
+      charge_weight_kg: "8",
+      casting_weight_kg: "1.8",
+      poured_weight_kg: "3",
+      yield_pct: "60",
+    });
     await owner.agent.put("/api/people/me/units").send({ temperature: "C", length: "mm", mass: "lb" });
     const lb = csvRows((await owner.agent.get("/api/export/castings.csv?units=mine")).text)[0];
     // 8 kg = 17.637 lb, 1.8 kg = 3.968 lb, 3.0 kg = 6.614 lb (1 lb = 0.45359237 kg), to a hundredth as the forms keep.
-    expect(lb).toMatchObject({ charge_weight_lb: "17.64", casting_weight_lb: "3.97", poured_weight_lb: "6.61", yield_pct: "60" });
+    expect(lb).toMatchObject({
+      charge_weight_lb: "17.64",
+      casting_weight_lb: "3.97",
+      poured_weight_lb: "6.61",
+      yield_pct: "60",
+    });
     expect(Number(lb.charge_weight_lb) * LB).toBeCloseTo(8, 2);
   });
 });

@@ -11,7 +11,8 @@ async function measure(page: Page) {
     const scrollers = [...document.querySelectorAll("div")].filter((d) => d.scrollHeight > d.clientHeight + 10);
     const main = scrollers.sort((a, b) => b.scrollHeight - a.scrollHeight)[0];
     const cause = document.querySelector('[data-testid="cause-1"]');
-    const top = cause && main ? cause.getBoundingClientRect().top - main.getBoundingClientRect().top + main.scrollTop : -1;
+    const top =
+      cause && main ? cause.getBoundingClientRect().top - main.getBoundingClientRect().top + main.scrollTop : -1;
     return { pageHeight: main?.scrollHeight ?? document.body.scrollHeight, firstCauseY: Math.round(top) };
   });
 }

@@ -78,8 +78,8 @@ export default function CastingScreen() {
       </View>
       {causesFirst ? null : diagnosis}
       <View nativeID={sectionId("review")} style={styles.section}>
-      <ReviewPanel castingId={c.id} causes={causes} />
-      <FollowupPanel castingId={c.id} causes={causes} />
+        <ReviewPanel castingId={c.id} causes={causes} />
+        <FollowupPanel castingId={c.id} causes={causes} />
       </View>
       {/* Links to elsewhere and the thread stay on screen; the printed sheet ends with the fix and its outcome. */}
       <PrintHidden>
@@ -96,11 +96,7 @@ export default function CastingScreen() {
         />
         <SimilarCases castingId={c.id} />
         <View nativeID={sectionId("notes")}>
-          <CommentThread
-            castingId={c.id}
-            comments={c.comments}
-            mayComment={roleCan(role, { casebook: ["comment"] })}
-          />
+          <CommentThread castingId={c.id} comments={c.comments} mayComment={roleCan(role, { casebook: ["comment"] })} />
         </View>
       </PrintHidden>
       {wide ? null : paper}
