@@ -26,6 +26,7 @@ import { useUnits } from "@/hooks/use-units";
 import { formatDay } from "@/lib/dates";
 import { roleCan } from "@/lib/permissions";
 import { sectionId } from "@/lib/page-sections";
+import { castingYieldPct } from "@/rules/compute/casting-yield";
 import type { CauseWithRecord } from "@/lib/review-schemas";
 
 /**
@@ -92,6 +93,9 @@ export default function CastingScreen() {
             thicknessMm: c.maxSectionMm,
             shape: "plate",
             ...gatingPrefill(c),
+            // Metal to melt for the next one starts from this mould's own yield and casting weight.
+            yieldPct: roundedYield(castingYieldPct(c.castingWeightKg, c.pouredWeightKg)),
+            previousCastingKg: c.castingWeightKg,
           }}
         />
         <SimilarCases castingId={c.id} />
@@ -103,5 +107,7 @@ export default function CastingScreen() {
     </Screen>
   );
 }
+
+const roundedYield = (y: number | undefined) => (y === undefined ? undefined : Math.round(y));
 
 const styles = StyleSheet.create({ section: { gap: space.lg } });
