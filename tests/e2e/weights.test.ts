@@ -63,6 +63,7 @@ describe("weights, yield and the day of the pour", () => {
       await seen(page, "61 %: 4 lb of castings from 6.6 lb poured");
       await seen(page, "6.6 lb of 20 lb, 33 %");
       await seen(page, "13.4 lb");
+      await seen(page, /nothing marked · yield 61 %/);
       const meltId = Number(new URL(page.url()).pathname.split("/")[2]);
       const stored = await (await page.request.get(`${baseUrl}/api/melts/${meltId}`)).json();
       expect(stored.chargeWeightKg).toBeCloseTo(20 * LB, 9);
