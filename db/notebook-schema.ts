@@ -138,6 +138,8 @@ export const melts = pgTable(
     foamType: foamTypeEnum("foam_type"),
     glueJoints: boolean("glue_joints"),
     sandVibrated: boolean("sand_vibrated"),
+    /** Metal put in the furnace, kilograms (weighed before melting). */
+    chargeWeightKg: doublePrecision("charge_weight_kg"),
     notes: text("notes"),
     createdBy: createdBy(),
     createdAt: createdAt(),
@@ -177,6 +179,9 @@ export const castings = pgTable(
     gating: gatingPositionEnum("gating"),
     hasFilter: boolean("has_filter"),
     orientation: text("orientation"),
+    /** The casting as cleaned, and all the metal poured into its mould (gating and risers too), kilograms: yield. */
+    castingWeightKg: doublePrecision("casting_weight_kg"),
+    pouredWeightKg: doublePrecision("poured_weight_kg"),
     outcome: outcomeEnum("outcome"),
     notes: text("notes"),
     createdBy: createdBy(),
@@ -191,6 +196,11 @@ export const castings = pgTable(
     index("castings_melt_idx").on(t.meltId),
     index("castings_shop_part_idx").on(t.shopId, t.partName),
     check("castings_sections_ck", sql`${t.minSectionMm} is null or ${t.minSectionMm} > 0`),
+    // The cleaned casting is part of the metal poured into its mould, never more (lib/weight-fields.ts).
+    check(
+      "castings_weights_ck",
+      sql`${t.castingWeightKg} is null or ${t.pouredWeightKg} is null or ${t.castingWeightKg} <= ${t.pouredWeightKg}`,
+    ),
   ],
 );
 

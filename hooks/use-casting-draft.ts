@@ -12,6 +12,8 @@ export const CASTING_NUMBERS = {
   maxSectionMm: "length",
   sprueHeightMm: "length",
   pourTimeS: null,
+  castingWeightKg: "mass",
+  pouredWeightKg: "mass",
 } as const satisfies NumberSpec<string>;
 type NumberKey = keyof typeof CASTING_NUMBERS;
 

@@ -1,5 +1,6 @@
 import { useState } from "react";
 import { useStoredDraft } from "@/hooks/use-stored-draft";
+import { localDay } from "@/lib/dates";
 import { fieldErrors, messagesInUnits } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { MELT_CONDITIONS, type ConditionContext } from "@/lib/condition-fields";
@@ -19,6 +20,7 @@ export const MELT_NUMBERS = {
   sandMoisturePct: null,
   coatingCoats: null,
   foamDensityKgM3: "density",
+  chargeWeightKg: "mass",
 } as const satisfies NumberSpec<string>;
 type NumberKey = keyof typeof MELT_NUMBERS;
 
@@ -41,11 +43,6 @@ export type MeltDraft = Record<NumberKey, string> & {
 };
 
 type Initial = { [K in keyof MeltInput]?: MeltInput[K] | null };
-/** Today where the person is: an evening pour west of Greenwich is already tomorrow in UTC. */
-const today = () => {
-  const d = new Date();
-  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, "0")}-${String(d.getDate()).padStart(2, "0")}`;
-};
 const orUndefined = <T>(v: T | null | undefined) => v ?? undefined;
 
 /** Which fields a process has: foam density only for lost foam; no mould moisture in a metal mould. */
@@ -55,7 +52,7 @@ export const showsMoisture = (p: Process | null) => p !== "permanent-mould";
 function draftFrom(m: Initial, units: Units): MeltDraft {
   return {
     ...numbersToText(MELT_NUMBERS, m, units),
-    pouredOn: m.pouredOn ?? today(),
+    pouredOn: m.pouredOn ?? localDay(),
     alloy: m.alloy ?? "",
     process: m.process ?? null,
     charge: m.charge ?? null,

@@ -3,6 +3,7 @@ import { CASTING_CONDITIONS, MELT_CONDITIONS } from "./condition-fields";
 import { CHARGE_LABELS, DEGASSING_LABELS, moistureLabel, PROCESS_LABELS } from "./labels";
 import type { Casting, Melt } from "./notebook-schemas";
 import { formatValue, type Quantity, type Units } from "./units";
+import { castingWeightRows } from "./yield-rows";
 
 /** A recorded value as a label and its text; null where nothing was recorded (worth showing as missing). */
 export type ConditionRow = { label: string; value: string | null };
@@ -34,6 +35,8 @@ export function meltConditionRows(melt: Melt, units: Units): ConditionRow[] {
     { label: "Alloy", value: melt.alloy },
     { label: "Process", value: PROCESS_LABELS[melt.process] },
     { label: "Charge", value: melt.charge && CHARGE_LABELS[melt.charge] },
+    // Weighed or not shown: a weight is no input of the diagnosis, so not worth listing as missing.
+    ...(melt.chargeWeightKg === null ? [] : [{ label: "Charge weight", value: q("mass", melt.chargeWeightKg) }]),
     { label: "Furnace", value: melt.furnace },
     { label: "Hottest the melt got", value: q("temperature", melt.meltTempC) },
     { label: "Pour temperature", value: q("temperature", melt.pourTempC) },
@@ -66,6 +69,7 @@ export function castingConditionRows(c: Casting, units: Units): ConditionRow[] {
     { label: "Vents", value: yesNo(c.hasVents) },
     ...loggedConditions(CASTING_CONDITIONS, c, units),
     { label: "Orientation", value: c.orientation },
+    ...castingWeightRows(c, units),
   ];
 }
 

@@ -103,6 +103,15 @@ export const IMPORT_FIELDS: ImportField[] = [
     kind: "number",
     quantity: "density",
   },
+  {
+    key: "chargeWeight",
+    label: "Charge weight",
+    of: "melt",
+    input: "chargeWeightKg",
+    kind: "number",
+    quantity: "mass",
+    also: ["Metal charged", "Charged weight"],
+  },
   { key: "meltNotes", label: "Melt notes", of: "melt", input: "notes", kind: "text" },
   { key: "partName", label: "Part name", of: "casting", input: "partName", kind: "text", required: true },
   { key: "pattern", label: "Pattern", of: "casting", input: "pattern", kind: "text" },
@@ -135,6 +144,24 @@ export const IMPORT_FIELDS: ImportField[] = [
   { key: "hasOverflow", label: "Overflow", of: "casting", input: "hasOverflow", kind: "yes-no" },
   { key: "hasVents", label: "Vents", of: "casting", input: "hasVents", kind: "yes-no" },
   { key: "orientation", label: "Orientation", of: "casting", input: "orientation", kind: "text" },
+  {
+    key: "castingWeight",
+    label: "Casting weight",
+    of: "casting",
+    input: "castingWeightKg",
+    kind: "number",
+    quantity: "mass",
+    also: ["Weight", "Casting wt", "Net weight"],
+  },
+  {
+    key: "pouredWeight",
+    label: "Poured weight",
+    of: "casting",
+    input: "pouredWeightKg",
+    kind: "number",
+    quantity: "mass",
+    also: ["Metal poured", "Pour weight", "Gross weight", "Shot weight"],
+  },
   { key: "outcome", label: "Outcome", of: "casting", input: "outcome", kind: "choice", choices: OUTCOMES },
   { key: "castingNotes", label: "Casting notes", of: "casting", input: "notes", kind: "text" },
 ];
@@ -145,6 +172,7 @@ export const importFieldOf = (key: string) => IMPORT_FIELDS.find((f) => f.key ==
 export const UNITS_OF: Partial<Record<Quantity, readonly string[]>> = {
   temperature: ["C", "F"],
   length: ["mm", "in"],
+  mass: ["kg", "lb"],
   density: ["kg", "lb"], // kg/m³ or lb/ft³, following the person's mass unit as the forms do
 };
 
@@ -184,6 +212,9 @@ export const importMapping = z
 export type ImportMapping = z.infer<typeof importMapping>;
 
 const squash = (s: string) => s.toLowerCase().replace(/[^a-z0-9]/g, "");
+/** How much of a heading a field's key or label starts (0: neither). */
+const prefixLength = (words: string, f: ImportField) =>
+  Math.max(...[f.key, f.label].map(squash).map((n) => (words.startsWith(n) ? n.length : 0)));
 
 /** A first guess from the header words ("Pour temp (F)" -> pour temperature in °F); the owner corrects it. */
 export function guessMapping(headers: string[]): ImportMapping {
@@ -198,9 +229,10 @@ export function guessMapping(headers: string[]): ImportMapping {
           squash(f.input) === words ||
           (f.also ?? []).some((a) => squash(a) === words),
       ) ??
-      IMPORT_FIELDS.find(
-        (f) => words.length > 3 && (words.startsWith(squash(f.key)) || words.startsWith(squash(f.label))),
-      );
+      // The longest name that starts the heading: "Charge weight (kg)" is the charge weight, not the charge.
+      IMPORT_FIELDS.map((f) => ({ f, starts: prefixLength(words, f) }))
+        .filter((x) => words.length > 3 && x.starts > 0)
+        .sort((a, b) => b.starts - a.starts)[0]?.f;
     if (!field || out.some((m) => m.field === field.key)) return;
     const allowed = field.quantity ? UNITS_OF[field.quantity] : undefined;
     const unit = allowed?.find((u) => new RegExp(`(\\(|_|\\s|°)${u}\\)?$`, "i").test(h.trim())) ?? allowed?.[0];

@@ -5,6 +5,7 @@ import { ALLOY_FAMILIES, type AlloyFamily } from "../rules/fact-catalog";
 import type { DiagnosisResult } from "../rules/rank";
 import { castingConditionFields, meltConditionFields } from "./condition-fields";
 import { calendarDate, requiredText, rowId, text } from "./fields";
+import { castingWeightConflicts, castingWeightFields, meltWeightFields } from "./weight-fields";
 
 /**
  * The notebook's input schemas and answer shapes (docs/notebook-api.md), shared by the forms and the
@@ -56,6 +57,7 @@ export const meltFields = z.object({
   coatingCoats: opt(z.number().int("whole coats").min(0, "cannot be negative").max(20)),
   foamDensityKgM3: opt(z.number().positive("must be above {0 kg/m³}").max(200, "above {200 kg/m³}")),
   ...meltConditionFields,
+  ...meltWeightFields,
   notes: opt(text(4000)),
 });
 
@@ -105,6 +107,7 @@ export const MELT_OBSERVATIONS = [
   "coatingDried",
   "coatingCoats",
   "foamDensityKgM3",
+  "chargeWeightKg",
   "notes",
   // Every pour condition beyond the everyday ones is something observed too (lib/condition-fields.ts).
   ...(Object.keys(meltConditionFields) as (keyof typeof meltConditionFields)[]),
@@ -169,14 +172,16 @@ export const castingFields = z.object({
   hasOverflow: opt(z.boolean()),
   hasVents: opt(z.boolean()),
   ...castingConditionFields,
+  ...castingWeightFields,
   orientation: opt(text(120)),
   outcome: opt(z.enum(["good", "rework", "scrap"], { error: "outcome is good, rework or scrap" })),
   notes: opt(text(4000)),
 });
 export function castingConflicts(c: Partial<z.infer<typeof castingFields>>): Record<string, string> {
+  const out = castingWeightConflicts(c);
   if (isNum(c.minSectionMm) && isNum(c.maxSectionMm) && c.minSectionMm > c.maxSectionMm)
-    return { minSectionMm: "the thinnest section is thicker than the thickest" };
-  return {};
+    out.minSectionMm = "the thinnest section is thicker than the thickest";
+  return out;
 }
 /** A new casting may carry marks; a photo comes after the casting exists, so these have none. */
 export const castingInput = castingFields
@@ -271,6 +276,9 @@ export type CastingSummary = Row & {
   partName: string;
   pattern: string | null;
   outcome: Outcome | null;
+  /** For the melt's yield (rules/compute/casting-yield.ts). */
+  castingWeightKg: number | null;
+  pouredWeightKg: number | null;
   pouredOn: string;
   alloy: string;
   process: Process;

@@ -1,3 +1,4 @@
+import { CastingWeights } from "@/components/castings/casting-weights";
 import { ConditionGroups } from "@/components/conditions/condition-groups";
 import { Pair } from "@/components/ui/field-pair";
 import { NumberField } from "@/components/ui/number-field";
@@ -35,6 +36,7 @@ export function CastingMore({ draft, set, errors, units }: Props) {
           error={errors.pourTimeS}
         />
       </Pair>
+      <CastingWeights draft={draft} set={set} errors={errors} units={units} />
       <ConditionGroups
         groups={CASTING_CONDITIONS}
         draft={draft.conditions}

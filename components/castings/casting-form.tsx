@@ -119,7 +119,7 @@ export function CastingForm({
         <CastingMore draft={draft} set={set} errors={errors} units={units} />
       ) : (
         <View style={styles.start}>
-          <Button kind="plain" label="More details: sprue, riser, vents…" onPress={() => setMore(true)} />
+          <Button kind="plain" label="More details: weights, sprue, riser…" onPress={() => setMore(true)} />
         </View>
       )}
       {failure ? <Notice tone="error">{failure}</Notice> : null}

@@ -5,10 +5,12 @@ import { photoUri } from "@/hooks/use-photos";
 import { DEFECTS } from "@/lib/defects";
 import { OUTCOME_LABELS } from "@/lib/labels";
 import type { CastingSummary } from "@/lib/notebook-schemas";
+import { castingYieldPct } from "@/rules/compute/casting-yield";
 
 /** One casting in a melt's list: its part, how it came out, and what was marked on it. */
 export function CastingRow({ casting }: { casting: CastingSummary }) {
   const defects = [...new Set(casting.defectTypes)].map((t) => DEFECTS[t].label.toLowerCase());
+  const yieldPct = castingYieldPct(casting.castingWeightKg, casting.pouredWeightKg);
   return (
     <Link href={`/melts/${casting.meltId}/castings/${casting.id}`} asChild>
       <Pressable role="link" style={styles.row}>
@@ -42,6 +44,7 @@ export function CastingRow({ casting }: { casting: CastingSummary }) {
               ? `${casting.markCount} mark${casting.markCount === 1 ? "" : "s"}: ${defects.join(", ")}`
               : "nothing marked"}
             {casting.photoCount ? ` · ${casting.photoCount} photo${casting.photoCount === 1 ? "" : "s"}` : ""}
+            {yieldPct === undefined ? "" : ` · yield ${Math.round(yieldPct)} %`}
           </Text>
         </View>
       </Pressable>

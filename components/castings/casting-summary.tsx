@@ -1,5 +1,5 @@
 import { useEffect, useState } from "react";
-import { StyleSheet, Text, View } from "react-native";
+import { Pressable, StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { CastingFacts } from "@/components/castings/casting-facts";
 import { CastingForm } from "@/components/castings/casting-form";
@@ -10,9 +10,11 @@ import { OutcomeChips } from "@/components/castings/outcome-chips";
 import { colors, fontSize, space } from "@/constants/theme";
 import { useUpdateCasting } from "@/hooks/use-castings";
 import { useFocusField } from "@/hooks/use-focus-field";
+import { usePrinting } from "@/hooks/use-printing";
 import { useStaleEdit } from "@/hooks/use-stale-edit";
 import { castingConditionRows, changedRows } from "@/lib/condition-rows";
 import { fieldOfFact } from "@/lib/fact-fields";
+import { sectionId } from "@/lib/page-sections";
 import { PROCESS_LABELS } from "@/lib/labels";
 import type { Casting, CastingDetail, CastingInput } from "@/lib/notebook-schemas";
 import { formatValue, type Units } from "@/lib/units";
@@ -23,10 +25,13 @@ export function CastingSummary({
   units,
   mayEdit,
   editField,
+  folds,
 }: {
   casting: CastingDetail;
   units: Units;
   mayEdit: boolean;
+  /** On a phone the sizes, gating and weights fold under one line, so the causes come sooner. */
+  folds?: boolean;
   /** A diagnosis input to fill in: the form opens with that field in view. */
   editField?: string;
 }) {
@@ -50,9 +55,13 @@ export function CastingSummary({
     if (opens) startEditing();
   }, [opens, editField]);
   useFocusField(editing ? field?.labels : undefined, editing);
+  const [showDetails, setShowDetails] = useState(false);
+  const printing = usePrinting();
+  const detailsOpen = !folds || showDetails || printing;
+  const recorded = castingConditionRows(casting, units).filter((r) => r.value !== null).length;
   const m = casting.melt;
   return (
-    <View style={styles.wrap}>
+    <View style={styles.wrap} nativeID={sectionId("details")}>
       <Heading>{casting.partName}</Heading>
       <Text style={styles.melt}>
         {m.alloy} · {PROCESS_LABELS[m.process]} · poured at {formatValue("temperature", m.pourTempC, units)}
@@ -86,7 +95,16 @@ export function CastingSummary({
         />
       ) : (
         <>
-          <CastingFacts casting={casting} units={units} />
+          {folds ? (
+            <Pressable role="button" aria-expanded={detailsOpen} onPress={() => setShowDetails((v) => !v)}>
+              <Text style={styles.toggle}>
+                {detailsOpen
+                  ? "▾ Hide sizes, gating and weights"
+                  : `▸ Sizes, gating and weights (${recorded} recorded)`}
+              </Text>
+            </Pressable>
+          ) : null}
+          {detailsOpen ? <CastingFacts casting={casting} units={units} /> : null}
           {casting.notes ? <Notice>{casting.notes}</Notice> : null}
           {mayEdit ? (
             <View style={styles.start}>
@@ -113,4 +131,5 @@ const styles = StyleSheet.create({
   wrap: { gap: space.md },
   melt: { fontSize: fontSize.body, color: colors.muted },
   start: { alignSelf: "flex-start" },
+  toggle: { fontSize: fontSize.body, color: colors.steel, fontWeight: "600", paddingVertical: space.xs },
 });

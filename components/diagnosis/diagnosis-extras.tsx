@@ -2,6 +2,8 @@ import { Link } from "expo-router";
 import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { Heading } from "@/components/ui/heading";
+import { useIsWide } from "@/hooks/use-layout";
+import { usePrinting } from "@/hooks/use-printing";
 import { Notice } from "@/components/ui/notice";
 import { colors, fontSize, space } from "@/constants/theme";
 import { formatFact } from "@/lib/fact-display";
@@ -9,6 +11,9 @@ import { fieldOfFact } from "@/lib/fact-fields";
 import { textInUnits } from "@/lib/quantity-words";
 import type { Units } from "@/lib/units";
 import type { DiagnosisResult } from "@/rules/rank";
+
+/** Cautions shown on a phone before the rest fold under a count. */
+const FIRST_CAUTIONS = 2;
 
 type Props = { result: DiagnosisResult; units: Units; meltId: number; castingId: number };
 
@@ -18,6 +23,11 @@ type Props = { result: DiagnosisResult; units: Units; meltId: number; castingId:
  */
 export function DiagnosisExtras({ result, units, meltId, castingId }: Props) {
   const [showFacts, setShowFacts] = useState(false);
+  const [allCautions, setAllCautions] = useState(false);
+  // On a phone the first cautions show and the rest fold under a count; on paper and wide screens all show.
+  const everyCaution = useIsWide() || usePrinting() || allCautions;
+  const cautions = result.cautionTemplates?.map((t) => textInUnits(t, units)) ?? result.cautions;
+  const shownCautions = everyCaution ? cautions : cautions.slice(0, FIRST_CAUTIONS);
   const casting = `/melts/${meltId}/castings/${castingId}`;
   const hrefOf = (fact: string) => {
     const field = fieldOfFact(fact);
@@ -67,11 +77,16 @@ export function DiagnosisExtras({ result, units, meltId, castingId }: Props) {
         <Notice tone="caution">
           <Text style={styles.cautionHead}>Before you change the next pour</Text>
           {/* Older saved results carry only the SI sentences. */}
-          {(result.cautionTemplates?.map((t) => textInUnits(t, units)) ?? result.cautions).map((c) => (
+          {shownCautions.map((c) => (
             <Text key={c} style={styles.line}>
               • {c}
             </Text>
           ))}
+          {cautions.length > shownCautions.length ? (
+            <Pressable role="button" aria-expanded={false} onPress={() => setAllCautions(true)}>
+              <Text style={styles.toggle}>▸ {cautions.length - shownCautions.length} more cautions</Text>
+            </Pressable>
+          ) : null}
         </Notice>
       ) : null}
     </View>

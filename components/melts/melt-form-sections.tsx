@@ -33,6 +33,13 @@ export function MetalSection({ draft, set, errors, units }: SectionProps) {
         onChange={(v) => set("charge", v as Charge)}
       />
       <FieldError message={errors.charge} />
+      <NumberField
+        label="Charge weight, into the furnace"
+        unit={unitLabel("mass", units)}
+        value={draft.chargeWeightKg}
+        onChangeText={(v) => set("chargeWeightKg", v)}
+        error={errors.chargeWeightKg}
+      />
       <TextField
         label="Furnace"
         value={draft.furnace}

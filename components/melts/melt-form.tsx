@@ -2,6 +2,7 @@ import { useState, type ReactNode } from "react";
 import { StyleSheet, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { ChoiceChips } from "@/components/ui/choice-chips";
+import { DateField } from "@/components/ui/date-field";
 import { FieldError } from "@/components/ui/field-error";
 import { CleaningSection, DaySection, MetalSection, MouldSection } from "@/components/melts/melt-form-sections";
 import { Notice } from "@/components/ui/notice";
@@ -83,12 +84,12 @@ export function MeltForm({
   return (
     <View style={styles.form}>
       {restored ? <DraftRestored onStartOver={startOver} /> : null}
-      <TextField
+      <DateField
         label="Poured on"
         value={draft.pouredOn}
-        onChangeText={(v) => set("pouredOn", v)}
+        onChange={(v) => set("pouredOn", v)}
         error={errors.pouredOn}
-        placeholder="YYYY-MM-DD"
+        testID="poured-on"
       />
       {alloys.error ? <Notice tone="error">{alloys.error.message}</Notice> : null}
       <ChoiceChips label="Alloy" options={alloyChoices} value={draft.alloy} onChange={(v) => set("alloy", v)} />

@@ -169,6 +169,8 @@ export async function castingSummaries(
       partName: c.partName,
       pattern: c.pattern,
       outcome: c.outcome as CastingSummary["outcome"],
+      castingWeightKg: c.castingWeightKg,
+      pouredWeightKg: c.pouredWeightKg,
       pouredOn,
       alloy,
       process: process,

@@ -1,5 +1,6 @@
 import type { Units } from "../../lib/notebook-schemas";
 import { fromSi, toField, type Quantity } from "../../lib/units";
+import { castingYieldPct } from "../../rules/compute/casting-yield";
 import type { ExportRow } from "./service";
 
 /**
@@ -14,6 +15,10 @@ type Column = Plain | Measured;
 const orBlank = (v: string | null) => v ?? "";
 const yesNo = (v: boolean | null) => (v === null ? "" : v ? "yes" : "no");
 const num = (v: number | null) => (v === null ? "" : v);
+const yieldCell = (castingKg: number | null, pouredKg: number | null) => {
+  const y = castingYieldPct(castingKg, pouredKg);
+  return y === undefined ? "" : Math.round(y * 10) / 10;
+};
 
 const COLUMNS: Column[] = [
   ["casting_id", (r) => r.c.id],
@@ -41,6 +46,7 @@ const COLUMNS: Column[] = [
   ["coating_dried", (r) => yesNo(r.m.coatingDried)],
   ["coating_coats", (r) => num(r.m.coatingCoats)],
   { base: "foam_density", q: "density", read: (r) => r.m.foamDensityKgM3 },
+  { base: "charge_weight", q: "mass", read: (r) => r.m.chargeWeightKg },
   ["part_name", (r) => orBlank(r.c.partName)],
   ["pattern", (r) => orBlank(r.c.pattern)],
   { base: "min_section", q: "length", read: (r) => r.c.minSectionMm },
@@ -51,6 +57,10 @@ const COLUMNS: Column[] = [
   ["overflow", (r) => yesNo(r.c.hasOverflow)],
   ["vents", (r) => yesNo(r.c.hasVents)],
   ["orientation", (r) => orBlank(r.c.orientation)],
+  { base: "casting_weight", q: "mass", read: (r) => r.c.castingWeightKg },
+  { base: "poured_weight", q: "mass", read: (r) => r.c.pouredWeightKg },
+  // A ratio, the same in any units; to a tenth of a percent, as the stored weights allow.
+  ["yield_pct", (r) => yieldCell(r.c.castingWeightKg, r.c.pouredWeightKg)],
   ["outcome", (r) => r.c.outcome ?? ""],
   ["marks", (r) => r.marks],
   ["photo_count", (r) => r.photoCount],

@@ -39,6 +39,8 @@ const plate = {
   hasRiser: false,
   hasVents: false,
   orientation: "ribs up",
+  castingWeightKg: 1.2,
+  pouredWeightKg: 1.7,
 } as const;
 
 export const DEMO_MELTS: DemoMelt[] = [
@@ -58,6 +60,7 @@ export const DEMO_MELTS: DemoMelt[] = [
     ambientTempC: 18,
     humidityPct: 50,
     sandMoisturePct: 4,
+    chargeWeightKg: 6,
     notes: "Fresh ingot, new crucible seasoned the day before.",
     castings: [
       {
@@ -69,6 +72,8 @@ export const DEMO_MELTS: DemoMelt[] = [
         pourTimeS: 7,
         hasRiser: true,
         hasVents: true,
+        castingWeightKg: 1.6,
+        pouredWeightKg: 2.9,
         outcome: "good",
         photo: "wheel",
       },
@@ -80,6 +85,8 @@ export const DEMO_MELTS: DemoMelt[] = [
         sprueHeightMm: 150,
         pourTimeS: 4,
         hasVents: true,
+        castingWeightKg: 0.45,
+        pouredWeightKg: 0.8,
         outcome: "good",
       },
       {
@@ -89,6 +96,8 @@ export const DEMO_MELTS: DemoMelt[] = [
         maxSectionMm: 9,
         sprueHeightMm: 150,
         pourTimeS: 3,
+        castingWeightKg: 0.2,
+        pouredWeightKg: 0.38,
         outcome: "good",
       },
     ],
@@ -111,6 +120,7 @@ export const DEMO_MELTS: DemoMelt[] = [
     ...foamMould,
     coatingDried: true,
     coatingCoats: 1,
+    chargeWeightKg: 6.5,
     notes: "Cold morning; the crucible sat while the flask was carried across the yard.",
     castings: [
       {
@@ -152,6 +162,8 @@ export const DEMO_MELTS: DemoMelt[] = [
         pourTimeS: 5,
         hasRiser: false,
         hasVents: false,
+        castingWeightKg: 0.9,
+        pouredWeightKg: 1.4,
         outcome: "scrap",
         photo: "flange",
         marks: [{ type: "misrun", location: "thin-section", severity: 2, draw: { kind: "unfilled", x: 0.3, y: 0.25 } }],
@@ -163,6 +175,8 @@ export const DEMO_MELTS: DemoMelt[] = [
         maxSectionMm: 20,
         sprueHeightMm: 200,
         pourTimeS: 6,
+        castingWeightKg: 1.4,
+        pouredWeightKg: 2.1,
         outcome: "rework",
         marks: [{ type: "rounded-edges", location: "corner", severity: 1, draw: { kind: "unfilled", x: 0.2, y: 0.2 } }],
       },
@@ -186,6 +200,7 @@ export const DEMO_MELTS: DemoMelt[] = [
     ...foamMould,
     coatingDried: true,
     coatingCoats: 1,
+    chargeWeightKg: 5.5,
     notes: "Second try at the cover plate: hotter, crucible carried straight to the flask.",
     castings: [
       {
@@ -202,6 +217,8 @@ export const DEMO_MELTS: DemoMelt[] = [
         maxSectionMm: 10,
         sprueHeightMm: 220,
         pourTimeS: 5,
+        castingWeightKg: 0.7,
+        pouredWeightKg: 1.1,
         outcome: "good",
       },
       {

@@ -9,3 +9,15 @@ describe("an old pour log's headings are matched to fields", () => {
     expect(guessMapping(["Sand moisture %"])[0]?.field).toBe("sandMoisturePct");
   });
 });
+
+describe("weights in an old pour log", () => {
+  it("tells the charge weight from the charge, and reads each weight's unit", () => {
+    const mapping = guessMapping(["Charge", "Charge weight (lb)", "Casting weight (kg)", "Poured weight lb"]);
+    expect(mapping).toEqual([
+      { column: 0, field: "charge" },
+      { column: 1, field: "chargeWeight", unit: "lb" },
+      { column: 2, field: "castingWeight", unit: "kg" },
+      { column: 3, field: "pouredWeight", unit: "lb" },
+    ]);
+  });
+});

@@ -10,6 +10,7 @@ import { WaitingCastings } from "@/components/castings/waiting-castings";
 import { CastingRow } from "@/components/castings/casting-row";
 import { Heading } from "@/components/ui/heading";
 import { MeltFacts } from "@/components/melts/melt-facts";
+import { MeltYield } from "@/components/melts/melt-yield";
 import { Notice } from "@/components/ui/notice";
 import { LoadFailed, Loading } from "@/components/ui/query-state";
 import { Screen } from "@/components/ui/screen";
@@ -20,6 +21,7 @@ import { useMelt } from "@/hooks/use-melts";
 import { useUnitsQuery } from "@/hooks/use-units";
 import { formatDay } from "@/lib/dates";
 import { SI_UNITS } from "@/lib/units";
+import { meltYield } from "@/rules/compute/casting-yield";
 
 /** One melt: its conditions, the castings poured from it, and a quick form to add the next casting. */
 export default function MeltScreen() {
@@ -45,6 +47,7 @@ export default function MeltScreen() {
       </View>
       <ArchiveControl kind="melt" row={m} />
       <MeltFacts melt={m} units={u} />
+      <MeltYield melt={m} units={u} />
       {m.notes ? <Notice>{m.notes}</Notice> : null}
       <CalcLinks
         target={{ meltId: id }}
@@ -56,6 +59,8 @@ export default function MeltScreen() {
           airTempC: m.ambientTempC,
           humidityPct: m.humidityPct,
           foamDensityKgM3: m.foamDensityKgM3,
+          // Metal to melt starts from this melt's own yield, where its castings were weighed.
+          yieldPct: roundedYield(meltYield(m.castings).yieldPct),
         }}
       />
       <Heading level={2}>Castings from this melt</Heading>
@@ -86,6 +91,8 @@ export default function MeltScreen() {
     </Screen>
   );
 }
+
+const roundedYield = (y: number | undefined) => (y === undefined ? undefined : Math.round(y));
 
 const styles = StyleSheet.create({
   head: { flexDirection: "row", alignItems: "center", justifyContent: "space-between", gap: space.md },

@@ -4,6 +4,7 @@ import { CalcLinks } from "@/components/calculators/calc-links";
 import { gatingPrefill } from "@/lib/calculator-fields";
 import { BackLink } from "@/components/ui/back-link";
 import { CaseSheetActions } from "@/components/castings/case-sheet-actions";
+import { CastingGlance } from "@/components/castings/casting-glance";
 import { CastingSummary } from "@/components/castings/casting-summary";
 import { CommentThread } from "@/components/comments/comment-thread";
 import { DiagnosisView } from "@/components/diagnosis/diagnosis-view";
@@ -16,12 +17,16 @@ import { ReviewPanel } from "@/components/review/review-panel";
 import { PrintHidden, PrintOnly } from "@/components/ui/print";
 import { Screen } from "@/components/ui/screen";
 import { SimilarCases } from "@/components/search/similar-cases";
+import { StyleSheet, View } from "react-native";
+import { space } from "@/constants/theme";
 import { useCasting } from "@/hooks/use-castings";
 import { useIsWide } from "@/hooks/use-layout";
 import { useMe } from "@/hooks/use-me";
 import { useUnits } from "@/hooks/use-units";
 import { formatDay } from "@/lib/dates";
 import { roleCan } from "@/lib/permissions";
+import { sectionId } from "@/lib/page-sections";
+import { castingYieldPct } from "@/rules/compute/casting-yield";
 import type { CauseWithRecord } from "@/lib/review-schemas";
 
 /**
@@ -39,28 +44,44 @@ export default function CastingScreen() {
   if (casting.error) return <LoadFailed error={casting.error} />;
   const c = casting.data;
   const causes = (c.diagnosis?.result.causes ?? []) as CauseWithRecord[];
-
-  return (
-    <Screen wide={wide}>
-      <BackLink href={`/melts/${c.meltId}`} label={`${c.melt.alloy} melt of ${formatDay(c.melt.pouredOn)}`} />
-      {c.melt.archivedAt ? <ArchiveControl kind="melt" row={c.melt} /> : null}
-      <CastingSummary casting={c} units={units} mayEdit={mayWrite} editField={params.edit} />
-      <ArchiveControl kind="casting" row={c} />
-      <CaseSheetActions castingId={c.id} />
-      <PrintOnly>
-        <Heading level={2}>The melt</Heading>
-        <MeltFacts melt={c.melt} units={units} />
-      </PrintOnly>
-      <Heading level={2}>Photos and marks</Heading>
-      <Inspection casting={c} wide={wide} />
+  const causesFirst = !wide && causes.length > 0;
+  const diagnosis = (
+    <View nativeID={sectionId("causes")}>
       <DiagnosisView
         casting={c}
         units={units}
         mayRun={mayWrite}
         showsRuleVersion={roleCan(role, { rule: ["write"] })}
       />
-      <ReviewPanel castingId={c.id} causes={causes} />
-      <FollowupPanel castingId={c.id} causes={causes} />
+    </View>
+  );
+
+  // Paper is rarer than reading the case: on a phone its buttons wait at the foot of the page.
+  const paper = <CaseSheetActions castingId={c.id} />;
+
+  return (
+    <Screen wide={wide}>
+      <BackLink href={`/melts/${c.meltId}`} label={`${c.melt.alloy} melt of ${formatDay(c.melt.pouredOn)}`} />
+      {c.melt.archivedAt ? <ArchiveControl kind="melt" row={c.melt} /> : null}
+      <CastingSummary casting={c} units={units} mayEdit={mayWrite} editField={params.edit} folds={!wide} />
+      <CastingGlance casting={c} />
+      <ArchiveControl kind="casting" row={c} />
+      {wide ? paper : null}
+      <PrintOnly>
+        <Heading level={2}>The melt</Heading>
+        <MeltFacts melt={c.melt} units={units} />
+      </PrintOnly>
+      {/* On a phone, once there is an answer the causes come before the photos: they are what one opens the case for. */}
+      {causesFirst ? diagnosis : null}
+      <View nativeID={sectionId("photos")} style={styles.section}>
+        <Heading level={2}>Photos and marks</Heading>
+        <Inspection casting={c} wide={wide} />
+      </View>
+      {causesFirst ? null : diagnosis}
+      <View nativeID={sectionId("review")} style={styles.section}>
+        <ReviewPanel castingId={c.id} causes={causes} />
+        <FollowupPanel castingId={c.id} causes={causes} />
+      </View>
       {/* Links to elsewhere and the thread stay on screen; the printed sheet ends with the fix and its outcome. */}
       <PrintHidden>
         <CalcLinks
@@ -72,11 +93,21 @@ export default function CastingScreen() {
             thicknessMm: c.maxSectionMm,
             shape: "plate",
             ...gatingPrefill(c),
+            // Metal to melt for the next one starts from this mould's own yield and casting weight.
+            yieldPct: roundedYield(castingYieldPct(c.castingWeightKg, c.pouredWeightKg)),
+            previousCastingKg: c.castingWeightKg,
           }}
         />
         <SimilarCases castingId={c.id} />
-        <CommentThread castingId={c.id} comments={c.comments} mayComment={roleCan(role, { casebook: ["comment"] })} />
+        <View nativeID={sectionId("notes")}>
+          <CommentThread castingId={c.id} comments={c.comments} mayComment={roleCan(role, { casebook: ["comment"] })} />
+        </View>
       </PrintHidden>
+      {wide ? null : paper}
     </Screen>
   );
 }
+
+const roundedYield = (y: number | undefined) => (y === undefined ? undefined : Math.round(y));
+
+const styles = StyleSheet.create({ section: { gap: space.lg } });
