@@ -41,7 +41,7 @@ for (const [sizeName, size] of [
       await page.goto(`${baseUrl}/sign-up`);
       await page.getByLabel("Your name").fill("Someone Else");
       await page.getByLabel("E-mail").fill(demo("caster").email);
-      await page.getByLabel("Password").fill("not-the-casters-pass-3");
+      await page.getByLabel("Password").fill("brass-ladle-sprue-58");
       await page.getByLabel("Shop name").fill(`Copied Shop ${sizeName}`);
       await page.getByRole("button", { name: "Create account" }).click();
       const notice = page.getByTestId("sign-up-check-mail");
