@@ -37,6 +37,12 @@ const API_POLICY = {
   "form-action": ["'none'"],
 };
 
+/**
+ * A document a browser shows in its own viewer (the case sheet PDF): its viewer is not a page of ours
+ * and a policy that loads nothing can leave it blank, so such an answer keeps only the framing rule.
+ */
+export const VIEWER_DOCUMENT_POLICY = "frame-ancestors 'none'";
+
 /** HSTS only when people reach us over https: sent over plain http it would be meaningless or, on a
  * host that also serves http, lock browsers out of it. 180 days, this host only (subdomains are not ours to bind). */
 function headers(directives: Record<string, string[]>): RequestHandler {
