@@ -2,9 +2,8 @@ import { PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
 import sharp from "sharp";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { env } from "../../server/env";
+import { listen } from "../../server/index";
 import { sweepOrphanPhotos } from "../../server/photos/orphan-sweep";
-import { migrateOnce, shopWithCrew } from "./helpers";
-import { newCasting, newMelt } from "./notebook-fixtures";
 import { storedKeys } from "./object-store";
 
 /**
@@ -12,6 +11,11 @@ import { storedKeys } from "./object-store";
  * committing its row are removed by the sweep; an object a row names never is, nor a young one.
  * Everything is put and looked at through the store's own S3 API (this file's bucket).
  */
+// The start-up sweep reads its grace from the environment, which is read on first use: the app the
+// helpers build reads it, so they are loaded after this line.
+process.env.ORPHAN_PHOTO_GRACE_MINUTES = "0";
+const { migrateOnce, shopWithCrew } = await import("./helpers");
+const { newCasting, newMelt } = await import("./notebook-fixtures");
 beforeAll(migrateOnce);
 
 const s3 = new S3Client({
@@ -87,5 +91,20 @@ describe("the photo store sweep", () => {
     });
     expect(later.removed).toContain(key);
     expect(await storedKeys()).not.toContain(key);
+  });
+
+  it("runs by itself when a server starts listening", async () => {
+    const key = "22222222-3333-4444-8555-666666666666.thumb.jpg";
+    await putOrphan(key);
+    const before = await storedKeys();
+    expect(before).toContain(key);
+    const server = await listen({ port: 0, host: "127.0.0.1" });
+    try {
+      await expect.poll(storedKeys, { timeout: 10_000 }).not.toContain(key);
+      expect(await storedKeys()).toEqual(before.filter((k) => k !== key));
+    } finally {
+      server.closeAllConnections();
+      await new Promise((r) => server.close(r));
+    }
   });
 });
