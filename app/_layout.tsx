@@ -1,7 +1,7 @@
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { FontDisplay, useFonts } from "expo-font";
 import { Stack } from "expo-router";
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { ActivityIndicator, Platform, StyleSheet, Text, View } from "react-native";
 import { colors, fontSize, space } from "@/constants/theme";
 import { setSaveDefaults, usePersistedSaves } from "@/hooks/use-offline-saves";
@@ -38,9 +38,16 @@ export default function RootLayout() {
   const [fontsLoaded] = useFonts(LORA);
   const { data: session, isPending } = authClient.useSession();
   usePersistedSaves(queryClient, session?.user.id);
+  // better-auth marks the session pending again on every re-check while nobody is signed in (after a
+  // sign-up, say); only the first check waits behind the opening screen, or the screens (and what
+  // they were showing) would be thrown away and rebuilt on each re-check.
+  const [checkedOnce, setCheckedOnce] = useState(false);
+  useEffect(() => {
+    if (!isPending) setCheckedOnce(true);
+  }, [isPending]);
 
   // On the web the page does not wait for Lora: headings show in the fallback serif and swap in.
-  if ((!fontsLoaded && Platform.OS !== "web") || isPending) {
+  if ((!fontsLoaded && Platform.OS !== "web") || (isPending && !checkedOnce)) {
     return (
       <View style={styles.opening}>
         <Text style={styles.name}>Shakeout Casebook</Text>

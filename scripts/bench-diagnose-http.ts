@@ -69,11 +69,16 @@ const oldScan = (shopId: string) =>
 async function signedInto(shopId: string): Promise<string> {
   const email = `bench-${shopId.slice(0, 8)}@bench.example`;
   const auth = getAuth();
-  const res = await fetch(`${origin}/api/auth/sign-up/email`, {
-    method: "POST",
-    headers: { "content-type": "application/json", origin },
-    body: JSON.stringify({ name: "Bench caster", email, password: "bench-password-2026" }),
-  });
+  const password = "bench-password-2026";
+  const post = (path: string, body: object) =>
+    fetch(`${origin}/api/auth/${path}`, {
+      method: "POST",
+      headers: { "content-type": "application/json", origin },
+      body: JSON.stringify(body),
+    });
+  await post("sign-up/email", { name: "Bench caster", email, password });
+  // Sign-up makes no session (server/people/auth-hooks.ts): sign in as the app does.
+  const res = await post("sign-in/email", { email, password });
   const { user } = (await res.json()) as { user: { id: string } };
   await auth.api.addMember({ body: { userId: user.id, role: "caster", organizationId: shopId } });
   const cookie = res.headers

@@ -6,7 +6,18 @@ import { compressWebExport } from "./web-compress";
 import { addOpeningShell } from "./web-shell";
 
 /** Source of the web app: a newer file here than dist/index.html means the export is stale. */
-const SOURCES = ["app", "components", "hooks", "lib", "constants", "assets", "rules", "app.json", "package.json"];
+const SOURCES = [
+  "index.ts",
+  "app",
+  "components",
+  "hooks",
+  "lib",
+  "constants",
+  "assets",
+  "rules",
+  "app.json",
+  "package.json",
+];
 
 function newestMtimeMs(path: string): number {
   if (!existsSync(path)) return 0;

@@ -8,6 +8,7 @@ import { healthRouter } from "./health/router";
 import { apiNotFound, errorHandler } from "./http/errors";
 import { apiBodies, authBodies, readablePath } from "./http/edge";
 import { sameOriginWrites } from "./http/same-origin";
+import { apiHeaders, webAppHeaders } from "./http/security-headers";
 import { shopsRouter } from "./shops/router";
 import { sheetRouter } from "./sheet/router";
 import { searchRouter } from "./search/router";
@@ -71,6 +72,8 @@ export function createApp(opts: { webDir?: string } = {}) {
 
   if (env.DEV_WEB_ORIGIN) app.use(cors({ origin: env.DEV_WEB_ORIGIN, credentials: true, exposedHeaders: ["ETag"] }));
 
+  // Content-Security-Policy, no framing, HSTS over https (server/http/security-headers.ts).
+  app.use("/api", apiHeaders);
   // Before any body is read: a write from another site's page is refused.
   app.use("/api", sameOriginWrites);
   // Answers are one person's view of the shop and change with every write: never kept by the browser.
@@ -86,7 +89,10 @@ export function createApp(opts: { webDir?: string } = {}) {
   api.use(apiNotFound);
   app.use("/api", api);
 
-  if (opts.webDir) serveWebApp(app, opts.webDir);
+  if (opts.webDir) {
+    app.use(webAppHeaders);
+    serveWebApp(app, opts.webDir);
+  }
   app.use(errorHandler);
   return app;
 }

@@ -29,6 +29,11 @@ const schema = z.object({
     .enum(["true", "false"])
     .default("true")
     .transform((v) => v === "true"),
+  /**
+   * The photo store sweep (server/photos/orphan-sweep.ts) removes objects no row names only once they are
+   * this old, so an upload another server is saving right now is never taken.
+   */
+  ORPHAN_PHOTO_GRACE_MINUTES: z.coerce.number().min(0).default(60),
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().default("Shakeout Casebook <casebook@localhost>"),
   /** Where the local mail catcher writes .eml files; the development inbox page reads them from here. */

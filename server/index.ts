@@ -5,12 +5,20 @@ import { pathToFileURL } from "node:url";
 import { createApp } from "./app";
 import { closeDb } from "./db";
 import { env } from "./env";
+import { sweepOrphanPhotos } from "./photos/orphan-sweep";
 
-/** Starts the one Express process: API under /api, the web app from `webDir`. */
+/**
+ * Starts the one Express process: API under /api, the web app from `webDir`. Once it listens, the
+ * photo store is swept of objects no row names (left by a server killed mid-upload), in the background:
+ * a store or database that is away only delays that to the next start.
+ */
 export function listen(opts: { port: number; host: string; webDir?: string }): Promise<Server> {
   const app = createApp({ webDir: opts.webDir });
   return new Promise((resolve, reject) => {
-    const server = app.listen(opts.port, opts.host, () => resolve(server));
+    const server = app.listen(opts.port, opts.host, () => {
+      resolve(server);
+      sweepOrphanPhotos().catch((err: Error) => console.error(`Photo store sweep skipped: ${err.message}`));
+    });
     server.on("error", reject);
   });
 }

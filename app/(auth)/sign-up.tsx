@@ -18,12 +18,14 @@ export default function SignUp() {
   const [form, setForm] = useState({ name: "", email: "", password: "", shopName: "" });
   const [failure, setFailure] = useState<string>();
   const [busy, setBusy] = useState(false);
+  const [taken, setTaken] = useState<string>();
   const { errors, check } = useFormErrors(signUpForm);
   const queryClient = useQueryClient();
   const set = (key: keyof typeof form) => (value: string) => setForm((f) => ({ ...f, [key]: value }));
 
   async function submit() {
     setFailure(undefined);
+    setTaken(undefined);
     const values = check(form);
     if (!values) return;
     setBusy(true);
@@ -34,11 +36,16 @@ export default function SignUp() {
     });
     if (error) {
       setBusy(false);
-      setFailure(
-        error.status === 422
-          ? "An account with this e-mail already exists. Sign in instead."
-          : (error.message ?? "The account could not be created; try again."),
-      );
+      setFailure(error.message ?? "The account could not be created; try again.");
+      return;
+    }
+    // Sign-up answers a new address and a taken one alike (its owner gets a message), so the
+    // account is proven by signing in with it: that fails only where the address was taken.
+    const signedIn = await authClient.signIn.email({ email: values.email, password: values.password });
+    if (signedIn.error) {
+      setBusy(false);
+      if (signedIn.error.status === 429) setFailure("Too many attempts; wait a minute and try again.");
+      else setTaken(values.email);
       return;
     }
     const shopError = await createShop(values.shopName);
@@ -50,6 +57,7 @@ export default function SignUp() {
   return (
     <AuthCard title="Create an account">
       {failure ? <Notice tone="error">{failure}</Notice> : null}
+      {taken ? <TakenAddress email={taken} /> : null}
       <TextField
         label="Your name"
         value={form.name}
@@ -96,8 +104,28 @@ export default function SignUp() {
   );
 }
 
+/** What a person reads when the address already had an account: the same words whoever typed it. */
+function TakenAddress({ email }: { email: string }) {
+  return (
+    <Notice tone="note">
+      <Text testID="sign-up-check-mail" style={styles.notice}>
+        {`If ${email} already has an account, we have sent it a message. Check that mailbox, then `}
+        <Link href="/sign-in" style={styles.link}>
+          sign in
+        </Link>
+        {" with its password or "}
+        <Link href="/forgot-password" style={styles.link}>
+          set a new password
+        </Link>
+        .
+      </Text>
+    </Notice>
+  );
+}
+
 const styles = StyleSheet.create({
   note: { color: colors.muted, fontSize: fontSize.detail },
+  notice: { color: colors.ink, fontSize: fontSize.body, lineHeight: 22 },
   alt: { color: colors.muted, fontSize: fontSize.body },
   link: { color: colors.accent, fontWeight: "600" },
 });

@@ -50,10 +50,19 @@ export function InvitationAnswer({ invitation: inv }: { invitation: InvitationVi
     const { error } = await authClient.signUp.email({ name: values.name, email: inv.email, password: values.password });
     if (error) {
       setBusy(false);
-      if (error.status === 422) {
-        setMode("existing");
-        setFailure("This e-mail already has an account: sign in with its password to join.");
-      } else setFailure(error.message ?? "The account could not be made; try again.");
+      setFailure(error.message ?? "The account could not be made; try again.");
+      return;
+    }
+    // Sign-up answers a taken address like a new one (its owner is sent a message instead), so
+    // signing in with the new password is what shows the account is this one.
+    const signedIn = await authClient.signIn.email({ email: inv.email, password: values.password });
+    if (signedIn.error) {
+      setBusy(false);
+      if (signedIn.error.status === 429) return setFailure("Too many attempts; wait a minute and try again.");
+      setMode("existing");
+      setFailure(
+        "This e-mail seems to have an account already (we have sent it a message): sign in with its password to join.",
+      );
       return;
     }
     await join();

@@ -6,7 +6,7 @@ import * as schema from "../../db/schema";
 import { PASSWORD_MIN } from "../../lib/auth-forms";
 import { ac, roles } from "../../lib/permissions";
 import { env } from "../env";
-import { invitationOptions, passwordResetOptions } from "../people/auth-hooks";
+import { invitationOptions, passwordResetOptions, signUpOptions } from "../people/auth-hooks";
 import { CLIENT_ADDRESS_HEADER } from "./client-address";
 import { authInputGuard } from "./input-guard";
 import { AUTH_RATE_LIMITS } from "./rate-limits";
@@ -27,6 +27,8 @@ function buildAuth() {
       maxPasswordLength: 128,
       // Password reset by e-mail (issue 10): server/people/auth-hooks.ts.
       ...passwordResetOptions,
+      // A taken address gets the same answer as a new one, and its owner a notice: server/people/auth-hooks.ts.
+      ...signUpOptions,
     },
     telemetry: { enabled: false },
     advanced: { ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] } },

@@ -11,8 +11,30 @@ export const API_BODY_LIMIT = "256kb";
 /** Sign-in, sign-up and shop names: a few hundred bytes; 16 kB leaves room and no more. */
 export const AUTH_BODY_LIMIT = "16kb";
 
+/** How deep a body may nest: better-auth's are flat; the API's deepest (a rule's conditions) a few levels. */
+export const AUTH_BODY_DEPTH = 8;
+export const API_BODY_DEPTH = 64;
+
+/**
+ * A parsed body nested deeper than `max` is refused. JSON.parse takes thousands of levels in a few
+ * kilobytes, but code after it that walks the body by recursion (better-auth re-serialises it with
+ * JSON.stringify) runs out of stack: a 500. Measured without recursion, so the check cannot overflow.
+ */
+export function boundedNesting(max: number): RequestHandler {
+  return (req, _res, next) => {
+    const pending: [unknown, number][] = [[req.body, 0]];
+    while (pending.length) {
+      const [value, depth] = pending.pop()!;
+      if (!value || typeof value !== "object") continue;
+      if (depth >= max) throw new HttpError(400, `The request body is nested more than ${max} levels deep.`);
+      for (const child of Object.values(value)) pending.push([child, depth + 1]);
+    }
+    next();
+  };
+}
+
 /** JSON for the API; photos come through multer with their own limit (server/photos/router.ts). */
-export const apiBodies: RequestHandler[] = [express.json({ limit: API_BODY_LIMIT })];
+export const apiBodies: RequestHandler[] = [express.json({ limit: API_BODY_LIMIT }), boundedNesting(API_BODY_DEPTH)];
 
 /**
  * better-auth reads the raw stream itself unless the body is already parsed (then it re-serialises
@@ -22,6 +44,7 @@ export const authBodies: RequestHandler[] = [
   express.json({ limit: AUTH_BODY_LIMIT }),
   express.urlencoded({ extended: false, limit: AUTH_BODY_LIMIT }),
   express.text({ type: () => true, limit: AUTH_BODY_LIMIT }),
+  boundedNesting(AUTH_BODY_DEPTH),
 ];
 
 /**

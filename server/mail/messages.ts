@@ -55,6 +55,19 @@ export function passwordResetMail(p: { to: string; url: string; shopNames: strin
   );
 }
 
+/** Sent instead of "that address is taken", so sign-up tells no one which addresses have an account. */
+export function existingAccountMail(p: { to: string; signInUrl: string }): Mail {
+  return compose(
+    p.to,
+    "Someone tried to make a Shakeout Casebook account with your address",
+    [
+      `Someone tried to make a new Shakeout Casebook account for ${p.to}, which already has one. No new account was made and nothing in yours changed.`,
+      'If it was you, sign in with your password, or use "Forgot your password?" on the sign-in page to set a new one. If it was not you, you can ignore this message.',
+    ],
+    { url: p.signInUrl, label: "Sign in" },
+  );
+}
+
 const TURN_OFF = "You can turn these notices off under More, Your notices.";
 
 export function reviewRequestedMail(p: {

@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 import { db } from "../db";
 import { personUnits, shopSettings, user } from "../../db/schema";
 import { env } from "../env";
-import { invitationMail, passwordResetMail } from "../mail/messages";
+import { existingAccountMail, invitationMail, passwordResetMail } from "../mail/messages";
 import { sendMail } from "../mail/send";
 import { shopsOf } from "../shops/service";
 import { recordChange } from "./changes";
@@ -89,5 +89,17 @@ export const passwordResetOptions = {
     void sendMail(
       passwordResetMail({ to: data.user.email, url: resetLink(data.token), shopNames: shops.map((s) => s.name) }),
     );
+  },
+};
+
+/**
+ * Sign-up answers a taken address exactly as it answers a new one (issue 9, item 13): better-auth does
+ * so when sign-up does not sign the person in (`autoSignIn: false`; the app signs in right after), and
+ * then calls `onExistingUserSignUp` instead of making an account. Its owner is told by mail.
+ */
+export const signUpOptions = {
+  autoSignIn: false,
+  onExistingUserSignUp: async (data: { user: { email: string } }) => {
+    void sendMail(existingAccountMail({ to: data.user.email, signInUrl: `${env.PUBLIC_URL}/sign-in` }));
   },
 };

@@ -3,6 +3,7 @@ import {
   DeleteObjectCommand,
   GetObjectCommand,
   HeadObjectCommand,
+  ListObjectsCommand,
   PutObjectCommand,
   S3Client,
   S3ServiceException,
@@ -111,5 +112,32 @@ export async function deleteObjects(keys: string[]): Promise<boolean> {
   } catch (err) {
     console.error(`Object store: could not remove ${keys.join(", ")}:`, err instanceof Error ? err.message : err);
     return false;
+  }
+}
+
+export type ListedObject = { key: string; lastModified: Date };
+
+/**
+ * Every object of the bucket, one page (at most `pageSize` keys, in key order) at a time, so a bucket of
+ * any size is walked in bounded memory. Each page starts after the last key of the one before
+ * (ListObjects' `Marker`): ListObjectsV2's continuation tokens would do the same, but the local
+ * stand-in (s3rver) makes them with DES, which Node 20's OpenSSL 3 refuses, so a second page there
+ * fails. Every S3-compatible store pages by `Marker`.
+ */
+export async function* objectPages(pageSize = 1000): AsyncGenerator<ListedObject[]> {
+  let marker: string | undefined;
+  for (;;) {
+    let page;
+    try {
+      page = await store().send(new ListObjectsCommand({ Bucket: env.S3_BUCKET, MaxKeys: pageSize, Marker: marker }));
+    } catch (err) {
+      throw unavailable("the photos could not be listed", err);
+    }
+    const objects = (page.Contents ?? [])
+      .filter((o) => o.Key)
+      .map((o) => ({ key: o.Key!, lastModified: o.LastModified ?? new Date() }));
+    if (objects.length) yield objects;
+    if (!page.IsTruncated || !objects.length) return;
+    marker = objects[objects.length - 1].key;
   }
 }

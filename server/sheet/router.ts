@@ -6,6 +6,7 @@ import { idParam } from "../notebook/shared";
 import { unitsOf } from "../people/service";
 import { caseSheet } from "./content";
 import { caseSheetPdf, PAPER_SIZES } from "./pdf";
+import { VIEWER_DOCUMENT_POLICY } from "../http/security-headers";
 
 export const sheetRouter = Router();
 
@@ -24,6 +25,7 @@ sheetRouter.get("/:id/sheet.pdf", requireShopMember, allow({ casebook: ["read"] 
     "Content-Type": "application/pdf",
     "Content-Disposition": `inline; filename="case-sheet-${id}-${paper}.pdf"`,
     "Cache-Control": "private, no-store",
+    "Content-Security-Policy": VIEWER_DOCUMENT_POLICY,
   });
   res.send(pdf);
 });

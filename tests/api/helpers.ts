@@ -21,14 +21,19 @@ export const uniqueEmail = (who: string) =>
 
 export type Person = { agent: ReturnType<typeof request.agent>; userId: string; email: string; password: string };
 
-/** Signs up through the real HTTP route; the agent keeps the session cookie. */
+/**
+ * Signs up and then in through the real HTTP routes, as the app does (sign-up makes no session, so
+ * that a taken address is answered like a new one); the agent keeps the session cookie.
+ */
 export async function signUp(who: string): Promise<Person> {
   const agent = request.agent(app);
   const email = uniqueEmail(who);
   const password = "correct-horse-9";
   const res = await agent.post("/api/auth/sign-up/email").set("Origin", ORIGIN).send({ name: who, email, password });
   if (res.status !== 200) throw new Error(`sign-up failed: ${res.status} ${res.text}`);
-  return { agent, userId: res.body.user.id, email, password };
+  const signIn = await agent.post("/api/auth/sign-in/email").set("Origin", ORIGIN).send({ email, password });
+  if (signIn.status !== 200) throw new Error(`sign-in after sign-up failed: ${signIn.status} ${signIn.text}`);
+  return { agent, userId: signIn.body.user.id, email, password };
 }
 
 /** Creates a shop over HTTP as `owner` (who becomes its owner) and makes it active. */

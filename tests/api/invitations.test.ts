@@ -33,7 +33,12 @@ async function signUpInvited(email: string, name = "New Caster") {
     .set("Origin", ORIGIN)
     .send({ name, email, password: "correct-horse-9" });
   expect(res.status).toBe(200);
-  return { agent, userId: res.body.user.id, email, password: "correct-horse-9" } as Person;
+  const signIn = await agent
+    .post("/api/auth/sign-in/email")
+    .set("Origin", ORIGIN)
+    .send({ email, password: "correct-horse-9" });
+  expect(signIn.status).toBe(200);
+  return { agent, userId: signIn.body.user.id, email, password: "correct-horse-9" } as Person;
 }
 
 describe("invitations by e-mail", () => {

@@ -68,6 +68,9 @@ describe("the case sheet PDF", () => {
     const res = await getPdf(caster, `/api/castings/${casting.id}/sheet.pdf?paper=letter`);
     expect(res.status).toBe(200);
     expect(res.headers["content-type"]).toBe("application/pdf");
+    // Shown in the browser's own viewer: no framing, and nothing else its viewer could trip on.
+    expect(res.headers["content-security-policy"]).toBe("frame-ancestors 'none'");
+    expect(res.headers["x-frame-options"]).toBe("DENY");
     expect(res.headers["content-disposition"]).toBe(`inline; filename="case-sheet-${casting.id}-letter.pdf"`);
     const bytes = res.body as Buffer;
     keep("case-sheet-letter.pdf", bytes);

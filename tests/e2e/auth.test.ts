@@ -36,6 +36,23 @@ for (const [sizeName, size] of [
       await page.context().close();
     });
 
+    it("tells someone signing up with a taken address to check that mailbox or sign in, and makes no shop", async () => {
+      const page = await newPage(size);
+      await page.goto(`${baseUrl}/sign-up`);
+      await page.getByLabel("Your name").fill("Someone Else");
+      await page.getByLabel("E-mail").fill(demo("caster").email);
+      await page.getByLabel("Password").fill("brass-ladle-sprue-58");
+      await page.getByLabel("Shop name").fill(`Copied Shop ${sizeName}`);
+      await page.getByRole("button", { name: "Create account" }).click();
+      const notice = page.getByTestId("sign-up-check-mail");
+      await expect.poll(() => notice.count(), { timeout: 15000 }).toBe(1);
+      expect(await notice.textContent()).toMatch(/already has an account, we have sent it a message/);
+      await shot(page, `${sizeName}-sign-up-taken`);
+      await notice.getByRole("link", { name: "sign in" }).click();
+      await expect.poll(() => page.getByRole("button", { name: "Sign in" }).count(), { timeout: 10000 }).toBe(1);
+      await page.context().close();
+    });
+
     it("shows field messages for a malformed e-mail and a short password, and sends nothing", async () => {
       const page = await newPage(size);
       let authCalls = 0;
