@@ -58,10 +58,14 @@ export function usePersistedSaves(queryClient: QueryClient, userId: string | und
   }, [queryClient, userId]);
 }
 
+/** What each kind of save sends: the variables of its mutation. */
+type SaveVariables = { melt: MeltInput; casting: CastingSave };
+
 /** The saves of one kind that wait for the connection, as the input each will send. */
-export function useWaitingSaves<T>(kind: keyof typeof SAVE_KEYS): T[] {
+export function useWaitingSaves<K extends keyof typeof SAVE_KEYS>(kind: K): SaveVariables[K][] {
   return useMutationState({
     filters: { mutationKey: SAVE_KEYS[kind], predicate: (m) => m.state.isPaused },
-    select: (m) => m.state.variables as T,
+    // The key decides the mutation function (setSaveDefaults), and with it what its variables are.
+    select: (m) => m.state.variables as SaveVariables[K],
   });
 }
