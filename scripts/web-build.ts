@@ -5,8 +5,8 @@ import { fileURLToPath } from "node:url";
 import { compressWebExport } from "./web-compress";
 import { addOpeningShell } from "./web-shell";
 
-/** Source of the web app: a newer file here than dist/index.html means the export is stale. */
-const SOURCES = ["app", "components", "hooks", "lib", "constants", "assets", "rules", "app.json", "package.json"];
+/** Source of the web app (db/ too: the input schemas are built from its tables): a newer file here than dist/index.html means the export is stale. */
+const SOURCES = ["app", "components", "hooks", "lib", "constants", "assets", "rules", "db", "app.json", "package.json"];
 
 function newestMtimeMs(path: string): number {
   if (!existsSync(path)) return 0;
