@@ -3,8 +3,8 @@ import { createAsyncStoragePersister } from "@tanstack/query-async-storage-persi
 import { persistQueryClient } from "@tanstack/react-query-persist-client";
 import { useMutationState, type QueryClient } from "@tanstack/react-query";
 import { useEffect } from "react";
-import { api } from "@/lib/api";
-import type { CastingInput, Melt, MeltInput, Casting } from "@/lib/notebook-schemas";
+import { request } from "@/lib/api";
+import type { CastingInput, MeltInput } from "@/lib/notebook-schemas";
 
 /**
  * Saves made without a connection wait on the device and go once it is back. New melts and castings
@@ -20,12 +20,12 @@ export function setSaveDefaults(queryClient: QueryClient) {
   const refresh = () =>
     Promise.all([["melts"], ["castings"]].map((queryKey) => queryClient.invalidateQueries({ queryKey })));
   queryClient.setMutationDefaults(SAVE_KEYS.melt, {
-    mutationFn: (input: MeltInput) => api<Melt>("/melts", { method: "POST", body: input }),
+    mutationFn: (input: MeltInput) => request("POST /melts", { body: input }),
     onSuccess: refresh,
   });
   queryClient.setMutationDefaults(SAVE_KEYS.casting, {
     mutationFn: ({ meltId, input }: CastingSave) =>
-      api<Casting>(`/castings/melts/${meltId}`, { method: "POST", body: input }),
+      request("POST /castings/melts/:id", { params: { id: meltId }, body: input }),
     onSuccess: refresh,
   });
 }

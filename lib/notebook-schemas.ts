@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { alloys, castings, comments, defectMarks, melts, personUnits } from "../db/notebook-schema";
 import { CHARGES, DEFECT_LOCATIONS, DEFECT_TYPES, DEGASSING_METHODS, PROCESSES } from "../rules/case";
-import type { Charge, DefectLocation, DefectType, DegassingMethod, Process } from "../rules/case";
+import type { DefectType, Process } from "../rules/case";
 import { ALLOY_FAMILIES, type AlloyFamily } from "../rules/fact-catalog";
 import type { DiagnosisResult } from "../rules/rank";
 import { castingConditionChecks, meltConditionChecks } from "./condition-fields";
@@ -243,7 +243,6 @@ export type PersonRef = { id: string; name: string };
 type Row = { id: number; createdBy: PersonRef; createdAt: string };
 /** Set while a melt or casting is archived: hidden from lists, its page says so, an owner can restore it. */
 export type Archived = { archivedAt: string | null; archivedBy: PersonRef | null };
-type Nullable<T> = { [K in keyof T]-?: Exclude<T[K], undefined> | null };
 export type Page<T> = { items: T[]; total: number; page: number; pageSize: number };
 
 export type Alloy = {
@@ -261,17 +260,29 @@ export type Alloy = {
   createdBy: PersonRef | null;
   createdAt: string;
 };
+/**
+ * A melt, casting or mark answers with its table's columns (db/notebook-schema.ts), so a column added
+ * there is in the answer's type on the server and in the app; these are shaped apart: the shop is
+ * never sent, authors are sent as a PersonRef, times as ISO strings, the retry key stays on the server.
+ * `version` is raised by one on every edit and is the ETag (server/http/row-version.ts).
+ */
+export const SHAPED_COLUMNS = [
+  "shopId",
+  "createdBy",
+  "createdAt",
+  "updatedAt",
+  "archivedAt",
+  "archivedBy",
+  "idempotencyKey",
+] as const;
+type Columns<T> = Omit<T, (typeof SHAPED_COLUMNS)[number]>;
+
 export type Melt = Row &
   Archived &
-  Nullable<Omit<MeltInput, "pouredOn" | "alloy" | "process" | "idempotencyKey">> & {
-    pouredOn: string;
+  Omit<Columns<typeof melts.$inferSelect>, "alloyId"> & {
+    /** The alloy's designation (the row holds its id). */
     alloy: string;
-    process: Process;
-    charge: Charge | null;
-    degassing: DegassingMethod | null;
     updatedAt: string;
-    /** Raised by one on every edit; the ETag (server/http/row-version.ts). */
-    version: number;
   };
 export type MeltSummary = Row & {
   pouredOn: string;
@@ -282,15 +293,7 @@ export type MeltSummary = Row & {
   castingCount: number;
   scrapCount: number;
 };
-export type Casting = Row &
-  Archived &
-  Nullable<Omit<CastingInput, "partName" | "marks" | "idempotencyKey">> & {
-    meltId: number;
-    partName: string;
-    outcome: Outcome | null;
-    updatedAt: string;
-    version: number;
-  };
+export type Casting = Row & Archived & Columns<typeof castings.$inferSelect> & { updatedAt: string };
 export type CastingSummary = Row & {
   meltId: number;
   partName: string;
@@ -307,17 +310,7 @@ export type CastingSummary = Row & {
   newAnswer: boolean;
 };
 export type Photo = Row & { castingId: number; width: number; height: number; imageUrl: string; thumbUrl: string };
-export type Mark = Row & {
-  castingId: number;
-  photoId: number | null;
-  x: number | null;
-  y: number | null;
-  type: DefectType;
-  location: DefectLocation;
-  severity: number;
-  note: string | null;
-  version: number;
-};
+export type Mark = Row & Columns<typeof defectMarks.$inferSelect>;
 export type Comment = Row & { castingId: number; body: string };
 export type DiagnosisSnapshot = {
   id: number;
