@@ -1,5 +1,7 @@
 import { relations } from "drizzle-orm";
-import { bigint, integer, pgTable, text, timestamp, boolean, index, uniqueIndex } from "drizzle-orm/pg-core";
+import { bigint, boolean, integer, text, timestamp } from "drizzle-orm/pg-core/columns";
+import { index, uniqueIndex } from "drizzle-orm/pg-core/indexes";
+import { pgTable } from "drizzle-orm/pg-core/table";
 
 export const user = pgTable("user", {
   id: text("id").primaryKey(),

@@ -1,4 +1,6 @@
-import { index, integer, jsonb, pgTable, serial, text, timestamp } from "drizzle-orm/pg-core";
+import { integer, jsonb, serial, text, timestamp } from "drizzle-orm/pg-core/columns";
+import { index } from "drizzle-orm/pg-core/indexes";
+import { pgTable } from "drizzle-orm/pg-core/table";
 import type { CalcResult } from "../rules/calculators";
 import { organization, user } from "./auth-schema";
 import { castings, melts } from "./notebook-schema";

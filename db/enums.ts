@@ -1,6 +1,5 @@
-import { pgEnum } from "drizzle-orm/pg-core";
-import { WORKED } from "../lib/review-schemas";
-import { OUTCOMES } from "../lib/search-schemas";
+import { pgEnum } from "drizzle-orm/pg-core/columns/enum";
+import { OUTCOMES, WORKED } from "../lib/outcomes";
 import {
   CHARGES,
   COATING_PERMEABILITIES,

@@ -1,4 +1,6 @@
-import { index, integer, pgTable, serial, text, timestamp, uniqueIndex } from "drizzle-orm/pg-core";
+import { integer, serial, text, timestamp } from "drizzle-orm/pg-core/columns";
+import { index, uniqueIndex } from "drizzle-orm/pg-core/indexes";
+import { pgTable } from "drizzle-orm/pg-core/table";
 import { organization, user } from "./auth-schema";
 import { castings } from "./notebook-schema";
 

@@ -1,17 +1,9 @@
 import { sql } from "drizzle-orm";
-import {
-  boolean,
-  index,
-  integer,
-  jsonb,
-  pgTable,
-  primaryKey,
-  serial,
-  text,
-  timestamp,
-  unique,
-  uniqueIndex,
-} from "drizzle-orm/pg-core";
+import { boolean, integer, jsonb, serial, text, timestamp } from "drizzle-orm/pg-core/columns";
+import { index, uniqueIndex } from "drizzle-orm/pg-core/indexes";
+import { primaryKey } from "drizzle-orm/pg-core/primary-keys";
+import { pgTable } from "drizzle-orm/pg-core/table";
+import { unique } from "drizzle-orm/pg-core/unique-constraint";
 import type { KbRule } from "../rules/kb-schema";
 import { organization, user } from "./auth-schema";
 import { ruleStatusEnum, workedEnum } from "./enums";

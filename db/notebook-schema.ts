@@ -1,18 +1,9 @@
 import { sql } from "drizzle-orm";
-import {
-  boolean,
-  check,
-  date,
-  doublePrecision,
-  index,
-  integer,
-  jsonb,
-  pgTable,
-  serial,
-  text,
-  timestamp,
-  unique,
-} from "drizzle-orm/pg-core";
+import { check } from "drizzle-orm/pg-core/checks";
+import { boolean, date, doublePrecision, integer, jsonb, serial, text, timestamp } from "drizzle-orm/pg-core/columns";
+import { index } from "drizzle-orm/pg-core/indexes";
+import { pgTable } from "drizzle-orm/pg-core/table";
+import { unique } from "drizzle-orm/pg-core/unique-constraint";
 import { organization, user } from "./auth-schema";
 import {
   alloyFamilyEnum,

@@ -1,4 +1,6 @@
-import { boolean, index, pgTable, serial, text, timestamp } from "drizzle-orm/pg-core";
+import { boolean, serial, text, timestamp } from "drizzle-orm/pg-core/columns";
+import { index } from "drizzle-orm/pg-core/indexes";
+import { pgTable } from "drizzle-orm/pg-core/table";
 import { organization, user } from "./auth-schema";
 
 /**

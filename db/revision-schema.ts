@@ -1,4 +1,5 @@
-import { bigint, pgTable, text } from "drizzle-orm/pg-core";
+import { bigint, text } from "drizzle-orm/pg-core/columns";
+import { pgTable } from "drizzle-orm/pg-core/table";
 
 /**
  * A counter per shop that every write a diagnosis depends on raises, in the writing transaction

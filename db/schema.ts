@@ -1,4 +1,5 @@
-import { pgTable, text, timestamp } from "drizzle-orm/pg-core";
+import { text, timestamp } from "drizzle-orm/pg-core/columns";
+import { pgTable } from "drizzle-orm/pg-core/table";
 import { organization, user } from "./auth-schema";
 import { lengthUnitEnum, massUnitEnum, processEnum, temperatureUnitEnum } from "./enums";
 

@@ -3,14 +3,14 @@ import {
   customType,
   date,
   doublePrecision,
-  index,
   integer,
   jsonb,
-  pgTable,
-  primaryKey,
   text,
   timestamp,
-} from "drizzle-orm/pg-core";
+} from "drizzle-orm/pg-core/columns";
+import { index } from "drizzle-orm/pg-core/indexes";
+import { primaryKey } from "drizzle-orm/pg-core/primary-keys";
+import { pgTable } from "drizzle-orm/pg-core/table";
 import { organization } from "./auth-schema";
 import { alloyFamilyEnum, defectTypeEnum, degassingEnum, outcomeEnum, processEnum, workedEnum } from "./enums";
 import { castings } from "./notebook-schema";

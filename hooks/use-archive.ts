@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { api } from "@/lib/api";
+import { request } from "@/lib/api";
+import type { Casting, Melt } from "@/lib/notebook-schemas";
 
 export type ArchiveKind = "melt" | "casting";
 
@@ -9,10 +10,22 @@ export type ArchiveKind = "melt" | "casting";
  */
 export function useArchive(kind: ArchiveKind, id: number) {
   const queryClient = useQueryClient();
-  const base = kind === "melt" ? `/melts/${id}` : `/castings/${id}`;
   const refresh = () =>
     Promise.all([["melts"], ["castings"], ["search"]].map((queryKey) => queryClient.invalidateQueries({ queryKey })));
-  const archive = useMutation({ mutationFn: () => api(`${base}/archive`, { method: "POST" }), onSuccess: refresh });
-  const restore = useMutation({ mutationFn: () => api(`${base}/restore`, { method: "POST" }), onSuccess: refresh });
+  const params = { id };
+  const archive = useMutation<Melt | Casting>({
+    mutationFn: () =>
+      kind === "melt"
+        ? request("POST /melts/:id/archive", { params })
+        : request("POST /castings/:id/archive", { params }),
+    onSuccess: refresh,
+  });
+  const restore = useMutation<Melt | Casting>({
+    mutationFn: () =>
+      kind === "melt"
+        ? request("POST /melts/:id/restore", { params })
+        : request("POST /castings/:id/restore", { params }),
+    onSuccess: refresh,
+  });
   return { archive, restore };
 }

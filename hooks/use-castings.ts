@@ -1,7 +1,8 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { SAVE_KEYS, type CastingSave } from "@/hooks/use-offline-saves";
-import { api } from "@/lib/api";
-import type { Casting, CastingDetail, CastingInput } from "@/lib/notebook-schemas";
+import { request } from "@/lib/api";
+import type { Answer } from "@/lib/api-routes";
+import type { CastingInput } from "@/lib/notebook-schemas";
 
 export const castingKeys = {
   all: ["castings"] as const,
@@ -11,7 +12,7 @@ export const castingKeys = {
 export function useCasting(id: number) {
   return useQuery({
     queryKey: castingKeys.detail(id),
-    queryFn: () => api<CastingDetail>(`/castings/${id}`),
+    queryFn: () => request("GET /castings/:id", { params: { id } }),
     enabled: Number.isInteger(id),
   });
 }
@@ -28,7 +29,7 @@ export function useRefreshCasting() {
 
 /** Its function is a default of the QueryClient (hooks/use-offline-saves.ts), so a save made offline waits and goes later. */
 export function useCreateCasting() {
-  return useMutation<Casting, Error, CastingSave>({ mutationKey: SAVE_KEYS.casting });
+  return useMutation<Answer<"POST /castings/melts/:id">, Error, CastingSave>({ mutationKey: SAVE_KEYS.casting });
 }
 
 export function useUpdateCasting(id: number) {
@@ -36,7 +37,7 @@ export function useUpdateCasting(id: number) {
   return useMutation({
     /** `version` is the one the form opened at: a save over someone else's later edit answers 412. */
     mutationFn: ({ input, version }: { input: Partial<CastingInput>; version?: number }) =>
-      api<Casting>(`/castings/${id}`, { method: "PATCH", body: input, ifMatch: version }),
+      request("PATCH /castings/:id", { params: { id }, body: input, ifMatch: version }),
     onSuccess: () => refresh(id),
   });
 }

@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { api } from "@/lib/api";
+import { request } from "@/lib/api";
 import type { FixInput, FixPatch, FixTickInput, FixTried, Followups } from "@/lib/review-schemas";
 
 /** A fix links two castings, so every casting's follow-ups may change with it: they are refetched together. */
@@ -8,7 +8,7 @@ export const followupKeys = { all: ["followups"] as const, casting: (id: number)
 export function useFollowups(castingId: number) {
   return useQuery({
     queryKey: followupKeys.casting(castingId),
-    queryFn: () => api<Followups>(`/followups/castings/${castingId}`),
+    queryFn: () => request("GET /followups/castings/:id", { params: { id: castingId } }),
   });
 }
 
@@ -22,13 +22,13 @@ function useFixChange<T>(fn: (arg: T) => Promise<FixTried>) {
 
 export function useAddFix(castingId: number) {
   return useFixChange((input: FixInput) =>
-    api<FixTried>(`/followups/castings/${castingId}/fixes`, { method: "POST", body: input }),
+    request("POST /followups/castings/:id/fixes", { params: { id: castingId }, body: input }),
   );
 }
 
 export function usePatchFix() {
   return useFixChange(({ id, ...patch }: FixPatch & { id: number }) =>
-    api<FixTried>(`/followups/fixes/${id}`, { method: "PATCH", body: patch }),
+    request("PATCH /followups/fixes/:id", { params: { id }, body: patch }),
   );
 }
 
@@ -38,7 +38,7 @@ export function useTickFix(castingId: number) {
   const key = followupKeys.casting(castingId);
   return useMutation({
     mutationFn: (input: FixTickInput) =>
-      api<{ ticked: string[] }>(`/followups/castings/${castingId}/ticks`, { method: "PUT", body: input }),
+      request("PUT /followups/castings/:id/ticks", { params: { id: castingId }, body: input }),
     onMutate: async ({ fix, ticked }) => {
       await queryClient.cancelQueries({ queryKey: key });
       queryClient.setQueryData<Followups>(key, (f) =>

@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { castingKeys, useRefreshCasting } from "@/hooks/use-castings";
-import { api } from "@/lib/api";
+import { request } from "@/lib/api";
 import type { CastingDetail, Mark, MarkInput } from "@/lib/notebook-schemas";
 
 export function useCreateMark(castingId: number) {
   const refresh = useRefreshCasting();
   return useMutation({
-    mutationFn: (input: MarkInput) => api<Mark>(`/marks/castings/${castingId}`, { method: "POST", body: input }),
+    mutationFn: (input: MarkInput) => request("POST /marks/castings/:id", { params: { id: castingId }, body: input }),
     onSuccess: () => refresh(castingId),
   });
 }
@@ -18,7 +18,7 @@ export function useUpdateMark(castingId: number) {
   const key = castingKeys.detail(castingId);
   return useMutation({
     mutationFn: ({ id, change }: { id: number; change: Partial<MarkInput> }) =>
-      api<Mark>(`/marks/${id}`, { method: "PATCH", body: change }),
+      request("PATCH /marks/:id", { params: { id }, body: change }),
     onMutate: async ({ id, change }) => {
       await queryClient.cancelQueries({ queryKey: key });
       const before = queryClient.getQueryData<CastingDetail>(key);
@@ -36,7 +36,7 @@ export function useUpdateMark(castingId: number) {
 export function useDeleteMark(castingId: number) {
   const refresh = useRefreshCasting();
   return useMutation({
-    mutationFn: (id: number) => api<void>(`/marks/${id}`, { method: "DELETE" }),
+    mutationFn: (id: number) => request("DELETE /marks/:id", { params: { id } }),
     onSuccess: () => refresh(castingId),
   });
 }

@@ -7,7 +7,9 @@ export type Me = { user: { id: string; name: string; email: string }; shops: MyS
 
 export const meKey = ["me"] as const;
 
+export const meQuery = { queryKey: meKey, queryFn: () => api<Me>("/shops/me") };
+
 /** The signed-in person, their shops and the active one (GET /api/shops/me). */
 export function useMe(enabled = true) {
-  return useQuery({ queryKey: meKey, queryFn: () => api<Me>("/shops/me"), enabled });
+  return useQuery({ ...meQuery, enabled });
 }

@@ -1,8 +1,9 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { castingKeys } from "@/hooks/use-castings";
 import { SAVE_KEYS } from "@/hooks/use-offline-saves";
-import { api } from "@/lib/api";
-import type { Alloy, Melt, MeltDetail, MeltInput, MeltSummary, Page, MELT_SORTS } from "@/lib/notebook-schemas";
+import { request } from "@/lib/api";
+import type { Answer } from "@/lib/api-routes";
+import type { MeltInput, MELT_SORTS } from "@/lib/notebook-schemas";
 
 export type MeltSort = (typeof MELT_SORTS)[number];
 export type MeltListQuery = { page: number; pageSize: number; sort: MeltSort };
@@ -18,7 +19,7 @@ export const alloysKey = ["alloys"] as const;
 export function useAlloys() {
   return useQuery({
     queryKey: alloysKey,
-    queryFn: () => api<{ alloys: Alloy[] }>("/alloys").then((r) => r.alloys),
+    queryFn: () => request("GET /alloys", {}).then((r) => r.alloys),
     staleTime: 10 * 60_000,
   });
 }
@@ -28,10 +29,7 @@ export const FIRST_MELTS_PAGE: MeltListQuery = { page: 1, pageSize: 20, sort: "d
 
 export const meltsQuery = (q: MeltListQuery) => ({
   queryKey: meltKeys.list(q),
-  queryFn: () =>
-    api<Page<MeltSummary>>(
-      `/melts?${new URLSearchParams({ page: String(q.page), pageSize: String(q.pageSize), sort: q.sort })}`,
-    ),
+  queryFn: () => request("GET /melts", { query: q }),
 });
 
 export function useMelts(q: MeltListQuery) {
@@ -42,7 +40,7 @@ export function useMelts(q: MeltListQuery) {
 export function useMelt(id: number) {
   return useQuery({
     queryKey: meltKeys.detail(id),
-    queryFn: () => api<MeltDetail>(`/melts/${id}`),
+    queryFn: () => request("GET /melts/:id", { params: { id } }),
     enabled: Number.isInteger(id),
   });
 }
@@ -51,14 +49,14 @@ export function useMelt(id: number) {
 export function useMeltDefaults() {
   return useQuery({
     queryKey: meltKeys.defaults,
-    queryFn: () => api<Partial<MeltInput>>("/melts/defaults"),
+    queryFn: () => request("GET /melts/defaults", {}),
     staleTime: 0,
   });
 }
 
 /** Its function is a default of the QueryClient (hooks/use-offline-saves.ts), so a save made offline waits and goes later. */
 export function useCreateMelt() {
-  return useMutation<Melt, Error, MeltInput>({ mutationKey: SAVE_KEYS.melt });
+  return useMutation<Answer<"POST /melts">, Error, MeltInput>({ mutationKey: SAVE_KEYS.melt });
 }
 
 export function useUpdateMelt(id: number) {
@@ -66,7 +64,7 @@ export function useUpdateMelt(id: number) {
   return useMutation({
     /** `version` is the one the form opened at: a save over someone else's later edit answers 412. */
     mutationFn: ({ input, version }: { input: Partial<MeltInput>; version?: number }) =>
-      api<Melt>(`/melts/${id}`, { method: "PATCH", body: input, ifMatch: version }),
+      request("PATCH /melts/:id", { params: { id }, body: input, ifMatch: version }),
     // A casting's page shows its melt's conditions too.
     onSuccess: () =>
       Promise.all([

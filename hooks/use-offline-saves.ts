@@ -3,8 +3,8 @@ import { createAsyncStoragePersister } from "@tanstack/query-async-storage-persi
 import { persistQueryClient } from "@tanstack/react-query-persist-client";
 import { useMutationState, type QueryClient } from "@tanstack/react-query";
 import { useEffect } from "react";
-import { api } from "@/lib/api";
-import type { CastingInput, Melt, MeltInput, Casting } from "@/lib/notebook-schemas";
+import { request } from "@/lib/api";
+import type { CastingInput, MeltInput } from "@/lib/notebook-schemas";
 
 /**
  * Saves made without a connection wait on the device and go once it is back. New melts and castings
@@ -20,12 +20,12 @@ export function setSaveDefaults(queryClient: QueryClient) {
   const refresh = () =>
     Promise.all([["melts"], ["castings"]].map((queryKey) => queryClient.invalidateQueries({ queryKey })));
   queryClient.setMutationDefaults(SAVE_KEYS.melt, {
-    mutationFn: (input: MeltInput) => api<Melt>("/melts", { method: "POST", body: input }),
+    mutationFn: (input: MeltInput) => request("POST /melts", { body: input }),
     onSuccess: refresh,
   });
   queryClient.setMutationDefaults(SAVE_KEYS.casting, {
     mutationFn: ({ meltId, input }: CastingSave) =>
-      api<Casting>(`/castings/melts/${meltId}`, { method: "POST", body: input }),
+      request("POST /castings/melts/:id", { params: { id: meltId }, body: input }),
     onSuccess: refresh,
   });
 }
@@ -58,10 +58,14 @@ export function usePersistedSaves(queryClient: QueryClient, userId: string | und
   }, [queryClient, userId]);
 }
 
+/** What each kind of save sends: the variables of its mutation. */
+type SaveVariables = { melt: MeltInput; casting: CastingSave };
+
 /** The saves of one kind that wait for the connection, as the input each will send. */
-export function useWaitingSaves<T>(kind: keyof typeof SAVE_KEYS): T[] {
+export function useWaitingSaves<K extends keyof typeof SAVE_KEYS>(kind: K): SaveVariables[K][] {
   return useMutationState({
     filters: { mutationKey: SAVE_KEYS[kind], predicate: (m) => m.state.isPaused },
-    select: (m) => m.state.variables as T,
+    // The key decides the mutation function (setSaveDefaults), and with it what its variables are.
+    select: (m) => m.state.variables as SaveVariables[K],
   });
 }

@@ -1,3 +1,4 @@
+import type { Answer, ApiRoute, Body, Params } from "./api-routes";
 import { apiBaseUrl } from "./client-env";
 import { messagesInUnits } from "./field-errors";
 import type { Units } from "./units";
@@ -22,7 +23,33 @@ export class ApiError extends Error {
   }
 }
 
-/** `ifMatch` is the row version the person opened (a row's `version`): the save is refused with 412 if it moved on. */
+type RequestOptions<R extends ApiRoute> = ([keyof Params<R>] extends [never]
+  ? { params?: undefined }
+  : { params: Params<R> }) &
+  ([Body<R>] extends [never] ? { body?: undefined } : { body: Body<R> }) & {
+    query?: Record<string, string | number>;
+    ifMatch?: number;
+  };
+
+/**
+ * A call to a route of lib/api-routes.ts, answered with that route's type: `request("GET /melts/:id",
+ * { params: { id } })` is a MeltDetail, and the body it sends is checked against the route's too.
+ */
+export function request<R extends ApiRoute>(route: R, options: RequestOptions<R>): Promise<Answer<R>> {
+  const [method, pattern] = route.split(" ") as [string, string];
+  const params = (options.params ?? {}) as Record<string, number | string>;
+  const path = pattern.replace(/:(\w+)/g, (_, name: string) => encodeURIComponent(String(params[name])));
+  const query = options.query
+    ? `?${new URLSearchParams(Object.entries(options.query).map(([k, v]) => [k, String(v)]))}`
+    : "";
+  return api<Answer<R>>(`${path}${query}`, { method, body: options.body, ifMatch: options.ifMatch });
+}
+
+/**
+ * Any call by path, its answer typed by the caller. Routes listed in lib/api-routes.ts go through
+ * `request` instead, typed by the table the server answers by.
+ * `ifMatch` is the row version the person opened (a row's `version`): the save is refused with 412 if it moved on.
+ */
 export async function api<T>(
   path: string,
   init: { method?: string; body?: unknown; ifMatch?: number } = {},

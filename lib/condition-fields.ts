@@ -200,38 +200,40 @@ export const CASTING_CONDITIONS: ConditionGroup[] = [
 ];
 
 const s = caseSchema.shape;
-const opt = <T extends z.ZodType>(t: T) => t.nullable().optional();
 
-/** The checks of each condition, taken from the diagnosis contract so the two cannot drift apart. */
-export const meltConditionFields = {
-  crucible: opt(s.crucible.unwrap()),
-  degasToPourMin: opt(s.degasToPourMin.unwrap()),
-  densityIndexPct: opt(s.densityIndexPct.unwrap()),
-  grainRefined: opt(s.grainRefined.unwrap()),
-  modifier: opt(s.modifier.unwrap()),
-  deoxidised: opt(s.deoxidised.unwrap()),
-  meltCarbonPct: opt(s.meltCarbonPct.unwrap()),
-  meltSiliconPct: opt(s.meltSiliconPct.unwrap()),
-  inoculated: opt(s.inoculated.unwrap()),
-  treatmentToPourMin: opt(s.treatmentToPourMin.unwrap()),
-  sandType: opt(s.sandType.unwrap()),
-  sandCompactabilityPct: opt(s.sandCompactabilityPct.unwrap()),
-  greenStrengthKPa: opt(s.greenStrengthKPa.unwrap()),
-  sandFeel: opt(s.sandFeel.unwrap()),
-  mouldTempC: opt(s.mouldTempC.unwrap()),
-  mouldDried: opt(s.mouldDried.unwrap()),
-  coatingPermeability: opt(z.enum(COATING_PERMEABILITIES, { error: "low, medium or high" })),
-  foamType: opt(s.foamType.unwrap()),
-  glueJoints: opt(s.glueJoints.unwrap()),
-  sandVibrated: opt(s.sandVibrated.unwrap()),
+/**
+ * The check of each condition, taken from the diagnosis contract so the two cannot drift apart. Whether
+ * a field may be empty comes from its column (lib/table-schemas.ts): every one of these may.
+ */
+export const meltConditionChecks = {
+  crucible: s.crucible.unwrap(),
+  degasToPourMin: s.degasToPourMin.unwrap(),
+  densityIndexPct: s.densityIndexPct.unwrap(),
+  grainRefined: s.grainRefined.unwrap(),
+  modifier: s.modifier.unwrap(),
+  deoxidised: s.deoxidised.unwrap(),
+  meltCarbonPct: s.meltCarbonPct.unwrap(),
+  meltSiliconPct: s.meltSiliconPct.unwrap(),
+  inoculated: s.inoculated.unwrap(),
+  treatmentToPourMin: s.treatmentToPourMin.unwrap(),
+  sandType: s.sandType.unwrap(),
+  sandCompactabilityPct: s.sandCompactabilityPct.unwrap(),
+  greenStrengthKPa: s.greenStrengthKPa.unwrap(),
+  sandFeel: s.sandFeel.unwrap(),
+  mouldTempC: s.mouldTempC.unwrap(),
+  mouldDried: s.mouldDried.unwrap(),
+  coatingPermeability: z.enum(COATING_PERMEABILITIES, { error: "low, medium or high" }),
+  foamType: s.foamType.unwrap(),
+  glueJoints: s.glueJoints.unwrap(),
+  sandVibrated: s.sandVibrated.unwrap(),
 };
-export const castingConditionFields = {
-  chokeAreaMm2: opt(s.chokeAreaMm2.unwrap()),
-  ingateAreaMm2: opt(s.ingateAreaMm2.unwrap()),
-  gatingRatio: opt(s.gatingRatio.unwrap().max(20)),
-  gating: opt(s.gating.unwrap()),
-  hasFilter: opt(s.hasFilter.unwrap()),
+export const castingConditionChecks = {
+  chokeAreaMm2: s.chokeAreaMm2.unwrap(),
+  ingateAreaMm2: s.ingateAreaMm2.unwrap(),
+  gatingRatio: s.gatingRatio.unwrap().max(20),
+  gating: s.gating.unwrap(),
+  hasFilter: s.hasFilter.unwrap(),
 };
 
-export type MeltConditionKey = keyof typeof meltConditionFields;
-export type CastingConditionKey = keyof typeof castingConditionFields;
+export type MeltConditionKey = keyof typeof meltConditionChecks;
+export type CastingConditionKey = keyof typeof castingConditionChecks;

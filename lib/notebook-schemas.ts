@@ -1,18 +1,23 @@
 import { z } from "zod";
+import { alloys, castings, comments, defectMarks, melts, personUnits } from "../db/notebook-schema";
 import { CHARGES, DEFECT_LOCATIONS, DEFECT_TYPES, DEGASSING_METHODS, PROCESSES } from "../rules/case";
-import type { Charge, DefectLocation, DefectType, DegassingMethod, Process } from "../rules/case";
+import type { DefectType, Process } from "../rules/case";
 import { ALLOY_FAMILIES, type AlloyFamily } from "../rules/fact-catalog";
 import type { DiagnosisResult } from "../rules/rank";
-import { castingConditionFields, meltConditionFields } from "./condition-fields";
+import { castingConditionChecks, meltConditionChecks } from "./condition-fields";
 import { calendarDate, requiredText, rowId, text } from "./fields";
-import { castingWeightConflicts, castingWeightFields, meltWeightFields } from "./weight-fields";
+import { OUTCOMES } from "./outcomes";
+import { tableInput } from "./table-schemas";
+import { castingWeightChecks, castingWeightConflicts, meltWeightChecks } from "./weight-fields";
 
 /**
  * The notebook's input schemas and answer shapes (docs/notebook-api.md), shared by the forms and the
  * API. Values are SI: °C, mm, kg/m³, s, %. Bundled into the web app: keep server-only imports out.
  * Limits in messages are quantities in braces ("above {1700 °C}", rules/quantity-text.ts): the server
  * answers them in SI and as templates, and a form says them in the person's units (lib/field-errors.ts).
- * Optional fields accept null so a form can clear them on PATCH.
+ * The melt, casting and mark fields are the tables' columns (lib/table-schemas.ts): which fields exist
+ * and which may be empty come from db/notebook-schema.ts (a nullable column accepts null, so a form can
+ * clear it on PATCH); each field's check is written here.
  */
 const list = (values: readonly string[]) => values.join(", ");
 const opt = <T extends z.ZodType>(s: T) => s.nullable().optional();
@@ -23,43 +28,50 @@ const always = { when: (p: { value: unknown }) => typeof p.value === "object" &&
 const tempC = z.number().gt(0, "must be above {0 °C}").max(1700, "above {1700 °C}");
 const sectionMm = z.number().positive("must be above {0 mm}").max(5000, "above {5000 mm}");
 
-export const alloyInput = z
-  .object({
+/** A shop's own alloy; the server derives designationKey from the designation. */
+export const alloyInput = tableInput(
+  alloys,
+  {
     designation: requiredText("give the alloy a name", 40),
     family: z.enum(ALLOY_FAMILIES, { error: `family must be one of: ${list(ALLOY_FAMILIES)}` }),
     solidusC: tempC,
     liquidusC: tempC,
     densityKgM3: z.number().min(1000, "below {1000 kg/m³}").max(20000, "above {20000 kg/m³}"),
     shrinkAllowancePct: z.number().min(0, "cannot be negative").max(5, "above 5 %"),
-    siliconPct: opt(z.number().min(0, "cannot be negative").max(30, "above 30 %")),
+    siliconPct: z.number().min(0, "cannot be negative").max(30, "above 30 %"),
     sources: requiredText("say where the figures come from (or 'shop measurement')", 1000),
-  })
-  .refine((a) => a.solidusC <= a.liquidusC, { path: ["solidusC"], message: "solidus is above the liquidus" });
+  },
+  ["designationKey"],
+).refine((a) => a.solidusC <= a.liquidusC, { path: ["solidusC"], message: "solidus is above the liquidus" });
 export type AlloyInput = z.infer<typeof alloyInput>;
 
-export const meltFields = z.object({
-  pouredOn: calendarDate(),
-  alloy: requiredText("choose an alloy", 40),
-  process: z.enum(PROCESSES, { error: `process must be one of: ${list(PROCESSES)}` }),
-  charge: opt(z.enum(CHARGES, { error: `charge must be one of: ${list(CHARGES)}` })),
-  furnace: opt(text(120)),
-  meltTempC: opt(tempC),
-  pourTempC: opt(tempC),
-  degassing: opt(z.enum(DEGASSING_METHODS, { error: `degassing must be one of: ${list(DEGASSING_METHODS)}` })),
-  degasMinutes: opt(z.number().min(0, "cannot be negative").max(240, "above 4 hours")),
-  fluxed: opt(z.boolean()),
-  skimmed: opt(z.boolean()),
-  ambientTempC: opt(z.number().min(-40, "below {-40 °C}").max(60, "above {60 °C}")),
-  humidityPct: opt(z.number().min(0, "0 to 100 %").max(100, "0 to 100 %")),
-  sandMoisturePct: opt(z.number().min(0, "0 to 100 %").max(100, "0 to 100 %")),
-  coatingApplied: opt(z.boolean()),
-  coatingDried: opt(z.boolean()),
-  coatingCoats: opt(z.number().int("whole coats").min(0, "cannot be negative").max(20)),
-  foamDensityKgM3: opt(z.number().positive("must be above {0 kg/m³}").max(200, "above {200 kg/m³}")),
-  ...meltConditionFields,
-  ...meltWeightFields,
-  notes: opt(text(4000)),
-});
+/** The person names the alloy; the server finds its row (alloyId) in the shop's alloy table. */
+export const meltFields = tableInput(
+  melts,
+  {
+    pouredOn: calendarDate(),
+    process: z.enum(PROCESSES, { error: `process must be one of: ${list(PROCESSES)}` }),
+    charge: z.enum(CHARGES, { error: `charge must be one of: ${list(CHARGES)}` }),
+    furnace: text(120),
+    meltTempC: tempC,
+    pourTempC: tempC,
+    degassing: z.enum(DEGASSING_METHODS, { error: `degassing must be one of: ${list(DEGASSING_METHODS)}` }),
+    degasMinutes: z.number().min(0, "cannot be negative").max(240, "above 4 hours"),
+    fluxed: z.boolean(),
+    skimmed: z.boolean(),
+    ambientTempC: z.number().min(-40, "below {-40 °C}").max(60, "above {60 °C}"),
+    humidityPct: z.number().min(0, "0 to 100 %").max(100, "0 to 100 %"),
+    sandMoisturePct: z.number().min(0, "0 to 100 %").max(100, "0 to 100 %"),
+    coatingApplied: z.boolean(),
+    coatingDried: z.boolean(),
+    coatingCoats: z.number().int("whole coats").min(0, "cannot be negative").max(20),
+    foamDensityKgM3: z.number().positive("must be above {0 kg/m³}").max(200, "above {200 kg/m³}"),
+    ...meltConditionChecks,
+    ...meltWeightChecks,
+    notes: text(4000),
+  },
+  ["alloyId"],
+).extend({ alloy: requiredText("choose an alloy", 40) });
 
 type MeltLike = Partial<z.infer<typeof meltFields>>;
 /** Combinations that cannot have happened, whichever field was typed last. */
@@ -110,7 +122,7 @@ export const MELT_OBSERVATIONS = [
   "chargeWeightKg",
   "notes",
   // Every pour condition beyond the everyday ones is something observed too (lib/condition-fields.ts).
-  ...(Object.keys(meltConditionFields) as (keyof typeof meltConditionFields)[]),
+  ...(Object.keys(meltConditionChecks) as (keyof typeof meltConditionChecks)[]),
 ] as const satisfies readonly (keyof MeltLike)[];
 export const EMPTY_MELT_MESSAGE =
   "Nothing about this melt was recorded: add a temperature, the charge, the degassing, the mould or a note before saving.";
@@ -132,16 +144,21 @@ export const meltInput = meltFields.extend({ idempotencyKey }).superRefine((m, c
 export const meltPatch = meltFields.partial();
 export type MeltInput = z.infer<typeof meltInput>;
 
-export const markFields = z.object({
-  type: z.enum(DEFECT_TYPES, { error: `type must be one of: ${list(DEFECT_TYPES)}` }),
-  location: z.enum(DEFECT_LOCATIONS, { error: `location must be one of: ${list(DEFECT_LOCATIONS)}` }),
-  severity: z.number().int("1, 2 or 3").min(1, "1, 2 or 3").max(3, "1, 2 or 3"),
-  photoId: opt(rowId("must be the id of a photo of this casting")),
-  /** Fractions of the photo's width and height, 0 at the top left. */
-  x: opt(z.number().min(0, "0 to 1 of the photo's width").max(1, "0 to 1 of the photo's width")),
-  y: opt(z.number().min(0, "0 to 1 of the photo's height").max(1, "0 to 1 of the photo's height")),
-  note: opt(text(500)),
-});
+/** A mark belongs to the casting in the URL; photoId, x and y pin it on one of the casting's photos. */
+export const markFields = tableInput(
+  defectMarks,
+  {
+    type: z.enum(DEFECT_TYPES, { error: `type must be one of: ${list(DEFECT_TYPES)}` }),
+    location: z.enum(DEFECT_LOCATIONS, { error: `location must be one of: ${list(DEFECT_LOCATIONS)}` }),
+    severity: z.number().int("1, 2 or 3").min(1, "1, 2 or 3").max(3, "1, 2 or 3"),
+    photoId: rowId("must be the id of a photo of this casting"),
+    /** Fractions of the photo's width and height, 0 at the top left. */
+    x: z.number().min(0, "0 to 1 of the photo's width").max(1, "0 to 1 of the photo's width"),
+    y: z.number().min(0, "0 to 1 of the photo's height").max(1, "0 to 1 of the photo's height"),
+    note: text(500),
+  },
+  ["castingId"],
+);
 export function markConflicts(m: Partial<z.infer<typeof markFields>>): Record<string, string> {
   const out: Record<string, string> = {};
   if (m.photoId != null) {
@@ -161,22 +178,27 @@ export type MarkDescription = Pick<z.infer<typeof markFields>, "type" | "locatio
 };
 export type MarkInput = z.infer<typeof markInput>;
 
-export const castingFields = z.object({
-  partName: requiredText("name the part", 120),
-  pattern: opt(text(120)),
-  minSectionMm: opt(sectionMm),
-  maxSectionMm: opt(sectionMm),
-  sprueHeightMm: opt(sectionMm),
-  pourTimeS: opt(z.number().positive("must be above 0 s").max(3600, "above an hour")),
-  hasRiser: opt(z.boolean()),
-  hasOverflow: opt(z.boolean()),
-  hasVents: opt(z.boolean()),
-  ...castingConditionFields,
-  ...castingWeightFields,
-  orientation: opt(text(120)),
-  outcome: opt(z.enum(["good", "rework", "scrap"], { error: "outcome is good, rework or scrap" })),
-  notes: opt(text(4000)),
-});
+/** A casting belongs to the melt in the URL (meltId). */
+export const castingFields = tableInput(
+  castings,
+  {
+    partName: requiredText("name the part", 120),
+    pattern: text(120),
+    minSectionMm: sectionMm,
+    maxSectionMm: sectionMm,
+    sprueHeightMm: sectionMm,
+    pourTimeS: z.number().positive("must be above 0 s").max(3600, "above an hour"),
+    hasRiser: z.boolean(),
+    hasOverflow: z.boolean(),
+    hasVents: z.boolean(),
+    ...castingConditionChecks,
+    ...castingWeightChecks,
+    orientation: text(120),
+    outcome: z.enum(OUTCOMES, { error: "outcome is good, rework or scrap" }),
+    notes: text(4000),
+  },
+  ["meltId"],
+);
 export function castingConflicts(c: Partial<z.infer<typeof castingFields>>): Record<string, string> {
   const out = castingWeightConflicts(c);
   if (isNum(c.minSectionMm) && isNum(c.maxSectionMm) && c.minSectionMm > c.maxSectionMm)
@@ -197,15 +219,18 @@ export const castingPatch = castingFields.partial();
 export type CastingInput = z.infer<typeof castingInput>;
 export type Outcome = NonNullable<CastingInput["outcome"]>;
 
-export const commentInput = z.object({
-  body: requiredText("write something", 4000),
-});
+export const commentInput = tableInput(comments, { body: requiredText("write something", 4000) }, ["castingId"]);
 
-export const unitsInput = z.object({
-  temperature: z.enum(["C", "F"], { error: "C or F" }),
-  length: z.enum(["mm", "in"], { error: "mm or in" }),
-  mass: z.enum(["kg", "lb"], { error: "kg or lb" }),
-});
+/** A person's display units (the database keeps SI whatever they choose). */
+export const unitsInput = tableInput(
+  personUnits,
+  {
+    temperature: z.enum(["C", "F"], { error: "C or F" }),
+    length: z.enum(["mm", "in"], { error: "mm or in" }),
+    mass: z.enum(["kg", "lb"], { error: "kg or lb" }),
+  },
+  ["userId"],
+);
 export type Units = z.infer<typeof unitsInput>;
 export const DEFAULT_UNITS: Units = { temperature: "C", length: "mm", mass: "kg" };
 
@@ -223,7 +248,6 @@ export type PersonRef = { id: string; name: string };
 type Row = { id: number; createdBy: PersonRef; createdAt: string };
 /** Set while a melt or casting is archived: hidden from lists, its page says so, an owner can restore it. */
 export type Archived = { archivedAt: string | null; archivedBy: PersonRef | null };
-type Nullable<T> = { [K in keyof T]-?: Exclude<T[K], undefined> | null };
 export type Page<T> = { items: T[]; total: number; page: number; pageSize: number };
 
 export type Alloy = {
@@ -241,17 +265,29 @@ export type Alloy = {
   createdBy: PersonRef | null;
   createdAt: string;
 };
+/**
+ * A melt, casting or mark answers with its table's columns (db/notebook-schema.ts), so a column added
+ * there is in the answer's type on the server and in the app; these are shaped apart: the shop is
+ * never sent, authors are sent as a PersonRef, times as ISO strings, the retry key stays on the server.
+ * `version` is raised by one on every edit and is the ETag (server/http/row-version.ts).
+ */
+export const SHAPED_COLUMNS = [
+  "shopId",
+  "createdBy",
+  "createdAt",
+  "updatedAt",
+  "archivedAt",
+  "archivedBy",
+  "idempotencyKey",
+] as const;
+type Columns<T> = Omit<T, (typeof SHAPED_COLUMNS)[number]>;
+
 export type Melt = Row &
   Archived &
-  Nullable<Omit<MeltInput, "pouredOn" | "alloy" | "process" | "idempotencyKey">> & {
-    pouredOn: string;
+  Omit<Columns<typeof melts.$inferSelect>, "alloyId"> & {
+    /** The alloy's designation (the row holds its id). */
     alloy: string;
-    process: Process;
-    charge: Charge | null;
-    degassing: DegassingMethod | null;
     updatedAt: string;
-    /** Raised by one on every edit; the ETag (server/http/row-version.ts). */
-    version: number;
   };
 export type MeltSummary = Row & {
   pouredOn: string;
@@ -262,15 +298,7 @@ export type MeltSummary = Row & {
   castingCount: number;
   scrapCount: number;
 };
-export type Casting = Row &
-  Archived &
-  Nullable<Omit<CastingInput, "partName" | "marks" | "idempotencyKey">> & {
-    meltId: number;
-    partName: string;
-    outcome: Outcome | null;
-    updatedAt: string;
-    version: number;
-  };
+export type Casting = Row & Archived & Columns<typeof castings.$inferSelect> & { updatedAt: string };
 export type CastingSummary = Row & {
   meltId: number;
   partName: string;
@@ -290,17 +318,7 @@ export type CastingSummary = Row & {
   newAnswer: boolean;
 };
 export type Photo = Row & { castingId: number; width: number; height: number; imageUrl: string; thumbUrl: string };
-export type Mark = Row & {
-  castingId: number;
-  photoId: number | null;
-  x: number | null;
-  y: number | null;
-  type: DefectType;
-  location: DefectLocation;
-  severity: number;
-  note: string | null;
-  version: number;
-};
+export type Mark = Row & Columns<typeof defectMarks.$inferSelect>;
 export type Comment = Row & { castingId: number; body: string };
 export type DiagnosisSnapshot = {
   id: number;

@@ -1,8 +1,11 @@
 import { z } from "zod";
+import { fixesTried } from "../db/mentor-schema";
+import { WORKED, type Worked } from "./outcomes";
 import type { DefectType, Process } from "../rules/case";
 import type { CauseRecord } from "../rules/calibration";
 import type { RankedCause } from "../rules/rank";
 import { requiredText, rowId, text } from "./fields";
+import { tableInput } from "./table-schemas";
 import type { Outcome, PersonRef } from "./notebook-schemas";
 import type { CauseOption } from "./rulebook-schemas";
 
@@ -43,16 +46,20 @@ export const confirmationInput = z
   });
 export type ConfirmationInput = z.infer<typeof confirmationInput>;
 
-export const WORKED = ["yes", "partly", "no"] as const;
-export type Worked = (typeof WORKED)[number];
+export { WORKED, type Worked };
 export const WORKED_LABELS: Record<Worked, string> = { yes: "it worked", partly: "partly", no: "it did not work" };
 
-const fixFields = z.object({
-  // Room for several of the rulebook's fixes chosen together (the longest is about 200 characters).
-  fix: requiredText("say what was changed", 2000),
-  nextCastingId: rowId("must be the id of a casting").nullable().optional(),
-  worked: z.enum(WORKED, { error: "yes, partly or no" }).nullable().optional(),
-});
+/** A fix is tried after the casting in the URL; nextCastingId links the casting that shows whether it worked. */
+const fixFields = tableInput(
+  fixesTried,
+  {
+    // Room for several of the rulebook's fixes chosen together (the longest is about 200 characters).
+    fix: requiredText("say what was changed", 2000),
+    nextCastingId: rowId("must be the id of a casting"),
+    worked: z.enum(WORKED, { error: "yes, partly or no" }),
+  },
+  ["castingId"],
+);
 /** Whether a fix worked is read off the next casting, so it needs one linked. */
 const workedNeedsNext = (f: { nextCastingId?: number | null; worked?: Worked | null }, ctx: z.RefinementCtx) => {
   if (f.worked && !f.nextCastingId)

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { OUTCOMES } from "./outcomes";
 import { DEFECT_TYPES, PROCESSES, type DefectLocation, type DefectType, type Process } from "../rules/case";
 import { DEFECTS } from "./defects";
 import { calendarDate, text } from "./fields";
@@ -17,7 +18,7 @@ export const SEARCH_WORD_MAX = 32;
 export const SEARCH_PAGE_MAX = 50;
 export const SEARCH_SORTS = ["relevance", "date-desc", "date-asc"] as const;
 export type SearchSort = (typeof SEARCH_SORTS)[number];
-export const OUTCOMES = ["good", "rework", "scrap"] as const;
+export { OUTCOMES };
 
 /** Search words: letters and digits, designations kept whole ("a356.0"); "mis-run" is "mis" + "run". */
 export const SEARCH_TOKEN = /[\p{L}\p{N}]+(?:\.[\p{L}\p{N}]+)*/gu;

@@ -7,12 +7,12 @@ import { z } from "zod";
  * a low yield is heavy gating, not a defect. Kept apart from the rest of the schemas so the two blocks
  * below are all the notebook schemas take from here. Kilograms, as every mass the API keeps.
  */
-const opt = <T extends z.ZodType>(s: T) => s.nullable().optional();
 /** 10 t is far beyond a small shop's crucible or a school lab's largest mould; a typo of ten times shows. */
 const massKg = z.number().positive("must be above {0 kg}").max(10_000, "above {10000 kg}");
 
-export const meltWeightFields = { chargeWeightKg: opt(massKg) };
-export const castingWeightFields = { castingWeightKg: opt(massKg), pouredWeightKg: opt(massKg) };
+/** Checks only: the columns are nullable, so lib/table-schemas.ts lets each be absent or null. */
+export const meltWeightChecks = { chargeWeightKg: massKg };
+export const castingWeightChecks = { castingWeightKg: massKg, pouredWeightKg: massKg };
 
 export const CASTING_HEAVIER_THAN_POUR =
   "the casting weighs more than the metal poured into its mould: the poured weight is the casting with its sprue, runners and risers, so it is the larger of the two";

@@ -5,7 +5,7 @@ import { fileURLToPath } from "node:url";
 import { compressWebExport } from "./web-compress";
 import { addOpeningShell } from "./web-shell";
 
-/** Source of the web app: a newer file here than dist/index.html means the export is stale. */
+/** Source of the web app (db/ too: the input schemas are built from its tables): a newer file here than dist/index.html means the export is stale. */
 const SOURCES = [
   "index.ts",
   "app",
@@ -15,6 +15,7 @@ const SOURCES = [
   "constants",
   "assets",
   "rules",
+  "db",
   "app.json",
   "package.json",
 ];

@@ -6,6 +6,7 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { TextField } from "@/components/ui/text-field";
 import { colors, fontSize } from "@/constants/theme";
+import { useStartFirstScreens } from "@/hooks/use-first-screens";
 import { useFormErrors } from "@/hooks/use-form-errors";
 import { authClient } from "@/lib/auth-client";
 import { SIGN_IN_FAILED, signInForm } from "@/lib/auth-forms";
@@ -16,6 +17,7 @@ export default function SignIn() {
   const [failure, setFailure] = useState<string>();
   const [busy, setBusy] = useState(false);
   const { errors, check } = useFormErrors(signInForm);
+  const startFirstScreens = useStartFirstScreens();
 
   async function submit() {
     setFailure(undefined);
@@ -23,6 +25,7 @@ export default function SignIn() {
     if (!values) return;
     setBusy(true);
     const { error } = await authClient.signIn.email(values);
+    if (!error) startFirstScreens();
     setBusy(false);
     if (error) setFailure(error.status === 429 ? "Too many attempts; wait a minute and try again." : SIGN_IN_FAILED);
   }

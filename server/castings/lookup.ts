@@ -1,7 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import { db } from "../db";
 import { castings } from "../../db/schema";
-import type { Casting } from "../../lib/notebook-schemas";
+import { SHAPED_COLUMNS, type Casting } from "../../lib/notebook-schemas";
 import { notFound } from "../http/errors";
 import { iso, omit, personRef } from "../notebook/shared";
 
@@ -21,7 +21,7 @@ export async function castingInShop(shopId: string, id: number, tx: Tx | typeof 
 /** `archiverName` is the name of whoever archived it, when it is archived. */
 export function toCasting(c: CastingRow, byName: string, archiverName = ""): Casting {
   return {
-    ...omit(c, ["shopId", "createdBy", "createdAt", "updatedAt", "archivedAt", "archivedBy", "idempotencyKey"]),
+    ...omit(c, SHAPED_COLUMNS),
     archivedAt: c.archivedAt ? iso(c.archivedAt) : null,
     archivedBy: c.archivedBy ? personRef(c.archivedBy, archiverName) : null,
     outcome: c.outcome,

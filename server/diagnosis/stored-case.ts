@@ -1,4 +1,4 @@
-import { castingConditionFields, meltConditionFields } from "../../lib/condition-fields";
+import { castingConditionChecks, meltConditionChecks } from "../../lib/condition-fields";
 import type { Mark, Melt } from "../../lib/notebook-schemas";
 import { caseSchema, type DiagnosisCase } from "../../rules/case";
 import type { CastingRow } from "../castings/lookup";
@@ -28,9 +28,9 @@ export function caseFromCasting(casting: CastingRow, melt: Melt, marks: Mark[]):
   // coating's permeability, which the contract keeps with the rest of the coating.
   const meltConditions = pick(
     m,
-    Object.keys(meltConditionFields).filter((k) => k !== "coatingPermeability"),
+    Object.keys(meltConditionChecks).filter((k) => k !== "coatingPermeability"),
   );
-  const castingConditions = pick(c, Object.keys(castingConditionFields));
+  const castingConditions = pick(c, Object.keys(castingConditionChecks));
   const raw = {
     defects: marks.map((mk) => ({ type: mk.type, location: mk.location, severity: mk.severity })),
     alloy: melt.alloy,

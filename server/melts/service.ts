@@ -5,6 +5,7 @@ import {
   alloyConflicts,
   meltFields,
   meltInput,
+  SHAPED_COLUMNS,
   type Melt,
   type MeltInput,
   type MeltSummary,
@@ -34,16 +35,7 @@ const meltQuery = () =>
 type MeltRead = { m: MeltRow; alloy: string; byName: string; archiverName?: string | null };
 export function toMelt({ m, alloy, byName, archiverName }: MeltRead): Melt {
   return {
-    ...omit(m, [
-      "shopId",
-      "alloyId",
-      "createdBy",
-      "createdAt",
-      "updatedAt",
-      "archivedAt",
-      "archivedBy",
-      "idempotencyKey",
-    ]),
+    ...omit(m, [...SHAPED_COLUMNS, "alloyId"]),
     archivedAt: m.archivedAt ? iso(m.archivedAt) : null,
     archivedBy: m.archivedBy ? personRef(m.archivedBy, archiverName ?? "") : null,
     alloy,

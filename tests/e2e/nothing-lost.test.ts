@@ -117,29 +117,33 @@ describe("nothing lost at the bench", () => {
       await page.context().close();
     });
 
-  it("saves a casting offline on its melt's page and sends it once when back online", async () => {
-    const page = await signedIn(WIDE);
-    await openNewMelt(page);
-    await page.getByLabel("Notes").fill(uniqueNote("Offline casting melt"));
-    await page.getByTestId("save-melt").click();
-    await seen(page, "Castings from this melt");
-    const meltId = Number(page.url().split("/").pop());
-    let posts = 0;
-    page.on("request", (r) => r.method() === "POST" && r.url().includes("/api/castings/melts/") && posts++);
-    await page.context().setOffline(true);
-    await page.getByLabel("Part").fill("Offline bracket");
-    await page.getByTestId("save-casting").click();
-    await seen(page, /Kept Offline bracket on this device: waiting to send/);
-    await expect.poll(() => page.getByTestId("waiting-castings").count()).toBe(1);
-    await longShot(page, "wide-casting-waiting-to-send");
-    await page.context().setOffline(false);
-    await expect.poll(() => page.getByTestId("waiting-castings").count(), { timeout: 20000 }).toBe(0);
-    await expect.poll(() => page.getByRole("link", { name: /Offline bracket/ }).count(), { timeout: 10000 }).toBe(1);
-    const melt = await (await page.request.get(`${baseUrl}/api/melts/${meltId}`)).json();
-    expect(melt.castings.map((c: { partName: string }) => c.partName)).toEqual(["Offline bracket"]);
-    expect(posts).toBe(1);
-    await page.context().close();
-  });
+  for (const [size, name] of [
+    [PHONE, "phone"],
+    [WIDE, "wide"],
+  ] as const)
+    it(`saves a casting offline on its melt's page and sends it once when back online (${name})`, async () => {
+      const page = await signedIn(size);
+      await openNewMelt(page);
+      await page.getByLabel("Notes").fill(uniqueNote("Offline casting melt"));
+      await page.getByTestId("save-melt").click();
+      await seen(page, "Castings from this melt");
+      const meltId = Number(page.url().split("/").pop());
+      let posts = 0;
+      page.on("request", (r) => r.method() === "POST" && r.url().includes("/api/castings/melts/") && posts++);
+      await page.context().setOffline(true);
+      await page.getByLabel("Part").fill("Offline bracket");
+      await page.getByTestId("save-casting").click();
+      await seen(page, /Kept Offline bracket on this device: waiting to send/);
+      await expect.poll(() => page.getByTestId("waiting-castings").count()).toBe(1);
+      await longShot(page, `${name}-casting-waiting-to-send`);
+      await page.context().setOffline(false);
+      await expect.poll(() => page.getByTestId("waiting-castings").count(), { timeout: 20000 }).toBe(0);
+      await expect.poll(() => page.getByRole("link", { name: /Offline bracket/ }).count(), { timeout: 10000 }).toBe(1);
+      const melt = await (await page.request.get(`${baseUrl}/api/melts/${meltId}`)).json();
+      expect(melt.castings.map((c: { partName: string }) => c.partName)).toEqual(["Offline bracket"]);
+      expect(posts).toBe(1);
+      await page.context().close();
+    });
 
   it("keeps a half-typed casting through a reload of its melt's page", async () => {
     const page = await signedIn(PHONE);

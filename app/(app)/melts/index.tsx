@@ -6,7 +6,7 @@ import { ChoiceChips } from "@/components/ui/choice-chips";
 import { Heading } from "@/components/ui/heading";
 import { MeltCard } from "@/components/melts/melt-card";
 import { MeltTable } from "@/components/melts/melt-table";
-import { WaitingMelts } from "@/components/melts/waiting-melts";
+import { WaitingMelts } from "@/components/notebook/waiting-to-send";
 import { Notice } from "@/components/ui/notice";
 import { Pager } from "@/components/ui/pager";
 import { Loading } from "@/components/ui/query-state";
