@@ -1,0 +1,2 @@
+CREATE INDEX "search_documents_shop_cause_idx" ON "search_documents" USING btree ("shop_id","cause_id","poured_on" DESC NULLS LAST,"casting_id" DESC NULLS LAST);--> statement-breakpoint
+CREATE INDEX "search_documents_shop_alloy_idx" ON "search_documents" USING btree ("shop_id","alloy_key","poured_on" DESC NULLS LAST,"casting_id" DESC NULLS LAST);
