@@ -39,27 +39,51 @@ export async function confirmedFirings(cases: StoredCase[], rs: RuleSet): Promis
   return out;
 }
 
-export function ruleRecords(firings: Firing[], rules: KbRule[]): Map<string, RuleRecord> {
+/**
+ * Confirmed cases grouped by (confirmed cause, rules that fired): the records below need no more than
+ * these counts, so a shop's calibration can be kept as tallies, one per group, and updated case by
+ * case (server/rulebook/calibration.ts) instead of running every confirmed case again.
+ */
+export type Tally = { causeId: string; fired: readonly string[]; cases: number };
+
+export function tallyFirings(firings: Firing[]): Tally[] {
+  const out = new Map<string, Tally>();
+  for (const f of firings) {
+    const fired = [...f.fired].sort();
+    const key = JSON.stringify([f.causeId, fired]);
+    const t = out.get(key);
+    if (t) t.cases++;
+    else out.set(key, { causeId: f.causeId, fired, cases: 1 });
+  }
+  return [...out.values()];
+}
+
+export function ruleRecordsOf(tallies: Tally[], rules: KbRule[]): Map<string, RuleRecord> {
   const out = new Map<string, RuleRecord>();
   for (const rule of rules) {
-    const on = firings.filter((f) => f.fired.has(rule.id));
-    if (on.length) out.set(rule.id, { fired: on.length, agreed: on.filter((f) => agrees(rule, f.causeId)).length });
+    const on = tallies.filter((t) => t.fired.includes(rule.id));
+    const fired = on.reduce((n, t) => n + t.cases, 0);
+    if (fired) out.set(rule.id, { fired, agreed: on.reduce((n, t) => n + (agrees(rule, t.causeId) ? t.cases : 0), 0) });
   }
   return out;
 }
 
 /** Per cause, from the rules in use that speak for it. */
-export function causeRecords(firings: Firing[], rules: KbRule[]): Map<string, CauseRecord> {
+export function causeRecordsOf(tallies: Tally[], rules: KbRule[]): Map<string, CauseRecord> {
   const out = new Map<string, CauseRecord>();
-  for (const f of firings) {
-    const suggested = new Set(rules.filter((r) => r.effect !== "weakens" && f.fired.has(r.id)).map((r) => r.cause));
+  for (const t of tallies) {
+    const fired = new Set(t.fired);
+    const suggested = new Set(rules.filter((r) => r.effect !== "weakens" && fired.has(r.id)).map((r) => r.cause));
     for (const cause of suggested) {
       const r = out.get(cause) ?? { confirmed: 0, right: 0 };
-      out.set(cause, { confirmed: r.confirmed + 1, right: r.right + (f.causeId === cause ? 1 : 0) });
+      out.set(cause, { confirmed: r.confirmed + t.cases, right: r.right + (t.causeId === cause ? t.cases : 0) });
     }
   }
   return out;
 }
+
+export const ruleRecords = (firings: Firing[], rules: KbRule[]) => ruleRecordsOf(tallyFirings(firings), rules);
+export const causeRecords = (firings: Firing[], rules: KbRule[]) => causeRecordsOf(tallyFirings(firings), rules);
 
 export const weightFactors = (records: Map<string, RuleRecord>) => (ruleId: string) =>
   weightFactorOf(records.get(ruleId));
