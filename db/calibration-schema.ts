@@ -14,9 +14,11 @@ import { castings } from "./notebook-schema";
  * alloy) and add the row for a newly confirmed casting; a row whose `computed` differs from `changes`,
  * or whose rule set is not the shop's current one, is worked out again for that casting alone.
  *
- * `calibration_tallies`: how many of those rows hold each (rule set, cause, fired rules), kept by a
- * trigger on `calibration_cases` in the same transaction, so reading the shop's calibration reads a
- * few dozen tallies, however many cases it has.
+ * `calibration_tallies`: per rule set, how many of those rows there are (`kind` "case"), how many a
+ * rule fired on ("fired") and agreed with ("agreed"), how many a cause was suggested in ("suggested")
+ * and was right in ("right") (rules/calibration.ts); kept by a trigger on `calibration_cases` in
+ * the same transaction, so reading the shop's calibration reads at most (rules + causes) x causes
+ * tallies, however many cases it has.
  */
 export const calibrationCases = pgTable(
   "calibration_cases",
@@ -28,8 +30,13 @@ export const calibrationCases = pgTable(
       .notNull()
       .references(() => organization.id, { onDelete: "cascade" }),
     causeId: text("cause_id"),
-    /** Rule ids in sorted order, so equal sets are equal arrays and tally together. */
+    /**
+     * The rules that fired (every rule, switched off or not), those of them that agreed with the
+     * confirmed cause, and the causes the rules in use suggested: what the case adds to the tallies.
+     */
     fired: text("fired").array(),
+    agreed: text("agreed").array(),
+    suggested: text("suggested").array(),
     ruleSetVersion: text("rule_set_version").notNull().default(""),
     changes: integer("changes").notNull().default(0),
     computed: integer("computed").notNull().default(-1),
@@ -44,9 +51,10 @@ export const calibrationTallies = pgTable(
       .notNull()
       .references(() => organization.id, { onDelete: "cascade" }),
     ruleSetVersion: text("rule_set_version").notNull(),
-    causeId: text("cause_id").notNull(),
-    fired: text("fired").array().notNull(),
+    kind: text("kind", { enum: ["case", "fired", "agreed", "suggested", "right"] }).notNull(),
+    /** A rule's id (fired, agreed), a cause's (suggested, right), "" for a case. */
+    item: text("item").notNull(),
     cases: integer("cases").notNull(),
   },
-  (t) => [primaryKey({ name: "calibration_tallies_pk", columns: [t.shopId, t.ruleSetVersion, t.causeId, t.fired] })],
+  (t) => [primaryKey({ name: "calibration_tallies_pk", columns: [t.shopId, t.ruleSetVersion, t.kind, t.item] })],
 );

@@ -3,6 +3,8 @@ CREATE TABLE "calibration_cases" (
 	"shop_id" text NOT NULL,
 	"cause_id" text,
 	"fired" text[],
+	"agreed" text[],
+	"suggested" text[],
 	"rule_set_version" text DEFAULT '' NOT NULL,
 	"changes" integer DEFAULT 0 NOT NULL,
 	"computed" integer DEFAULT -1 NOT NULL
@@ -11,10 +13,10 @@ CREATE TABLE "calibration_cases" (
 CREATE TABLE "calibration_tallies" (
 	"shop_id" text NOT NULL,
 	"rule_set_version" text NOT NULL,
-	"cause_id" text NOT NULL,
-	"fired" text[] NOT NULL,
+	"kind" text NOT NULL,
+	"item" text NOT NULL,
 	"cases" integer NOT NULL,
-	CONSTRAINT "calibration_tallies_pk" PRIMARY KEY("shop_id","rule_set_version","cause_id","fired")
+	CONSTRAINT "calibration_tallies_pk" PRIMARY KEY("shop_id","rule_set_version","kind","item")
 );
 --> statement-breakpoint
 ALTER TABLE "calibration_cases" ADD CONSTRAINT "calibration_cases_casting_id_castings_id_fk" FOREIGN KEY ("casting_id") REFERENCES "public"."castings"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint

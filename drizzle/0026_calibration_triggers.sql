@@ -2,22 +2,27 @@
 -- (db/calibration-schema.ts, server/rulebook/calibration.ts).
 --
 -- The tallies follow calibration_cases row by row, in the transaction that changes the row: a row
--- counts once its cause is a rulebook cause and its fired rules are known.
+-- counts once its cause is a rulebook cause and its fired rules are known (rules/calibration.ts
+-- caseCounts says what it adds).
+CREATE FUNCTION calibration_tally_add(r calibration_cases, delta integer) RETURNS void LANGUAGE sql AS $$
+  INSERT INTO calibration_tallies AS t (shop_id, rule_set_version, kind, item, cases)
+    SELECT r.shop_id, r.rule_set_version, x.kind, x.item, delta
+    FROM (SELECT 'case' AS kind, '' AS item
+          UNION ALL SELECT 'fired', unnest(r.fired)
+          UNION ALL SELECT 'agreed', unnest(coalesce(r.agreed, '{}'))
+          UNION ALL SELECT 'suggested', unnest(coalesce(r.suggested, '{}'))
+          UNION ALL SELECT 'right', r.cause_id WHERE r.cause_id = ANY(r.suggested)) x
+    WHERE r.cause_id IS NOT NULL AND r.fired IS NOT NULL
+    ORDER BY 3, 4
+  ON CONFLICT (shop_id, rule_set_version, kind, item) DO UPDATE SET cases = t.cases + EXCLUDED.cases;
+  DELETE FROM calibration_tallies
+    WHERE delta < 0 AND shop_id = r.shop_id AND rule_set_version = r.rule_set_version AND cases <= 0;
+$$;
+--> statement-breakpoint
 CREATE FUNCTION calibration_tally() RETURNS trigger LANGUAGE plpgsql AS $$
 BEGIN
-  IF TG_OP IN ('UPDATE', 'DELETE') AND OLD.cause_id IS NOT NULL AND OLD.fired IS NOT NULL THEN
-    UPDATE calibration_tallies SET cases = cases - 1
-      WHERE shop_id = OLD.shop_id AND rule_set_version = OLD.rule_set_version AND cause_id = OLD.cause_id
-        AND fired = OLD.fired;
-    DELETE FROM calibration_tallies
-      WHERE shop_id = OLD.shop_id AND rule_set_version = OLD.rule_set_version AND cause_id = OLD.cause_id
-        AND fired = OLD.fired AND cases <= 0;
-  END IF;
-  IF TG_OP IN ('INSERT', 'UPDATE') AND NEW.cause_id IS NOT NULL AND NEW.fired IS NOT NULL THEN
-    INSERT INTO calibration_tallies (shop_id, rule_set_version, cause_id, fired, cases)
-      VALUES (NEW.shop_id, NEW.rule_set_version, NEW.cause_id, NEW.fired, 1)
-    ON CONFLICT (shop_id, rule_set_version, cause_id, fired) DO UPDATE SET cases = calibration_tallies.cases + 1;
-  END IF;
+  IF TG_OP IN ('UPDATE', 'DELETE') THEN PERFORM calibration_tally_add(OLD, -1); END IF;
+  IF TG_OP IN ('INSERT', 'UPDATE') THEN PERFORM calibration_tally_add(NEW, 1); END IF;
   RETURN NULL;
 END $$;
 --> statement-breakpoint

@@ -4,6 +4,7 @@ import { db } from "../db";
 import { ruleSwitches, shopCauses, shopRevisions, shopRuleVersions } from "../../db/schema";
 import {
   causeRecordsOf,
+  confirmedCasesOf,
   ruleRecordsOf,
   weightFactors,
   type CauseRecord,
@@ -117,14 +118,14 @@ export async function shopRevision(shopId: string): Promise<number> {
  */
 async function computeLearning(shopId: string): Promise<ShopLearning> {
   const rules = await shopRules(shopId);
-  await refreshCalibration(shopId, rules.everyRule);
-  const tallies = await calibrationTallies(shopId, rules.everyRule.version);
+  await refreshCalibration(shopId, rules);
+  const tallies = await calibrationTallies(shopId, rules);
   const records = ruleRecordsOf(tallies, rules.everyRule.rules);
   return {
     ...rules,
-    confirmedCases: tallies.reduce((n, t) => n + t.cases, 0),
+    confirmedCases: confirmedCasesOf(tallies),
     ruleRecords: records,
-    causeRecords: causeRecordsOf(tallies, rules.ruleSet.rules),
+    causeRecords: causeRecordsOf(tallies),
     weightFactor: weightFactors(records),
   };
 }
