@@ -38,10 +38,13 @@ export async function refreshCalibration(shopId: string, rules: CalibrationRules
 async function refreshRows(shopId: string, rules: CalibrationRules, rows: Pending[]) {
   const rs = rules.everyRule;
   const ids = rows.map((r) => r.castingId);
-  const [cases, confirmed] = await Promise.all([
-    storedCases(shopId, { castingIds: ids }),
-    latestConfirmations(shopId, ids),
-  ]);
+  const cases = await storedCases(shopId, { castingIds: ids });
+  // A stored case carries its newest confirmation; only castings that are no case need theirs read.
+  const confirmed = new Map<number, { causeId: string | null; causeText?: string | null }>();
+  for (const c of cases) if (c.confirmed) confirmed.set(c.castingId, c.confirmed);
+  const asCases = new Set(cases.map((c) => c.castingId));
+  const others = ids.filter((id) => !asCases.has(id));
+  if (others.length) for (const [id, k] of await latestConfirmations(shopId, others)) confirmed.set(id, k);
   const compiled = compiledRuleSet(rs);
   const fired = new Map<number, Set<string>>();
   for (const c of cases) fired.set(c.castingId, await firedRules(c.case, c.alloy, compiled));
