@@ -28,3 +28,4 @@ export * from "./people-schema";
 export * from "./calculator-schema";
 export * from "./revision-schema";
 export * from "./import-schema";
+export * from "./calibration-schema";

@@ -71,6 +71,10 @@ export const searchDocuments = pgTable(
     index("search_documents_shop_date_idx").on(t.shopId, t.pouredOn.desc(), t.castingId.desc()),
     index("search_documents_document_idx").using("gin", t.document),
     index("search_documents_defects_idx").using("gin", t.defectTypes),
+    // A chip filter that leaves few cases (one cause, one alloy) reads its matches newest first here
+    // instead of walking the whole shop's date index to find them (server/search/service.ts).
+    index("search_documents_shop_cause_idx").on(t.shopId, t.causeId, t.pouredOn.desc(), t.castingId.desc()),
+    index("search_documents_shop_alloy_idx").on(t.shopId, t.alloyKey, t.pouredOn.desc(), t.castingId.desc()),
   ],
 );
 

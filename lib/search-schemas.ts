@@ -121,7 +121,12 @@ export type SearchFacets = {
 };
 export type SearchAnswer = {
   items: CaseHit[];
+  /** The matching cases, counted up to `countLimit`: more than that is `countLimit` with `totalExact` false. */
   total: number;
+  totalExact: boolean;
+  /** False when the chips were counted among the newest `countLimit` matches, not all of them. */
+  facetsExact: boolean;
+  countLimit: number;
   page: number;
   pageSize: number;
   sort: SearchSort;

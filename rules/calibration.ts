@@ -39,27 +39,81 @@ export async function confirmedFirings(cases: StoredCase[], rs: RuleSet): Promis
   return out;
 }
 
-export function ruleRecords(firings: Firing[], rules: KbRule[]): Map<string, RuleRecord> {
+/**
+ * The records below need only counts of confirmed cases: how many there are (`kind` "case", item
+ * ""), how many each rule fired on ("fired") and agreed with ("agreed"), how many each cause was
+ * suggested in by the rules in use ("suggested") and was then the confirmed one ("right"). So a
+ * shop's calibration can be kept as at most 2 x rules + 2 x causes + 1 tallies, updated case by case
+ * (server/rulebook/calibration.ts), instead of running every confirmed case again.
+ */
+export type TallyKind = "case" | "fired" | "agreed" | "suggested" | "right";
+export type Tally = { kind: TallyKind; item: string; cases: number };
+
+/** What one confirmed case adds to the tallies. */
+export type CaseCounts = { fired: string[]; agreed: string[]; suggested: string[]; right: boolean };
+
+export function caseCounts(f: Firing, every: KbRule[], inUse: KbRule[]): CaseCounts {
+  const fired = every.filter((r) => f.fired.has(r.id));
+  const suggested = [
+    ...new Set(inUse.filter((r) => r.effect !== "weakens" && f.fired.has(r.id)).map((r) => r.cause)),
+  ].sort();
+  return {
+    fired: fired.map((r) => r.id).sort(),
+    agreed: fired
+      .filter((r) => agrees(r, f.causeId))
+      .map((r) => r.id)
+      .sort(),
+    suggested,
+    right: suggested.includes(f.causeId),
+  };
+}
+
+export function tallyFirings(firings: Firing[], every: KbRule[], inUse: KbRule[]): Tally[] {
+  const out = new Map<string, Tally>();
+  const add = (kind: TallyKind, item: string) => {
+    const key = `${kind}\u0000${item}`;
+    const t = out.get(key);
+    if (t) t.cases++;
+    else out.set(key, { kind, item, cases: 1 });
+  };
+  for (const f of firings) {
+    const c = caseCounts(f, every, inUse);
+    add("case", "");
+    for (const id of c.fired) add("fired", id);
+    for (const id of c.agreed) add("agreed", id);
+    for (const id of c.suggested) add("suggested", id);
+    if (c.right) add("right", f.causeId);
+  }
+  return [...out.values()];
+}
+
+const countsOf = (tallies: Tally[], kind: TallyKind) =>
+  new Map(tallies.filter((t) => t.kind === kind).map((t) => [t.item, t.cases]));
+
+export function ruleRecordsOf(tallies: Tally[], rules: KbRule[]): Map<string, RuleRecord> {
+  const [fired, agreed] = [countsOf(tallies, "fired"), countsOf(tallies, "agreed")];
   const out = new Map<string, RuleRecord>();
   for (const rule of rules) {
-    const on = firings.filter((f) => f.fired.has(rule.id));
-    if (on.length) out.set(rule.id, { fired: on.length, agreed: on.filter((f) => agrees(rule, f.causeId)).length });
+    const n = fired.get(rule.id) ?? 0;
+    if (n) out.set(rule.id, { fired: n, agreed: agreed.get(rule.id) ?? 0 });
   }
   return out;
 }
 
-/** Per cause, from the rules in use that speak for it. */
-export function causeRecords(firings: Firing[], rules: KbRule[]): Map<string, CauseRecord> {
-  const out = new Map<string, CauseRecord>();
-  for (const f of firings) {
-    const suggested = new Set(rules.filter((r) => r.effect !== "weakens" && f.fired.has(r.id)).map((r) => r.cause));
-    for (const cause of suggested) {
-      const r = out.get(cause) ?? { confirmed: 0, right: 0 };
-      out.set(cause, { confirmed: r.confirmed + 1, right: r.right + (f.causeId === cause ? 1 : 0) });
-    }
-  }
-  return out;
+/** Per cause, from the rules in use that speak for it (the "suggested" tallies were counted with them). */
+export function causeRecordsOf(tallies: Tally[]): Map<string, CauseRecord> {
+  const right = countsOf(tallies, "right");
+  return new Map(
+    [...countsOf(tallies, "suggested")].map(([cause, n]) => [cause, { confirmed: n, right: right.get(cause) ?? 0 }]),
+  );
 }
+
+/** How many comparable confirmed cases the tallies hold. */
+export const confirmedCasesOf = (tallies: Tally[]) => countsOf(tallies, "case").get("") ?? 0;
+
+export const ruleRecords = (firings: Firing[], rules: KbRule[]) =>
+  ruleRecordsOf(tallyFirings(firings, rules, []), rules);
+export const causeRecords = (firings: Firing[], rules: KbRule[]) => causeRecordsOf(tallyFirings(firings, [], rules));
 
 export const weightFactors = (records: Map<string, RuleRecord>) => (ruleId: string) =>
   weightFactorOf(records.get(ruleId));

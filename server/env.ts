@@ -53,6 +53,11 @@ const schema = z.object({
     ),
   /** Limits on sign-in, sign-up, password reset and invitations; "off" only for load tests. */
   RATE_LIMIT: z.enum(["on", "off"], { error: "RATE_LIMIT is on or off" }).default("on"),
+  /**
+   * The casebook counts matches and chips over at most this many of the newest matching cases, so a
+   * search costs the same in a shop of 1,000 cases as in one of 100,000 (server/search/service.ts).
+   */
+  SEARCH_COUNT_LIMIT: z.coerce.number().int().min(10).max(100_000).default(1000),
   /** Only for `npm run dev`: the Expo dev server's origin, allowed to call the API with cookies. */
   DEV_WEB_ORIGIN: z.string().url().optional(),
   /** Only for `npm run dev`: the Expo dev server that server/dev-server.ts passes non-API requests to. */

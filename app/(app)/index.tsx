@@ -28,7 +28,7 @@ import { useIsWide } from "@/hooks/use-layout";
 import { useCaseSearch, useDebounced } from "@/hooks/use-search";
 import { useShopMembers } from "@/hooks/use-shop";
 import type { ApiError } from "@/lib/api";
-import type { SearchRequest, SearchSort } from "@/lib/search-schemas";
+import type { SearchAnswer, SearchRequest, SearchSort } from "@/lib/search-schemas";
 
 const PAGE_SIZE = 20;
 
@@ -78,6 +78,7 @@ export default function CasebookScreen() {
       filters={filters}
       onChange={setFilters}
       facets={answer?.facets}
+      sampled={answer && !answer.facetsExact ? answer.countLimit : undefined}
       people={members.data ?? []}
       narrow={wide}
     />
@@ -105,7 +106,14 @@ export default function CasebookScreen() {
         )
       ) : null}
       {answer && answer.total > PAGE_SIZE ? (
-        <Pager page={page} pageSize={PAGE_SIZE} total={answer.total} onPage={(n) => show({ page: n })} />
+        <Pager
+          page={page}
+          pageSize={PAGE_SIZE}
+          total={answer.total}
+          atLeast={!answer.totalExact}
+          hasNext={answer.next !== null}
+          onPage={(n) => show({ page: n })}
+        />
       ) : null}
     </View>
   );
@@ -133,7 +141,7 @@ export default function CasebookScreen() {
         ) : null}
         {answer ? (
           <Text style={styles.count} testID="casebook-total">
-            {casesText(answer.total)}
+            {casesText(answer)}
           </Text>
         ) : null}
       </View>
@@ -147,7 +155,7 @@ export default function CasebookScreen() {
           {filterPanel}
           {/* On a phone the chips push the results down: one tap closes them and shows what is left. */}
           {filterPanel && answer ? (
-            <Button kind="plain" label={`Show ${casesText(answer.total)}`} onPress={() => setShowFilters(false)} />
+            <Button kind="plain" label={`Show ${casesText(answer)}`} onPress={() => setShowFilters(false)} />
           ) : null}
           {results}
         </>
@@ -156,7 +164,15 @@ export default function CasebookScreen() {
   );
 }
 
-const casesText = (n: number) => (n === 0 ? "no cases" : n === 1 ? "1 case" : `${n.toLocaleString("en")} cases`);
+/** Past the server's count limit the total is a lower bound: "1,000+ cases". */
+const casesText = ({ total: n, totalExact }: Pick<SearchAnswer, "total" | "totalExact">) =>
+  !totalExact
+    ? `${n.toLocaleString("en")}+ cases`
+    : n === 0
+      ? "no cases"
+      : n === 1
+        ? "1 case"
+        : `${n.toLocaleString("en")} cases`;
 
 const styles = StyleSheet.create({
   bar: { flexDirection: "row", alignItems: "center", flexWrap: "wrap", gap: space.md },

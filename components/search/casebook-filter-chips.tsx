@@ -16,10 +16,12 @@ type Props = {
   people: { userId: string; name: string }[];
   /** A side panel is narrow: the two dates go one under the other. */
   narrow?: boolean;
+  /** Set when the counts are among the newest this many matches, not all of them. */
+  sampled?: number;
 };
 
 /** Chips for each filter, busiest values first, each with how many cases it would leave. */
-export function CasebookFilterChips({ filters, onChange, facets, people, narrow }: Props) {
+export function CasebookFilterChips({ filters, onChange, facets, people, narrow, sampled }: Props) {
   const toggle = (key: ListKey, value: string) => {
     const on = filters[key].includes(value);
     onChange({ ...filters, [key]: on ? filters[key].filter((v) => v !== value) : [...filters[key], value] });
@@ -41,6 +43,11 @@ export function CasebookFilterChips({ filters, onChange, facets, people, narrow 
   );
   return (
     <View style={styles.wrap}>
+      {sampled ? (
+        <Text style={styles.note} testID="casebook-counts-sampled">
+          Counts among the newest {sampled.toLocaleString("en")} matching cases
+        </Text>
+      ) : null}
       {group(
         "defect",
         "Defect",
@@ -133,6 +140,7 @@ function ChipGroup({
 
 const styles = StyleSheet.create({
   wrap: { gap: space.md },
+  note: { fontSize: fontSize.detail, color: colors.muted },
   group: { gap: space.xs },
   label: { fontSize: fontSize.small, fontWeight: "700", color: colors.muted },
   row: { flexDirection: "row", flexWrap: "wrap", gap: space.sm },

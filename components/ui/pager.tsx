@@ -2,12 +2,20 @@ import { StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { colors, fontSize, space } from "@/constants/theme";
 
-type Props = { page: number; pageSize: number; total: number; onPage: (page: number) => void };
+type Props = {
+  page: number;
+  pageSize: number;
+  total: number;
+  onPage: (page: number) => void;
+  /** The total is a lower bound ("1,000+"): whether a later page exists comes from `hasNext`. */
+  atLeast?: boolean;
+  hasNext?: boolean;
+};
 
 /** Earlier / later pages of a list, with where you are in it. */
-export function Pager({ page, pageSize, total, onPage }: Props) {
-  const pages = Math.max(1, Math.ceil(total / pageSize));
-  if (pages <= 1) return <Text style={styles.where}>{total} in all</Text>;
+export function Pager({ page, pageSize, total, onPage, atLeast, hasNext }: Props) {
+  const pages = atLeast ? page + (hasNext ? 1 : 0) : Math.max(1, Math.ceil(total / pageSize));
+  if (pages <= 1 && page <= 1) return <Text style={styles.where}>{total} in all</Text>;
   const first = (page - 1) * pageSize + 1;
   const last = Math.min(total, page * pageSize);
   return (
@@ -18,7 +26,7 @@ export function Pager({ page, pageSize, total, onPage }: Props) {
         <View style={styles.gap} />
       )}
       <Text style={styles.where}>
-        {first}–{last} of {total}
+        {first}–{atLeast ? page * pageSize : last} of {atLeast ? `${total.toLocaleString("en")}+` : total}
       </Text>
       {page < pages ? (
         <Button kind="plain" label="Next page" onPress={() => onPage(page + 1)} />

@@ -7,7 +7,7 @@ import { caseFromCasting } from "../diagnosis/stored-case";
 import { marksOf } from "../marks/service";
 import { toMelt } from "../melts/service";
 
-/** A trial or the learning reads at most this many of the newest cases (a small shop's years of pours). */
+/** A rule trial reads at most this many of the newest cases (a small shop's years of pours). */
 export const CASE_LIMIT = 2000;
 
 /** The newest confirmation per casting: what a mentor last said caused it. */
@@ -24,8 +24,12 @@ export async function latestConfirmations(shopId: string, castingIds?: number[])
  * The shop's marked castings as diagnosis cases, built as the diagnosis service builds one
  * (server/diagnosis/stored-case.ts), each with the alloy row its melt points at and the confirmed cause.
  * A casting whose stored values the contract cannot read is left out, as it could not be diagnosed either.
+ * Without `castingIds`, the newest CASE_LIMIT.
  */
-export async function storedCases(shopId: string, opts: { confirmedOnly?: boolean } = {}): Promise<StoredCase[]> {
+export async function storedCases(
+  shopId: string,
+  opts: { confirmedOnly?: boolean; castingIds?: number[] } = {},
+): Promise<StoredCase[]> {
   const marked = exists(
     db
       .select({ one: sql`1` })
@@ -43,9 +47,17 @@ export async function storedCases(shopId: string, opts: { confirmedOnly?: boolea
     .from(castings)
     .innerJoin(melts, eq(melts.id, castings.meltId))
     .innerJoin(alloys, eq(alloys.id, melts.alloyId))
-    .where(and(eq(castings.shopId, shopId), marked, opts.confirmedOnly ? confirmed : undefined))
+    .where(
+      and(
+        eq(castings.shopId, shopId),
+        marked,
+        opts.confirmedOnly ? confirmed : undefined,
+        opts.castingIds ? inArray(castings.id, opts.castingIds) : undefined,
+      ),
+    )
     .orderBy(desc(melts.pouredOn), desc(castings.id))
-    .limit(CASE_LIMIT);
+    // The castings asked for by id all come back (the calibration reads them a batch at a time).
+    .limit(opts.castingIds ? opts.castingIds.length : CASE_LIMIT);
   const ids = rows.map((r) => r.c.id);
   const [marks, confirmedBy] = await Promise.all([marksOf(ids), latestConfirmations(shopId, ids)]);
   const marksBy = new Map<number, typeof marks>();

@@ -3,9 +3,9 @@ import { and, asc, desc, eq } from "drizzle-orm";
 import { db } from "../db";
 import { ruleSwitches, shopCauses, shopRevisions, shopRuleVersions } from "../../db/schema";
 import {
-  causeRecords,
-  confirmedFirings,
-  ruleRecords,
+  causeRecordsOf,
+  confirmedCasesOf,
+  ruleRecordsOf,
   weightFactors,
   type CauseRecord,
   type RuleRecord,
@@ -14,7 +14,7 @@ import { ruleSetFor, type DiagnosisResult } from "../../rules/engine";
 import type { CauseWithRecord } from "../../lib/review-schemas";
 import { checkRule, type KbCause, type KbRule, type RuleSet } from "../../rules/kb-schema";
 import { BUILT_IN_RULE_SET, ruleSetVersion } from "../../rules/knowledge-base";
-import { storedCases } from "./cases";
+import { calibrationTallies, refreshCalibration } from "./calibration";
 
 /**
  * The rules a shop diagnoses with (built-ins + its published rules − the built-ins it switched
@@ -112,15 +112,20 @@ export async function shopRevision(shopId: string): Promise<number> {
   return row?.revision ?? 0;
 }
 
+/**
+ * The rules, and their records from the shop's tallies (server/rulebook/calibration.ts): only the
+ * confirmed cases changed since the last computation are run again, not every confirmed case.
+ */
 async function computeLearning(shopId: string): Promise<ShopLearning> {
   const rules = await shopRules(shopId);
-  const firings = await confirmedFirings(await storedCases(shopId, { confirmedOnly: true }), rules.everyRule);
-  const records = ruleRecords(firings, rules.everyRule.rules);
+  await refreshCalibration(shopId, rules);
+  const tallies = await calibrationTallies(shopId, rules);
+  const records = ruleRecordsOf(tallies, rules.everyRule.rules);
   return {
     ...rules,
-    confirmedCases: firings.length,
+    confirmedCases: confirmedCasesOf(tallies),
     ruleRecords: records,
-    causeRecords: causeRecords(firings, rules.ruleSet.rules),
+    causeRecords: causeRecordsOf(tallies),
     weightFactor: weightFactors(records),
   };
 }

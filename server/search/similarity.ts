@@ -141,8 +141,19 @@ export function keepBest<T extends Pick<SimilarInput, "pouredOn" | "id">>(
 }
 
 /**
+ * Without marks, the candidates are the cases of the same alloy and process when there are at least
+ * `limit` of them, else those of the same process, else every case: an index finds the first two
+ * (similar.ts), so a large shop is not scored whole for a casting that came out good.
+ */
+export const UNMARKED_POOLS: ((t: SimilarInput, c: SimilarInput) => boolean)[] = [
+  (t, c) => c.alloyKey === t.alloyKey && c.process === t.process,
+  (t, c) => c.process === t.process,
+];
+
+/**
  * The `limit` cases most like `target`. When it has marked defects, only cases sharing one of
- * them qualify (the point is the same defect coming back); without marks, conditions alone rank.
+ * them qualify (the point is the same defect coming back); without marks, conditions alone rank
+ * the pool UNMARKED_POOLS picks.
  * The casebook runs the same rule in SQL over the typed columns (similar.ts); this is its reference.
  */
 export function similarCases<T extends SimilarInput>(
@@ -152,8 +163,11 @@ export function similarCases<T extends SimilarInput>(
 ): Similar<T>[] {
   const top: Ranked<T>[] = [];
   const probe: Ranked<T> = { doc: target as T, similarity: 0, alike: 0, teaches: 0 };
-  for (const c of cases) {
-    if (c.id === target.id || (target.defectMask && !(c.defectMask & target.defectMask))) continue;
+  const others = cases.filter((c) => c.id !== target.id);
+  const pool = target.defectMask
+    ? others.filter((c) => c.defectMask & target.defectMask)
+    : (UNMARKED_POOLS.map((same) => others.filter((c) => same(target, c))).find((p) => p.length >= limit) ?? others);
+  for (const c of pool) {
     probe.doc = c;
     probe.similarity = likeness(target, c);
     probe.alike = probe.similarity >= ALIKE_MIN ? 1 : 0;
