@@ -27,3 +27,4 @@ export * from "./people-schema";
 export * from "./calculator-schema";
 export * from "./revision-schema";
 export * from "./import-schema";
+export * from "./list-schema";
