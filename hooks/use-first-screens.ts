@@ -12,6 +12,6 @@ export function usePrefetchFirstScreens() {
   const queryClient = useQueryClient();
   useEffect(() => {
     void queryClient.prefetchQuery(unitsQuery);
-    void queryClient.prefetchQuery(meltsQuery(FIRST_MELTS_PAGE));
+    void queryClient.prefetchInfiniteQuery(meltsQuery(FIRST_MELTS_PAGE));
   }, [queryClient]);
 }

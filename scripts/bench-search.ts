@@ -91,7 +91,7 @@ const rssMb = (pid: number) => {
 
 let server: ChildProcess | undefined;
 async function startServer() {
-  const child = spawn(process.execPath, ["--import", "tsx", join(root, "scripts/bench-search-server.ts")], {
+  const child = spawn(process.execPath, ["--import", "tsx", join(root, "scripts/bench-server.ts")], {
     env: serverEnv,
     stdio: ["ignore", "pipe", "inherit"],
   });
