@@ -11,6 +11,7 @@ import { castings, melts } from "../db/schema";
 import { currentMember, requireShopMember } from "../server/auth/shop-access";
 import { castingSummaries } from "../server/castings/service";
 import { db } from "../server/db";
+import { meltSummaries } from "../server/melts/service";
 
 const pageOf = (q: Record<string, unknown>) => ({ page: Math.max(1, Number(q.page) || 1), pageSize: 20 });
 const safely =
@@ -56,14 +57,14 @@ export function previousLists() {
       const { page, pageSize } = pageOf(req.query);
       const inUse = and(eq(melts.shopId, shopId), isNull(melts.archivedAt));
       const rows = await db
-        .select({ id: melts.id, pouredOn: melts.pouredOn })
+        .select({ id: melts.id })
         .from(melts)
         .where(inUse)
         .orderBy(desc(melts.pouredOn), desc(melts.id))
         .limit(pageSize)
         .offset((page - 1) * pageSize);
       const [{ total }] = await db.select({ total: count() }).from(melts).where(inUse);
-      res.json({ items: rows, total, page, pageSize });
+      res.json({ items: await meltSummaries(shopId, rows.map((r) => r.id)), total, page, pageSize });
     }),
   );
   return router;

@@ -160,17 +160,21 @@ export async function listMelts(
   q: { after?: string; pageSize: number; sort: MeltSort },
 ): Promise<Page<MeltSummary>> {
   const { ids, next } = await meltPageIds(shopId, q);
-  const rows = ids.length
-    ? await db
-        .select({ ...meltSelect, castingCount, scrapCount })
-        .from(melts)
-        .innerJoin(alloys, eq(alloys.id, melts.alloyId))
-        .innerJoin(user, eq(user.id, melts.createdBy))
-        .where(and(eq(melts.shopId, shopId), inArray(melts.id, ids)))
-    : [];
+  return { items: await meltSummaries(shopId, ids), pageSize: q.pageSize, next };
+}
+
+/** The list's rows for these melts, in the order of `ids`. */
+export async function meltSummaries(shopId: string, ids: number[]): Promise<MeltSummary[]> {
+  if (!ids.length) return [];
+  const rows = await db
+    .select({ ...meltSelect, castingCount, scrapCount })
+    .from(melts)
+    .innerJoin(alloys, eq(alloys.id, melts.alloyId))
+    .innerJoin(user, eq(user.id, melts.createdBy))
+    .where(and(eq(melts.shopId, shopId), inArray(melts.id, ids)));
   const place = new Map(ids.map((id, i) => [id, i]));
   rows.sort((a, b) => place.get(a.m.id)! - place.get(b.m.id)!);
-  const items = rows.map(({ m, alloy, byName, castingCount, scrapCount }) => ({
+  return rows.map(({ m, alloy, byName, castingCount, scrapCount }) => ({
     id: m.id,
     pouredOn: m.pouredOn,
     alloy,
@@ -182,7 +186,6 @@ export async function listMelts(
     createdBy: personRef(m.createdBy, byName),
     createdAt: iso(m.createdAt),
   }));
-  return { items, pageSize: q.pageSize, next };
 }
 
 /** What a new melt starts from: the last melt's furnace and alloy, else the shop's defaults. */
