@@ -177,7 +177,9 @@ export const castings = pgTable(
      * (drizzle/*_list_keys_triggers.sql): set from the melt on insert, rewritten when the melt's day
      * changes; the default never stays.
      */
-    pouredOn: date("poured_on", { mode: "string" }).default(sql`'epoch'`).notNull(),
+    pouredOn: date("poured_on", { mode: "string" })
+      .default(sql`'epoch'`)
+      .notNull(),
     minSectionMm: doublePrecision("min_section_mm"),
     maxSectionMm: doublePrecision("max_section_mm"),
     sprueHeightMm: doublePrecision("sprue_height_mm"),
@@ -205,7 +207,9 @@ export const castings = pgTable(
     index("castings_melt_idx").on(t.meltId),
     index("castings_shop_part_idx").on(t.shopId, t.partName),
     // One index per order of the castings list (server/castings/list-order.ts), in-use rows only.
-    index("castings_shop_poured_idx").on(t.shopId, t.pouredOn, t.id).where(sql`${t.archivedAt} is null`),
+    index("castings_shop_poured_idx")
+      .on(t.shopId, t.pouredOn, t.id)
+      .where(sql`${t.archivedAt} is null`),
     index("castings_shop_part_lower_idx")
       .on(t.shopId, sql`lower(${t.partName})`, t.id.desc())
       .where(sql`${t.archivedAt} is null`),

@@ -35,7 +35,12 @@ export type BenchGround = Awaited<ReturnType<typeof benchGround>>;
 
 export async function benchGround(opts: Options) {
   const parent = mkdtempSync(join(tmpdir(), `casebook-bench-${opts.name}-`));
-  const pg = startLocalPostgres({ dataDir: join(parent, "pg"), port: await freePort(), database: "bench", throwaway: true });
+  const pg = startLocalPostgres({
+    dataDir: join(parent, "pg"),
+    port: await freePort(),
+    database: "bench",
+    throwaway: true,
+  });
   const port = await freePort();
   const origin = `http://127.0.0.1:${port}`;
   Object.assign(process.env, {
@@ -71,7 +76,11 @@ export async function benchGround(opts: Options) {
     const res = await fetch(`${origin}/api/auth/sign-up/email`, {
       method: "POST",
       headers: { "content-type": "application/json", origin },
-      body: JSON.stringify({ name: "Bench person", email: `bench-${randomUUID()}@bench.example`, password: "bench-password-2026" }),
+      body: JSON.stringify({
+        name: "Bench person",
+        email: `bench-${randomUUID()}@bench.example`,
+        password: "bench-password-2026",
+      }),
     });
     if (res.status !== 200) throw new Error(`sign-up answered ${res.status}: ${await res.text()}`);
     const { user } = (await res.json()) as { user: { id: string } };

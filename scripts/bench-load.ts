@@ -122,13 +122,17 @@ try {
     "/api/bench-previous/castings?page=1",
   ]);
   const deep = await load(`castings list at row ${deepRow.toLocaleString("en")} (keyset)`, cookie, [deepCastings]);
-  const deepOld = await load(`castings list at row ${deepRow.toLocaleString("en")} (previous: offset + count)`, cookie, [
-    previousCastings,
-  ]);
+  const deepOld = await load(
+    `castings list at row ${deepRow.toLocaleString("en")} (previous: offset + count)`,
+    cookie,
+    [previousCastings],
+  );
   const melts = await load(`melts list at row ${meltsDeep.toLocaleString("en")} (keyset)`, cookie, [deepMelts]);
-  const meltsOld = await load(`melts list at row ${meltsDeep.toLocaleString("en")} (previous: offset + count)`, cookie, [
-    previousMelts,
-  ]);
+  const meltsOld = await load(
+    `melts list at row ${meltsDeep.toLocaleString("en")} (previous: offset + count)`,
+    cookie,
+    [previousMelts],
+  );
   const ratio = (a: Figures, b: Figures) =>
     `${(a.rps / b.rps).toFixed(1)}x the requests/s, p95 ${(b.p95 / a.p95).toFixed(1)}x shorter`;
   console.log(

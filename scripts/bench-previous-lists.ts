@@ -64,7 +64,15 @@ export function previousLists() {
         .limit(pageSize)
         .offset((page - 1) * pageSize);
       const [{ total }] = await db.select({ total: count() }).from(melts).where(inUse);
-      res.json({ items: await meltSummaries(shopId, rows.map((r) => r.id)), total, page, pageSize });
+      res.json({
+        items: await meltSummaries(
+          shopId,
+          rows.map((r) => r.id),
+        ),
+        total,
+        page,
+        pageSize,
+      });
     }),
   );
   return router;

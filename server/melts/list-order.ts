@@ -35,7 +35,9 @@ export async function meltPageIds(shopId: string, q: Query): Promise<{ ids: numb
 async function ordered(shopId: string, q: Query): Promise<Keyed[]> {
   const inUse = and(eq(melts.shopId, shopId), isNull(melts.archivedAt));
   if (q.sort === "castings") {
-    const after = q.after ? afterKeys(BY_CASTINGS, decodeCursor(q.after, `melts:${q.sort}`, ["count", "day", "id"])) : undefined;
+    const after = q.after
+      ? afterKeys(BY_CASTINGS, decodeCursor(q.after, `melts:${q.sort}`, ["count", "day", "id"]))
+      : undefined;
     const rows = await db
       .select({ id: k.meltId, castings: k.castings, day: k.pouredOn })
       .from(k)

@@ -10,7 +10,9 @@ async function allPages<T>(p: Person, path: string, pageSize: number, between?: 
   const seen: T[] = [];
   let after: string | null = null;
   for (let n = 0; n < 50; n++) {
-    const res = await p.agent.get(`${path}${path.includes("?") ? "&" : "?"}pageSize=${pageSize}${after ? `&after=${after}` : ""}`);
+    const res = await p.agent.get(
+      `${path}${path.includes("?") ? "&" : "?"}pageSize=${pageSize}${after ? `&after=${after}` : ""}`,
+    );
     expect(res.status, res.text).toBe(200);
     expect(res.body.items.length).toBeLessThanOrEqual(pageSize);
     seen.push(...(res.body.items as T[]));
