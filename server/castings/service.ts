@@ -139,18 +139,20 @@ export async function castingSummaries(
   const place = "ids" in opts ? new Map(opts.ids.map((id, i) => [id, i])) : null;
   const rows = place ? found.sort((a, b) => place.get(a.c.id)! - place.get(b.c.id)!) : found;
   const ids = rows.map((r) => r.c.id);
-  const marks = groupBy(await marksOf(ids), (mk) => mk.castingId);
-  const answered = opts.viewer ? await castingsWithNewAnswer(opts.viewer, ids) : new Set<number>();
-  const pics = groupBy(
+  // The page's marks, new answers and photos are three independent reads: asked at once.
+  const [markRows, answered, photoRows] = await Promise.all([
+    marksOf(ids),
+    opts.viewer ? castingsWithNewAnswer(opts.viewer, ids) : new Set<number>(),
     ids.length
-      ? await db
+      ? db
           .select({ id: photos.id, castingId: photos.castingId })
           .from(photos)
           .where(inArray(photos.castingId, ids))
           .orderBy(asc(photos.id))
       : [],
-    (p) => p.castingId,
-  );
+  ]);
+  const marks = groupBy(markRows, (mk) => mk.castingId);
+  const pics = groupBy(photoRows, (p) => p.castingId);
   return rows.map(({ c, pouredOn, process, alloy, byName }): CastingSummary => {
     const own = marks.get(c.id) ?? [];
     const ownPics = pics.get(c.id) ?? [];
