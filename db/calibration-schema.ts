@@ -1,4 +1,7 @@
-import { index, integer, pgTable, primaryKey, text } from "drizzle-orm/pg-core";
+import { integer, text } from "drizzle-orm/pg-core/columns";
+import { index } from "drizzle-orm/pg-core/indexes";
+import { primaryKey } from "drizzle-orm/pg-core/primary-keys";
+import { pgTable } from "drizzle-orm/pg-core/table";
 import { organization } from "./auth-schema";
 import { castings } from "./notebook-schema";
 

@@ -1,4 +1,4 @@
-import { sql } from "drizzle-orm";
+import { sql, type AnyColumn } from "drizzle-orm";
 import { check } from "drizzle-orm/pg-core/checks";
 import { boolean, date, doublePrecision, integer, jsonb, serial, text, timestamp } from "drizzle-orm/pg-core/columns";
 import { index } from "drizzle-orm/pg-core/indexes";
@@ -142,10 +142,18 @@ export const melts = pgTable(
     unique("melts_shop_idempotency_uq").on(t.shopId, t.idempotencyKey),
     index("melts_shop_poured_idx").on(t.shopId, t.pouredOn, t.id),
     index("melts_shop_created_idx").on(t.shopId, t.createdAt),
+    // The pour log's orders (server/melts/list-order.ts): by alloy, each alloy's melts newest first.
+    index("melts_shop_alloy_poured_idx")
+      .on(t.shopId, t.alloyId, t.pouredOn.desc(), t.id.desc())
+      .where(sql`${t.archivedAt} is null`),
     check("melts_pour_temp_ck", sql`${t.pourTempC} is null or ${t.pourTempC} <= 1700`),
     check("melts_humidity_ck", sql`${t.humidityPct} is null or ${t.humidityPct} between 0 and 100`),
   ],
 );
+
+/** The castings list's outcome order: scrap first, then rework, good, and not judged yet. */
+export const outcomeRank = (outcome: AnyColumn) =>
+  sql<number>`case ${outcome} when 'scrap' then 0 when 'rework' then 1 when 'good' then 2 else 3 end`;
 
 export const castings = pgTable(
   "castings",
@@ -157,6 +165,14 @@ export const castings = pgTable(
       .references(() => melts.id, { onDelete: "cascade" }),
     partName: text("part_name").notNull(),
     pattern: text("pattern"),
+    /**
+     * The melt's pour day, copied so the castings list can page by date on one index. Triggers keep it
+     * (drizzle/*_list_keys_triggers.sql): set from the melt on insert, rewritten when the melt's day
+     * changes; the default never stays.
+     */
+    pouredOn: date("poured_on", { mode: "string" })
+      .default(sql`'epoch'`)
+      .notNull(),
     minSectionMm: doublePrecision("min_section_mm"),
     maxSectionMm: doublePrecision("max_section_mm"),
     sprueHeightMm: doublePrecision("sprue_height_mm"),
@@ -186,6 +202,16 @@ export const castings = pgTable(
     index("castings_shop_created_idx").on(t.shopId, t.createdAt),
     index("castings_melt_idx").on(t.meltId),
     index("castings_shop_part_idx").on(t.shopId, t.partName),
+    // One index per order of the castings list (server/castings/list-order.ts), in-use rows only.
+    index("castings_shop_poured_idx")
+      .on(t.shopId, t.pouredOn, t.id)
+      .where(sql`${t.archivedAt} is null`),
+    index("castings_shop_part_lower_idx")
+      .on(t.shopId, sql`lower(${t.partName})`, t.id.desc())
+      .where(sql`${t.archivedAt} is null`),
+    index("castings_shop_outcome_idx")
+      .on(t.shopId, sql`(${outcomeRank(t.outcome)})`, t.pouredOn.desc(), t.id.desc())
+      .where(sql`${t.archivedAt} is null`),
     check("castings_sections_ck", sql`${t.minSectionMm} is null or ${t.minSectionMm} > 0`),
     // The cleaned casting is part of the metal poured into its mould, never more (lib/weight-fields.ts).
     check(

@@ -29,3 +29,4 @@ export * from "./calculator-schema";
 export * from "./revision-schema";
 export * from "./import-schema";
 export * from "./calibration-schema";
+export * from "./list-schema";

@@ -12,7 +12,7 @@ import { unitsQuery } from "@/hooks/use-units";
 function prefetchFirstScreens(queryClient: QueryClient) {
   void queryClient.prefetchQuery(meQuery);
   void queryClient.prefetchQuery(unitsQuery);
-  void queryClient.prefetchQuery(meltsQuery(FIRST_MELTS_PAGE));
+  void queryClient.prefetchInfiniteQuery(meltsQuery(FIRST_MELTS_PAGE));
 }
 
 /**

@@ -1,4 +1,4 @@
-import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { keepPreviousData, useInfiniteQuery, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { castingKeys } from "@/hooks/use-castings";
 import { SAVE_KEYS } from "@/hooks/use-offline-saves";
 import { request } from "@/lib/api";
@@ -6,7 +6,7 @@ import type { Answer } from "@/lib/api-routes";
 import type { MeltInput, MELT_SORTS } from "@/lib/notebook-schemas";
 
 export type MeltSort = (typeof MELT_SORTS)[number];
-export type MeltListQuery = { page: number; pageSize: number; sort: MeltSort };
+export type MeltListQuery = { pageSize: number; sort: MeltSort };
 
 export const meltKeys = {
   all: ["melts"] as const,
@@ -25,16 +25,22 @@ export function useAlloys() {
 }
 
 /** The pour log as it first opens: the shell fetches it beside the person's shop (hooks/use-first-screens.ts). */
-export const FIRST_MELTS_PAGE: MeltListQuery = { page: 1, pageSize: 20, sort: "date-desc" };
+export const FIRST_MELTS_PAGE: MeltListQuery = { pageSize: 20, sort: "date-desc" };
 
+/** Pages by keyset: each page asks for the rows after the last one shown (`next`, sent as `after`). */
 export const meltsQuery = (q: MeltListQuery) => ({
   queryKey: meltKeys.list(q),
-  queryFn: () => request("GET /melts", { query: q }),
+  queryFn: ({ pageParam }: { pageParam: string | null }) =>
+    request("GET /melts", {
+      query: { pageSize: q.pageSize, sort: q.sort, ...(pageParam ? { after: pageParam } : {}) },
+    }),
+  initialPageParam: null as string | null,
+  getNextPageParam: (last: Answer<"GET /melts">) => last.next,
 });
 
 export function useMelts(q: MeltListQuery) {
-  // The last page stays on screen while the next one loads, so the list does not jump.
-  return useQuery({ ...meltsQuery(q), placeholderData: keepPreviousData });
+  // The last order's rows stay on screen while the new order loads, so the list does not jump.
+  return useInfiniteQuery({ ...meltsQuery(q), placeholderData: keepPreviousData });
 }
 
 export function useMelt(id: number) {

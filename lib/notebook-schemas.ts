@@ -197,7 +197,8 @@ export const castingFields = tableInput(
     outcome: z.enum(OUTCOMES, { error: "outcome is good, rework or scrap" }),
     notes: text(4000),
   },
-  ["meltId"],
+  // The melt's day is copied onto the casting by a trigger for the list's order (db/list-schema.ts).
+  ["meltId", "pouredOn"],
 );
 export function castingConflicts(c: Partial<z.infer<typeof castingFields>>): Record<string, string> {
   const out = castingWeightConflicts(c);
@@ -234,21 +235,30 @@ export const unitsInput = tableInput(
 export type Units = z.infer<typeof unitsInput>;
 export const DEFAULT_UNITS: Units = { temperature: "C", length: "mm", mass: "kg" };
 
-const pageQuery = {
-  page: z.coerce.number().int().min(1).max(100_000, "at most page 100,000").default(1),
+/**
+ * Lists page by keyset: `after` is the `next` of the previous answer (opaque; it names the sort it
+ * belongs to and the last row's keys), so a page costs the same at the start and deep in the list.
+ */
+const listQuery = {
+  after: z
+    .string()
+    .max(1000, "after is the next value of a previous answer")
+    .regex(/^[A-Za-z0-9_-]+$/, "after is the next value of a previous answer")
+    .optional(),
   pageSize: z.coerce.number().int().min(1).max(100).default(20),
 };
 export const MELT_SORTS = ["date-desc", "date-asc", "alloy", "castings"] as const;
 export const CASTING_SORTS = ["date-desc", "date-asc", "part", "outcome"] as const;
-export const meltListQuery = z.object({ ...pageQuery, sort: z.enum(MELT_SORTS).default("date-desc") });
-export const castingListQuery = z.object({ ...pageQuery, sort: z.enum(CASTING_SORTS).default("date-desc") });
+export const meltListQuery = z.object({ ...listQuery, sort: z.enum(MELT_SORTS).default("date-desc") });
+export const castingListQuery = z.object({ ...listQuery, sort: z.enum(CASTING_SORTS).default("date-desc") });
 
 // ---- Answers (JSON: dates are ISO strings; shopId is never sent) ----
 export type PersonRef = { id: string; name: string };
 type Row = { id: number; createdBy: PersonRef; createdAt: string };
 /** Set while a melt or casting is archived: hidden from lists, its page says so, an owner can restore it. */
 export type Archived = { archivedAt: string | null; archivedBy: PersonRef | null };
-export type Page<T> = { items: T[]; total: number; page: number; pageSize: number };
+/** One page of a list; `next` goes back as `after` for the page after it, null on the last page. */
+export type Page<T> = { items: T[]; pageSize: number; next: string | null };
 
 export type Alloy = {
   id: number;

@@ -6,56 +6,18 @@
  * them the "has anything changed" scan the previous design ran on every call (its SQL is kept here only
  * to measure it; that design also recomputed after any write). Sizes: BENCH_DIAGNOSE_SIZES=1000,100000.
  */
-import { mkdtempSync, rmSync } from "node:fs";
-import { loadavg, tmpdir } from "node:os";
-import { join } from "node:path";
+import { loadavg } from "node:os";
 import { performance } from "node:perf_hooks";
 import type { DiagnosisCase } from "../rules/case";
-import { freePort, startLocalPostgres } from "./local-postgres";
-import { seedShop } from "./bench-search-data";
+import { benchGround, benchShop } from "./bench-harness";
 
 const sizes = (process.env.BENCH_DIAGNOSE_SIZES ?? "1000,100000").split(",").map(Number);
-const parent = mkdtempSync(join(tmpdir(), "casebook-bench-diagnose-"));
-const pg = startLocalPostgres({
-  dataDir: join(parent, "pg"),
-  port: await freePort(),
-  database: "bench",
-  throwaway: true,
-});
-const port = await freePort();
-const origin = `http://127.0.0.1:${port}`;
-Object.assign(process.env, { DATABASE_URL: pg.url, PORT: String(port), NODE_ENV: "test", PUBLIC_URL: origin });
-process.env.AUTH_SECRET_FILE = join(parent, "auth-secret");
-
+const ground = await benchGround({ name: "diagnose" });
+const { origin, db, signedInto } = ground;
 const { sql } = await import("drizzle-orm");
-const { closeDb, db } = await import("../server/db");
-const { applyMigrations } = await import("../db/migrate");
-const { ensureBuiltInAlloys } = await import("../server/alloys/service");
-const { getAuth } = await import("../server/auth/auth");
-const { listen } = await import("../server/index");
-const { castings, confirmations, organization, user } = await import("../db/schema");
+const { castings, confirmations } = await import("../db/schema");
 const { recomputedTallies } = await import("../server/rulebook/calibration");
 const { shopRules } = await import("../server/rulebook/context");
-const { randomUUID } = await import("node:crypto");
-
-/** A shop and its owner as rows (seedShop adds the other people, the melts and the cases). */
-async function benchShop(size: number) {
-  const shopId = randomUUID();
-  const owner = randomUUID();
-  const now = new Date();
-  await db
-    .insert(organization)
-    .values({ id: shopId, name: `Bench shop ${size}`, slug: `bench-${shopId}`, createdAt: now });
-  await db.insert(user).values({
-    id: owner,
-    name: "Bench owner",
-    email: `${owner}@bench.example`,
-    emailVerified: true,
-    createdAt: now,
-    updatedAt: now,
-  });
-  return seedShop(db, size, size, shopId, owner);
-}
 
 const ms = (t: number) => `${t.toFixed(1)} ms`;
 /**
@@ -75,33 +37,6 @@ const oldScan = (shopId: string) =>
     (select max(updated_at)::text from castings where shop_id = ${shopId}) as k,
     (select max(updated_at)::text from melts where shop_id = ${shopId}) as m,
     (select count(*) || ':' || coalesce(max(updated_at)::text, '') from defect_marks where shop_id = ${shopId}) as d`);
-
-async function signedInto(shopId: string): Promise<string> {
-  const email = `bench-${shopId.slice(0, 8)}@bench.example`;
-  const auth = getAuth();
-  const password = "bench-password-2026";
-  const post = (path: string, body: object) =>
-    fetch(`${origin}/api/auth/${path}`, {
-      method: "POST",
-      headers: { "content-type": "application/json", origin },
-      body: JSON.stringify(body),
-    });
-  await post("sign-up/email", { name: "Bench caster", email, password });
-  // Sign-up makes no session (server/people/auth-hooks.ts): sign in as the app does.
-  const res = await post("sign-in/email", { email, password });
-  const { user } = (await res.json()) as { user: { id: string } };
-  await auth.api.addMember({ body: { userId: user.id, role: "caster", organizationId: shopId } });
-  const cookie = res.headers
-    .getSetCookie()
-    .map((c) => c.split(";")[0])
-    .join("; ");
-  await fetch(`${origin}/api/auth/organization/set-active`, {
-    method: "POST",
-    headers: { "content-type": "application/json", origin, cookie },
-    body: JSON.stringify({ organizationId: shopId }),
-  });
-  return cookie;
-}
 
 const aCase: DiagnosisCase = {
   defects: [{ type: "misrun", location: "far-from-gate", severity: 3 }],
@@ -123,14 +58,11 @@ async function timeDiagnosis(cookie: string): Promise<number> {
   return performance.now() - t0;
 }
 
-await applyMigrations(db);
-await ensureBuiltInAlloys();
-const server = await listen({ port, host: "127.0.0.1" });
 try {
   console.log("\nDiagnosis over HTTP (POST /api/diagnosis, warm server, signed in)");
   for (const size of sizes) {
     const t0 = performance.now();
-    const shop = await benchShop(size);
+    const shop = await benchShop(ground, size);
     const seedS = (performance.now() - t0) / 1000;
     const cookie = await signedInto(shop.shopId);
     // What any signed-in request costs here (session and shop checks, one small query), for scale.
@@ -193,10 +125,5 @@ try {
     );
   }
 } finally {
-  server.closeAllConnections();
-  await new Promise((r) => server.close(r));
-  await closeDb();
-  pg.stop();
-  rmSync(parent, { recursive: true, force: true });
-  rmSync(pg.dataDir, { recursive: true, force: true });
+  await ground.stop();
 }

@@ -1,38 +1,26 @@
 // `npm run bench:web`: the web app as a phone sees it. Builds the export when stale, starts the real
 // server on a throwaway database with the demo shop, and drives Debian's chromium at 390 x 844 with the
 // CPU slowed 4x through the DevTools protocol. Prints figures beside their aims; asserts nothing.
-import { mkdtempSync, rmSync } from "node:fs";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
-import { fileURLToPath } from "node:url";
 import { chromium, type CDPSession, type Page } from "playwright-core";
-import { freePort, startLocalPostgres } from "./local-postgres";
+import { benchGround, ROOT } from "./bench-harness";
 import { ensureLocalObjectStore } from "./local-object-store";
 import { ensureWebBuild } from "./web-build";
 
-const root = fileURLToPath(new URL("..", import.meta.url));
-const parent = mkdtempSync(join(tmpdir(), "casebook-bench-web-"));
-const pg = startLocalPostgres({
-  dataDir: join(parent, "pg"),
-  port: await freePort(),
-  database: "bench",
-  throwaway: true,
-});
-const port = await freePort();
-const baseUrl = `http://127.0.0.1:${port}`;
-Object.assign(process.env, { DATABASE_URL: pg.url, PORT: String(port), NODE_ENV: "test", PUBLIC_URL: baseUrl });
-process.env.UPLOAD_DIR = join(parent, "uploads");
 delete process.env.S3_ENDPOINT; // the demo photos go to a stand-in with the throwaway database
-const objectStore = await ensureLocalObjectStore(root);
-
-const { closeDb, db } = await import("../server/db");
-const { applyMigrations } = await import("../db/migrate");
-const { seedDemoShop } = await import("../server/seed/seed");
+let objectStore: Awaited<ReturnType<typeof ensureLocalObjectStore>> | undefined;
+const ground = await benchGround({
+  name: "web",
+  webDir: () => ensureWebBuild(ROOT),
+  before: async () => {
+    objectStore = await ensureLocalObjectStore(ROOT);
+  },
+  prepare: async () => {
+    const { seedDemoShop } = await import("../server/seed/seed");
+    await seedDemoShop();
+  },
+});
+const baseUrl = ground.origin;
 const { DEMO_PEOPLE } = await import("../server/seed/demo-people");
-const { listen } = await import("../server/index");
-await applyMigrations(db);
-await seedDemoShop();
-const server = await listen({ port, host: "127.0.0.1", webDir: ensureWebBuild(root) });
 
 /** Bytes on the wire (headers and compressed bodies) counted from the DevTools network events. */
 function countBytes(cdp: CDPSession) {
@@ -182,11 +170,6 @@ try {
   for (const line of firstCardRequests) console.log(line);
 } finally {
   await browser.close();
-  server.closeAllConnections();
-  await new Promise((r) => server.close(r));
-  await closeDb();
+  await ground.stop();
   await objectStore?.close();
-  pg.stop();
-  rmSync(parent, { recursive: true, force: true });
-  rmSync(pg.dataDir, { recursive: true, force: true });
 }

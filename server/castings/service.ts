@@ -1,4 +1,4 @@
-import { and, asc, count, desc, eq, inArray, isNull, sql, type SQL } from "drizzle-orm";
+import { and, asc, eq, inArray, isNull, sql } from "drizzle-orm";
 import { db } from "../db";
 import { castingsWithNewAnswer } from "./new-answers";
 import { alloys, castings, melts, photos, user } from "../../db/schema";
@@ -15,8 +15,9 @@ import { notFound, parseOr400 } from "../http/errors";
 import { requireFresh, StaleRowError, type expectedVersion } from "../http/row-version";
 import { insertMarks, marksOf } from "../marks/service";
 import { checkMayArchive, checkMayRestore } from "../notebook/archive";
-import { changedOnly, groupBy, iso, offsetOf, personRef, withoutNulls } from "../notebook/shared";
+import { changedOnly, groupBy, iso, personRef, withoutNulls } from "../notebook/shared";
 import { photoUrls } from "../photos/urls";
+import { castingPageIds, type CastingSort } from "./list-order";
 import { castingInShop, toCasting } from "./lookup";
 
 const CASTING_COLUMNS = Object.keys(castingFields.shape) as (keyof typeof castingFields.shape)[];
@@ -111,26 +112,16 @@ export async function restoreCasting(m: ShopMember, id: number): Promise<Casting
 const nameOf = async (userId: string) =>
   (await db.select({ name: user.name }).from(user).where(eq(user.id, userId)))[0]?.name;
 
-const outcomeRank = sql`case ${castings.outcome} when 'scrap' then 0 when 'rework' then 1 when 'good' then 2 else 3 end`;
-const CASTING_ORDER = {
-  "date-desc": [desc(melts.pouredOn), desc(castings.id)],
-  "date-asc": [asc(melts.pouredOn), asc(castings.id)],
-  part: [asc(sql`lower(${castings.partName})`), desc(castings.id)],
-  outcome: [asc(outcomeRank), desc(melts.pouredOn), desc(castings.id)],
-};
-export type CastingSort = keyof typeof CASTING_ORDER;
-
 /** Cards and table rows: the casting with its melt's date, alloy and process, its marks' defect types and a thumbnail. */
 export async function castingSummaries(
   shopId: string,
-  opts: { meltId?: number; sort: CastingSort; limit?: number; offset?: number; viewer?: string },
+  opts: { meltId: number; viewer?: string } | { ids: number[]; viewer?: string },
 ) {
   // Archived castings are hidden everywhere; an archived melt's castings are hidden from the shop-wide
-  // list but still shown on that melt's own page, where an owner may restore it.
-  const where: SQL[] = [eq(castings.shopId, shopId), isNull(castings.archivedAt)];
-  if (opts.meltId) where.push(eq(castings.meltId, opts.meltId));
-  else where.push(isNull(melts.archivedAt));
-  let query = db
+  // list (castingPageIds) but still shown on that melt's own page, where an owner may restore it.
+  const which = "meltId" in opts ? eq(castings.meltId, opts.meltId) : inArray(castings.id, opts.ids);
+  if ("ids" in opts && !opts.ids.length) return [];
+  const found = await db
     .select({
       c: castings,
       pouredOn: melts.pouredOn,
@@ -142,24 +133,26 @@ export async function castingSummaries(
     .innerJoin(melts, eq(melts.id, castings.meltId))
     .innerJoin(alloys, eq(alloys.id, melts.alloyId))
     .innerJoin(user, eq(user.id, castings.createdBy))
-    .where(and(...where))
-    .orderBy(...CASTING_ORDER[opts.sort])
-    .$dynamic();
-  if (opts.limit) query = query.limit(opts.limit).offset(opts.offset ?? 0);
-  const rows = await query;
+    .where(and(eq(castings.shopId, shopId), isNull(castings.archivedAt), which))
+    .orderBy(asc(melts.pouredOn), asc(castings.id));
+  // A page's rows in the page's order (castings/list-order.ts decided it).
+  const place = "ids" in opts ? new Map(opts.ids.map((id, i) => [id, i])) : null;
+  const rows = place ? found.sort((a, b) => place.get(a.c.id)! - place.get(b.c.id)!) : found;
   const ids = rows.map((r) => r.c.id);
-  const marks = groupBy(await marksOf(ids), (mk) => mk.castingId);
-  const answered = opts.viewer ? await castingsWithNewAnswer(opts.viewer, ids) : new Set<number>();
-  const pics = groupBy(
+  // The page's marks, new answers and photos are three independent reads: asked at once.
+  const [markRows, answered, photoRows] = await Promise.all([
+    marksOf(ids),
+    opts.viewer ? castingsWithNewAnswer(opts.viewer, ids) : new Set<number>(),
     ids.length
-      ? await db
+      ? db
           .select({ id: photos.id, castingId: photos.castingId })
           .from(photos)
           .where(inArray(photos.castingId, ids))
           .orderBy(asc(photos.id))
       : [],
-    (p) => p.castingId,
-  );
+  ]);
+  const marks = groupBy(markRows, (mk) => mk.castingId);
+  const pics = groupBy(photoRows, (p) => p.castingId);
   return rows.map(({ c, pouredOn, process, alloy, byName }): CastingSummary => {
     const own = marks.get(c.id) ?? [];
     const ownPics = pics.get(c.id) ?? [];
@@ -185,16 +178,12 @@ export async function castingSummaries(
   });
 }
 
+/** GET /api/castings: one page in the order asked, by keyset (castings/list-order.ts). */
 export async function listCastings(
   shopId: string,
-  q: { page: number; pageSize: number; sort: CastingSort },
+  q: { after?: string; pageSize: number; sort: CastingSort },
   viewer?: string,
 ): Promise<Page<CastingSummary>> {
-  const items = await castingSummaries(shopId, { sort: q.sort, limit: q.pageSize, offset: offsetOf(q), viewer });
-  const [{ total }] = await db
-    .select({ total: count() })
-    .from(castings)
-    .innerJoin(melts, eq(melts.id, castings.meltId))
-    .where(and(eq(castings.shopId, shopId), isNull(castings.archivedAt), isNull(melts.archivedAt)));
-  return { items, total, page: q.page, pageSize: q.pageSize };
+  const { ids, next } = await castingPageIds(shopId, q);
+  return { items: await castingSummaries(shopId, { ids, viewer }), pageSize: q.pageSize, next };
 }

@@ -33,7 +33,7 @@ meltsRouter.post("/", ...write, async (req, res) => {
 meltsRouter.get("/:id", ...read, async (req, res) => {
   const { shopId, userId } = currentMember(req);
   const melt = await getMelt(shopId, idParam(req.params.id, "No such melt"));
-  const castings = await castingSummaries(shopId, { meltId: melt.id, sort: "date-asc", viewer: userId });
+  const castings = await castingSummaries(shopId, { meltId: melt.id, viewer: userId });
   res.set("ETag", rowVersion(melt)).json({ ...melt, castings } satisfies Answer<"GET /melts/:id">);
 });
 

@@ -1,4 +1,4 @@
-import { asc, count, desc, eq, and, isNull, sql } from "drizzle-orm";
+import { and, desc, eq, inArray, isNull, sql } from "drizzle-orm";
 import { db } from "../db";
 import { alloys, castings, melts, shopSettings, user } from "../../db/schema";
 import {
@@ -17,7 +17,8 @@ import { notFound, parseOr400 } from "../http/errors";
 import { requireFresh, StaleRowError, type expectedVersion } from "../http/row-version";
 import { requireAlloy } from "../alloys/service";
 import { checkMayArchive, checkMayRestore } from "../notebook/archive";
-import { iso, offsetOf, omit, personRef, refuseIfAny, withoutNulls, changedOnly } from "../notebook/shared";
+import { meltPageIds, type MeltSort } from "./list-order";
+import { iso, omit, personRef, refuseIfAny, withoutNulls, changedOnly } from "../notebook/shared";
 
 type MeltRow = typeof melts.$inferSelect;
 /** The melt's own columns that a MeltInput sets one to one (the alloy goes through the alloy table). */
@@ -144,29 +145,28 @@ export async function patchMelt(
 // Archived castings are not counted: the list shows what is in use.
 const castingCount = sql<number>`(select count(*)::int from ${castings} where ${castings.meltId} = ${melts.id} and ${castings.archivedAt} is null)`;
 const scrapCount = sql<number>`(select count(*)::int from ${castings} where ${castings.meltId} = ${melts.id} and ${castings.archivedAt} is null and ${castings.outcome} = 'scrap')`;
-const MELT_ORDER = {
-  "date-desc": [desc(melts.pouredOn), desc(melts.id)],
-  "date-asc": [asc(melts.pouredOn), asc(melts.id)],
-  alloy: [asc(alloys.designation), desc(melts.pouredOn), desc(melts.id)],
-  castings: [desc(castingCount), desc(melts.pouredOn), desc(melts.id)],
-};
 
+/** GET /api/melts: one page in the order asked, by keyset (melts/list-order.ts). */
 export async function listMelts(
   shopId: string,
-  q: { page: number; pageSize: number; sort: keyof typeof MELT_ORDER },
+  q: { after?: string; pageSize: number; sort: MeltSort },
 ): Promise<Page<MeltSummary>> {
-  const inUse = and(eq(melts.shopId, shopId), isNull(melts.archivedAt));
+  const { ids, next } = await meltPageIds(shopId, q);
+  return { items: await meltSummaries(shopId, ids), pageSize: q.pageSize, next };
+}
+
+/** The list's rows for these melts, in the order of `ids`. */
+export async function meltSummaries(shopId: string, ids: number[]): Promise<MeltSummary[]> {
+  if (!ids.length) return [];
   const rows = await db
     .select({ ...meltSelect, castingCount, scrapCount })
     .from(melts)
     .innerJoin(alloys, eq(alloys.id, melts.alloyId))
     .innerJoin(user, eq(user.id, melts.createdBy))
-    .where(inUse)
-    .orderBy(...MELT_ORDER[q.sort])
-    .limit(q.pageSize)
-    .offset(offsetOf(q));
-  const [{ total }] = await db.select({ total: count() }).from(melts).where(inUse);
-  const items = rows.map(({ m, alloy, byName, castingCount, scrapCount }) => ({
+    .where(and(eq(melts.shopId, shopId), inArray(melts.id, ids)));
+  const place = new Map(ids.map((id, i) => [id, i]));
+  rows.sort((a, b) => place.get(a.m.id)! - place.get(b.m.id)!);
+  return rows.map(({ m, alloy, byName, castingCount, scrapCount }) => ({
     id: m.id,
     pouredOn: m.pouredOn,
     alloy,
@@ -178,7 +178,6 @@ export async function listMelts(
     createdBy: personRef(m.createdBy, byName),
     createdAt: iso(m.createdAt),
   }));
-  return { items, total, page: q.page, pageSize: q.pageSize };
 }
 
 /** What a new melt starts from: the last melt's furnace and alloy, else the shop's defaults. */

@@ -3,7 +3,7 @@ import { HttpError, notFound } from "../http/errors";
 
 /**
  * Small pieces every notebook feature uses: ids from URLs, the author of a row, field errors
- * gathered from several checks, and the page arithmetic of list routes.
+ * gathered from several checks.
  */
 
 /** A serial id from a URL; anything else is a row that does not exist here (404, not 400). */
@@ -20,8 +20,6 @@ export function refuseIfAny(...found: Record<string, string>[]) {
   const fields = Object.assign({}, ...found) as Record<string, string>;
   if (Object.keys(fields).length) throw new HttpError(400, "Some values need fixing.", fields);
 }
-
-export const offsetOf = (q: { page: number; pageSize: number }) => (q.page - 1) * q.pageSize;
 
 /** Drops nulls so a stored row reads as an input (optional fields absent, never zero). */
 export function withoutNulls<T extends Record<string, unknown>>(row: T): { [K in keyof T]?: Exclude<T[K], null> } {

@@ -106,7 +106,9 @@ describe("hostile input at the edge", () => {
     expect((await owner.agent.get("/api/castings/2147483648")).status).toBe(404);
     for (const q of ["q=%00", "alloy=%00", "cause=a%00b", "page=1e300"])
       expect((await owner.agent.get(`/api/search?${q}`)).status, q).toBe(400);
-    expect((await owner.agent.get("/api/melts?page=1e300")).status).toBe(400);
+    for (const q of ["pageSize=1e300", "after=%00", "after=a%22b"])
+      for (const list of ["/api/melts", "/api/castings"])
+        expect((await owner.agent.get(`${list}?${q}`)).status, `${list}?${q}`).toBe(400);
   });
 
   it("answers 413 to a 2 MB body on every write route, API and sign-in alike, changing no row", async () => {

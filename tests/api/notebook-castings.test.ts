@@ -43,7 +43,7 @@ describe("castings of a melt", () => {
     });
     await newCasting(caster, melt.id, { partName: "Bracket", outcome: "good" });
     const list = await caster.agent.get("/api/castings?sort=part&pageSize=1");
-    expect(list.body).toMatchObject({ total: 2, page: 1, pageSize: 1 });
+    expect(list.body).toMatchObject({ pageSize: 1, next: expect.any(String) });
     expect(list.body.items[0]).toMatchObject({ partName: "Bracket", pouredOn: "2026-01-14", process: "lost-foam" });
     const byOutcome = await caster.agent.get("/api/castings?sort=outcome");
     expect(byOutcome.body.items[0].outcome).toBe("scrap");
@@ -113,7 +113,7 @@ describe("castings of a melt", () => {
     expect((await a.caster.agent.post(`/api/castings/melts/${bMelt.id}`).send(thinPlate)).status).toBe(404);
     expect((await a.caster.agent.get(`/api/castings/${bCasting.id}`)).status).toBe(404);
     expect((await a.owner.agent.patch(`/api/castings/${bCasting.id}`).send({ outcome: "good" })).status).toBe(404);
-    expect((await a.caster.agent.get("/api/castings")).body.total).toBe(0);
+    expect((await a.caster.agent.get("/api/castings")).body.items).toEqual([]);
     expect((await shopCounts(a.shopId)).castings).toBe(0);
     expect((await b.caster.agent.get(`/api/castings/${bCasting.id}`)).body.outcome).toBe("scrap");
   });

@@ -19,10 +19,11 @@ describe("the demo notebook", () => {
     await seedDemoNotebook(shopId, crew);
 
     const melts = await caster.agent.get("/api/melts?pageSize=100");
-    expect(melts.body.total).toBe(12);
+    expect(melts.body.items).toHaveLength(12);
+    expect(melts.body.next).toBeNull();
     expect(new Set(melts.body.items.map((m: { process: string }) => m.process)).size).toBeGreaterThanOrEqual(5);
     const list: Page<CastingSummary> = (await caster.agent.get("/api/castings?pageSize=100")).body;
-    expect(list.total).toBeGreaterThanOrEqual(28);
+    expect(list.items.length).toBeGreaterThanOrEqual(28);
     expect(new Set(list.items.map((c) => c.alloy)).size).toBeGreaterThanOrEqual(4);
 
     const withPhoto = list.items.filter((c) => c.thumbUrl);

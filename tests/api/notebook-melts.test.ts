@@ -99,10 +99,11 @@ describe("melts", () => {
     await newCasting(caster, busy.id);
     await newCasting(caster, busy.id, { outcome: "good" });
     const first = await caster.agent.get("/api/melts?pageSize=2");
-    expect(first.body).toMatchObject({ total: 4, page: 1, pageSize: 2 });
+    expect(first.body).toMatchObject({ pageSize: 2, next: expect.any(String) });
     expect(first.body.items.map((m: { pouredOn: string }) => m.pouredOn)).toEqual(["2026-01-03", "2026-01-02"]);
-    const second = await caster.agent.get("/api/melts?pageSize=2&page=2");
+    const second = await caster.agent.get(`/api/melts?pageSize=2&after=${first.body.next}`);
     expect(second.body.items.map((m: { pouredOn: string }) => m.pouredOn)).toEqual(["2026-01-01", "2025-12-30"]);
+    expect(second.body.next).toBeNull();
     const byCastings = await caster.agent.get("/api/melts?sort=castings");
     expect(byCastings.body.items[0]).toMatchObject({ id: busy.id, castingCount: 2, scrapCount: 1, alloy: "319.0" });
     const asc = await caster.agent.get("/api/melts?sort=date-asc");
@@ -132,7 +133,7 @@ describe("melts", () => {
     const melt = await newMelt(b.caster);
     expect((await a.owner.agent.get(`/api/melts/${melt.id}`)).status).toBe(404);
     expect((await a.owner.agent.patch(`/api/melts/${melt.id}`).send({ notes: "mine now" })).status).toBe(404);
-    expect((await a.caster.agent.get("/api/melts")).body.total).toBe(0);
+    expect((await a.caster.agent.get("/api/melts")).body.items).toEqual([]);
     expect((await a.caster.agent.get("/api/melts/abc")).status).toBe(404);
     const loner = await signUp("no-shop");
     expect((await loner.agent.post("/api/melts").send(coldLostFoamMelt)).status).toBe(403);

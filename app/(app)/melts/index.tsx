@@ -8,15 +8,14 @@ import { MeltCard } from "@/components/melts/melt-card";
 import { MeltTable } from "@/components/melts/melt-table";
 import { WaitingMelts } from "@/components/notebook/waiting-to-send";
 import { Notice } from "@/components/ui/notice";
-import { Pager } from "@/components/ui/pager";
 import { Loading } from "@/components/ui/query-state";
 import { Screen } from "@/components/ui/screen";
+import { ShowMore } from "@/components/ui/show-more";
 import { space } from "@/constants/theme";
 import { useIsWide } from "@/hooks/use-layout";
 import { FIRST_MELTS_PAGE, useMelts, type MeltSort } from "@/hooks/use-melts";
 import { useUnits } from "@/hooks/use-units";
 
-const PAGE_SIZE = FIRST_MELTS_PAGE.pageSize;
 const ORDER = [
   { value: "date-desc", label: "newest" },
   { value: "date-asc", label: "oldest" },
@@ -29,13 +28,9 @@ export default function MeltsScreen() {
   const wide = useIsWide();
   const units = useUnits();
   const router = useRouter();
-  const [page, setPage] = useState(1);
   const [sort, setSort] = useState<MeltSort>(FIRST_MELTS_PAGE.sort);
-  const melts = useMelts({ page, pageSize: PAGE_SIZE, sort });
-  const resort = (s: MeltSort) => {
-    setSort(s);
-    setPage(1);
-  };
+  const melts = useMelts({ pageSize: FIRST_MELTS_PAGE.pageSize, sort });
+  const rows = melts.data?.pages.flatMap((p) => p.items) ?? [];
 
   return (
     <Screen wide={wide}>
@@ -45,22 +40,31 @@ export default function MeltsScreen() {
         <Button label="Log a melt" onPress={() => router.push("/melts/new")} testID="new-melt" />
       </View>
       {!wide ? (
-        <ChoiceChips label="Order" options={ORDER} value={sort} onChange={(s) => resort(s as MeltSort)} />
+        <ChoiceChips label="Order" options={ORDER} value={sort} onChange={(s) => setSort(s as MeltSort)} />
       ) : null}
       <WaitingMelts />
       {melts.isPending ? <Loading /> : null}
       {melts.error ? <Notice tone="error">{melts.error.message}</Notice> : null}
-      {melts.data && melts.data.total === 0 ? (
+      {melts.data && rows.length === 0 ? (
         <Notice>No melts logged yet. Log the first one after your next pour.</Notice>
       ) : null}
-      {melts.data && melts.data.items.length ? (
+      {rows.length ? (
         wide ? (
-          <MeltTable melts={melts.data.items} units={units} sort={sort} onSort={resort} />
+          <MeltTable melts={rows} units={units} sort={sort} onSort={setSort} />
         ) : (
-          melts.data.items.map((m) => <MeltCard key={m.id} melt={m} units={units} />)
+          rows.map((m) => <MeltCard key={m.id} melt={m} units={units} />)
         )
       ) : null}
-      {melts.data ? <Pager page={page} pageSize={PAGE_SIZE} total={melts.data.total} onPage={setPage} /> : null}
+      {rows.length ? (
+        <ShowMore
+          shown={rows.length}
+          what="melts"
+          more={melts.hasNextPage}
+          loading={melts.isFetchingNextPage}
+          onMore={() => void melts.fetchNextPage()}
+          testID="more-melts"
+        />
+      ) : null}
     </Screen>
   );
 }
