@@ -16,11 +16,11 @@ async function shopWithManyMelts(size: { width: number; height: number }): Promi
     const res = await page.request.post(`${baseUrl}${path}`, { data, headers });
     expect(res.status(), await res.text()).toBeLessThan(300);
   };
-  await post("/api/auth/sign-up/email", {
-    name: "Paging Caster",
-    email: `paging-${tag}@test.example`,
-    password: "correct-horse-9",
-  });
+  const email = `paging-${tag}@test.example`;
+  const password = "correct-horse-9";
+  await post("/api/auth/sign-up/email", { name: "Paging Caster", email, password });
+  // Sign-up makes no session (server/people/auth-hooks.ts): sign in as the app does.
+  await post("/api/auth/sign-in/email", { email, password });
   await post("/api/auth/organization/create", { name: "Long Pour Log Lab", slug: `long-log-${tag}` });
   for (let i = 0; i < MELTS; i++) {
     const day = new Date(Date.UTC(2026, 0, 1 + i)).toISOString().slice(0, 10);

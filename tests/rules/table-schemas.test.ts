@@ -25,7 +25,8 @@ const SERVER_TOO = ["archivedAt", "archivedBy", "idempotencyKey"];
 
 const cases: { name: string; table: Table; schema: z.ZodType; fromUrl: string[]; renamed?: [string, string] }[] = [
   { name: "melts", table: melts, schema: meltFields, fromUrl: [], renamed: ["alloyId", "alloy"] },
-  { name: "castings", table: castings, schema: castingFields, fromUrl: ["meltId"] },
+  // pouredOn is the melt's day, copied onto the casting by a trigger (db/list-schema.ts): no input names it.
+  { name: "castings", table: castings, schema: castingFields, fromUrl: ["meltId", "pouredOn"] },
   { name: "defect marks", table: defectMarks, schema: markFields, fromUrl: ["castingId"] },
   { name: "fixes tried", table: fixesTried, schema: fixInput, fromUrl: ["castingId"] },
   { name: "alloys", table: alloys, schema: alloyInput, fromUrl: ["designationKey"] },
