@@ -88,6 +88,10 @@ function refreshBatch(shopId: string, rules: CalibrationRules, firing: FiringSet
         rows.map((r) => r.castingId),
       ),
     ]);
+    // The batch's rows move their counts set-based (calibration_tally_rows), not row by row.
+    const batch = sql.param(rows.map((r) => r.castingId));
+    await tx.execute(sql`SELECT set_config('casebook.calibration_batch', 'on', true)`);
+    await tx.execute(sql`SELECT calibration_tally_rows(${shopId}, ${batch}::int[], -1)`);
     const kept = rows.filter((r) => confirmed.has(r.castingId));
     const gone = rows.filter((r) => !confirmed.has(r.castingId));
     if (kept.length) {
@@ -116,6 +120,8 @@ function refreshBatch(shopId: string, rules: CalibrationRules, firing: FiringSet
       await tx.execute(
         sql`DELETE FROM calibration_cases WHERE casting_id = ANY(${sql.param(gone.map((r) => r.castingId))}::int[])`,
       );
+    await tx.execute(sql`SELECT calibration_tally_rows(${shopId}, ${batch}::int[], 1)`);
+    await tx.execute(sql`SELECT set_config('casebook.calibration_batch', 'off', true)`);
     return { rows: rows.length, casesRun: firings.casesRun };
   });
 }
