@@ -40,11 +40,35 @@ export const calibrationCases = pgTable(
     fired: text("fired").array(),
     agreed: text("agreed").array(),
     suggested: text("suggested").array(),
+    /**
+     * The firings the rules above were read from, kept per rule version (`firingKey`, a rule's id and
+     * a hash of what decides whether it fires), with the key set they were worked out against
+     * (`fired_with`, a row of calibration_rule_keys): after a publish only the rules whose key is
+     * new are run on the case, and a switch off or on runs nothing.
+     */
+    firedKeys: text("fired_keys").array(),
+    firedWith: text("fired_with"),
     ruleSetVersion: text("rule_set_version").notNull().default(""),
     changes: integer("changes").notNull().default(0),
     computed: integer("computed").notNull().default(-1),
   },
-  (t) => [index("calibration_cases_shop_idx").on(t.shopId, t.ruleSetVersion)],
+  (t) => [
+    index("calibration_cases_shop_idx").on(t.shopId, t.ruleSetVersion),
+    index("calibration_cases_fired_with_idx").on(t.shopId, t.firedWith),
+  ],
+);
+
+/** The firing keys of a shop's rules (every rule, switched off or not) at one set of rules: `fired_with`. */
+export const calibrationRuleKeys = pgTable(
+  "calibration_rule_keys",
+  {
+    shopId: text("shop_id")
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
+    firingVersion: text("firing_version").notNull(),
+    keys: text("keys").array().notNull(),
+  },
+  (t) => [primaryKey({ name: "calibration_rule_keys_pk", columns: [t.shopId, t.firingVersion] })],
 );
 
 export const calibrationTallies = pgTable(

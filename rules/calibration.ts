@@ -1,6 +1,7 @@
 import { agrees, comparableCause, firedRules, type StoredCase } from "./backtest";
 import { compiledRuleSet } from "./engine";
 import type { KbRule, RuleSet } from "./kb-schema";
+import { contentHash } from "./knowledge-base";
 
 /**
  * Learning from the shop's confirmed cases. Each rule's record (confirmed cases it fired on, and
@@ -27,6 +28,30 @@ export const weightFactorOf = (r: RuleRecord | undefined) =>
 
 /** For one confirmed case: the confirmed cause (a rulebook cause id) and the rules that fired on it. */
 export type Firing = { causeId: string; fired: Set<string> };
+
+/**
+ * Whether a rule fires on a case depends on what it explains (defect types and locations) and its
+ * conditions, nothing else of the rule (firedRules in rules/backtest.ts): its firing key names one
+ * version of those, so a case's firings of an unchanged rule are kept when other rules change.
+ * Raise FIRINGS_REVISION when the engine or the derived facts change what fires.
+ */
+const FIRINGS_REVISION = 1;
+export const firingKey = (r: KbRule) =>
+  `${r.id}@${contentHash(JSON.stringify([FIRINGS_REVISION, r.explains, r.conditions]))}`;
+
+/** A rule set's firing keys, and their set's own version (what a case's kept firings were read against). */
+export type FiringSet = { version: string; keys: string[]; ruleOf: Map<string, KbRule>; keyOf: Map<string, string> };
+
+export function firingSet(rs: RuleSet): FiringSet {
+  const ruleOf = new Map(rs.rules.map((r) => [firingKey(r), r]));
+  const keys = [...ruleOf.keys()].sort();
+  return {
+    version: contentHash(keys.join("\n")),
+    keys,
+    ruleOf,
+    keyOf: new Map([...ruleOf].map(([k, r]) => [r.id, k])),
+  };
+}
 
 /** Runs the rules (their conditions only: weights do not decide firing) on every comparable confirmed case. */
 export async function confirmedFirings(cases: StoredCase[], rs: RuleSet): Promise<Firing[]> {

@@ -32,7 +32,7 @@ import { castingInShop } from "../castings/lookup";
 import { HttpError } from "../http/errors";
 import { iso, personRef } from "../notebook/shared";
 import { allCausesOf, causeTitles } from "../rulebook/cause-titles";
-import { causesOf, shopLearning } from "../rulebook/context";
+import { calibrateCasting, causesOf } from "../rulebook/context";
 import { newCauseId } from "../rulebook/draft";
 
 /** Review: a caster asks, the case waits in the mentors' queue (oldest first), a mentor confirms its cause. */
@@ -198,9 +198,12 @@ export async function confirmCause(m: ShopMember, castingId: number, input: Conf
         ),
       );
   });
-  // The confirmed casting's calibration row was marked changed in that transaction: work it out now
-  // (that one case, server/rulebook/calibration.ts) so the next diagnosis finds the learning ready.
-  await shopLearning(m.shopId).catch((err) => console.error("calibration after a confirmation failed", err));
+  // The confirmed casting's calibration row was marked changed in that transaction: work out that one
+  // row now (server/rulebook/calibration.ts), between two batches of any rebuild of the shop under way,
+  // so the next diagnosis finds it done without this request waiting for the whole shop.
+  await calibrateCasting(m.shopId, castingId).catch((err) =>
+    console.error("calibration after a confirmation failed", err),
+  );
   return caseReview(m.shopId, castingId);
 }
 

@@ -130,6 +130,11 @@ async function computeLearning(shopId: string): Promise<ShopLearning> {
   };
 }
 
+/** Works out one confirmed casting's calibration row with the shop's current rules (after a confirmation). */
+export async function calibrateCasting(shopId: string, castingId: number) {
+  return refreshCalibration(shopId, await shopRules(shopId), { castingIds: [castingId] });
+}
+
 /**
  * Per shop, the learning at one revision, as a promise: requests that arrive together while it is being
  * worked out share the one computation. The revision is read before the rows, so a write that lands in

@@ -1,32 +1,14 @@
 import { and, eq } from "drizzle-orm";
 import { beforeAll, describe, expect, it } from "vitest";
 import { confirmations, defectMarks, melts } from "../../db/schema";
-import { causeRecordsOf, confirmedCasesOf, ruleRecordsOf, type Tally } from "../../rules/calibration";
 import { db } from "../../server/db";
-import { calibrationTallies, recomputedTallies, refreshCalibration } from "../../server/rulebook/calibration";
+import { refreshCalibration } from "../../server/rulebook/calibration";
 import { shopLearning, shopRules } from "../../server/rulebook/context";
-import { migrateOnce, shopWithCrew, type Person } from "./helpers";
+import { confirm, expectSameAsRecomputed } from "./calibration-check";
+import { migrateOnce, shopWithCrew } from "./helpers";
 import { newCasting, newMelt } from "./notebook-fixtures";
 
 beforeAll(migrateOnce);
-
-const confirm = async (p: Person, castingId: number, body: object) => {
-  const res = await p.agent.post(`/api/review/castings/${castingId}/confirmations`).send(body);
-  expect(res.status, res.text).toBe(201);
-};
-const sorted = (ts: Tally[]) => [...ts].sort((a, b) => JSON.stringify(a).localeCompare(JSON.stringify(b)));
-
-/** The kept learning against every confirmed case run again: tallies, rule records and cause records. */
-async function expectSameAsRecomputed(shopId: string, step: string) {
-  const learning = await shopLearning(shopId);
-  const rules = await shopRules(shopId);
-  const reference = await recomputedTallies(shopId, rules);
-  expect(sorted(await calibrationTallies(shopId, rules)), step).toEqual(sorted(reference));
-  expect(learning.ruleRecords, step).toEqual(ruleRecordsOf(reference, rules.everyRule.rules));
-  expect(learning.causeRecords, step).toEqual(causeRecordsOf(reference));
-  expect(learning.confirmedCases, step).toBe(confirmedCasesOf(reference));
-  return learning;
-}
 
 describe("the calibration kept case by case", () => {
   it("equals a full recomputation after confirmations, corrections, edits and confirmations taken back", async () => {
@@ -56,7 +38,7 @@ describe("the calibration kept case by case", () => {
 
     // The confirmation's own request worked its case out: nothing is left for the next diagnosis.
     const rules = await shopRules(shopId);
-    expect(await refreshCalibration(shopId, rules)).toBe(0);
+    expect((await refreshCalibration(shopId, rules)).rows).toBe(0);
 
     await confirm(mentor, c[1], { causeId: "turbulent-fill" }); // a correction: the newest counts
     await expectSameAsRecomputed(shopId, "a correction");
@@ -65,7 +47,7 @@ describe("the calibration kept case by case", () => {
 
     // Writes outside the review routes: each marks only its castings' rows, worked out at the next diagnosis.
     await db.update(melts).set({ pourTempC: 790, meltTempC: 810 }).where(eq(melts.id, cold.id));
-    expect(await refreshCalibration(shopId, rules)).toBe(3); // c0, c1 and c4 were poured from that melt
+    expect((await refreshCalibration(shopId, rules)).rows).toBe(3); // c0, c1 and c4 were poured from that melt
     await expectSameAsRecomputed(shopId, "a melt made hotter");
     await db.insert(defectMarks).values({
       shopId,
@@ -79,13 +61,13 @@ describe("the calibration kept case by case", () => {
     await db.delete(confirmations).where(and(eq(confirmations.shopId, shopId), eq(confirmations.castingId, c[0])));
     const back = await expectSameAsRecomputed(shopId, "a confirmation taken back");
     await db.insert(confirmations).values({ shopId, castingId: c[0], causeId: "cold-pour", createdBy: mentor.userId });
-    expect(await refreshCalibration(shopId, rules)).toBe(1);
+    expect((await refreshCalibration(shopId, rules)).rows).toBe(1);
     expect((await expectSameAsRecomputed(shopId, "confirmed again")).confirmedCases).toBe(back.confirmedCases + 1);
 
     // A new shop cause changes the rule set: every row is worked out again, once.
     await confirm(mentor, c[3], { causeText: "Wet ladle", makeShopCause: true, newCauseFix: "Dry the ladle" });
     await expectSameAsRecomputed(shopId, "a new shop cause");
-    expect(await refreshCalibration(shopId, await shopRules(shopId))).toBe(0);
+    expect((await refreshCalibration(shopId, await shopRules(shopId))).rows).toBe(0);
   });
 
   it("keeps each shop's tallies to itself", async () => {
