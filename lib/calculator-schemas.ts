@@ -68,7 +68,11 @@ export const calculatorInputSchemas = {
   }),
 } satisfies { [K in CalculatorKind]: z.ZodType<CalculatorInputs[K]> };
 
-/** Saving a result onto a melt or a casting: the server works it out again from the input. */
+/**
+ * Saving a result onto a melt or a casting: the server works it out again from the input. Not built
+ * from the calculations table: `input` is checked by its kind's schema above, `result` is the server's
+ * own, and the melt comes from the casting when a casting is named, so the body is not one field per column.
+ */
 export const saveCalculationInput = z
   .strictObject({
     kind: z.enum(CALCULATORS, { error: `kind is one of: ${CALCULATORS.join(", ")}` }),

@@ -7,6 +7,7 @@ import type { DiagnosisResult } from "../rules/rank";
 import { castingConditionChecks, meltConditionChecks } from "./condition-fields";
 import { calendarDate, requiredText, rowId, text } from "./fields";
 import { OUTCOMES } from "./outcomes";
+import { SI_UNITS } from "./units";
 import { tableInput } from "./table-schemas";
 import { castingWeightChecks, castingWeightConflicts, meltWeightChecks } from "./weight-fields";
 
@@ -233,7 +234,7 @@ export const unitsInput = tableInput(
   ["userId"],
 );
 export type Units = z.infer<typeof unitsInput>;
-export const DEFAULT_UNITS: Units = { temperature: "C", length: "mm", mass: "kg" };
+export const DEFAULT_UNITS: Units = SI_UNITS;
 
 /**
  * Lists page by keyset: `after` is the `next` of the previous answer (opaque; it names the sort it

@@ -1,7 +1,9 @@
 import { z } from "zod";
+import { noticeSettings } from "../db/people-schema";
 import { emailField, passwordField } from "./auth-forms";
 import { requiredText } from "./fields";
 import { SHOP_ROLES } from "./permissions";
+import { tableInput } from "./table-schemas";
 
 /** Inputs of the people routes (server/people) and the forms that send them. */
 export const roleField = z.enum(SHOP_ROLES, { error: "Choose owner, mentor or caster" });
@@ -53,11 +55,13 @@ export const MEMBER_CHANGE_WORDS: Record<string, string> = {
   left: "left",
 };
 
-/** E-mail notices each person can turn off. */
-export const noticeSettingsInput = z
-  .object({
+/** E-mail notices each person can turn off: the notice_settings row, whose person is the one signed in. */
+export const noticeSettingsInput = tableInput(
+  noticeSettings,
+  {
     reviewRequested: z.boolean({ error: "true or false" }),
     causeConfirmed: z.boolean({ error: "true or false" }),
-  })
-  .strict();
+  },
+  ["userId"],
+).strict();
 export type NoticeSettings = z.infer<typeof noticeSettingsInput>;

@@ -15,6 +15,8 @@ import type { CauseOption } from "./rulebook-schemas";
  */
 const note = (max: number) => text(max).optional();
 
+// Written out, not built from review_requests: its note column is nullable, and tableInput would let a
+// request send `note: null`, which the API has never accepted; the note is the request's only field.
 export const reviewRequestInput = z.object({ note: note(1000) });
 
 /**

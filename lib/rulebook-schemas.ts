@@ -7,7 +7,9 @@ import type { RuleStatus } from "../rules/rule-diff";
 import type { Backtest } from "../rules/backtest";
 import type { CauseRecord, RuleRecord } from "../rules/calibration";
 import type { Contradiction } from "../rules/satisfiable";
+import { ruleSwitches } from "../db/mentor-schema";
 import { requiredText, text } from "./fields";
+import { tableInput } from "./table-schemas";
 import type { PersonRef } from "./notebook-schemas";
 
 /**
@@ -194,7 +196,12 @@ export function ruleToDraft(r: KbRule): RuleDraft {
   };
 }
 
-export const switchInput = z.object({ off: z.boolean({ error: "say whether the rule is off" }) });
+/** Switching a built-in rule off or on: the rule_switches row, its rule id from the URL. */
+export const switchInput = tableInput(ruleSwitches, { off: z.boolean({ error: "say whether the rule is off" }) }, [
+  "ruleId",
+]);
+// The rule draft and a trial are not rows of a table (the draft becomes a version's rule JSON), so
+// their schemas stay written out.
 export const trialInput = z.object({ draft: z.unknown(), ruleId: text(100).optional() });
 
 /** The facts the form offers, inputs first (what a caster logs), then the computed ones. */

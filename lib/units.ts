@@ -1,5 +1,5 @@
 import { parseInches } from "./inch-text";
-import { DEFAULT_UNITS, type Units } from "./notebook-schemas";
+import type { Units } from "./notebook-schemas";
 
 /**
  * A person's units and the conversions between them and the SI values the API keeps.
@@ -8,7 +8,9 @@ import { DEFAULT_UNITS, type Units } from "./notebook-schemas";
  * tests/rules/units.test.ts checks them against convert-units, a general reference library.
  */
 export type { Units };
-export const SI_UNITS: Units = DEFAULT_UNITS;
+// Written out rather than taken from lib/notebook-schemas.ts (whose DEFAULT_UNITS is this value): that
+// module builds schemas from the tables, and the sign-in page, which reaches this one, should not carry them.
+export const SI_UNITS: Units = { temperature: "C", length: "mm", mass: "kg" };
 
 export const MM_PER_IN = 25.4;
 export const KG_PER_LB = 0.45359237;

@@ -14,6 +14,12 @@ import {
   unitsInput,
 } from "../../lib/notebook-schemas";
 import { fixInput } from "../../lib/review-schemas";
+import { shopSettingsInput } from "../../lib/shop-settings";
+import { shopSettings } from "../../db/schema";
+import { noticeSettings } from "../../db/people-schema";
+import { ruleSwitches } from "../../db/mentor-schema";
+import { noticeSettingsInput } from "../../lib/people-schemas";
+import { switchInput } from "../../lib/rulebook-schemas";
 import { tableInput } from "../../lib/table-schemas";
 
 // The input schemas are built from the tables (lib/table-schemas.ts): these checks fail when a table
@@ -32,6 +38,9 @@ const cases: { name: string; table: Table; schema: z.ZodType; fromUrl: string[];
   { name: "alloys", table: alloys, schema: alloyInput, fromUrl: ["designationKey"] },
   { name: "comments", table: comments, schema: commentInput, fromUrl: ["castingId"] },
   { name: "person units", table: personUnits, schema: unitsInput, fromUrl: ["userId"] },
+  { name: "shop settings", table: shopSettings, schema: shopSettingsInput, fromUrl: [] },
+  { name: "notice settings", table: noticeSettings, schema: noticeSettingsInput, fromUrl: ["userId"] },
+  { name: "rule switches", table: ruleSwitches, schema: switchInput, fromUrl: ["ruleId"] },
 ];
 
 describe.each(cases)("the $name input schema", ({ table, schema, fromUrl, renamed }) => {
