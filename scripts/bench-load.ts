@@ -26,6 +26,12 @@ const ONLY = process.argv
   ?.split("=")[1]
   ?.split(",");
 const wanted = (target: string) => !ONLY || ONLY.includes(target);
+/**
+ * Requests/s before the shop gate read session and membership in one query (2026-12-03, this
+ * machine, 100,000 cases, other jobs running: load average about 3-6). The floor was measured then
+ * on a 100,000-case copy, old and new servers side by side at the same load (load average 7): 349 req/s.
+ */
+const BEFORE: Record<string, number> = { floor: 349, melts: 391, casting: 255, search: 23, castings: 177 };
 
 const ground = await benchGround({ name: "load", child: true, env: { RATE_LIMIT: "off" } });
 const { sql } = await import("drizzle-orm");
@@ -35,7 +41,7 @@ type Figures = { name: string; rps: number; p50: number; p95: number; p99: numbe
 const at = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.floor(p * sorted.length))] ?? NaN;
 
 /** One target under load; `paths` are taken in turn, one per request. */
-async function load(name: string, cookie: string, paths: string[]): Promise<Figures> {
+async function load(name: string, cookie: string, paths: string[], target?: string): Promise<Figures> {
   let n = 0;
   const times: number[] = [];
   const result = await new Promise<autocannon.Result>((resolve, reject) => {
@@ -65,7 +71,10 @@ async function load(name: string, cookie: string, paths: string[]): Promise<Figu
   console.log(
     `${name.padEnd(52)} ${figures.rps.toFixed(0).padStart(6)} req/s   p50 ${figures.p50.toFixed(0).padStart(5)} ms   ` +
       `p95 ${figures.p95.toFixed(0).padStart(5)} ms   p99 ${figures.p99.toFixed(0).padStart(5)} ms   ` +
-      `errors ${figures.errors}   (aim 0 errors, ≥ ${AIM_RPS} req/s: ${aim}; load average ${loadavg()[0].toFixed(1)})`,
+      `errors ${figures.errors}   (aim 0 errors, ≥ ${AIM_RPS} req/s: ${aim}; load average ${loadavg()[0].toFixed(1)})` +
+      (target && BEFORE[target]
+        ? `   before: ${BEFORE[target]} req/s, ${(figures.rps / BEFORE[target]).toFixed(1)}x`
+        : ""),
   );
   return figures;
 }
@@ -122,13 +131,13 @@ try {
   ])
     await check(cookie, path);
 
-  if (wanted("floor")) await load("signed-in floor: GET /api/shops/current", cookie, ["/api/shops/current"]);
-  if (wanted("melts")) await load("melts list, first page (keyset)", cookie, ["/api/melts"]);
-  if (wanted("casting")) await load("a casting's page (200 castings in turn)", cookie, details);
-  if (wanted("search")) await load("casebook search (6 queries in turn)", cookie, searches);
+  if (wanted("floor")) await load("signed-in floor: GET /api/shops/current", cookie, ["/api/shops/current"], "floor");
+  if (wanted("melts")) await load("melts list, first page (keyset)", cookie, ["/api/melts"], "melts");
+  if (wanted("casting")) await load("a casting's page (200 castings in turn)", cookie, details, "casting");
+  if (wanted("search")) await load("casebook search (6 queries in turn)", cookie, searches, "search");
   const first =
     wanted("castings") || wanted("deep")
-      ? await load("castings list, first page (keyset)", cookie, ["/api/castings"])
+      ? await load("castings list, first page (keyset)", cookie, ["/api/castings"], "castings")
       : null;
   if (wanted("deep") && first) {
     const firstOld = await load("castings list, first page (previous: offset + count)", cookie, [
