@@ -90,8 +90,11 @@ export const searchWords = pgTable(
   (t) => [
     primaryKey({ name: "search_words_pk", columns: [t.shopId, t.word] }),
     // GiST, not GIN: it answers "the nearest words first" (ORDER BY word <-> query LIMIT n) from the
-    // index itself, within one shop (btree_gist lets shop_id share the index).
-    index("search_words_nearest_idx").using("gist", t.shopId, t.word.op("gist_trgm_ops")),
+    // index itself, within one shop (btree_gist lets shop_id share the index). Signatures of 128
+    // bytes instead of pg_trgm's 12: with 12 most of a 28,000-word vocabulary collides and the walk
+    // checks many more words per lookup; at 100,000 cases a four-word query's lookups went from about
+    // 33 ms to 23 ms (1024 bytes was slower again: bigger pages). Same operator, same nearest words.
+    index("search_words_nearest_idx").using("gist", t.shopId, t.word.op("gist_trgm_ops(siglen=128)")),
   ],
 );
 

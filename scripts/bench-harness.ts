@@ -102,7 +102,9 @@ export async function benchGround(opts: Options) {
   }
 
   async function startChild() {
-    const started = spawn(process.execPath, ["--import", "tsx", join(ROOT, "scripts/bench-server.ts")], {
+    // BENCH_CPU_PROF=<folder>: the child writes a V8 CPU profile there when it stops (scripts/cpu-profile-summary.ts reads it).
+    const profile = process.env.BENCH_CPU_PROF ? ["--cpu-prof", `--cpu-prof-dir=${process.env.BENCH_CPU_PROF}`] : [];
+    const started = spawn(process.execPath, [...profile, "--import", "tsx", join(ROOT, "scripts/bench-server.ts")], {
       env: process.env,
       stdio: ["ignore", "pipe", "inherit"],
     });

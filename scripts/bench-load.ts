@@ -6,6 +6,9 @@
  * own (scripts/bench-harness.ts). Then the lists deep inside (row 50,000) by keyset, beside the
  * previous design's offset paging with a count of the shop (scripts/bench-previous-lists.ts), as a
  * ratio. Prints requests/s, p50/p95/p99 latency and errors for each, with the load average; asserts nothing.
+ * First the floor under every request: a signed-in GET /api/shops/current (the session and membership
+ * check and a small JSON answer). `--only=floor,search` runs only the targets named (floor, melts,
+ * casting, search, castings, deep); BENCH_CPU_PROF=<folder> profiles the server (bench-harness.ts).
  */
 import autocannon from "autocannon";
 import { availableParallelism, loadavg } from "node:os";
@@ -18,6 +21,17 @@ const SECONDS = flag("seconds", 30);
 const CASES = flag("cases", 100_000);
 const CONNECTIONS = 50;
 const AIM_RPS = 200;
+const ONLY = process.argv
+  .find((a) => a.startsWith("--only="))
+  ?.split("=")[1]
+  ?.split(",");
+const wanted = (target: string) => !ONLY || ONLY.includes(target);
+/**
+ * Requests/s before the shop gate read session and membership in one query (2026-12-03, this
+ * machine, 100,000 cases, other jobs running: load average about 3-6). The floor was measured then
+ * on a 100,000-case copy, old and new servers side by side at the same load (load average 7): 349 req/s.
+ */
+const BEFORE: Record<string, number> = { floor: 349, melts: 391, casting: 255, search: 23, castings: 177 };
 
 const ground = await benchGround({ name: "load", child: true, env: { RATE_LIMIT: "off" } });
 const { sql } = await import("drizzle-orm");
@@ -27,7 +41,7 @@ type Figures = { name: string; rps: number; p50: number; p95: number; p99: numbe
 const at = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.floor(p * sorted.length))] ?? NaN;
 
 /** One target under load; `paths` are taken in turn, one per request. */
-async function load(name: string, cookie: string, paths: string[]): Promise<Figures> {
+async function load(name: string, cookie: string, paths: string[], target?: string): Promise<Figures> {
   let n = 0;
   const times: number[] = [];
   const result = await new Promise<autocannon.Result>((resolve, reject) => {
@@ -57,7 +71,10 @@ async function load(name: string, cookie: string, paths: string[]): Promise<Figu
   console.log(
     `${name.padEnd(52)} ${figures.rps.toFixed(0).padStart(6)} req/s   p50 ${figures.p50.toFixed(0).padStart(5)} ms   ` +
       `p95 ${figures.p95.toFixed(0).padStart(5)} ms   p99 ${figures.p99.toFixed(0).padStart(5)} ms   ` +
-      `errors ${figures.errors}   (aim 0 errors, ≥ ${AIM_RPS} req/s: ${aim}; load average ${loadavg()[0].toFixed(1)})`,
+      `errors ${figures.errors}   (aim 0 errors, ≥ ${AIM_RPS} req/s: ${aim}; load average ${loadavg()[0].toFixed(1)})` +
+      (target && BEFORE[target]
+        ? `   before: ${BEFORE[target]} req/s, ${(figures.rps / BEFORE[target]).toFixed(1)}x`
+        : ""),
   );
   return figures;
 }
@@ -114,34 +131,40 @@ try {
   ])
     await check(cookie, path);
 
-  await load("melts list, first page (keyset)", cookie, ["/api/melts"]);
-  await load("a casting's page (200 castings in turn)", cookie, details);
-  await load("casebook search (6 queries in turn)", cookie, searches);
-  const first = await load("castings list, first page (keyset)", cookie, ["/api/castings"]);
-  const firstOld = await load("castings list, first page (previous: offset + count)", cookie, [
-    "/api/bench-previous/castings?page=1",
-  ]);
-  const deep = await load(`castings list at row ${deepRow.toLocaleString("en")} (keyset)`, cookie, [deepCastings]);
-  const deepOld = await load(
-    `castings list at row ${deepRow.toLocaleString("en")} (previous: offset + count)`,
-    cookie,
-    [previousCastings],
-  );
-  const melts = await load(`melts list at row ${meltsDeep.toLocaleString("en")} (keyset)`, cookie, [deepMelts]);
-  const meltsOld = await load(
-    `melts list at row ${meltsDeep.toLocaleString("en")} (previous: offset + count)`,
-    cookie,
-    [previousMelts],
-  );
-  const ratio = (a: Figures, b: Figures) =>
-    `${(a.rps / b.rps).toFixed(1)}x the requests/s, p95 ${(b.p95 / a.p95).toFixed(1)}x shorter`;
-  console.log(
-    `\nkeyset against the previous offset paging:` +
-      `\n  castings list, first page: ${ratio(first, firstOld)}` +
-      `\n  castings list, row ${deepRow.toLocaleString("en")}: ${ratio(deep, deepOld)}` +
-      `\n  melts list, row ${meltsDeep.toLocaleString("en")}: ${ratio(melts, meltsOld)}` +
-      `\n  (issue 11 recorded 9.6 req/s for GET /api/castings at 100,000 cases before either change)`,
-  );
+  if (wanted("floor")) await load("signed-in floor: GET /api/shops/current", cookie, ["/api/shops/current"], "floor");
+  if (wanted("melts")) await load("melts list, first page (keyset)", cookie, ["/api/melts"], "melts");
+  if (wanted("casting")) await load("a casting's page (200 castings in turn)", cookie, details, "casting");
+  if (wanted("search")) await load("casebook search (6 queries in turn)", cookie, searches, "search");
+  const first =
+    wanted("castings") || wanted("deep")
+      ? await load("castings list, first page (keyset)", cookie, ["/api/castings"], "castings")
+      : null;
+  if (wanted("deep") && first) {
+    const firstOld = await load("castings list, first page (previous: offset + count)", cookie, [
+      "/api/bench-previous/castings?page=1",
+    ]);
+    const deep = await load(`castings list at row ${deepRow.toLocaleString("en")} (keyset)`, cookie, [deepCastings]);
+    const deepOld = await load(
+      `castings list at row ${deepRow.toLocaleString("en")} (previous: offset + count)`,
+      cookie,
+      [previousCastings],
+    );
+    const melts = await load(`melts list at row ${meltsDeep.toLocaleString("en")} (keyset)`, cookie, [deepMelts]);
+    const meltsOld = await load(
+      `melts list at row ${meltsDeep.toLocaleString("en")} (previous: offset + count)`,
+      cookie,
+      [previousMelts],
+    );
+    const ratio = (a: Figures, b: Figures) =>
+      `${(a.rps / b.rps).toFixed(1)}x the requests/s, p95 ${(b.p95 / a.p95).toFixed(1)}x shorter`;
+    console.log(
+      `\nkeyset against the previous offset paging:` +
+        `\n  castings list, first page: ${ratio(first, firstOld)}` +
+        `\n  castings list, row ${deepRow.toLocaleString("en")}: ${ratio(deep, deepOld)}` +
+        `\n  melts list, row ${meltsDeep.toLocaleString("en")}: ${ratio(melts, meltsOld)}` +
+        `\n  (issue 11 recorded 9.6 req/s for GET /api/castings at 100,000 cases before either change)`,
+    );
+  }
 } finally {
   await ground.stop();
 }

@@ -12,4 +12,6 @@ const { previousLists } = await import("./bench-previous-lists");
 const outer = express();
 outer.use("/api/bench-previous", previousLists());
 outer.use(createApp());
+// A clean exit on SIGTERM, so `--cpu-prof` (BENCH_CPU_PROF in bench-harness.ts) writes its profile.
+process.on("SIGTERM", () => process.exit(0));
 outer.listen(Number(process.env.PORT), "127.0.0.1", () => console.log("listening"));

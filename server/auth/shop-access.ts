@@ -6,6 +6,7 @@ import { member } from "../../db/schema";
 import { roleCan, type Permission, type ShopRole } from "../../lib/permissions";
 import { HttpError } from "../http/errors";
 import { getAuth } from "./auth";
+import { sessionMember, type SessionMember } from "./session-member";
 
 /** Who is asking, in which shop, with which role: set on every shop-scoped request. */
 export type ShopMember = { userId: string; userName: string; shopId: string; role: ShopRole };
@@ -23,12 +24,25 @@ export async function sessionOf(headers: Parameters<typeof fromNodeHeaders>[0]) 
 /**
  * The gate in front of every shop route: a signed-in person who belongs to the active shop.
  * Without an active shop the person's oldest membership is used. Role checks come after, in `allow`.
+ * One query answers the usual request (session-member.ts); better-auth's getSession answers the rest.
  */
 export const requireShopMember: RequestHandler = async (req, _res, next) => {
-  const session = await sessionOf(req.headers);
-  if (!session) throw new HttpError(401, "Please sign in.");
+  const fast = await sessionMember(req.headers);
+  if (fast === "unsigned") throw new HttpError(401, "Please sign in.");
+  const found = fast === "ask-better-auth" ? await memberThroughBetterAuth(req.headers) : fast;
+  if (!found) throw new HttpError(401, "Please sign in.");
+  if (!found.shop)
+    throw new HttpError(403, "You do not belong to a shop yet: create one or ask an owner to invite you.");
+  req.member = { userId: found.userId, userName: found.userName, ...found.shop };
+  next();
+};
+
+/** The same answer as sessionMember's, through getSession (which renews or ends the session) and a member query. */
+async function memberThroughBetterAuth(headers: Parameters<typeof fromNodeHeaders>[0]): Promise<SessionMember | null> {
+  const session = await sessionOf(headers);
+  if (!session) return null;
   const userId = session.user.id;
-  const activeShopId = session.session.activeOrganizationId;
+  const activeShopId = session.session.activeOrganizationId ?? null;
   const rows = await db
     .select({ shopId: member.organizationId, role: member.role })
     .from(member)
@@ -40,10 +54,13 @@ export const requireShopMember: RequestHandler = async (req, _res, next) => {
     .orderBy(asc(member.createdAt))
     .limit(1);
   const row = rows[0];
-  if (!row) throw new HttpError(403, "You do not belong to a shop yet: create one or ask an owner to invite you.");
-  req.member = { userId, userName: session.user.name, shopId: row.shopId, role: row.role as ShopRole };
-  next();
-};
+  return {
+    userId,
+    userName: session.user.name,
+    activeShopId,
+    shop: row ? { shopId: row.shopId, role: row.role as ShopRole } : null,
+  };
+}
 
 /** Role check, declared beside the route: `router.patch("/settings", allow({ shop: ["settings"] }), ...)`. */
 export function allow(permission: Permission): RequestHandler {

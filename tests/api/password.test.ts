@@ -49,6 +49,8 @@ describe("password reset by e-mail", () => {
     const p = await signUp("resetter");
     await createShop(p, "Reset Shop");
     const other = await signedInAgain(p);
+    // Both sessions pass the shop gate (server/auth/shop-access.ts) before the reset...
+    for (const agent of [p.agent, other]) expect((await agent.get("/api/shops/current")).status).toBe(200);
     await askReset(p.email);
     const [message] = await waitForMail(p.email);
     expect(message.text).toContain("Reset Shop");
@@ -60,6 +62,8 @@ describe("password reset by e-mail", () => {
     expect((await reset(token, "another-pass-8")).status).toBe(400);
 
     for (const agent of [p.agent, other]) {
+      // ...and neither does after it (asked first: get-session would clear the cookie).
+      expect((await agent.get("/api/shops/current")).status).toBe(401);
       const session = await agent.get("/api/auth/get-session");
       expect(session.body).toBeNull();
     }

@@ -149,5 +149,10 @@ describe("two app servers on one database and one object store", () => {
     const again = await through(a, person, cookie).agent.get(`/api/castings/${casting.id}`);
     expect(again.status).toBe(200);
     expect(again.body.photos).toHaveLength(1);
+
+    // Signed out through A, the same cookie is refused by B's shop gate on its very next request.
+    expect((await viaB.agent.get("/api/melts")).status).toBe(200);
+    expect((await through(a, person, cookie).agent.post("/api/auth/sign-out").send({})).status).toBe(200);
+    expect((await viaB.agent.get("/api/melts")).status).toBe(401);
   });
 });
