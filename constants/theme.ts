@@ -36,6 +36,18 @@ export const fonts = { heading: "Lora-SemiBold", serif: "Lora-Regular" } as cons
 export const fontSize = { small: 13, detail: 14, body: 15, field: 16, lead: 17, title: 20, display: 26 } as const;
 
 /** The white card on the paper background: lists, forms and panels share it. */
+/** The box a person types into: text, numbers, dates and search fields share it. */
+export const fieldBox = {
+  minHeight: 44,
+  borderWidth: 1,
+  borderColor: colors.line,
+  borderRadius: radius.sm,
+  paddingHorizontal: space.md,
+  fontSize: fontSize.field,
+  backgroundColor: colors.surface,
+  color: colors.ink,
+} as const;
+
 export const card = {
   backgroundColor: colors.surface,
   borderRadius: radius.md,

@@ -3,7 +3,7 @@ import { Pressable, StyleSheet, Text, TextInput, View } from "react-native";
 import { ChoiceChips } from "@/components/ui/choice-chips";
 import { FieldError } from "@/components/ui/field-error";
 import { TextField } from "@/components/ui/text-field";
-import { colors, fontSize, radius, space } from "@/constants/theme";
+import { colors, fieldBox, fontSize, radius, space } from "@/constants/theme";
 import type { RuleFormState } from "@/hooks/use-rule-draft";
 import type { CauseOption } from "@/lib/rulebook-schemas";
 
@@ -93,16 +93,7 @@ export function RuleCausePicker({ state, causes, errors, set }: Props) {
 const styles = StyleSheet.create({
   wrap: { gap: space.sm },
   chosen: { fontSize: fontSize.body, fontWeight: "600", color: colors.steel },
-  search: {
-    minHeight: 44,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.sm,
-    paddingHorizontal: space.md,
-    fontSize: fontSize.field,
-    backgroundColor: colors.surface,
-    color: colors.ink,
-  },
+  search: { ...fieldBox },
   list: { borderWidth: 1, borderColor: colors.line, borderRadius: radius.sm, backgroundColor: colors.surface },
   option: {
     flexDirection: "row",

@@ -1,7 +1,7 @@
 import { createElement, useRef } from "react";
 import { Platform, Pressable, StyleSheet, Text, TextInput, View } from "react-native";
 import { printHidden } from "@/components/ui/print";
-import { colors, fontSize, radius, space } from "@/constants/theme";
+import { colors, fieldBox, fontSize, radius, space } from "@/constants/theme";
 import { addDays, dayInWords, isCalendarDay, localDay } from "@/lib/dates";
 
 type Props = {
@@ -109,18 +109,7 @@ const styles = StyleSheet.create({
   wrap: { gap: space.xs },
   label: { fontSize: fontSize.detail, fontWeight: "600", color: colors.ink },
   row: { flexDirection: "row", gap: space.sm, alignItems: "stretch" },
-  input: {
-    flex: 1,
-    maxWidth: 200,
-    minHeight: 44,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.sm,
-    paddingHorizontal: space.md,
-    fontSize: fontSize.field,
-    backgroundColor: colors.surface,
-    color: colors.ink,
-  },
+  input: { ...fieldBox, flex: 1, maxWidth: 200 },
   inputError: { borderColor: colors.danger },
   button: {
     minHeight: 44,

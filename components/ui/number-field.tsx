@@ -1,5 +1,5 @@
 import { Platform, StyleSheet, Text, TextInput, View, type TextInputProps } from "react-native";
-import { colors, fontSize, radius, space } from "@/constants/theme";
+import { colors, fieldBox, fontSize, space } from "@/constants/theme";
 
 type Props = {
   label: string;
@@ -66,18 +66,7 @@ const styles = StyleSheet.create({
   label: { fontSize: fontSize.detail, fontWeight: "600", color: colors.ink },
   // A number is short: the box stays narrow on a wide screen.
   row: { flexDirection: "row", alignItems: "center", gap: space.sm, maxWidth: 280 },
-  input: {
-    flex: 1,
-    minWidth: 0,
-    minHeight: 44,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.sm,
-    paddingHorizontal: space.md,
-    fontSize: fontSize.field,
-    backgroundColor: colors.surface,
-    color: colors.ink,
-  },
+  input: { ...fieldBox, flex: 1, minWidth: 0 },
   inputError: { borderColor: colors.danger },
   unit: { fontSize: fontSize.body, color: colors.muted, minWidth: 36 },
   error: { color: colors.danger, fontSize: fontSize.detail },

@@ -1,5 +1,5 @@
 import { StyleSheet, Text, TextInput, View, type TextInputProps } from "react-native";
-import { colors, fontSize, radius, space } from "@/constants/theme";
+import { colors, fieldBox, fontSize, space } from "@/constants/theme";
 
 type Props = TextInputProps & { label: string; error?: string };
 
@@ -27,16 +27,7 @@ export function TextField({ label, error, style, ...input }: Props) {
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
   label: { fontSize: fontSize.detail, fontWeight: "600", color: colors.ink },
-  input: {
-    minHeight: 44,
-    borderWidth: 1,
-    borderColor: colors.line,
-    borderRadius: radius.sm,
-    paddingHorizontal: space.md,
-    fontSize: fontSize.field,
-    backgroundColor: colors.surface,
-    color: colors.ink,
-  },
+  input: { ...fieldBox },
   inputError: { borderColor: colors.danger },
   error: { color: colors.danger, fontSize: fontSize.detail },
 });
