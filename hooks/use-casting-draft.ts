@@ -1,6 +1,6 @@
 import { useState } from "react";
 import { useStoredDraft } from "@/hooks/use-stored-draft";
-import { fieldErrors } from "@/lib/field-errors";
+import { fieldErrors, messagesAfterChange } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { CASTING_CONDITIONS } from "@/lib/condition-fields";
 import { conditionsFromDraft, conditionsToDraft, type ConditionDraft } from "@/lib/condition-drafts";
@@ -53,8 +53,11 @@ export function useCastingDraft(initial: CastingInitial, units: Units, form?: st
   const [start] = useState(() => draftFrom(initial, units));
   const [draft, setDraft] = useState(start);
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const set = <K extends keyof CastingDraft>(key: K, value: CastingDraft[K]) =>
+  const set = <K extends keyof CastingDraft>(key: K, value: CastingDraft[K]) => {
+    // A corrected field stops showing its message at once, not at the next save.
+    setErrors((e) => messagesAfterChange(e, key, draft[key], value));
     setDraft((d) => ({ ...d, [key]: value }));
+  };
   const stored = useStoredDraft(form, units, draft, start, setDraft);
   const startOver = async () => {
     await stored.discard();

@@ -32,3 +32,22 @@ export function fieldErrors(
 ): Record<string, string> {
   return messagesInUnits(fieldMessages(issues, options), units);
 }
+
+/**
+ * The messages left once a form's field `key` changes from `before` to `after`: that field's own
+ * message goes (it was about the old value), as does "_", the message about the form as a whole.
+ * For a group of fields kept in one object (a draft's conditions), each changed member's message goes.
+ * The rest stay until the next check, so a corrected field stops saying it is wrong at once.
+ */
+export function messagesAfterChange(errors: Record<string, string>, key: string, before: unknown, after: unknown) {
+  const changed = new Set(["_", key]);
+  if (isGroup(before) || isGroup(after)) {
+    const b = isGroup(before) ? before : {};
+    const a = isGroup(after) ? after : {};
+    for (const k of new Set([...Object.keys(b), ...Object.keys(a)])) if (b[k] !== a[k]) changed.add(k);
+  }
+  if (!Object.keys(errors).some((k) => changed.has(k))) return errors;
+  return Object.fromEntries(Object.entries(errors).filter(([k]) => !changed.has(k)));
+}
+
+const isGroup = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);

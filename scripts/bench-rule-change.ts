@@ -10,6 +10,7 @@
 import { execSync } from "node:child_process";
 import { performance } from "node:perf_hooks";
 import { benchGround, benchShop } from "./bench-harness";
+import { misrunRule } from "./fixtures/misrun-rule";
 
 const sizesArg = process.argv.find((a) => a.startsWith("--sizes="));
 const sizes = (sizesArg?.slice("--sizes=".length) ?? "10000,100000").split(",").map(Number);
@@ -32,20 +33,6 @@ const beside = (size: number, key: keyof Figures, now: number) => {
   return before === undefined ? ms(now) : `${ms(now)} (before ${ms(before)}: ${(before / now).toFixed(1)}x)`;
 };
 const uptime = () => execSync("uptime").toString().trim();
-
-/** A misrun rule of the shop's own: a thin wall poured with little superheat (common practice). */
-const draft = (superheatBelowC: number) => ({
-  defectTypes: ["misrun"],
-  locations: [],
-  conditions: [
-    { fact: "superheatC", comparison: "below", value: superheatBelowC },
-    { fact: "minSectionMm", comparison: "below", value: 6 },
-  ],
-  cause: { kind: "existing", id: "cold-pour" },
-  weight: 0.8,
-  because: "Only {superheatC} °C above liquidus into a {minSectionMm} mm wall",
-  sources: ["shop experience"],
-});
 
 async function timed(cookie: string, method: string, path: string, body?: object) {
   const t0 = performance.now();
@@ -70,10 +57,10 @@ try {
       )
     ).rows[0] as { n: number };
     const first = await timed(cookie, "GET", "/api/rulebook");
-    const made = await timed(cookie, "POST", "/api/rulebook/rules", draft(60));
+    const made = await timed(cookie, "POST", "/api/rulebook/rules", misrunRule(60));
     const id = made.body.id as string;
     const publish = await timed(cookie, "POST", `/api/rulebook/rules/${id}/publish`);
-    await timed(cookie, "PUT", `/api/rulebook/rules/${id}`, draft(50));
+    await timed(cookie, "PUT", `/api/rulebook/rules/${id}`, misrunRule(50));
     const edit = await timed(cookie, "POST", `/api/rulebook/rules/${id}/publish`);
     const off = await timed(cookie, "PUT", "/api/rulebook/rules/misrun-thin-wall-sand/switch", { off: true });
     const on = await timed(cookie, "PUT", "/api/rulebook/rules/misrun-thin-wall-sand/switch", { off: false });
@@ -82,7 +69,7 @@ try {
       await db.execute(sql`select c.id from castings c where c.shop_id = ${shop.shopId}
         and exists (select 1 from defect_marks d where d.casting_id = c.id) order by c.id limit 1`)
     ).rows as { id: number }[];
-    await timed(cookie, "PUT", `/api/rulebook/rules/${id}`, draft(40));
+    await timed(cookie, "PUT", `/api/rulebook/rules/${id}`, misrunRule(40));
     const publishing = timed(cookie, "POST", `/api/rulebook/rules/${id}/publish`);
     await new Promise((r) => setTimeout(r, 20));
     const confirmation = await timed(cookie, "POST", `/api/review/castings/${marked.id}/confirmations`, {

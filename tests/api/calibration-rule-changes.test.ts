@@ -7,27 +7,14 @@ import { shopLearning, shopRules } from "../../server/rulebook/context";
 import { confirm, expectSameAsRecomputed } from "./calibration-check";
 import { migrateOnce, shopWithCrew, type Person } from "./helpers";
 import { newCasting, newMelt } from "./notebook-fixtures";
+import { misrunRule } from "../../scripts/fixtures/misrun-rule";
 
 beforeAll(migrateOnce);
 
 /**
- * A misrun rule of the shop's own: little superheat into a wall under 6 mm (common practice, not a
- * figure of the trade). The cold melt has 85 °C of superheat, the hot one 165 °C (A356 liquidus
- * 615 °C [mem], docs/foundry-facts.md); the castings' walls are 4 mm.
+ * The shop's own misrun rule (scripts/fixtures/misrun-rule.ts). The cold melt has 85 °C of superheat,
+ * the hot one 165 °C (A356 liquidus 615 °C [mem], docs/foundry-facts.md); the castings' walls are 4 mm.
  */
-const misrunRule = (superheatBelowC: number) => ({
-  defectTypes: ["misrun"],
-  locations: [],
-  conditions: [
-    { fact: "superheatC", comparison: "below", value: superheatBelowC },
-    { fact: "minSectionMm", comparison: "below", value: 6 },
-  ],
-  cause: { kind: "existing", id: "cold-pour" },
-  weight: 0.8,
-  because: "Only {superheatC} °C above liquidus into a {minSectionMm} mm wall",
-  sources: ["shop experience"],
-});
-
 /** Three confirmed misruns (two cold, one hot) and one confirmed gas porosity. */
 async function shopWithCases(name: string) {
   const crew = await shopWithCrew(name);
