@@ -1,4 +1,5 @@
-// The layers, top to bottom: app -> components -> hooks -> lib -> rules, and server -> db -> lib/rules.
+// The layers, top to bottom: app -> components -> hooks -> lib -> rules, and server -> lib -> db -> rules
+// (lib/ builds its input schemas from the tables, so db/ takes its fixed lists from rules/, not lib/).
 // Each layer may import only the ones below it; scripts and tests may import anything.
 const prefixes = ["@/", "../", "../../", "../../../", "../../../../"];
 const above = (...folders) => folders.flatMap((f) => prefixes.flatMap((p) => [`${p}${f}`, `${p}${f}/**`]));
@@ -28,8 +29,8 @@ export const layerRules = [
   layer(["app/**"], ["server", "db", "scripts"], "routes reach the server through the API, not by import"),
   layer(
     ["db/**"],
-    ["server", "app", "components", "hooks", "scripts"],
-    "db/ holds tables and the client; it takes its URL as a parameter",
+    ["server", "lib", "app", "components", "hooks", "scripts"],
+    "db/ holds tables and the client; it takes its URL as a parameter and its fixed lists from rules/",
     // The web app bundles the table modules (lib/ builds its input schemas from them): pg-core's index
     // also brings the query builders, dialect and session, about 60 KB the app never runs.
     [

@@ -1,5 +1,5 @@
 import { pgEnum } from "drizzle-orm/pg-core/columns/enum";
-import { OUTCOMES, WORKED } from "../lib/outcomes";
+import { OUTCOMES, WORKED } from "../rules/outcomes";
 import {
   CHARGES,
   COATING_PERMEABILITIES,

@@ -6,7 +6,7 @@ import { ALLOY_FAMILIES, type AlloyFamily } from "../rules/fact-catalog";
 import type { DiagnosisResult } from "../rules/rank";
 import { castingConditionChecks, meltConditionChecks } from "./condition-fields";
 import { calendarDate, requiredText, rowId, text } from "./fields";
-import { OUTCOMES } from "./outcomes";
+import { OUTCOMES } from "../rules/outcomes";
 import { SI_UNITS } from "./units";
 import { tableInput } from "./table-schemas";
 import { castingWeightChecks, castingWeightConflicts, meltWeightChecks } from "./weight-fields";

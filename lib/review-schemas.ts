@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { fixesTried } from "../db/mentor-schema";
-import { WORKED, type Worked } from "./outcomes";
+import { WORKED, type Worked } from "../rules/outcomes";
 import type { DefectType, Process } from "../rules/case";
 import type { CauseRecord } from "../rules/calibration";
 import type { RankedCause } from "../rules/rank";

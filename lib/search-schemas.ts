@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { OUTCOMES } from "./outcomes";
+import { OUTCOMES } from "../rules/outcomes";
 import { DEFECT_TYPES, PROCESSES, type DefectLocation, type DefectType, type Process } from "../rules/case";
 import { DEFECTS } from "./defects";
 import { calendarDate, text } from "./fields";
