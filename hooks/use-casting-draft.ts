@@ -1,6 +1,5 @@
-import { useState } from "react";
-import { useStoredDraft } from "@/hooks/use-stored-draft";
-import { fieldErrors, messagesAfterChange } from "@/lib/field-errors";
+import { useFormDraft } from "@/hooks/use-form-draft";
+import { fieldErrors } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { CASTING_CONDITIONS } from "@/lib/condition-fields";
 import { conditionsFromDraft, conditionsToDraft, type ConditionDraft } from "@/lib/condition-drafts";
@@ -50,20 +49,11 @@ function draftFrom(c: CastingInitial, units: Units): CastingDraft {
 
 /** A casting form's values as typed, in the person's units, checked with the API's schema. */
 export function useCastingDraft(initial: CastingInitial, units: Units, form?: string) {
-  const [start] = useState(() => draftFrom(initial, units));
-  const [draft, setDraft] = useState(start);
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const set = <K extends keyof CastingDraft>(key: K, value: CastingDraft[K]) => {
-    // A corrected field stops showing its message at once, not at the next save.
-    setErrors((e) => messagesAfterChange(e, key, draft[key], value));
-    setDraft((d) => ({ ...d, [key]: value }));
-  };
-  const stored = useStoredDraft(form, units, draft, start, setDraft);
-  const startOver = async () => {
-    await stored.discard();
-    setDraft(start);
-    setErrors({});
-  };
+  const { draft, set, setDraft, errors, setErrors, stored, startOver } = useFormDraft(
+    () => draftFrom(initial, units),
+    units,
+    form,
+  );
 
   function check(saveId?: string): CastingInput | undefined {
     const numbers = textToNumbers(CASTING_NUMBERS, draft, units);

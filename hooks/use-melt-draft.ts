@@ -1,7 +1,6 @@
-import { useState } from "react";
-import { useStoredDraft } from "@/hooks/use-stored-draft";
+import { useFormDraft } from "@/hooks/use-form-draft";
 import { localDay } from "@/lib/dates";
-import { fieldErrors, messagesInUnits, messagesAfterChange } from "@/lib/field-errors";
+import { fieldErrors, messagesInUnits } from "@/lib/field-errors";
 import { numbersToText, textToNumbers, type NumberSpec } from "@/lib/form-numbers";
 import { MELT_CONDITIONS, type ConditionContext } from "@/lib/condition-fields";
 import { conditionsFromDraft, conditionsToDraft, type ConditionDraft } from "@/lib/condition-drafts";
@@ -78,21 +77,11 @@ export function meltContext(draft: MeltDraft, alloys: Alloy[]): ConditionContext
  * schema, the alloy's solidus, and plain messages for what zod would word for programmers.
  */
 export function useMeltDraft(initial: Initial, units: Units, form?: string) {
-  const [start] = useState(() => draftFrom(initial, units));
-  const [draft, setDraft] = useState(start);
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const set = <K extends keyof MeltDraft>(key: K, value: MeltDraft[K]) => {
-    // A corrected field stops showing its message at once, not at the next save.
-    setErrors((e) => messagesAfterChange(e, key, draft[key], value));
-    setDraft((d) => ({ ...d, [key]: value }));
-  };
-  const stored = useStoredDraft(form, units, draft, start, setDraft);
-  /** Back to the form as it opened, forgetting the stored draft. */
-  const startOver = async () => {
-    await stored.discard();
-    setDraft(start);
-    setErrors({});
-  };
+  const { draft, set, errors, setErrors, stored, startOver } = useFormDraft(
+    () => draftFrom(initial, units),
+    units,
+    form,
+  );
 
   /** The input to send, or undefined; `errors` also carries "_", a message about the melt as a whole. */
   function check(alloys: Alloy[], saveId?: string): { input?: MeltInput; errors: Record<string, string> } {
