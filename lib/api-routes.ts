@@ -62,7 +62,7 @@ import type { Trends } from "./trends-schemas";
  * Left out, as they do not answer JSON or are not ours: GET /castings/:id/sheet.pdf (a PDF),
  * GET /export/castings.csv (CSV), /photos (multipart uploads in, image bytes out; its 204 delete shares
  * the uploads' error handling in hooks/use-photos.ts), /import (a multipart CSV upload), /health (for
- * the process supervisor, not the app) and better-auth's /api/auth routes (its own client).
+ * a load balancer, not the app) and better-auth's /api/auth routes (its own client).
  */
 const route = <AnswerType, BodyType = never>() => ({}) as { answer: AnswerType; body: BodyType };
 
