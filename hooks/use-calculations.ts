@@ -1,17 +1,18 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { api } from "@/lib/api";
-import type { SavedCalculation } from "@/lib/calculator-schemas";
+import { request } from "@/lib/api";
 import type { CalculatorKind } from "@/rules/calculators";
 
 export type CalcTarget = { meltId?: number; castingId?: number };
-const targetQuery = (t: CalcTarget) => (t.castingId ? `castingId=${t.castingId}` : `meltId=${t.meltId}`);
+// Asked only once one of them is set (`enabled` below).
+const targetQuery = (t: CalcTarget): Record<string, string | number> =>
+  t.castingId ? { castingId: t.castingId } : { meltId: String(t.meltId) };
 export const calculationKeys = { all: ["calculations"] as const, of: (t: CalcTarget) => ["calculations", t] as const };
 
 /** Results saved on a melt or casting, newest first. */
 export function useCalculations(t: CalcTarget) {
   return useQuery({
     queryKey: calculationKeys.of(t),
-    queryFn: () => api<{ items: SavedCalculation[] }>(`/calculations?${targetQuery(t)}`).then((r) => r.items),
+    queryFn: () => request("GET /calculations", { query: targetQuery(t) }).then((r) => r.items),
     enabled: !!(t.meltId || t.castingId),
   });
 }
@@ -20,7 +21,7 @@ export function useSaveCalculation() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: CalcTarget & { kind: CalculatorKind; input: Record<string, unknown> }) =>
-      api<SavedCalculation>("/calculations", { method: "POST", body }),
+      request("POST /calculations", { body }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: calculationKeys.all }),
   });
 }

@@ -1,7 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { castingKeys } from "@/hooks/use-castings";
-import { api } from "@/lib/api";
-import type { DiagnosisFreshness, DiagnosisSnapshot } from "@/lib/notebook-schemas";
+import { request } from "@/lib/api";
 
 /**
  * Runs the diagnosis on the stored casting. The answer is kept as the casting's latest snapshot,
@@ -10,7 +9,7 @@ import type { DiagnosisFreshness, DiagnosisSnapshot } from "@/lib/notebook-schem
 export function useRunDiagnosis(castingId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => api<Omit<DiagnosisSnapshot, "createdBy">>(`/diagnosis/castings/${castingId}`, { method: "POST" }),
+    mutationFn: () => request("POST /diagnosis/castings/:id", { params: { id: castingId } }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: castingKeys.detail(castingId) }),
   });
 }
@@ -22,7 +21,7 @@ export function useRunDiagnosis(castingId: number) {
 export function useDiagnosisFreshness(castingId: number, enabled: boolean) {
   return useQuery({
     queryKey: [...castingKeys.detail(castingId), "freshness"],
-    queryFn: () => api<DiagnosisFreshness>(`/diagnosis/castings/${castingId}/freshness`),
+    queryFn: () => request("GET /diagnosis/castings/:id/freshness", { params: { id: castingId } }),
     enabled,
   });
 }

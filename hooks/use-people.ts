@@ -1,28 +1,9 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { api } from "@/lib/api";
-import type { InviteInput, NoticeSettings } from "@/lib/people-schemas";
+import { request } from "@/lib/api";
+import type { ChangePasswordInput, InviteInput, NoticeSettings } from "@/lib/people-schemas";
 import type { ShopRole } from "@/lib/permissions";
 import { meKey } from "./use-me";
 import { shopKeys } from "./use-shop";
-
-export type PendingInvitation = {
-  id: string;
-  email: string;
-  role: ShopRole;
-  expiresAt: string;
-  createdAt: string;
-  inviterName: string;
-  expired: boolean;
-};
-export type MemberChange = {
-  id: number;
-  actorName: string;
-  action: string;
-  subjectEmail: string;
-  detail: string | null;
-  at: string;
-};
-export type CaughtMessage = { id: string; to: string[]; subject: string; date: string; text: string; links: string[] };
 
 export const peopleKeys = {
   invitations: ["people", "invitations"] as const,
@@ -34,7 +15,7 @@ export const peopleKeys = {
 export function useInvitations(enabled: boolean) {
   return useQuery({
     queryKey: peopleKeys.invitations,
-    queryFn: () => api<{ invitations: PendingInvitation[] }>("/people/invitations").then((r) => r.invitations),
+    queryFn: () => request("GET /people/invitations", {}).then((r) => r.invitations),
     enabled,
   });
 }
@@ -42,7 +23,7 @@ export function useInvitations(enabled: boolean) {
 export function useMemberChanges(enabled: boolean) {
   return useQuery({
     queryKey: peopleKeys.changes,
-    queryFn: () => api<{ changes: MemberChange[] }>("/people/changes").then((r) => r.changes),
+    queryFn: () => request("GET /people/changes", {}).then((r) => r.changes),
     enabled,
   });
 }
@@ -50,7 +31,7 @@ export function useMemberChanges(enabled: boolean) {
 export function useInbox() {
   return useQuery({
     queryKey: peopleKeys.inbox,
-    queryFn: () => api<{ messages: CaughtMessage[] }>("/people/dev/inbox").then((r) => r.messages),
+    queryFn: () => request("GET /people/dev/inbox", {}).then((r) => r.messages),
     refetchInterval: 5000,
   });
 }
@@ -71,39 +52,37 @@ function usePeopleMutation<V>(fn: (v: V) => Promise<unknown>) {
 }
 
 export const useInvite = () =>
-  usePeopleMutation((input: InviteInput) => api("/people/invitations", { method: "POST", body: input }));
+  usePeopleMutation((input: InviteInput) => request("POST /people/invitations", { body: input }));
 export const useResendInvitation = () =>
-  usePeopleMutation((id: string) => api(`/people/invitations/${id}/resend`, { method: "POST" }));
+  usePeopleMutation((id: string) => request("POST /people/invitations/:id/resend", { params: { id } }));
 export const useCancelInvitation = () =>
-  usePeopleMutation((id: string) => api(`/people/invitations/${id}/cancel`, { method: "POST" }));
+  usePeopleMutation((id: string) => request("POST /people/invitations/:id/cancel", { params: { id } }));
 export const useChangeRole = () =>
   usePeopleMutation((v: { userId: string; role: ShopRole }) =>
-    api(`/people/members/${v.userId}`, { method: "PATCH", body: { role: v.role } }),
+    request("PATCH /people/members/:userId", { params: { userId: v.userId }, body: { role: v.role } }),
   );
 export const useRemoveMember = () =>
-  usePeopleMutation((userId: string) => api(`/people/members/${userId}`, { method: "DELETE" }));
+  usePeopleMutation((userId: string) => request("DELETE /people/members/:userId", { params: { userId } }));
 export const useMakeOwner = () =>
-  usePeopleMutation((userId: string) => api(`/people/members/${userId}/make-owner`, { method: "POST" }));
-export const useLeaveShop = () => usePeopleMutation(() => api("/people/leave", { method: "POST" }));
+  usePeopleMutation((userId: string) => request("POST /people/members/:userId/make-owner", { params: { userId } }));
+export const useLeaveShop = () => usePeopleMutation(() => request("POST /people/leave", {}));
 
-export const useChangeName = () =>
-  usePeopleMutation((name: string) => api("/people/me", { method: "PATCH", body: { name } }));
+export const useChangeName = () => usePeopleMutation((name: string) => request("PATCH /people/me", { body: { name } }));
 export const useChangePassword = () =>
   useMutation({
-    mutationFn: (v: { currentPassword: string; newPassword: string }) =>
-      api("/people/me/password", { method: "POST", body: v }),
+    mutationFn: (v: ChangePasswordInput) => request("POST /people/me/password", { body: v }),
   });
 
 const noticesKey = ["people", "notices"] as const;
 
 export function useNoticeSettings() {
-  return useQuery({ queryKey: noticesKey, queryFn: () => api<NoticeSettings>("/people/me/notices") });
+  return useQuery({ queryKey: noticesKey, queryFn: () => request("GET /people/me/notices", {}) });
 }
 
 export function useSaveNoticeSettings() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (v: NoticeSettings) => api<NoticeSettings>("/people/me/notices", { method: "PUT", body: v }),
+    mutationFn: (v: NoticeSettings) => request("PUT /people/me/notices", { body: v }),
     onSuccess: (v) => queryClient.setQueryData(noticesKey, v),
   });
 }

@@ -1,8 +1,8 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { castingKeys } from "@/hooks/use-castings";
 import { rulebookKeys } from "@/hooks/use-rulebook";
-import { api } from "@/lib/api";
-import type { CaseReview, CastingCauses, ConfirmationInput, QueueItem } from "@/lib/review-schemas";
+import { request } from "@/lib/api";
+import type { CaseReview, ConfirmationInput } from "@/lib/review-schemas";
 
 export const reviewKeys = {
   queue: ["review", "queue"] as const,
@@ -14,21 +14,21 @@ export const reviewKeys = {
 export function useCastingCauses(castingId: number) {
   return useQuery({
     queryKey: reviewKeys.causes(castingId),
-    queryFn: () => api<CastingCauses>(`/review/castings/${castingId}/causes`).then((r) => r.causes),
+    queryFn: () => request("GET /review/castings/:id/causes", { params: { id: castingId } }).then((r) => r.causes),
   });
 }
 
 export function useCaseReview(castingId: number) {
   return useQuery({
     queryKey: reviewKeys.casting(castingId),
-    queryFn: () => api<CaseReview>(`/review/castings/${castingId}`),
+    queryFn: () => request("GET /review/castings/:id", { params: { id: castingId } }),
   });
 }
 
 export function useReviewQueue(enabled = true) {
   return useQuery({
     queryKey: reviewKeys.queue,
-    queryFn: () => api<{ items: QueueItem[] }>("/review/queue").then((r) => r.items),
+    queryFn: () => request("GET /review/queue", {}).then((r) => r.items),
     enabled,
   });
 }
@@ -37,7 +37,7 @@ export function useReviewQueue(enabled = true) {
 export function useAnswerSeen(castingId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => api<void>(`/review/castings/${castingId}/seen`, { method: "POST" }),
+    mutationFn: () => request("POST /review/castings/:id/seen", { params: { id: castingId } }),
     onSuccess: () =>
       Promise.all([
         queryClient.invalidateQueries({ queryKey: castingKeys.all }),
@@ -65,7 +65,7 @@ function useReviewChange<T>(
 
 export function useAskReview(castingId: number) {
   return useReviewChange(castingId, (note?: string) =>
-    api<CaseReview>(`/review/castings/${castingId}/requests`, { method: "POST", body: { note: note || undefined } }),
+    request("POST /review/castings/:id/requests", { params: { id: castingId }, body: { note: note || undefined } }),
   );
 }
 
@@ -74,7 +74,7 @@ export function useConfirmCause(castingId: number) {
   return useReviewChange(
     castingId,
     (input: ConfirmationInput) =>
-      api<CaseReview>(`/review/castings/${castingId}/confirmations`, { method: "POST", body: input }),
+      request("POST /review/castings/:id/confirmations", { params: { id: castingId }, body: input }),
     // A cause added from the form joins the rulebook's list of causes.
     [rulebookKeys.all, castingKeys.detail(castingId), ["review", "causes"]],
   );

@@ -1,8 +1,8 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useMe } from "@/hooks/use-me";
-import { api } from "@/lib/api";
+import { request } from "@/lib/api";
 import { roleCan, type Permission } from "@/lib/permissions";
-import type { RuleDetail, RuleDraft, Rulebook, SavedRule, Trial } from "@/lib/rulebook-schemas";
+import type { RuleDetail, RuleDraft } from "@/lib/rulebook-schemas";
 
 export const rulebookKeys = {
   all: ["rulebook"] as const,
@@ -17,13 +17,13 @@ export function useMay(permission: Permission): boolean {
 }
 
 export function useRulebook() {
-  return useQuery({ queryKey: rulebookKeys.list, queryFn: () => api<Rulebook>("/rulebook") });
+  return useQuery({ queryKey: rulebookKeys.list, queryFn: () => request("GET /rulebook", {}) });
 }
 
 export function useRule(id: string) {
   return useQuery({
     queryKey: rulebookKeys.rule(id),
-    queryFn: () => api<RuleDetail>(`/rulebook/rules/${encodeURIComponent(id)}`),
+    queryFn: () => request("GET /rulebook/rules/:ruleId", { params: { ruleId: id } }),
     enabled: !!id,
   });
 }
@@ -44,28 +44,28 @@ function useRuleChange<T, R extends RuleDetail>(fn: (arg: T) => Promise<R>) {
 export function useSaveRule(id?: string) {
   return useRuleChange((draft: RuleDraft) =>
     id
-      ? api<SavedRule>(`/rulebook/rules/${encodeURIComponent(id)}`, { method: "PUT", body: draft })
-      : api<SavedRule>("/rulebook/rules", { method: "POST", body: draft }),
+      ? request("PUT /rulebook/rules/:ruleId", { params: { ruleId: id }, body: draft })
+      : request("POST /rulebook/rules", { body: draft }),
   );
 }
 
 export function usePublishRule(id: string) {
-  return useRuleChange(() => api<SavedRule>(`/rulebook/rules/${encodeURIComponent(id)}/publish`, { method: "POST" }));
+  return useRuleChange(() => request("POST /rulebook/rules/:ruleId/publish", { params: { ruleId: id } }));
 }
 
 export function useRetireRule(id: string) {
-  return useRuleChange(() => api<SavedRule>(`/rulebook/rules/${encodeURIComponent(id)}/retire`, { method: "POST" }));
+  return useRuleChange(() => request("POST /rulebook/rules/:ruleId/retire", { params: { ruleId: id } }));
 }
 
 export function useSwitchRule(id: string) {
   return useRuleChange((off: boolean) =>
-    api<RuleDetail>(`/rulebook/rules/${encodeURIComponent(id)}/switch`, { method: "PUT", body: { off } }),
+    request("PUT /rulebook/rules/:ruleId/switch", { params: { ruleId: id }, body: { off } }),
   );
 }
 
 /** Runs a draft on the shop's past cases; nothing is stored. */
 export function useTryRule() {
   return useMutation({
-    mutationFn: (body: { draft: RuleDraft; ruleId?: string }) => api<Trial>("/rulebook/try", { method: "POST", body }),
+    mutationFn: (body: { draft: RuleDraft; ruleId?: string }) => request("POST /rulebook/try", { body }),
   });
 }

@@ -1,7 +1,7 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useEffect, useState } from "react";
-import { api } from "@/lib/api";
-import type { SearchAnswer, SearchRequest, SimilarAnswer } from "@/lib/search-schemas";
+import { request } from "@/lib/api";
+import type { SearchRequest } from "@/lib/search-schemas";
 
 /** The casebook: search (GET /api/search) and "cases like this one" (GET /api/search/castings/:id/similar). */
 export const searchKeys = {
@@ -11,13 +11,13 @@ export const searchKeys = {
 };
 
 /** Lists travel as "a,b"; empty values stay out of the URL. */
-export function searchParams(q: SearchRequest): string {
-  const out = new URLSearchParams();
+export function searchParams(q: SearchRequest): Record<string, string> {
+  const out: Record<string, string> = {};
   for (const [key, value] of Object.entries(q)) {
     const text = Array.isArray(value) ? value.join(",") : value === undefined || value === null ? "" : String(value);
-    if (text.trim()) out.set(key, text);
+    if (text.trim()) out[key] = text;
   }
-  return out.toString();
+  return out;
 }
 
 /** A value that settles `ms` after the last change: the search answers as you type, not per key. */
@@ -37,7 +37,7 @@ export function useDebounced<T>(value: T, ms = 250): T {
 export function useCaseSearch(query: SearchRequest) {
   return useQuery({
     queryKey: searchKeys.query(query),
-    queryFn: () => api<SearchAnswer>(`/search?${searchParams(query)}`),
+    queryFn: () => request("GET /search", { query: searchParams(query) }),
     placeholderData: keepPreviousData,
     staleTime: 0,
   });
@@ -46,7 +46,7 @@ export function useCaseSearch(query: SearchRequest) {
 export function useSimilarCases(castingId: number) {
   return useQuery({
     queryKey: searchKeys.similar(castingId),
-    queryFn: () => api<SimilarAnswer>(`/search/castings/${castingId}/similar`),
+    queryFn: () => request("GET /search/castings/:id/similar", { params: { id: castingId } }),
     enabled: Number.isInteger(castingId),
     staleTime: 0,
   });

@@ -1,12 +1,13 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import { api } from "@/lib/api";
-import type { Trends, TrendsQuery } from "@/lib/trends-schemas";
+import { request } from "@/lib/api";
+import type { TrendsQuery } from "@/lib/trends-schemas";
 
 export function useTrends(q: TrendsQuery) {
-  const search = new URLSearchParams(Object.entries(q).filter(([, v]) => v) as [string, string][]);
+  // Empty filters stay out of the query string.
+  const query = Object.fromEntries(Object.entries(q).filter(([, v]) => v)) as Record<string, string>;
   return useQuery({
     queryKey: ["trends", q],
-    queryFn: () => api<Trends>(`/trends?${search}`),
+    queryFn: () => request("GET /trends", { query }),
     placeholderData: keepPreviousData,
   });
 }

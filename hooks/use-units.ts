@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { api } from "@/lib/api";
+import { request } from "@/lib/api";
 import { SI_UNITS, type Units } from "@/lib/units";
 
 export const unitsKey = ["me", "units"] as const;
@@ -7,7 +7,7 @@ export const unitsKey = ["me", "units"] as const;
 /** The person's units (GET /api/people/me/units). */
 export const unitsQuery = {
   queryKey: unitsKey,
-  queryFn: () => api<Units>("/people/me/units"),
+  queryFn: () => request("GET /people/me/units", {}),
   staleTime: 5 * 60_000,
 };
 
@@ -23,7 +23,7 @@ export function useUnits(): Units {
 export function useSaveUnits() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (units: Units) => api<Units>("/people/me/units", { method: "PUT", body: units }),
+    mutationFn: (units: Units) => request("PUT /people/me/units", { body: units }),
     onSuccess: (units) => queryClient.setQueryData(unitsKey, units),
   });
 }

@@ -42,18 +42,15 @@ export function request<R extends ApiRoute>(route: R, options: RequestOptions<R>
   const query = options.query
     ? `?${new URLSearchParams(Object.entries(options.query).map(([k, v]) => [k, String(v)]))}`
     : "";
-  return api<Answer<R>>(`${path}${query}`, { method, body: options.body, ifMatch: options.ifMatch });
+  return send<Answer<R>>(`${path}${query}`, { method, body: options.body, ifMatch: options.ifMatch });
 }
 
 /**
- * Any call by path, its answer typed by the caller. Routes listed in lib/api-routes.ts go through
- * `request` instead, typed by the table the server answers by.
+ * The fetch behind `request`: the app's JSON calls all name a route of lib/api-routes.ts, so this is
+ * not exported (the photo upload, the pour-log import and the PDF and CSV links go by their own ways).
  * `ifMatch` is the row version the person opened (a row's `version`): the save is refused with 412 if it moved on.
  */
-export async function api<T>(
-  path: string,
-  init: { method?: string; body?: unknown; ifMatch?: number } = {},
-): Promise<T> {
+async function send<T>(path: string, init: { method?: string; body?: unknown; ifMatch?: number } = {}): Promise<T> {
   const headers: Record<string, string> = {};
   if (init.body !== undefined) headers["Content-Type"] = "application/json";
   if (init.ifMatch !== undefined) headers["If-Match"] = `"${init.ifMatch}"`;

@@ -1,8 +1,9 @@
 import { z } from "zod";
-import { noticeSettings } from "../db/people-schema";
+import { invitation } from "../db/auth-schema";
+import { memberChanges, noticeSettings } from "../db/people-schema";
 import { emailField, passwordField } from "./auth-forms";
 import { requiredText } from "./fields";
-import { SHOP_ROLES } from "./permissions";
+import { SHOP_ROLES, type ShopRole } from "./permissions";
 import { tableInput } from "./table-schemas";
 
 /** Inputs of the people routes (server/people) and the forms that send them. */
@@ -65,3 +66,27 @@ export const noticeSettingsInput = tableInput(
   ["userId"],
 ).strict();
 export type NoticeSettings = z.infer<typeof noticeSettingsInput>;
+
+// ---- Answers of server/people (JSON: times are ISO strings) ----
+type InvitationRow = typeof invitation.$inferSelect;
+type MemberChangeRow = typeof memberChanges.$inferSelect;
+
+/** An invitation still waiting, as the owner's list shows it. */
+export type PendingInvitation = Pick<InvitationRow, "id" | "email"> & {
+  role: ShopRole;
+  expiresAt: string;
+  createdAt: string;
+  inviterName: string;
+  expired: boolean;
+};
+/** POST /people/invitations: the invitation just sent. */
+export type SentInvitation = Pick<PendingInvitation, "id" | "email" | "role" | "expiresAt">;
+/** One line of the shop's record of member changes (the member_changes row; `at` is its createdAt). */
+export type MemberChange = Pick<MemberChangeRow, "id" | "actorName" | "action" | "subjectEmail" | "detail"> & {
+  at: string;
+};
+/** A message the local mail catcher received (server/mail/inbox.ts), for the development inbox. */
+export type CaughtMessage = { id: string; to: string[]; subject: string; date: string; text: string; links: string[] };
+export type RoleInput = z.infer<typeof roleInput>;
+export type DisplayNameInput = z.infer<typeof displayNameInput>;
+export type ChangePasswordInput = z.infer<typeof changePasswordInput>;

@@ -1,7 +1,8 @@
 import { z } from "zod";
-import { shopSettings } from "../db/schema";
+import { shopSettings, user } from "../db/schema";
 import { PROCESSES } from "../rules/case";
 import { requiredText } from "./fields";
+import type { ShopRole } from "./permissions";
 import { tableInput } from "./table-schemas";
 
 /**
@@ -17,3 +18,15 @@ export const shopSettingsInput = tableInput(shopSettings, {
   defaultMass: z.enum(["kg", "lb"], { error: "kg or lb" }),
 }).strict();
 export type ShopSettingsInput = z.infer<typeof shopSettingsInput>;
+
+// ---- Answers of server/shops (JSON) ----
+type ShopSettingsRow = typeof shopSettings.$inferSelect;
+type UserRow = typeof user.$inferSelect;
+
+/** A shop the person belongs to, with their role in it (the member row's role, one of SHOP_ROLES). */
+export type MyShop = { id: string; name: string; role: ShopRole };
+/** GET /shops/me: the signed-in person, their shops and the active one. */
+export type Me = { user: Pick<UserRow, "id" | "name" | "email">; shops: MyShop[]; activeShop: MyShop | null };
+/** The shop as its member sees it: the shop_settings row's defaults, each null until an owner sets it. */
+export type Shop = MyShop & Pick<ShopSettingsRow, keyof ShopSettingsInput>;
+export type ShopMemberRow = { userId: string; role: ShopRole } & Pick<UserRow, "name" | "email">;

@@ -7,15 +7,14 @@ import { InvitationClosed } from "@/components/people/invitation-closed";
 import { Loading } from "@/components/ui/query-state";
 import { Notice } from "@/components/ui/notice";
 import { colors, fontSize } from "@/constants/theme";
-import { api } from "@/lib/api";
-import type { InvitationView } from "@/lib/people-schemas";
+import { request } from "@/lib/api";
 
 /** Where an invitation link leads, signed in or not: join, or a plain word on why the link no longer works. */
 export default function InvitationScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
   const view = useQuery({
     queryKey: ["invitation", id],
-    queryFn: () => api<InvitationView>(`/people/invitations/${encodeURIComponent(id)}/open`),
+    queryFn: () => request("GET /people/invitations/:id/open", { params: { id } }),
     retry: false,
   });
   const inv = view.data;

@@ -1,7 +1,8 @@
 import { StyleSheet, Text, View } from "react-native";
 import { Notice } from "@/components/ui/notice";
 import { colors, fontSize, space } from "@/constants/theme";
-import { useMemberChanges, type MemberChange } from "@/hooks/use-people";
+import { useMemberChanges } from "@/hooks/use-people";
+import type { MemberChange } from "@/lib/people-schemas";
 import { formatMoment } from "@/lib/dates";
 import { MEMBER_CHANGE_WORDS } from "@/lib/people-schemas";
 

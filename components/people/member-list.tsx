@@ -5,7 +5,7 @@ import { ChoiceChips } from "@/components/ui/choice-chips";
 import { Notice } from "@/components/ui/notice";
 import { colors, fontSize, radius, space } from "@/constants/theme";
 import { useChangeRole, useMakeOwner, useRemoveMember } from "@/hooks/use-people";
-import type { ShopMemberRow } from "@/hooks/use-shop";
+import type { ShopMemberRow } from "@/lib/shop-settings";
 import type { ShopRole } from "@/lib/permissions";
 import { ROLE_CHOICES } from "@/lib/role-words";
 

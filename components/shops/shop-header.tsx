@@ -2,7 +2,7 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { colors, fonts, fontSize, radius, space } from "@/constants/theme";
-import type { Me } from "@/hooks/use-me";
+import type { Me } from "@/lib/shop-settings";
 import { authClient } from "@/lib/auth-client";
 
 /** Who is signed in, in which shop and with which role; switch shop; sign out. */

@@ -3,7 +3,8 @@ import { useEffect, useState } from "react";
 import { ChoiceChips } from "@/components/ui/choice-chips";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { useSaveShopSettings, type Shop } from "@/hooks/use-shop";
+import { useSaveShopSettings } from "@/hooks/use-shop";
+import type { Shop } from "@/lib/shop-settings";
 import { PROCESS_LABELS } from "@/lib/labels";
 import { roleCan } from "@/lib/permissions";
 import { BUILT_IN_ALLOYS } from "@/rules/alloys";
@@ -17,9 +18,9 @@ export function ShopSettingsForm({ shop }: { shop: Shop }) {
   const mayEdit = roleCan(shop.role, { shop: ["settings"] });
   const [alloy, setAlloy] = useState(shop.defaultAlloy);
   const [process, setProcess] = useState(shop.defaultProcess as Process | null);
-  const [temperature, setTemperature] = useState(shop.defaultTemperature);
-  const [length, setLength] = useState(shop.defaultLength);
-  const [mass, setMass] = useState(shop.defaultMass);
+  const [temperature, setTemperature] = useState<string | null>(shop.defaultTemperature);
+  const [length, setLength] = useState<string | null>(shop.defaultLength);
+  const [mass, setMass] = useState<string | null>(shop.defaultMass);
   const save = useSaveShopSettings();
   useEffect(() => {
     setAlloy(shop.defaultAlloy);

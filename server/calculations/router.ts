@@ -1,4 +1,5 @@
 import { Router } from "express";
+import type { Answer } from "../../lib/api-routes";
 import { calculationListQuery, saveCalculationInput } from "../../lib/calculator-schemas";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
@@ -11,9 +12,16 @@ const write = [requireShopMember, allow({ casebook: ["write"] })];
 
 calculationsRouter.get("/", ...read, async (req, res) => {
   const q = parseOr400(calculationListQuery, req.query);
-  res.json({ items: await listCalculations(currentMember(req).shopId, q) });
+  res.json({ items: await listCalculations(currentMember(req).shopId, q) } satisfies Answer<"GET /calculations">);
 });
 
 calculationsRouter.post("/", ...write, async (req, res) => {
-  res.status(201).json(await saveCalculation(currentMember(req), parseOr400(saveCalculationInput, req.body)));
+  res
+    .status(201)
+    .json(
+      (await saveCalculation(
+        currentMember(req),
+        parseOr400(saveCalculationInput, req.body),
+      )) satisfies Answer<"POST /calculations">,
+    );
 });

@@ -1,4 +1,5 @@
 import { Router } from "express";
+import type { Answer } from "../../lib/api-routes";
 import { commentInput } from "../../lib/notebook-schemas";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
@@ -10,5 +11,7 @@ export const commentsRouter = Router();
 commentsRouter.post("/castings/:id", requireShopMember, allow({ casebook: ["comment"] }), async (req, res) => {
   const castingId = idParam(req.params.id, "No such casting");
   const { body } = parseOr400(commentInput, req.body);
-  res.status(201).json(await addComment(currentMember(req), castingId, body));
+  res
+    .status(201)
+    .json((await addComment(currentMember(req), castingId, body)) satisfies Answer<"POST /comments/castings/:id">);
 });

@@ -1,20 +1,23 @@
 import { readdir, readFile } from "node:fs/promises";
 import { join } from "node:path";
 import { simpleParser } from "mailparser";
+import type { CaughtMessage } from "../../lib/people-schemas";
 import { env } from "../env";
 
 /** The caught messages of the local mail catcher (MAIL_DIR), newest first, for the development inbox. */
-export async function caughtMessages(limit = 50) {
+export async function caughtMessages(limit = 50): Promise<CaughtMessage[]> {
   const names = (await readdir(env.MAIL_DIR).catch(() => [] as string[]))
     .filter((n) => n.endsWith(".eml"))
     .sort()
     .reverse()
     .slice(0, limit);
-  return Promise.all(names.map((name) => caughtMessage(name)));
+  // A name caughtMessage will not read (not a plain .eml name) is left out rather than sent as null.
+  const messages = await Promise.all(names.map((name) => caughtMessage(name)));
+  return messages.filter((m) => m !== undefined);
 }
 
 /** One message by its file name; only plain .eml names inside the folder are read. */
-export async function caughtMessage(name: string) {
+export async function caughtMessage(name: string): Promise<CaughtMessage | undefined> {
   if (!/^[\w.-]+\.eml$/.test(name)) return undefined;
   const raw = await readFile(join(env.MAIL_DIR, name)).catch(() => undefined);
   if (!raw) return undefined;

@@ -1,6 +1,7 @@
 import { desc, eq } from "drizzle-orm";
 import { db } from "../db";
 import { memberChanges } from "../../db/schema";
+import type { MemberChange } from "../../lib/people-schemas";
 
 export type MemberChangeAction =
   | "invited"
@@ -30,18 +31,19 @@ export async function recordChange(change: {
 }
 
 /** The shop's record of member changes, newest first. */
-export async function changesOf(shopId: string, limit = 100) {
-  return db
+export async function changesOf(shopId: string, limit = 100): Promise<MemberChange[]> {
+  const rows = await db
     .select({
       id: memberChanges.id,
       actorName: memberChanges.actorName,
       action: memberChanges.action,
       subjectEmail: memberChanges.subjectEmail,
       detail: memberChanges.detail,
-      at: memberChanges.createdAt,
+      createdAt: memberChanges.createdAt,
     })
     .from(memberChanges)
     .where(eq(memberChanges.shopId, shopId))
     .orderBy(desc(memberChanges.createdAt), desc(memberChanges.id))
     .limit(limit);
+  return rows.map(({ createdAt, ...r }) => ({ ...r, at: createdAt.toISOString() }));
 }

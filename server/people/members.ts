@@ -35,7 +35,14 @@ export async function pendingInvitations(shopId: string) {
     .where(and(eq(invitation.organizationId, shopId), eq(invitation.status, "pending")))
     .orderBy(desc(invitation.createdAt));
   const now = Date.now();
-  return rows.map((r) => ({ ...r, expired: r.expiresAt.getTime() < now }));
+  return rows.map((r) => ({
+    ...r,
+    // Created by invite() below, always with one of the shop's roles.
+    role: r.role as ShopRole,
+    expiresAt: r.expiresAt.toISOString(),
+    createdAt: r.createdAt.toISOString(),
+    expired: r.expiresAt.getTime() < now,
+  }));
 }
 
 export async function invite(headers: Headers, m: ShopMember, email: string, role: ShopRole) {

@@ -1,11 +1,16 @@
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "../db";
 import { member, organization, shopSettings, user } from "../../db/schema";
+import type { ShopRole } from "../../lib/permissions";
 import type { ShopSettingsInput } from "../../lib/shop-settings";
+
+// better-auth's member.role is a text column; the organization plugin only writes the roles of
+// lib/permissions.ts into it (server/auth/auth.ts), so it is read as one of them.
+const memberRole = sql<ShopRole>`${member.role}`;
 
 export async function shopsOf(userId: string) {
   return db
-    .select({ id: organization.id, name: organization.name, role: member.role })
+    .select({ id: organization.id, name: organization.name, role: memberRole })
     .from(member)
     .innerJoin(organization, eq(member.organizationId, organization.id))
     .where(eq(member.userId, userId))
@@ -18,7 +23,7 @@ export async function shopForMember(shopId: string, userId: string) {
     .select({
       id: organization.id,
       name: organization.name,
-      role: member.role,
+      role: memberRole,
       defaultAlloy: shopSettings.defaultAlloy,
       defaultProcess: shopSettings.defaultProcess,
       defaultTemperature: shopSettings.defaultTemperature,
@@ -34,7 +39,7 @@ export async function shopForMember(shopId: string, userId: string) {
 
 export async function membersOf(shopId: string) {
   return db
-    .select({ userId: user.id, name: user.name, email: user.email, role: member.role })
+    .select({ userId: user.id, name: user.name, email: user.email, role: memberRole })
     .from(member)
     .innerJoin(user, eq(user.id, member.userId))
     .where(eq(member.organizationId, shopId))

@@ -1,4 +1,5 @@
 import { Router } from "express";
+import type { Answer } from "../../lib/api-routes";
 import { trendsQuery } from "../../lib/trends-schemas";
 import { allow, currentMember, requireShopMember } from "../auth/shop-access";
 import { parseOr400 } from "../http/errors";
@@ -8,5 +9,7 @@ import { shopTrends } from "./service";
 export const trendsRouter = Router();
 
 trendsRouter.get("/", requireShopMember, allow({ casebook: ["read"] }), async (req, res) => {
-  res.json(await shopTrends(currentMember(req).shopId, parseOr400(trendsQuery, req.query)));
+  res.json(
+    (await shopTrends(currentMember(req).shopId, parseOr400(trendsQuery, req.query))) satisfies Answer<"GET /trends">,
+  );
 });

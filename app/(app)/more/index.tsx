@@ -18,7 +18,7 @@ import { UnitsChooser } from "@/components/people/units-chooser";
 import { colors, fontSize, space } from "@/constants/theme";
 import { useMe } from "@/hooks/use-me";
 import { useShop, useShopMembers } from "@/hooks/use-shop";
-import { api } from "@/lib/api";
+import { request } from "@/lib/api";
 import { roleCan } from "@/lib/permissions";
 
 /** The shop itself: its people, your account and units, its defaults, and the standing cautions. */
@@ -30,7 +30,7 @@ export default function MoreScreen() {
   // The development inbox exists only where the server says so (never in production).
   const inbox = useQuery({
     queryKey: ["people", "inbox", "available"],
-    queryFn: () => api("/people/dev/inbox").then(() => true),
+    queryFn: () => request("GET /people/dev/inbox", {}).then(() => true),
     enabled: isOwner,
     retry: false,
   });
