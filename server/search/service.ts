@@ -10,20 +10,25 @@ import { queryTerms, tsquery, tsqueryText } from "./query-words";
 import { similarWords } from "./similar-words";
 
 /**
- * GET /api/search over `search_documents`, in one read-only transaction:
- * 1. each query word of 3+ letters is widened to the shop's words within its slips (trigram index
- *    on `search_words`, then levenshtein), and a tsquery is built from those words;
+ * GET /api/search over `search_documents`, waiting on the database twice:
+ * 1. at once, on up to three connections: the shop's cause titles, the names the filters use, and each query word of 3+ letters
+ *    widened to the shop's words within its slips (similar-words.ts: trigram index on `search_words`,
+ *    then levenshtein, looked up only for words this server has not already found at the shop's
+ *    vocabulary version, which the same statement reads); a tsquery is built from those words;
  * 2. one statement narrows the shop's documents (GIN index on the words, typed columns for the
  *    filters) and picks one page in date order (the shop's date index, by OFFSET or by keyset
- *    `after`) or in relevance order (ts_rank);
+ *    `after`) or in relevance order (ts_rank), with the page's people's names;
  * 3. the same statement counts the matches and each chip with the other filters applied (GROUP BY),
  *    over at most the newest SEARCH_COUNT_LIMIT matches (1,000 by default): read in date order from
  *    the covering index, so a count stops there instead of walking every case of a large shop.
  *    Under the limit every figure is exact; over it the answer says so (`totalExact`,
  *    `facetsExact`), the total is the limit ("1,000+") and the chips count the newest matches.
- *    Relevance then ranks those newest matches;
+ *    Relevance then ranks those newest matches, their documents fetched again by ctid;
  * 4. Fuse.js re-ranks that page and marks its matched words.
- * Measured at 100,000 cases by scripts/bench-search.ts (the figures are in its output).
+ * Measured at 100,000 cases by scripts/bench-search.ts (the figures are in its output): with words,
+ * most of the statement's time is reading every matching row once (about 1.3 µs a row, 11,000
+ * rows for "porosty"); a narrower table of just the counted columns and the words read as slowly
+ * (the rows' count, not their width, sets the cost), so it was not kept.
  */
 type Hit = { kind: "page" | "total" | "sampled" | "defect" | "alloy" | "process" | "outcome" | "cause" };
 type FacetRow = Hit & { key: string | null; title: string | null; n: number };
@@ -31,9 +36,9 @@ type PageRow = Hit & { id: number; rank: string; poured_on: string; doc: DocRow 
 
 export async function searchCases(shopId: string, p: SearchParams): Promise<SearchAnswer> {
   const terms = queryTerms(p.q);
-  // The shop's cause titles and the query words' similar words at once, on two connections.
-  const [titles, similar] = await Promise.all([causeTitles(shopId), similarWords(shopId, terms)]);
-  await checkNames(shopId, p, titles);
+  // The shop's cause titles, the query words' similar words and the filters' names at once.
+  const cause = causeTitles(shopId);
+  const [titles, similar] = await Promise.all([cause, similarWords(shopId, terms), checkNames(shopId, p, cause)]);
   const sort: SearchSort = terms.length ? (p.sort ?? "relevance") : p.sort === "date-asc" ? "date-asc" : "date-desc";
   const q = terms.length ? tsquery(tsqueryText(terms, similar)) : null;
   const limit = env.SEARCH_COUNT_LIMIT;
