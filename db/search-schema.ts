@@ -113,6 +113,17 @@ export const searchVocabularies = pgTable("search_vocabularies", {
 });
 
 /**
+ * Each shop's documents version: raised at commit by every document written or removed (a deferred
+ * constraint trigger, drizzle/*_search-answers.sql), so a server may keep a search's answer under
+ * (shop, documents version, shop revision) and know with one indexed read, on every server, whether
+ * it still holds. No row yet means version 0; no foreign key, as search_vocabularies.
+ */
+export const searchDocumentVersions = pgTable("search_document_versions", {
+  shopId: text("shop_id").primaryKey(),
+  version: bigint("version", { mode: "number" }).notNull().default(0),
+});
+
+/**
  * The words a person reads for a stored code (lib/defects.ts, lib/labels.ts), so the documents hold
  * "metal in the sand" for metal-penetration. Written by a migration; tests/api/search-labels.test.ts
  * fails when the app's labels and these differ (a changed label needs a migration that updates

@@ -6,7 +6,8 @@ import { HttpError } from "../http/errors";
 import { alloyKey, fieldsOf, summaryOf, type DocRow } from "./case-doc";
 import { markPage } from "./marks";
 import { causeTitles, checkNames } from "./names";
-import { queryTerms, tsquery, tsqueryText } from "./query-words";
+import { answerKey, keep, keptAnswer, stillHolds, touch, versionsOf } from "./answers";
+import { queryTerms, tsquery, tsqueryText, type QueryTerm } from "./query-words";
 import { similarWords } from "./similar-words";
 
 /**
@@ -35,10 +36,35 @@ type FacetRow = Hit & { key: string | null; title: string | null; n: number };
 type PageRow = Hit & { id: number; rank: string; poured_on: string; doc: DocRow & { createdByName: string | null } };
 
 export async function searchCases(shopId: string, p: SearchParams): Promise<SearchAnswer> {
+  const key = answerKey(shopId, p);
+  const before = keptAnswer(key);
   const terms = queryTerms(p.q);
-  // The shop's cause titles, the query words' similar words and the filters' names at once.
+  // At once: the shop's versions, its cause titles, the filters' names and (unless an answer is kept,
+  // which usually still holds) the query words' similar words.
   const cause = causeTitles(shopId);
-  const [titles, similar] = await Promise.all([cause, similarWords(shopId, terms), checkNames(shopId, p, cause)]);
+  const [now, titles, , first] = await Promise.all([
+    versionsOf(shopId, before?.people ?? []),
+    cause,
+    checkNames(shopId, p, cause),
+    before ? null : similarWords(shopId, terms),
+  ]);
+  const held = stillHolds(before, now);
+  if (held) {
+    touch(key);
+    return held;
+  }
+  const answer = await answerOf(shopId, p, terms, titles, first ?? (await similarWords(shopId, terms)));
+  keep(key, now, answer);
+  return answer;
+}
+
+async function answerOf(
+  shopId: string,
+  p: SearchParams,
+  terms: QueryTerm[],
+  titles: Map<string, string>,
+  similar: Map<string, string[]>,
+): Promise<SearchAnswer> {
   const sort: SearchSort = terms.length ? (p.sort ?? "relevance") : p.sort === "date-asc" ? "date-asc" : "date-desc";
   const q = terms.length ? tsquery(tsqueryText(terms, similar)) : null;
   const limit = env.SEARCH_COUNT_LIMIT;
