@@ -100,8 +100,8 @@ export const searchWords = pgTable(
 );
 
 /**
- * Each shop's vocabulary version: raised at commit by every word added to or removed from
- * `search_words` (a deferred constraint trigger, drizzle/*_search-vocabularies-triggers.sql), so a
+ * Each shop's vocabulary version: raised at commit by every transaction that added words to or
+ * removed words from `search_words` (a deferred constraint trigger, drizzle/0033, 0034, 0037), so a
  * server may keep the similar words it found for a query word under (shop, version) and know with
  * one indexed read, on every server, whether they still hold. No row yet means version 0.
  * No foreign key, as shop_revisions: deleting a shop cascades into search_words, whose trigger must
@@ -113,8 +113,8 @@ export const searchVocabularies = pgTable("search_vocabularies", {
 });
 
 /**
- * Each shop's documents version: raised at commit by every document written or removed (a deferred
- * constraint trigger, drizzle/*_search-answers.sql), so a server may keep a search's answer under
+ * Each shop's documents version: raised at commit by every transaction that wrote or removed
+ * documents (a deferred constraint trigger, drizzle/0036, 0037), so a server may keep a search's answer under
  * (shop, documents version, shop revision) and know with one indexed read, on every server, whether
  * it still holds. No row yet means version 0; no foreign key, as search_vocabularies.
  */
