@@ -4,7 +4,7 @@ import { db } from "../db";
 
 /**
  * Search answers a server keeps, each under the versions it was computed at: the shop's documents
- * version (`search_document_versions`, raised at commit by every document written or removed) and
+ * version (`search_document_versions`, raised at commit by each transaction that writes documents) and
  * the shop's revision (`shop_revisions`, raised by its causes, whose titles an answer shows). Every
  * request reads both in one statement, with the names of the people a kept answer shows (a name
  * can change without either version moving), and uses the kept answer only when both versions are

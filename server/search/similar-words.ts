@@ -7,7 +7,7 @@ import { lookups, type QueryTerm } from "./query-words";
  * distance, straight from the GiST index on `search_words`, kept when within the word's slips.
  * A lookup costs about 11 ms a word at 100,000 cases, and people search the same words again and
  * again, so each server keeps what it found under the shop's vocabulary version
- * (`search_vocabularies`, raised at commit by every word added or removed). One statement reads
+ * (`search_vocabularies`, raised at commit by each transaction that adds words). One statement reads
  * the version and looks up only the words this server has no answer for at that version: a
  * cached answer is used only when PostgreSQL says, in the same request, that the vocabulary is
  * the one it was found in, so two servers never disagree and nothing goes stale.
