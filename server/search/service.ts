@@ -11,9 +11,11 @@ import { queryTerms, tsquery, tsqueryText, type QueryTerm } from "./query-words"
 import { similarWords } from "./similar-words";
 
 /**
- * GET /api/search over `search_documents`, waiting on the database twice:
- * 1. at once, on up to three connections: the shop's cause titles, the names the filters use, and each query word of 3+ letters
- *    widened to the shop's words within its slips (similar-words.ts: trigram index on `search_words`,
+ * GET /api/search over `search_documents`. An answer this server already gave is given again when
+ * the shop's documents version and revision, read first, are still the ones it was computed at
+ * (answers.ts: one indexed read). Otherwise, waiting on the database twice more:
+ * 1. at once, on up to three connections: the shop's cause titles, the names the filters use, and
+ *    each query word of 3+ letters widened to the shop's words within its slips (similar-words.ts: trigram index on `search_words`,
  *    then levenshtein, looked up only for words this server has not already found at the shop's
  *    vocabulary version, which the same statement reads); a tsquery is built from those words;
  * 2. one statement narrows the shop's documents (GIN index on the words, typed columns for the
