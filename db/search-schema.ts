@@ -1,4 +1,5 @@
 import {
+  bigint,
   boolean,
   customType,
   date,
@@ -97,6 +98,30 @@ export const searchWords = pgTable(
     index("search_words_nearest_idx").using("gist", t.shopId, t.word.op("gist_trgm_ops(siglen=128)")),
   ],
 );
+
+/**
+ * Each shop's vocabulary version: raised at commit by every transaction that added words to or
+ * removed words from `search_words` (a deferred constraint trigger, drizzle/0033_search_versions_triggers.sql), so a
+ * server may keep the similar words it found for a query word under (shop, version) and know with
+ * one indexed read, on every server, whether they still hold. No row yet means version 0.
+ * No foreign key, as shop_revisions: deleting a shop cascades into search_words, whose trigger must
+ * not then fail on a row for the shop being deleted.
+ */
+export const searchVocabularies = pgTable("search_vocabularies", {
+  shopId: text("shop_id").primaryKey(),
+  version: bigint("version", { mode: "number" }).notNull().default(0),
+});
+
+/**
+ * Each shop's documents version: raised at commit by every transaction that wrote or removed
+ * documents (a deferred constraint trigger, drizzle/0033_search_versions_triggers.sql), so a server may keep a search's answer under
+ * (shop, documents version, shop revision) and know with one indexed read, on every server, whether
+ * it still holds. No row yet means version 0; no foreign key, as search_vocabularies.
+ */
+export const searchDocumentVersions = pgTable("search_document_versions", {
+  shopId: text("shop_id").primaryKey(),
+  version: bigint("version", { mode: "number" }).notNull().default(0),
+});
 
 /**
  * The words a person reads for a stored code (lib/defects.ts, lib/labels.ts), so the documents hold

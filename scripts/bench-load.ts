@@ -8,7 +8,7 @@
  * ratio. Prints requests/s, p50/p95/p99 latency and errors for each, with the load average; asserts nothing.
  * First the floor under every request: a signed-in GET /api/shops/current (the session and membership
  * check and a small JSON answer). `--only=floor,search` runs only the targets named (floor, melts,
- * casting, search, castings, deep); BENCH_CPU_PROF=<folder> profiles the server (bench-harness.ts).
+ * casting, search, computed, castings, deep); BENCH_CPU_PROF=<folder> profiles the server (bench-harness.ts).
  */
 import autocannon from "autocannon";
 import { availableParallelism, loadavg } from "node:os";
@@ -30,8 +30,17 @@ const wanted = (target: string) => !ONLY || ONLY.includes(target);
  * Requests/s before the shop gate read session and membership in one query (2026-12-03, this
  * machine, 100,000 cases, other jobs running: load average about 3-6). The floor was measured then
  * on a 100,000-case copy, old and new servers side by side at the same load (load average 7): 349 req/s.
+ * The casebook search, before each server kept answers and similar words (2026-12-04, 6 queries in
+ * turn, every one computed): 33 req/s; both search targets are compared with that.
  */
-const BEFORE: Record<string, number> = { floor: 349, melts: 391, casting: 255, search: 23, castings: 177 };
+const BEFORE: Record<string, number> = {
+  floor: 349,
+  melts: 391,
+  casting: 255,
+  search: 33,
+  computed: 33,
+  castings: 177,
+};
 
 const ground = await benchGround({ name: "load", child: true, env: { RATE_LIMIT: "off" } });
 const { sql } = await import("drizzle-orm");
@@ -134,7 +143,28 @@ try {
   if (wanted("floor")) await load("signed-in floor: GET /api/shops/current", cookie, ["/api/shops/current"], "floor");
   if (wanted("melts")) await load("melts list, first page (keyset)", cookie, ["/api/melts"], "melts");
   if (wanted("casting")) await load("a casting's page (200 castings in turn)", cookie, details, "casting");
-  if (wanted("search")) await load("casebook search (6 queries in turn)", cookie, searches, "search");
+  if (wanted("search")) await load("casebook search (6 queries in turn, kept answers)", cookie, searches, "search");
+  // More distinct searches than a server keeps answers for (server/search/answers.ts), taken in turn,
+  // so each is computed: what the casebook costs when its searches do not repeat.
+  const distinct = [
+    "porosity",
+    "misrun thin",
+    "cold shut",
+    "riser",
+    "pinholes",
+    "damp sand",
+    "gate",
+    "coating",
+  ].flatMap((q) =>
+    Array.from({ length: 50 }, (_, i) => `/api/search?${new URLSearchParams({ q, page: String(i + 1) })}`),
+  );
+  if (wanted("computed"))
+    await load(
+      `casebook search (${distinct.length} distinct searches in turn, computed)`,
+      cookie,
+      distinct,
+      "computed",
+    );
   const first =
     wanted("castings") || wanted("deep")
       ? await load("castings list, first page (keyset)", cookie, ["/api/castings"], "castings")

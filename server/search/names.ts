@@ -14,8 +14,11 @@ const unknown = (field: string, values: string[], what: string) =>
 /** Every cause title the shop's rulebook knows (built-in and its own), by id. */
 export { causeTitles };
 
-/** Alloys, causes and people must be ones this shop knows; a stranger's id is refused like a typo. */
-export async function checkNames(shopId: string, p: SearchParams, titles: Map<string, string>) {
+/**
+ * Alloys, causes and people must be ones this shop knows; a stranger's id is refused like a typo.
+ * `titles` is a promise so that the search's other first reads need not wait for it.
+ */
+export async function checkNames(shopId: string, p: SearchParams, titles: Promise<Map<string, string>>) {
   if (p.alloy?.length) {
     // Every melt names a row of the alloy table, so the table lists every alloy a case can have.
     const rows = await db
@@ -27,7 +30,8 @@ export async function checkNames(shopId: string, p: SearchParams, titles: Map<st
     if (bad.length) throw unknown("alloy", bad, "an alloy");
   }
   if (p.cause?.length) {
-    const bad = p.cause.filter((c) => !titles.has(c));
+    const known = await titles;
+    const bad = p.cause.filter((c) => !known.has(c));
     if (bad.length) throw unknown("cause", bad, "a cause in the rulebook");
   }
   if (p.by?.length) {

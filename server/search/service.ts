@@ -5,35 +5,67 @@ import { env } from "../env";
 import { HttpError } from "../http/errors";
 import { alloyKey, fieldsOf, summaryOf, type DocRow } from "./case-doc";
 import { markPage } from "./marks";
-import { causeTitles, checkNames, namesOf } from "./names";
-import { lookups, queryTerms, tsquery, tsqueryText } from "./query-words";
+import { causeTitles, checkNames } from "./names";
+import { answerKey, keep, keptAnswer, stillHolds, versionsOf } from "./answers";
+import { queryTerms, tsquery, tsqueryText, type QueryTerm } from "./query-words";
+import { similarWords } from "./similar-words";
 
 /**
- * GET /api/search over `search_documents`, in one read-only transaction:
- * 1. each query word of 3+ letters is widened to the shop's words within its slips (trigram index
- *    on `search_words`, then levenshtein), and a tsquery is built from those words;
+ * GET /api/search over `search_documents`. An answer this server already gave is given again when
+ * the shop's documents version and revision, read first, are still the ones it was computed at
+ * (answers.ts: one indexed read). Otherwise, waiting on the database twice more:
+ * 1. at once, on up to three connections: the shop's cause titles, the names the filters use, and
+ *    each query word of 3+ letters widened to the shop's words within its slips (similar-words.ts: trigram index on `search_words`,
+ *    then levenshtein, looked up only for words this server has not already found at the shop's
+ *    vocabulary version, which the same statement reads); a tsquery is built from those words;
  * 2. one statement narrows the shop's documents (GIN index on the words, typed columns for the
  *    filters) and picks one page in date order (the shop's date index, by OFFSET or by keyset
- *    `after`) or in relevance order (ts_rank);
+ *    `after`) or in relevance order (ts_rank), with the page's people's names;
  * 3. the same statement counts the matches and each chip with the other filters applied (GROUP BY),
  *    over at most the newest SEARCH_COUNT_LIMIT matches (1,000 by default): read in date order from
  *    the covering index, so a count stops there instead of walking every case of a large shop.
  *    Under the limit every figure is exact; over it the answer says so (`totalExact`,
  *    `facetsExact`), the total is the limit ("1,000+") and the chips count the newest matches.
- *    Relevance then ranks those newest matches;
+ *    Relevance then ranks those newest matches, their documents fetched again by ctid;
  * 4. Fuse.js re-ranks that page and marks its matched words.
- * Measured at 100,000 cases by scripts/bench-search.ts (the figures are in its output).
+ * Measured at 100,000 cases by scripts/bench-search.ts (the figures are in its output): with words,
+ * most of the statement's time is reading every matching row once (about 1.3 µs a row, 11,000
+ * rows for "porosty"); a narrower table of just the counted columns and the words read as slowly
+ * (the rows' count, not their width, sets the cost), so it was not kept.
  */
 type Hit = { kind: "page" | "total" | "sampled" | "defect" | "alloy" | "process" | "outcome" | "cause" };
 type FacetRow = Hit & { key: string | null; title: string | null; n: number };
-type PageRow = Hit & { id: number; rank: string; poured_on: string; doc: DocRow };
+type PageRow = Hit & { id: number; rank: string; poured_on: string; doc: DocRow & { createdByName: string | null } };
 
 export async function searchCases(shopId: string, p: SearchParams): Promise<SearchAnswer> {
-  const titles = await causeTitles(shopId);
-  await checkNames(shopId, p, titles);
+  const key = answerKey(shopId, p);
+  const before = keptAnswer(key);
   const terms = queryTerms(p.q);
+  // At once: the shop's versions, its cause titles, the filters' names and (unless an answer is kept,
+  // which usually still holds) the query words' similar words.
+  const cause = causeTitles(shopId);
+  const [now, titles, , first] = await Promise.all([
+    versionsOf(shopId, before?.people ?? []),
+    cause,
+    checkNames(shopId, p, cause),
+    before ? null : similarWords(shopId, terms),
+  ]);
+  const held = stillHolds(before, now);
+  if (held) return held;
+  const answer = await answerOf(shopId, p, terms, titles, first ?? (await similarWords(shopId, terms)));
+  keep(key, now, answer);
+  return answer;
+}
+
+async function answerOf(
+  shopId: string,
+  p: SearchParams,
+  terms: QueryTerm[],
+  titles: Map<string, string>,
+  similar: Map<string, string[]>,
+): Promise<SearchAnswer> {
   const sort: SearchSort = terms.length ? (p.sort ?? "relevance") : p.sort === "date-asc" ? "date-asc" : "date-desc";
-  const q = terms.length ? tsquery(tsqueryText(terms, await similarWords(shopId, terms))) : null;
+  const q = terms.length ? tsquery(tsqueryText(terms, similar)) : null;
   const limit = env.SEARCH_COUNT_LIMIT;
   const rows = (await db.execute(matchStatement(shopId, p, sort, q, limit))).rows as unknown as (FacetRow | PageRow)[];
   const facetRows = rows.filter((r): r is FacetRow => r.kind !== "page");
@@ -48,7 +80,8 @@ export async function searchCases(shopId: string, p: SearchParams): Promise<Sear
   const page = order.map((i) => docs[i]);
   const scores = order.map((i) => (terms.length && sort === "relevance" ? found.scores[i] : null));
   const marked = order.map((i) => found.marked[i]);
-  const names = await namesOf(page.map((d) => d.createdBy));
+  // The page's people's names came with the page (DOC_JSON), not in a round trip of their own.
+  const names = new Map(pageRows.map((r) => [r.doc.createdBy, r.doc.createdByName ?? ""]));
   const items: CaseHit[] = page.map((d, i) => ({
     ...summaryOf(d, names, titles),
     score: scores[i],
@@ -128,9 +161,13 @@ function matchStatement(shopId: string, p: SearchParams, sort: SearchSort, q: SQ
       : sql`true`;
   const newest = sql`ORDER BY poured_on DESC, casting_id DESC LIMIT ${limit + 1}`;
   const bounded = (name: string, chips: readonly Chip[]) =>
-    sql`, ${sql.raw(name)} AS MATERIALIZED (SELECT casting_id, poured_on, defect_types, alloy_key, alloy, process,
+    sql`, ${sql.raw(name)} AS MATERIALIZED (SELECT casting_id, ${tid} poured_on, defect_types, alloy_key, alloy, process,
       outcome, cause_id FROM base WHERE ${passing(chips)} ${newest})`;
   const setOf = (c: Chip) => sql.raw(on.includes(c) ? `s_${c}` : "s_all");
+  // With words, `base` is read from the heap once: its rows' ctid fetches the documents again (ranking,
+  // the page) without a walk down the primary key each. Without words the sets are index-only scans,
+  // which cannot return a ctid.
+  const tid = q ? sql`tid,` : sql``;
   const desc = sort !== "date-asc";
   const order =
     sort === "relevance"
@@ -143,13 +180,13 @@ function matchStatement(shopId: string, p: SearchParams, sort: SearchSort, q: SQ
   // Relevance ranks the newest matches (s_all, at most the count limit); date order reads `base` itself.
   const candidates =
     sort === "relevance" && q
-      ? sql`(SELECT s.casting_id, s.poured_on, ts_rank(r.document, ${q}) AS rank
+      ? sql`(SELECT s.casting_id, s.tid, s.poured_on, ts_rank(r.document, ${q}) AS rank
           FROM (SELECT * FROM s_all ORDER BY poured_on DESC, casting_id DESC LIMIT ${limit}) s
-          JOIN search_documents r USING (casting_id))`
-      : sql`(SELECT casting_id, poured_on, 0::real AS rank FROM base WHERE ${passing(on)})`;
+          JOIN search_documents r ON r.ctid = s.tid)`
+      : sql`(SELECT casting_id, ${tid} poured_on, 0::real AS rank FROM base WHERE ${passing(on)})`;
   return sql`
     WITH base AS ${q ? sql`MATERIALIZED` : sql`NOT MATERIALIZED`} (
-      SELECT d.casting_id, d.poured_on, d.defect_types, d.alloy_key, d.alloy, d.process, d.outcome,
+      SELECT d.casting_id, ${q ? sql`d.ctid AS tid,` : sql``} d.poured_on, d.defect_types, d.alloy_key, d.alloy, d.process, d.outcome,
         d.cause_id ${sql.join(flags, sql``)}
       FROM search_documents d WHERE ${where}
     )
@@ -190,10 +227,10 @@ function matchStatement(shopId: string, p: SearchParams, sort: SearchSort, q: SQ
     UNION ALL
     SELECT 'page', NULL, NULL, NULL::int, p.casting_id, p.rank::text, p.poured_on::text, ${DOC_JSON}
     FROM (
-      SELECT h.casting_id, h.rank, h.poured_on FROM ${candidates} h
+      SELECT h.casting_id, ${tid} h.rank, h.poured_on FROM ${candidates} h
       WHERE ${keyset}
       ORDER BY ${order} LIMIT ${p.pageSize} OFFSET ${offset}
-    ) p JOIN search_documents d USING (casting_id)`;
+    ) p JOIN search_documents d ON ${q ? sql`d.ctid = p.tid` : sql`d.casting_id = p.casting_id`}`;
 }
 
 /** The newest `limit` rows of a bounded set (which holds one more, to tell that there were more). */
@@ -214,32 +251,13 @@ function afterCondition(sort: SearchSort, after: string): SQL {
     : sql`(h.poured_on, h.casting_id) < (${day}::date, ${Number(id)}::int)`;
 }
 
-/**
- * Each widenable query word's similar words in this shop: the nearest words by trigram distance,
- * straight from the GiST index, kept when within the word's slips.
- */
-async function similarWords(shopId: string, terms: ReturnType<typeof queryTerms>) {
-  const { words, slips } = lookups(terms);
-  const out = new Map<string, string[]>();
-  if (!words.length) return out;
-  const rows = (
-    await db.execute(sql`
-      SELECT q.w, v.word FROM unnest(${sql.param(words)}::text[], ${sql.param(slips)}::int[]) AS q(w, k)
-      CROSS JOIN LATERAL (
-        SELECT word FROM search_words WHERE shop_id = ${shopId} ORDER BY word <-> q.w LIMIT 24
-      ) v
-      WHERE levenshtein(v.word, q.w) <= q.k`)
-  ).rows as { w: string; word: string }[];
-  for (const r of rows) (out.get(r.w) ?? out.set(r.w, []).get(r.w)!).push(r.word);
-  return out;
-}
-
 /** A page row's document, as the page reads it (case-doc.ts DocRow). */
 const DOC_JSON = sql`json_build_object('id', d.casting_id, 'meltId', d.melt_id, 'partName', d.part_name,
   'pattern', d.pattern, 'pouredOn', d.poured_on, 'alloy', d.alloy, 'process', d.process, 'degassing', d.degassing,
   'outcome', d.outcome, 'marks', d.marks, 'causeId', d.cause_id, 'causeTitle', d.cause_title,
   'causeConfirmed', d.cause_confirmed, 'fixWorked', d.fix_worked, 'createdBy', d.created_by,
-  'causesText', d.causes_text, 'notesText', d.notes_text, 'commentsText', d.comments_text)`;
+  'causesText', d.causes_text, 'notesText', d.notes_text, 'commentsText', d.comments_text,
+  'createdByName', (SELECT u.name FROM "user" u WHERE u.id = d.created_by))`;
 
 function facetsOf(rows: FacetRow[], titles: Map<string, string>): SearchFacets {
   const out: SearchFacets = { defect: {}, alloy: {}, process: {}, outcome: {}, cause: {} };

@@ -121,6 +121,18 @@ describe("two app servers on one database and one object store", () => {
     const found = await viaB.agent.get("/api/search").query({ q: "quenchmark" });
     expect(found.status, found.text).toBe(200);
     expect(found.body.items.map((i: { id: number }) => i.id)).toContain(casting.id);
+    // Each server keeps a typo's similar words under the shop's vocabulary version, which lives in the
+    // database: a word first written through A widens B's next search of the same typo, and A's.
+    const typo = async (s: Person) => {
+      const res = await s.agent.get("/api/search").query({ q: "glintwark" });
+      expect(res.status, res.text).toBe(200);
+      return res.body.items.map((i: { id: number }) => i.id) as number[];
+    };
+    expect(await typo(viaB)).toEqual([]);
+    expect(await typo(viaA)).toEqual([]);
+    const glint = await newCasting(viaA, melt.id, { partName: "Glintwork bracket", marks: [] });
+    expect(await typo(viaB)).toEqual([glint.id]);
+    expect(await typo(viaA)).toEqual([glint.id]);
     const diagnosis = await viaB.agent.post(`/api/diagnosis/castings/${casting.id}`);
     expect(diagnosis.status, diagnosis.text).toBe(201);
     // 700 °C lost foam is a cold pour ([mem] docs/foundry-facts.md), whichever server answers.
