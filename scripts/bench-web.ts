@@ -22,29 +22,33 @@ const ground = await benchGround({
 const baseUrl = ground.origin;
 const { DEMO_PEOPLE } = await import("../server/seed/demo-people");
 
-/** Bytes on the wire (headers and compressed bodies) counted from the DevTools network events. */
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
+/**
+ * Bytes on the wire (headers and compressed bodies) counted from the DevTools network events, with
+ * each request's bytes, and `settled()`: resolves once nothing is in flight and nothing has started or
+ * ended for `quietMs`.
+ */
 function countBytes(cdp: CDPSession) {
-  const counter = { bytes: 0, requests: 0, each: [] as { url: string; bytes: number }[], lastAtMs: 0 };
-  const urls = new Map<string, string>(); // in flight
-  const seen = new Map<string, string>();
+  const counter = { bytes: 0, requests: 0, each: [] as { url: string; bytes: number }[] };
+  const urls = new Map<string, string>();
+  const inFlight = new Set<string>();
+  let lastAtMs = 0;
   cdp.on("Network.requestWillBeSent", (e) => {
     urls.set(e.requestId, e.request.url);
-    counter.lastAtMs = performance.now();
+    inFlight.add(e.requestId);
+    lastAtMs = performance.now();
   });
-  cdp.on("Network.loadingFailed", (e) => urls.delete(e.requestId));
+  cdp.on("Network.loadingFailed", (e) => inFlight.delete(e.requestId));
   cdp.on("Network.loadingFinished", (e) => {
-    counter.lastAtMs = performance.now();
-    urls.delete(e.requestId);
+    lastAtMs = performance.now();
+    inFlight.delete(e.requestId);
     counter.bytes += e.encodedDataLength;
     counter.requests += 1;
-    counter.each.push({ url: seen.get(e.requestId) ?? "?", bytes: e.encodedDataLength });
+    counter.each.push({ url: urls.get(e.requestId) ?? "?", bytes: e.encodedDataLength });
   });
-  cdp.on("Network.requestWillBeSent", (e) => seen.set(e.requestId, e.request.url));
-  /** Resolves once nothing is in flight and nothing has started or ended for `quietMs`. */
   const settled = async (quietMs = 1500) => {
-    while (urls.size > 0 || performance.now() - counter.lastAtMs < quietMs) await sleep(100);
+    while (inFlight.size > 0 || performance.now() - lastAtMs < quietMs) await sleep(100);
   };
   return Object.assign(counter, { settled });
 }
