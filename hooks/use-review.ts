@@ -25,12 +25,13 @@ export function useCaseReview(castingId: number) {
   });
 }
 
+export const reviewQueueQuery = {
+  queryKey: reviewKeys.queue,
+  queryFn: () => request("GET /review/queue", {}).then((r) => r.items),
+};
+
 export function useReviewQueue(enabled = true) {
-  return useQuery({
-    queryKey: reviewKeys.queue,
-    queryFn: () => request("GET /review/queue", {}).then((r) => r.items),
-    enabled,
-  });
+  return useQuery({ ...reviewQueueQuery, enabled });
 }
 
 /** Once the answer on a casting has been read, its "new answer" mark leaves the person's lists. */

@@ -30,16 +30,25 @@ export function useDebounced<T>(value: T, ms = 250): T {
   return settled;
 }
 
+export const caseSearchQuery = (query: SearchRequest) => ({
+  queryKey: searchKeys.query(query),
+  queryFn: () => request("GET /search", { query: searchParams(query) }),
+});
+
+/** An answer this young was fetched for this very screen (the first page, at sign-in): not asked again. */
+const JUST_FETCHED_MS = 3_000;
+
 /**
  * One page of matching cases. The previous answer stays on screen while the next loads, and an
- * answer is never reused from cache: another person may have logged a case since.
+ * answer from cache is shown but asked for again (another person may have logged a case since),
+ * unless it is only a moment old.
  */
 export function useCaseSearch(query: SearchRequest) {
   return useQuery({
-    queryKey: searchKeys.query(query),
-    queryFn: () => request("GET /search", { query: searchParams(query) }),
+    ...caseSearchQuery(query),
     placeholderData: keepPreviousData,
     staleTime: 0,
+    refetchOnMount: (q) => Date.now() - q.state.dataUpdatedAt > JUST_FETCHED_MS,
   });
 }
 

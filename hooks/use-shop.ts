@@ -8,11 +8,13 @@ export function useShop() {
   return useQuery({ queryKey: shopKeys.shop, queryFn: () => request("GET /shops/current", {}) });
 }
 
+export const membersQuery = {
+  queryKey: shopKeys.members,
+  queryFn: () => request("GET /shops/current/members", {}).then((r) => r.members),
+};
+
 export function useShopMembers() {
-  return useQuery({
-    queryKey: shopKeys.members,
-    queryFn: () => request("GET /shops/current/members", {}).then((r) => r.members),
-  });
+  return useQuery(membersQuery);
 }
 
 export function useSaveShopSettings() {

@@ -92,3 +92,22 @@ export function viewToParams(v: CasebookView): Record<string, string | undefined
   for (const key of LIST_KEYS) out[key] = v.filters[key].join(",") || undefined;
   return out;
 }
+
+/** Cases on one casebook page. */
+export const CASEBOOK_PAGE_SIZE = 20;
+
+/**
+ * The search a casebook view asks: "best match" is the order only when there are words to match, and
+ * is left out otherwise (the server's default, newest first). The sign-in fetches the first page of an
+ * empty view with this too, so its answer waits in the cache under the key the screen then asks for.
+ */
+export function searchRequestFor(view: CasebookView): SearchRequest {
+  const { words, filters, sort, page } = view;
+  return {
+    q: words,
+    ...filterQuery(filters),
+    sort: words ? sort : sort === "relevance" ? undefined : sort,
+    page,
+    pageSize: CASEBOOK_PAGE_SIZE,
+  };
+}

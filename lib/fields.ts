@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { groupThousands } from "../rules/quantity-text";
 
 /**
  * The edge of every input: text, ids and dates checked here so that nothing a person types can reach
@@ -15,7 +16,7 @@ const NO_NUL = "must not contain a NUL character";
 export const TEXT_MAX = 4000;
 
 /** Optional or blank-able text: trimmed, at most `max` characters, no NUL. */
-export const text = (max: number = TEXT_MAX, tooLong = `at most ${max.toLocaleString("en-US")} characters`) =>
+export const text = (max: number = TEXT_MAX, tooLong = `at most ${groupThousands(max)} characters`) =>
   z
     .string({ error: "must be text" })
     .refine((s) => !hasNul(s), NO_NUL)

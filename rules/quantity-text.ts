@@ -24,9 +24,11 @@ export const FACT_PLACEHOLDER = /\{([A-Za-z][A-Za-z0-9]*)\}/g;
 
 export type QuantityToken = { values: number[]; unit: QuantityUnit; kind: QuantityKind };
 
+/** One formatter for every call: `toLocaleString` builds a new one each time, a cost a list of cards pays per number. */
+const GROUPED = new Intl.NumberFormat("en-US", { maximumFractionDigits: 3 });
+
 /** Thousands grouped as the sentences write them: "1,700", "907", "0.5". */
-export const groupThousands = (n: number) =>
-  Math.abs(n) >= 1000 ? n.toLocaleString("en-US", { maximumFractionDigits: 3 }) : String(n);
+export const groupThousands = (n: number) => (Math.abs(n) >= 1000 ? GROUPED.format(n) : String(n));
 
 /** Replaces each quantity in a sentence with what `say` makes of it. */
 export function replaceQuantities(text: string, say: (q: QuantityToken) => string): string {

@@ -1,4 +1,5 @@
 import { TabList, Tabs, TabSlot, TabTrigger } from "expo-router/ui";
+import { memo } from "react";
 import { ActivityIndicator, StyleSheet, View } from "react-native";
 import { CreateShopForm } from "@/components/auth/create-shop-form";
 import { NavButton } from "@/components/ui/nav-button";
@@ -28,10 +29,27 @@ export default function AppLayout() {
   // Mentors and owners see how many cases wait for review beside the Rulebook (where the queue is).
   const reviews = !!me.data?.activeShop && roleCan(me.data.activeShop.role, { review: ["confirm"] });
   const queue = useReviewQueue(reviews);
+  const waiting = queue.data?.length;
   if (me.isPending) return <ActivityIndicator style={styles.fill} color={colors.accent} />;
   if (me.error) return <Notice tone="error">{me.error.message}</Notice>;
   if (!me.data.activeShop) return <CreateShopForm />;
 
+  return (
+    <View style={styles.fill}>
+      <View {...printHidden}>
+        <ShopHeader me={me.data} />
+      </View>
+      <SectionTabs wide={wide} waiting={waiting} />
+    </View>
+  );
+}
+
+/**
+ * The sections and the slot that shows the open one. Memoised: every render of <Tabs> works out each
+ * trigger's route from the whole route table (expo-router keeps none of it), and the shell renders
+ * again on each answer about the person or the review queue.
+ */
+const SectionTabs = memo(function SectionTabs({ wide, waiting }: { wide: boolean; waiting: number | undefined }) {
   // TabList must be a direct child of Tabs, so it is built here rather than in a component.
   const nav = (
     <TabList style={wide ? styles.rail : styles.bar} {...printHidden}>
@@ -40,26 +58,21 @@ export default function AppLayout() {
           <NavButton
             label={s.label}
             wide={wide}
-            count={s.name === "rulebook" ? queue.data?.length : undefined}
-            countLabel={`${queue.data?.length ?? 0} waiting for review`}
+            count={s.name === "rulebook" ? waiting : undefined}
+            countLabel={`${waiting ?? 0} waiting for review`}
           />
         </TabTrigger>
       ))}
     </TabList>
   );
   return (
-    <View style={styles.fill}>
-      <View {...printHidden}>
-        <ShopHeader me={me.data} />
-      </View>
-      <Tabs style={[styles.fill, { flexDirection: wide ? "row" : "column" }]}>
-        {wide ? nav : null}
-        <TabSlot style={styles.fill} />
-        {wide ? null : nav}
-      </Tabs>
-    </View>
+    <Tabs style={[styles.fill, { flexDirection: wide ? "row" : "column" }]}>
+      {wide ? nav : null}
+      <TabSlot style={styles.fill} />
+      {wide ? null : nav}
+    </Tabs>
   );
-}
+});
 
 const styles = StyleSheet.create({
   fill: { flex: 1, backgroundColor: colors.background },

@@ -6,8 +6,9 @@ import { CasebookEmptyState } from "@/components/search/casebook-empty-state";
 import { CasebookFilterChips } from "@/components/search/casebook-filter-chips";
 import {
   activeCount,
-  filterQuery,
+  CASEBOOK_PAGE_SIZE,
   NO_FILTERS,
+  searchRequestFor,
   viewFromParams,
   viewToParams,
   type CasebookFilters,
@@ -28,16 +29,15 @@ import { useIsWide } from "@/hooks/use-layout";
 import { useCaseSearch, useDebounced } from "@/hooks/use-search";
 import { useShopMembers } from "@/hooks/use-shop";
 import type { ApiError } from "@/lib/api";
-import type { SearchAnswer, SearchRequest, SearchSort } from "@/lib/search-schemas";
-
-const PAGE_SIZE = 20;
+import { groupThousands } from "@/rules/quantity-text";
+import type { SearchAnswer, SearchSort } from "@/lib/search-schemas";
 
 /** The casebook: every case the shop has judged, found by words (typos forgiven) and filters. */
 export default function CasebookScreen() {
   const wide = useIsWide();
   // The words, filters, order and page live in the URL; only the words being typed are local.
   const view = viewFromParams(useLocalSearchParams() as RouteParams);
-  const { filters, sort, page } = view;
+  const { filters, page } = view;
   const [text, setText] = useState(view.words);
   const words = useDebounced(text.trim(), 250);
   /** A new question starts again at page 1: the page belongs to the question asked. */
@@ -57,12 +57,7 @@ export default function CasebookScreen() {
   }, [view.words]);
   const [showFilters, setShowFilters] = useState(wide);
   const members = useShopMembers();
-  const asked: SearchRequest = {
-    q: view.words,
-    ...filterQuery(filters),
-    sort: view.words ? sort : sort === "relevance" ? undefined : sort,
-  };
-  const query: SearchRequest = { ...asked, page, pageSize: PAGE_SIZE };
+  const query = searchRequestFor(view);
   const search = useCaseSearch(query);
   const answer = search.data;
   const active = activeCount(filters);
@@ -105,10 +100,10 @@ export default function CasebookScreen() {
           answer.items.map((hit) => <CasebookResultCard key={hit.id} hit={hit} />)
         )
       ) : null}
-      {answer && answer.total > PAGE_SIZE ? (
+      {answer && answer.total > CASEBOOK_PAGE_SIZE ? (
         <Pager
           page={page}
-          pageSize={PAGE_SIZE}
+          pageSize={CASEBOOK_PAGE_SIZE}
           total={answer.total}
           atLeast={!answer.totalExact}
           hasNext={answer.next !== null}
@@ -167,12 +162,12 @@ export default function CasebookScreen() {
 /** Past the server's count limit the total is a lower bound: "1,000+ cases". */
 const casesText = ({ total: n, totalExact }: Pick<SearchAnswer, "total" | "totalExact">) =>
   !totalExact
-    ? `${n.toLocaleString("en")}+ cases`
+    ? `${groupThousands(n)}+ cases`
     : n === 0
       ? "no cases"
       : n === 1
         ? "1 case"
-        : `${n.toLocaleString("en")} cases`;
+        : `${groupThousands(n)} cases`;
 
 const styles = StyleSheet.create({
   bar: { flexDirection: "row", alignItems: "center", flexWrap: "wrap", gap: space.md },

@@ -1,3 +1,4 @@
+import { groupThousands } from "@/rules/quantity-text";
 import { useState } from "react";
 import { Pressable, StyleSheet, Text, View } from "react-native";
 import { TextField } from "@/components/ui/text-field";
@@ -45,7 +46,7 @@ export function CasebookFilterChips({ filters, onChange, facets, people, narrow,
     <View style={styles.wrap}>
       {sampled ? (
         <Text style={styles.note} testID="casebook-counts-sampled">
-          Counts among the newest {sampled.toLocaleString("en")} matching cases
+          Counts among the newest {groupThousands(sampled)} matching cases
         </Text>
       ) : null}
       {group(

@@ -1,3 +1,4 @@
+import { groupThousands } from "@/rules/quantity-text";
 import { StyleSheet, Text, View } from "react-native";
 import { Button } from "@/components/ui/button";
 import { colors, fontSize, space } from "@/constants/theme";
@@ -26,7 +27,7 @@ export function Pager({ page, pageSize, total, onPage, atLeast, hasNext }: Props
         <View style={styles.gap} />
       )}
       <Text style={styles.where}>
-        {first}–{atLeast ? page * pageSize : last} of {atLeast ? `${total.toLocaleString("en")}+` : total}
+        {first}–{atLeast ? page * pageSize : last} of {atLeast ? `${groupThousands(total)}+` : total}
       </Text>
       {page < pages ? (
         <Button kind="plain" label="Next page" onPress={() => onPage(page + 1)} />
