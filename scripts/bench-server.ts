@@ -9,9 +9,12 @@ import express from "express";
 
 const { createApp } = await import("../server/app");
 const { previousLists } = await import("./bench-previous-lists");
+const { warmUp } = await import("../server/warm-up");
 const outer = express();
 outer.use("/api/bench-previous", previousLists());
 outer.use(createApp());
 // A clean exit on SIGTERM, so `--cpu-prof` (BENCH_CPU_PROF in bench-harness.ts) writes its profile.
 process.on("SIGTERM", () => process.exit(0));
+// Warmed as server/index.ts warms every server before it listens.
+await warmUp();
 outer.listen(Number(process.env.PORT), "127.0.0.1", () => console.log("listening"));

@@ -6,14 +6,17 @@ import { createApp } from "./app";
 import { closeDb } from "./db";
 import { env } from "./env";
 import { sweepOrphanPhotos } from "./photos/orphan-sweep";
+import { warmUp } from "./warm-up";
 
 /**
- * Starts the one Express process: API under /api, the web app from `webDir`. Once it listens, the
+ * Starts the one Express process: API under /api, the web app from `webDir`, warmed first
+ * (warm-up.ts: the pool's first connections and the search code). Once it listens, the
  * photo store is swept of objects no row names (left by a server killed mid-upload), in the background:
  * a store or database that is away only delays that to the next start.
  */
-export function listen(opts: { port: number; host: string; webDir?: string }): Promise<Server> {
+export async function listen(opts: { port: number; host: string; webDir?: string }): Promise<Server> {
   const app = createApp({ webDir: opts.webDir });
+  await warmUp();
   return new Promise((resolve, reject) => {
     const server = app.listen(opts.port, opts.host, () => {
       resolve(server);
