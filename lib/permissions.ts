@@ -43,6 +43,17 @@ export const roles = {
 export type ShopRole = keyof typeof roles;
 export const SHOP_ROLES = ["owner", "mentor", "caster"] as const satisfies readonly ShopRole[];
 
+/**
+ * A role as better-auth keeps it: `member.role` and `invitation.role` are text columns, which the
+ * organization plugin only fills with the roles above (server/auth/auth.ts). Every read of them goes
+ * through here, so anything else (a damaged row) is refused instead of carried on as a role that no
+ * permission knows.
+ */
+export function shopRole(stored: string | null): ShopRole {
+  if (stored !== null && (SHOP_ROLES as readonly string[]).includes(stored)) return stored as ShopRole;
+  throw new Error(`not a shop role: ${JSON.stringify(stored)}`);
+}
+
 /** A permission such as `{ rule: ["publish"] }`. */
 export type Permission = { [K in keyof typeof statements]?: (typeof statements)[K][number][] };
 

@@ -2,7 +2,7 @@ import { createHmac, timingSafeEqual } from "node:crypto";
 import { parseCookies } from "better-auth/cookies";
 import type { IncomingHttpHeaders } from "node:http";
 import { connection } from "../db";
-import type { ShopRole } from "../../lib/permissions";
+import { shopRole, type ShopRole } from "../../lib/permissions";
 import { getAuth } from "./auth";
 
 /**
@@ -84,6 +84,6 @@ export async function sessionMember(
     userId: row.user_id,
     userName: row.name,
     activeShopId: row.active_organization_id,
-    shop: row.organization_id ? { shopId: row.organization_id, role: row.role as ShopRole } : null,
+    shop: row.organization_id ? { shopId: row.organization_id, role: shopRole(row.role) } : null,
   };
 }

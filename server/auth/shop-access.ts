@@ -3,7 +3,7 @@ import { and, asc, eq } from "drizzle-orm";
 import type { RequestHandler } from "express";
 import { db } from "../db";
 import { member } from "../../db/schema";
-import { roleCan, type Permission, type ShopRole } from "../../lib/permissions";
+import { roleCan, shopRole, type Permission, type ShopRole } from "../../lib/permissions";
 import { HttpError } from "../http/errors";
 import { getAuth } from "./auth";
 import { sessionMember, type SessionMember } from "./session-member";
@@ -58,7 +58,7 @@ async function memberThroughBetterAuth(headers: Parameters<typeof fromNodeHeader
     userId,
     userName: session.user.name,
     activeShopId,
-    shop: row ? { shopId: row.shopId, role: row.role as ShopRole } : null,
+    shop: row ? { shopId: row.shopId, role: shopRole(row.role) } : null,
   };
 }
 

@@ -4,7 +4,7 @@ import type { IncomingHttpHeaders } from "node:http";
 import { db } from "../db";
 import { invitation, member, organization, user } from "../../db/schema";
 import type { InvitationState, InvitationView } from "../../lib/people-schemas";
-import type { ShopRole } from "../../lib/permissions";
+import { shopRole, type ShopRole } from "../../lib/permissions";
 import { getAuth } from "../auth/auth";
 import type { ShopMember } from "../auth/shop-access";
 import { HttpError, notFound } from "../http/errors";
@@ -37,8 +37,7 @@ export async function pendingInvitations(shopId: string) {
   const now = Date.now();
   return rows.map((r) => ({
     ...r,
-    // Created by invite() below, always with one of the shop's roles.
-    role: r.role as ShopRole,
+    role: shopRole(r.role),
     expiresAt: r.expiresAt.toISOString(),
     createdAt: r.createdAt.toISOString(),
     expired: r.expiresAt.getTime() < now,
@@ -77,7 +76,7 @@ export async function resend(headers: Headers, m: ShopMember, invitationId: stri
   await authCall(() =>
     auth().createInvitation({
       headers: fromNodeHeaders(headers),
-      body: { email: inv.email, role: inv.role as ShopRole, organizationId: m.shopId, resend: true },
+      body: { email: inv.email, role: shopRole(inv.role), organizationId: m.shopId, resend: true },
     }),
   );
   await recordChange({ shopId: m.shopId, actor: actorOf(m), action: "invitation-resent", subjectEmail: inv.email });

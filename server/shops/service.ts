@@ -1,20 +1,17 @@
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq } from "drizzle-orm";
 import { db } from "../db";
 import { member, organization, shopSettings, user } from "../../db/schema";
-import type { ShopRole } from "../../lib/permissions";
+import { shopRole } from "../../lib/permissions";
 import type { ShopSettingsInput } from "../../lib/shop-settings";
 
-// better-auth's member.role is a text column; the organization plugin only writes the roles of
-// lib/permissions.ts into it (server/auth/auth.ts), so it is read as one of them.
-const memberRole = sql<ShopRole>`${member.role}`;
-
 export async function shopsOf(userId: string) {
-  return db
-    .select({ id: organization.id, name: organization.name, role: memberRole })
+  const rows = await db
+    .select({ id: organization.id, name: organization.name, role: member.role })
     .from(member)
     .innerJoin(organization, eq(member.organizationId, organization.id))
     .where(eq(member.userId, userId))
     .orderBy(asc(organization.name));
+  return rows.map((r) => ({ ...r, role: shopRole(r.role) }));
 }
 
 /** The shop as its member sees it; undefined when the person is not a member (the route says 404). */
@@ -23,7 +20,7 @@ export async function shopForMember(shopId: string, userId: string) {
     .select({
       id: organization.id,
       name: organization.name,
-      role: memberRole,
+      role: member.role,
       defaultAlloy: shopSettings.defaultAlloy,
       defaultProcess: shopSettings.defaultProcess,
       defaultTemperature: shopSettings.defaultTemperature,
@@ -34,16 +31,17 @@ export async function shopForMember(shopId: string, userId: string) {
     .innerJoin(member, and(eq(member.organizationId, organization.id), eq(member.userId, userId)))
     .leftJoin(shopSettings, eq(shopSettings.shopId, organization.id))
     .where(eq(organization.id, shopId));
-  return row;
+  return row && { ...row, role: shopRole(row.role) };
 }
 
 export async function membersOf(shopId: string) {
-  return db
-    .select({ userId: user.id, name: user.name, email: user.email, role: memberRole })
+  const rows = await db
+    .select({ userId: user.id, name: user.name, email: user.email, role: member.role })
     .from(member)
     .innerJoin(user, eq(user.id, member.userId))
     .where(eq(member.organizationId, shopId))
     .orderBy(asc(user.name));
+  return rows.map((r) => ({ ...r, role: shopRole(r.role) }));
 }
 
 export async function saveShopSettings(shopId: string, userId: string, input: ShopSettingsInput) {
